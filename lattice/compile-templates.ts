@@ -1,0 +1,182 @@
+/**
+ * Compiles the option templates (expand, contract, abandon, defer, stage, switch) into modes and
+ * switches. A mode is a reachable combination of exercised rights; conventions:
+ * - scale effects add: the operating scale is 1 + Σ expand factors − Σ contract fractions of
+ *   the rights exercised so far (floored at 0);
+ * - a `switch` template (mothball/restart, or any reversible change) multiplies the scale of
+ *   the mode it is in by `toScale` while switched and earns its `flowPerYear` (e.g. a negative
+ *   maintenance cost); while switched only switching back and abandoning are possible;
+ * - one-shot rights (expand, contract, abandon, defer, each stage payment) can be exercised
+ *   once; abandon closes the project from any operating mode, switched or not;
+ * - defer starts the project in a `waiting` mode (scale 0) that is left by paying the defer
+ *   cost inside the window; when the window has passed the right lapses and waiting is worth 0;
+ * - stage makes continuation require each payment on its date (a compound option, Geske 1979):
+ *   the project earns nothing until the last payment is made, and skipping a payment ends it.
+ */
+import type { CompiledMode, CompiledModel, CompiledSwitch, Right, RightKind } from './compiled';
+import { costAt, negateCost } from './cost';
+import { refuse } from './errors';
+import { MAX_MODES } from './limits';
+import type { Cost, ExerciseWindow, OptionTemplate, ProjectModel } from './schema';
+
+type Phase = 'waiting' | 'staging' | 'operating' | 'closed';
+
+interface State {
+  phase: Phase;
+  /** Stage payments made so far (staging only). */
+  paid: number;
+  /** Bit k set when one-shot template k (expand or contract) has been exercised. */
+  exercised: number;
+  /** Index of the switch template in force, or −1. */
+  switched: number;
+}
+
+interface Move {
+  template: number;
+  to: State;
+  cost: Cost;
+  window: ExerciseWindow;
+  field: string;
+}
+
+const keyOf = (s: State) => `${s.phase}|${s.paid}|${s.exercised}|${s.switched}`;
+
+/** Gives each template an id (its own, or `type-n`) and refuses duplicates. */
+export function templateIds(options: OptionTemplate[]): string[] {
+  const counts = new Map<string, number>();
+  const ids = options.map((option) => {
+    const n = (counts.get(option.type) ?? 0) + 1;
+    counts.set(option.type, n);
+    return option.id ?? `${option.type}-${n}`;
+  });
+  ids.forEach((id, k) => {
+    if (ids.indexOf(id) !== k) refuse(`options[${k}].id`, `must be unique, "${id}" is used twice`);
+  });
+  return ids;
+}
+
+export function compileTemplates(model: ProjectModel): CompiledModel {
+  const options = model.options ?? [];
+  const ids = templateIds(options);
+  const deferAt = options.findIndex((o) => o.type === 'defer');
+  const stageAt = options.findIndex((o) => o.type === 'stage');
+  if (options.filter((o) => o.type === 'defer').length > 1) refuse('options', 'may hold at most one defer option');
+  if (options.filter((o) => o.type === 'stage').length > 1) refuse('options', 'may hold at most one stage option');
+  if (deferAt >= 0 && stageAt >= 0)
+    refuse(`options[${stageAt}]`, 'cannot be combined with a defer option: make the first stage payment the defer cost');
+  if ((deferAt >= 0 || stageAt >= 0) && model.investment !== undefined && model.investment !== 0)
+    refuse('investment', 'must be omitted when a defer or stage option carries the outlay');
+
+  const whole: ExerciseWindow = { kind: 'american', from: 0, to: model.horizon };
+  const stage = stageAt >= 0 ? (options[stageAt] as Extract<OptionTemplate, { type: 'stage' }>) : undefined;
+
+  function modeOf(s: State): CompiledMode {
+    if (s.phase === 'waiting') return { id: 'waiting', scale: 0, flowPerYear: 0, terminal: 0 };
+    if (s.phase === 'closed') return { id: 'closed', scale: 0, flowPerYear: 0, terminal: 0 };
+    if (s.phase === 'staging')
+      return { id: `${ids[stageAt]} payment ${s.paid + 1} due`, scale: 0, flowPerYear: 0, terminal: 0 };
+    let scale = 1;
+    let id = 'operating';
+    options.forEach((o, k) => {
+      if (!(s.exercised & (1 << k))) return;
+      if (o.type === 'expand') scale += o.factor;
+      if (o.type === 'contract') scale -= o.fraction;
+      id += `+${ids[k]}`;
+    });
+    scale = Math.max(0, scale);
+    let flowPerYear = 0;
+    if (s.switched >= 0) {
+      const sw = options[s.switched] as Extract<OptionTemplate, { type: 'switch' }>;
+      scale *= sw.toScale;
+      flowPerYear = sw.flowPerYear ?? 0;
+      id += ` (${ids[s.switched]})`;
+    }
+    return { id, scale, flowPerYear, terminal: 0 };
+  }
+
+  function movesFrom(s: State): Move[] {
+    const moves: Move[] = [];
+    const field = (k: number) => `options[${k}]`;
+    if (s.phase === 'waiting') {
+      const o = options[deferAt] as Extract<OptionTemplate, { type: 'defer' }>;
+      moves.push({ template: deferAt, to: { ...s, phase: 'operating' }, cost: o.cost, window: o.window, field: field(deferAt) });
+    }
+    if (s.phase === 'staging' && stage) {
+      const payment = stage.payments[s.paid]!;
+      const last = s.paid + 1 === stage.payments.length;
+      moves.push({
+        template: stageAt,
+        to: last ? { ...s, phase: 'operating', paid: 0 } : { ...s, paid: s.paid + 1 },
+        cost: payment.amount,
+        window: { kind: 'european', at: payment.at },
+        field: `${field(stageAt)}.payments[${s.paid}]`,
+      });
+    }
+    if (s.phase !== 'operating') return moves;
+    options.forEach((o, k) => {
+      if (o.type === 'abandon')
+        moves.push({ template: k, to: { ...s, phase: 'closed', exercised: 0, switched: -1 }, cost: negateCost(o.salvage), window: o.window, field: field(k) });
+      if (s.switched >= 0) {
+        if (k === s.switched && o.type === 'switch')
+          moves.push({ template: k, to: { ...s, switched: -1 }, cost: o.backCost, window: o.window ?? whole, field: `${field(k)}.backCost` });
+        return;
+      }
+      const done = (s.exercised & (1 << k)) !== 0;
+      if (o.type === 'expand' && !done)
+        moves.push({ template: k, to: { ...s, exercised: s.exercised | (1 << k) }, cost: o.cost, window: o.window, field: field(k) });
+      if (o.type === 'contract' && !done)
+        moves.push({ template: k, to: { ...s, exercised: s.exercised | (1 << k) }, cost: negateCost(o.savings), window: o.window, field: field(k) });
+      if (o.type === 'switch')
+        moves.push({ template: k, to: { ...s, switched: k }, cost: o.cost, window: o.window ?? whole, field: field(k) });
+    });
+    return moves;
+  }
+
+  const operatingBase: State = { phase: 'operating', paid: 0, exercised: 0, switched: -1 };
+  const startState: State =
+    deferAt >= 0 ? { ...operatingBase, phase: 'waiting' } : stage ? { ...operatingBase, phase: 'staging' } : operatingBase;
+
+  const modes: CompiledMode[] = [];
+  const indexOf = new Map<string, number>();
+  const queue: State[] = [];
+  const visit = (s: State): number => {
+    const key = keyOf(s);
+    let k = indexOf.get(key);
+    if (k === undefined) {
+      k = modes.length;
+      if (k >= MAX_MODES) refuse('options', `compile to more than ${MAX_MODES} operating modes; use fewer rights`);
+      indexOf.set(key, k);
+      modes.push(modeOf(s));
+      queue.push(s);
+    }
+    return k;
+  };
+  const start = visit(startState);
+  const staticMode = visit(operatingBase);
+
+  const switches: CompiledSwitch[] = [];
+  for (let q = 0; q < queue.length; q++) {
+    const s = queue[q]!;
+    const from = indexOf.get(keyOf(s))!;
+    for (const move of movesFrom(s)) {
+      switches.push({ right: move.template, from, to: visit(move.to), cost: move.cost, window: move.window, field: move.field });
+    }
+  }
+
+  const rights: Right[] = options.map((o, k) => ({
+    id: ids[k]!,
+    kind: o.type as RightKind,
+    field: `options[${k}]`,
+    primaryFrom: k === deferAt || k === stageAt ? start : staticMode,
+  }));
+
+  const discount = (t: number) => Math.exp(-model.riskFreeRate * t);
+  const staticInvestment =
+    deferAt >= 0
+      ? costAt((options[deferAt] as Extract<OptionTemplate, { type: 'defer' }>).cost, 0)
+      : stage
+        ? stage.payments.reduce((sum, p) => sum + p.amount * discount(p.at), 0)
+        : (model.investment ?? 0);
+  const upfront = deferAt >= 0 || stage ? 0 : (model.investment ?? 0);
+  return { modes, switches, rights, start, staticMode, staticInvestment, upfront };
+}

@@ -1,0 +1,48 @@
+/**
+ * The compiled form every valuation runs on: operating modes, the switches between them (one
+ * per origin mode), and the rights the user named (a template or a raw switch), which are what
+ * results are reported for.
+ */
+import type { Cost, ExerciseWindow } from './schema';
+import type { Money } from './units';
+
+export interface CompiledMode {
+  id: string;
+  scale: number;
+  flowPerYear: Money;
+  terminal: Money;
+}
+
+export interface CompiledSwitch {
+  /** Index of the right this switch belongs to. */
+  right: number;
+  from: number;
+  to: number;
+  cost: Cost;
+  window: ExerciseWindow;
+  /** Where the cost and window came from in the input, for messages and snaps. */
+  field: string;
+}
+
+export type RightKind = 'expand' | 'contract' | 'abandon' | 'defer' | 'stage' | 'switch' | 'custom';
+
+export interface Right {
+  id: string;
+  kind: RightKind;
+  field: string;
+  /** The mode from which the right is first exercised; its boundary is reported from there. */
+  primaryFrom: number;
+}
+
+export interface CompiledModel {
+  modes: CompiledMode[];
+  switches: CompiledSwitch[];
+  rights: Right[];
+  start: number;
+  /** The mode the static (no-flexibility) plan runs in from t = 0. */
+  staticMode: number;
+  /** The outlay of the static plan, at t = 0 (present value for staged payments). */
+  staticInvestment: Money;
+  /** The outlay charged against the lattice value to get the expanded NPV. */
+  upfront: Money;
+}

@@ -1,0 +1,82 @@
+/**
+ * What `valueProject` returns (ENGINE.md §5). Money is in the model's currency, times in years.
+ */
+import type { TreeKind } from './schema';
+import type { Money, Probability, Years } from './units';
+import type { Snap } from './window';
+
+/** Project values at one step between which a switch is taken (null when it is not taken). */
+export interface BoundaryPoint {
+  t: Years;
+  low: Money | null;
+  high: Money | null;
+}
+
+export interface SwitchPath {
+  from: string;
+  to: string;
+  boundary: BoundaryPoint[];
+}
+
+export interface SwitchResult {
+  id: string;
+  kind: string;
+  /** Expanded NPV with only this right present, minus the static NPV (null without extras). */
+  standalone: Money | null;
+  /** Expanded NPV with all rights minus that with all but this one (null without extras). */
+  incremental: Money | null;
+  /** Risk-neutral probability that the right is ever exercised (first use, for reversible ones). */
+  exerciseProbability: Probability;
+  /** Risk-neutral probability of the first exercise at each step time, where it is above 0. */
+  exerciseTiming: { t: Years; probability: Probability }[];
+  /** Exercise region per open step, from the mode where the right is first available. */
+  boundary: BoundaryPoint[];
+  /** Every compiled path of the right (from mode → to mode) with its own boundary. */
+  paths: SwitchPath[];
+}
+
+export interface TreeSummary {
+  kind: TreeKind;
+  steps: number;
+  u: number;
+  d: number;
+  p: Probability;
+  dt: Years;
+  discount: number;
+}
+
+export interface Convergence {
+  points: { steps: number; value: Money }[];
+  /** Richardson extrapolation assuming an error proportional to 1/steps: 2·V(N) − V(N/2). */
+  extrapolated: Money;
+  /** |V(N) − V(N/2)|, the size of the last halving's change. */
+  errorEstimate: Money;
+}
+
+export interface Sensitivity {
+  parameter: string;
+  label: string;
+  base: number;
+  low: { input: number; expandedNpv: Money | null };
+  high: { input: number; expandedNpv: Money | null };
+}
+
+export interface NodeGrid {
+  steps: { t: Years; underlying: number[]; modes: Record<string, { value: number[]; decision: (string | null)[] }> }[];
+}
+
+export interface ValuationResult {
+  value: Money;
+  staticNpv: Money;
+  expandedNpv: Money;
+  optionPremium: Money;
+  modes: Record<string, Money>;
+  switches: SwitchResult[];
+  tree: TreeSummary;
+  convergence: Convergence | null;
+  sensitivities: Sensitivity[] | null;
+  snaps: Snap[];
+  warnings: string[];
+  engineVersion: string;
+  grid?: NodeGrid;
+}

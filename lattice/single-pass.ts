@@ -1,0 +1,115 @@
+/**
+ * One lattice pass on a prepared model: the root values, the static and expanded NPV, and per
+ * right its exercise probability, timing and boundary. No re-runs happen here.
+ */
+import type { CompiledModel } from './compiled';
+import { exerciseProfiles } from './forward';
+import { buildPlan, type LatticePlan } from './plan';
+import type { BoundaryPoint, NodeGrid, SwitchResult } from './result';
+import { rollback } from './rollback';
+import type { ProjectModel } from './schema';
+
+export interface PassResult {
+  plan: LatticePlan;
+  value: number;
+  staticNpv: number;
+  expandedNpv: number;
+  modes: Record<string, number>;
+  switches: SwitchResult[];
+  grid?: NodeGrid;
+}
+
+export interface PassOptions {
+  /** Only the root value: no decision map, boundaries or probabilities. */
+  valueOnly?: boolean;
+  /** Return the node grid for steps 0..gridSteps. */
+  gridSteps?: number;
+}
+
+function staticNpvOf(plan: LatticePlan, compiled: CompiledModel): number {
+  const m = compiled.staticMode;
+  return plan.scale[m]! * plan.lowest[0]! + plan.fixed[m * (plan.steps + 1)]! - compiled.staticInvestment;
+}
+
+export function singlePass(model: ProjectModel, compiled: CompiledModel, options: PassOptions = {}): PassResult {
+  const plan = buildPlan(model, compiled);
+  const width = plan.steps + 1;
+  const detailed = !options.valueOnly && compiled.switches.length > 0;
+  const result = rollback(plan, {
+    decisions: detailed,
+    boundaries: detailed,
+    gridSteps: options.gridSteps ?? -1,
+  });
+  const rootOf = (m: number) => plan.scale[m]! * plan.lowest[0]! + plan.fixed[m * width]! + result.rootOption[m]!;
+  const value = rootOf(compiled.start);
+  const modes: Record<string, number> = {};
+  compiled.modes.forEach((mode, m) => (modes[mode.id] = rootOf(m)));
+
+  const switches: SwitchResult[] = [];
+  if (!options.valueOnly) {
+    const rightOfSwitch = Int32Array.from(compiled.switches, (s) => s.right);
+    const profiles =
+      result.decisions && compiled.rights.length > 0
+        ? exerciseProfiles(plan, result.decisions, rightOfSwitch, compiled.rights.length, compiled.start)
+        : compiled.rights.map(() => ({ probability: 0, byStep: new Float64Array(width) }));
+    const boundaryOf = (s: number): BoundaryPoint[] => {
+      const points: BoundaryPoint[] = [];
+      for (let i = 0; i < width; i++) {
+        if (plan.open[s * width + i] !== 1) continue;
+        const low = result.boundaryLow ? result.boundaryLow[s * width + i]! : NaN;
+        const high = result.boundaryHigh ? result.boundaryHigh[s * width + i]! : NaN;
+        points.push({ t: i * plan.dt, low: Number.isNaN(low) ? null : low, high: Number.isNaN(high) ? null : high });
+      }
+      return points;
+    };
+    compiled.rights.forEach((right, r) => {
+      const own = compiled.switches.flatMap((s, k) => (s.right === r ? [k] : []));
+      const primary = own.find((k) => compiled.switches[k]!.from === right.primaryFrom) ?? own[0];
+      const profile = profiles[r]!;
+      const timing: SwitchResult['exerciseTiming'] = [];
+      profile.byStep.forEach((probability, i) => {
+        if (probability > 1e-15) timing.push({ t: i * plan.dt, probability });
+      });
+      switches.push({
+        id: right.id,
+        kind: right.kind,
+        standalone: null,
+        incremental: null,
+        exerciseProbability: profile.probability,
+        exerciseTiming: timing,
+        boundary: primary === undefined ? [] : boundaryOf(primary),
+        paths: own.map((k) => ({
+          from: compiled.modes[compiled.switches[k]!.from]!.id,
+          to: compiled.modes[compiled.switches[k]!.to]!.id,
+          boundary: boundaryOf(k),
+        })),
+      });
+    });
+  }
+
+  let grid: NodeGrid | undefined;
+  if (result.grid) {
+    grid = { steps: [] };
+    result.grid.forEach((rows, i) => {
+      const underlying: number[] = [];
+      let v = plan.lowest[i]!;
+      for (let j = 0; j <= i; j++, v *= plan.u / plan.d) underlying.push(v);
+      const entry: NodeGrid['steps'][number] = { t: i * plan.dt, underlying, modes: {} };
+      compiled.modes.forEach((mode, m) => {
+        const list = plan.byMode[m]!;
+        const map = result.decisions?.[m];
+        entry.modes[mode.id] = {
+          value: underlying.map((vj, j) => plan.scale[m]! * vj + plan.fixed[m * width + i]! + rows[m]![j]!),
+          decision: underlying.map((_, j) => {
+            const choice = map && map.length > 0 ? map[(i * (i + 1)) / 2 + j]! : 0;
+            return choice === 0 ? null : compiled.rights[compiled.switches[list[choice - 1]!]!.right]!.id;
+          }),
+        };
+      });
+      grid!.steps.push(entry);
+    });
+  }
+
+  const staticNpv = staticNpvOf(plan, compiled);
+  return { plan, value, staticNpv, expandedNpv: value - compiled.upfront, modes, switches, grid };
+}

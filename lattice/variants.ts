@@ -1,0 +1,135 @@
+/**
+ * Models derived from a model for the re-runs behind the extras: the same project with only
+ * some of its rights (stand-alone and incremental values), and with one input moved
+ * (sensitivities). Each variant is a plain model that passes the same checks as the original.
+ */
+import type { CompiledModel } from './compiled';
+import { templateIds } from './compile-templates';
+import { scaleCost } from './cost';
+import type { OptionTemplate, ProjectModel } from './schema';
+
+/** The model with only the rights whose index passes `keep`; ids and the static plan are kept. */
+export function withRights(model: ProjectModel, compiled: CompiledModel, keep: (right: number) => boolean): ProjectModel {
+  if (model.options && model.options.length > 0) {
+    const ids = templateIds(model.options);
+    const kept = model.options.flatMap((o, k) => (keep(k) ? [{ ...o, id: ids[k]! }] : []));
+    const carriesOutlay = (o: OptionTemplate) => o.type === 'defer' || o.type === 'stage';
+    const outlayRemoved = model.options.some(carriesOutlay) && !kept.some(carriesOutlay);
+    const variant: ProjectModel = { ...model, options: kept };
+    // Without its defer or stage right the project is built now, for the static plan's outlay.
+    if (outlayRemoved) variant.investment = compiled.staticInvestment;
+    return variant;
+  }
+  return { ...model, switches: (model.switches ?? []).filter((_, k) => keep(k)) };
+}
+
+export interface Bump {
+  parameter: string;
+  label: string;
+  base: number;
+  low: number;
+  high: number;
+  apply: (model: ProjectModel, input: number) => ProjectModel;
+}
+
+const RELATIVE = 0.1;
+const RATE_STEP = 0.01;
+
+function costBump(model: ProjectModel, k: number, factor: number): ProjectModel {
+  const clone = structuredClone(model);
+  if (clone.options && clone.options.length > 0) {
+    const o = clone.options[k]!;
+    switch (o.type) {
+      case 'expand':
+      case 'defer':
+        o.cost = scaleCost(o.cost, factor);
+        break;
+      case 'contract':
+        o.savings = scaleCost(o.savings, factor);
+        break;
+      case 'abandon':
+        o.salvage = scaleCost(o.salvage, factor);
+        break;
+      case 'stage':
+        o.payments = o.payments.map((p) => ({ at: p.at, amount: p.amount * factor }));
+        break;
+      case 'switch':
+        o.cost = scaleCost(o.cost, factor);
+        o.backCost = scaleCost(o.backCost, factor);
+        break;
+      default: {
+        const unreachable: never = o;
+        return unreachable;
+      }
+    }
+  } else {
+    const sw = clone.switches![k]!;
+    sw.cost = scaleCost(sw.cost, factor);
+  }
+  return clone;
+}
+
+/** The field each kind of right keeps its money in, and how a tornado labels it. */
+const costField: Record<string, [field: string, label: string]> = {
+  expand: ['cost', 'cost'],
+  defer: ['cost', 'cost'],
+  contract: ['savings', 'savings'],
+  abandon: ['salvage', 'salvage'],
+  stage: ['payments', 'payments'],
+  switch: ['cost', 'switching costs'],
+  custom: ['cost', 'cost'],
+};
+
+/**
+ * The inputs a tornado shows: V0 and σ ±10 % relative, r and δ ±1 percentage point (a relative
+ * move of a small rate means little), and each right's cost, proceeds or payments ±10 %.
+ */
+export function sensitivityBumps(model: ProjectModel, compiled: CompiledModel): Bump[] {
+  const { value, volatility } = model.underlying;
+  const delta = model.underlying.payoutYield ?? 0;
+  const bumps: Bump[] = [
+    {
+      parameter: 'underlying.value',
+      label: 'Project value V0',
+      base: value,
+      low: value * (1 - RELATIVE),
+      high: value * (1 + RELATIVE),
+      apply: (m, x) => ({ ...m, underlying: { ...m.underlying, value: x } }),
+    },
+    {
+      parameter: 'underlying.volatility',
+      label: 'Volatility σ',
+      base: volatility,
+      low: volatility * (1 - RELATIVE),
+      high: volatility * (1 + RELATIVE),
+      apply: (m, x) => ({ ...m, underlying: { ...m.underlying, volatility: x } }),
+    },
+    {
+      parameter: 'riskFreeRate',
+      label: 'Risk-free rate r',
+      base: model.riskFreeRate,
+      low: model.riskFreeRate - RATE_STEP,
+      high: model.riskFreeRate + RATE_STEP,
+      apply: (m, x) => ({ ...m, riskFreeRate: x }),
+    },
+    {
+      parameter: 'underlying.payoutYield',
+      label: 'Payout yield δ',
+      base: delta,
+      low: Math.max(0, delta - RATE_STEP),
+      high: delta + RATE_STEP,
+      apply: (m, x) => ({ ...m, underlying: { ...m.underlying, payoutYield: x } }),
+    },
+  ];
+  compiled.rights.forEach((right, k) => {
+    bumps.push({
+      parameter: `${right.field}.${costField[right.kind]![0]}`,
+      label: `${right.id} ${costField[right.kind]![1]}`,
+      base: 1,
+      low: 1 - RELATIVE,
+      high: 1 + RELATIVE,
+      apply: (m, factor) => costBump(m, k, factor),
+    });
+  });
+  return bumps;
+}
