@@ -40,6 +40,9 @@ export interface RollbackResult {
   capture: { continuation: Float64Array[]; value: Float64Array[]; next: Float64Array[] | null } | null;
 }
 
+/** Option values below this (in money) are zero for every purpose and are flushed to 0. */
+const TINY = 1e-200;
+
 const none: RollbackOptions = { decisions: false, boundaries: false, gridSteps: -1, captureStep: -1 };
 
 export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = {}): RollbackResult {
@@ -66,24 +69,99 @@ export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = 
   const openList = new Int32Array(plan.switchCount);
   const swapped = new Int32Array(modeCount);
 
+  // A mode with no switch out of it is worth its closed form for good: O ≡ 0, nothing to roll.
+  const rolled: number[] = [];
+  for (let m = 0; m < modeCount; m++) if (byMode[m]!.length > 0) rolled.push(m);
+  const targetIsFixed = Uint8Array.from(to, (m) => (byMode[m]!.length === 0 ? 1 : 0));
+  // A rolled mode that no switch leads into, and whose switches all lead to fixed modes, can be
+  // rolled in place in one fused loop: nobody else reads its continuation.
+  const isTarget = new Uint8Array(modeCount);
+  for (let s = 0; s < plan.switchCount; s++) isTarget[to[s]!] = 1;
+  const fused = rolled.filter((m) => isTarget[m] === 0 && byMode[m]!.every((s) => targetIsFixed[s] === 1));
+  const separate = rolled.filter((m) => !fused.includes(m));
+  const fuseAllowed = opts.gridSteps < 0 && opts.captureStep < 0;
+
+  /** Steps 1–3 for one fused mode at step i < N, in place (j ascending reads w[j + 1] unchanged). */
+  function fusedStep(m: number, i: number) {
+    const w = value[m]!;
+    const list = byMode[m]!;
+    let n = 0;
+    for (let k = 0; k < list.length; k++) if (open[list[k]! * width + i] === 1) openList[n++] = k;
+    if (n === 0) {
+      for (let j = 0; j <= i; j++) {
+        const x = pu * w[j + 1]! + pd * w[j]!;
+        w[j] = x > TINY || x < -TINY ? x : 0;
+      }
+      return;
+    }
+    const map = decisions ? decisions[m]! : null;
+    const base = (i * (i + 1)) / 2;
+    let v = lowest[i]!;
+    if (n === 1 && !map && !boundaryLow) {
+      // Locals, not captured variables, so the loop keeps everything in registers.
+      const s = list[openList[0]!]!;
+      const ds = deltaScale[s]!;
+      const off = offset[s * width + i]!;
+      const up = pu;
+      const down = pd;
+      const step = ratio;
+      for (let j = 0; j <= i; j++) {
+        const hold = up * w[j + 1]! + down * w[j]!;
+        const x = ds * v + off;
+        w[j] = x > hold ? x : hold;
+        v *= step;
+      }
+      return;
+    }
+    for (let j = 0; j <= i; j++) {
+      const hold = pu * w[j + 1]! + pd * w[j]!;
+      let best = hold > TINY || hold < -TINY ? hold : 0;
+      let choice = 0;
+      for (let q = 0; q < n; q++) {
+        const k = openList[q]!;
+        const s = list[k]!;
+        const x = deltaScale[s]! * v + offset[s * width + i]!;
+        if (x > best) {
+          best = x;
+          choice = k + 1;
+        }
+      }
+      w[j] = best;
+      if (map) map[base + j] = choice;
+      if (choice !== 0 && boundaryLow && boundaryHigh) {
+        const cell = list[choice - 1]! * width + i;
+        if (!(v >= boundaryLow[cell]!)) boundaryLow[cell] = v;
+        if (!(v <= boundaryHigh[cell]!)) boundaryHigh[cell] = v;
+      }
+      v *= ratio;
+    }
+  }
+
   for (let i = steps; i >= 0; i--) {
     if (i === opts.captureStep) {
       // Before step i is rolled back, `value` still holds step i + 1.
       capture = { continuation: [], value: [], next: i < steps ? value.map((row) => row.slice(0, i + 2)) : null };
     }
+    if (fuseAllowed && i < steps) for (const m of fused) fusedStep(m, i);
+    const pending = fuseAllowed ? separate : rolled;
     // 1. continuation
-    for (let m = 0; m < modeCount; m++) {
+    for (const m of i === steps ? rolled : pending) {
       const c = cont[m]!;
       if (i === steps) {
         c.fill(0);
         continue;
       }
       const w = value[m]!;
-      for (let j = 0; j <= i; j++) c[j] = pu * w[j + 1]! + pd * w[j]!;
+      for (let j = 0; j <= i; j++) {
+        const x = pu * w[j + 1]! + pd * w[j]!;
+        // Flush values far below any money amount to zero: left alone they decay into subnormal
+        // numbers deep out of the money, which the processor handles many times slower.
+        c[j] = x > TINY || x < -TINY ? x : 0;
+      }
     }
     // 2. exercise, for modes with a switch open at this step; 3. decisions and boundaries.
     let swappedCount = 0;
-    for (let m = 0; m < modeCount; m++) {
+    for (const m of i === steps || !fuseAllowed ? rolled : separate) {
       const list = byMode[m]!;
       let n = 0;
       for (let k = 0; k < list.length; k++) if (open[list[k]! * width + i] === 1) openList[n++] = k;
@@ -95,7 +173,22 @@ export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = 
       const w = value[m]!;
       const map = decisions ? decisions[m]! : null;
       const base = (i * (i + 1)) / 2;
-      let v = lowest[i]!;
+      const v0 = lowest[i]!;
+      if (n === 1 && targetIsFixed[list[openList[0]!]!] === 1 && !map && !boundaryLow) {
+        // The common case (one right into a mode worth its closed form), kept branch-light.
+        const s = list[openList[0]!]!;
+        const ds = deltaScale[s]!;
+        const off = offset[s * width + i]!;
+        let v = v0;
+        for (let j = 0; j <= i; j++) {
+          const x = ds * v + off;
+          const hold = c[j]!;
+          w[j] = x > hold ? x : hold;
+          v *= ratio;
+        }
+        continue;
+      }
+      let v = v0;
       for (let j = 0; j <= i; j++) {
         let best = c[j]!;
         let choice = 0;

@@ -1,0 +1,64 @@
+/**
+ * `npm run bench`: the engine's speed, side by side with quantlib.js, in one run on this machine.
+ * 1. The same American put (S = K = 100, r = 5 %, σ = 30 %, 1 year) at 1000, 2000 and 5000
+ *    steps: the engine (CRR, one pass) and quantlib.js's BinomialVanillaEngine with
+ *    CoxRossRubinstein; median of several runs, with the ratio.
+ * 2. A full valuation with expand + contract + abandon + defer at 500 steps, including the
+ *    stand-alone and incremental breakdown, convergence and sensitivities.
+ */
+import { valueProject, type ProjectModel } from '../lattice';
+import { quantlibAmerican } from '../tests/lattice/support/quantlib';
+
+function median(times: number[]): number {
+  const sorted = [...times].sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)]!;
+}
+
+function time(run: () => unknown, repeats: number): number {
+  run(); // warm-up: let the JIT compile the hot loop first
+  const times: number[] = [];
+  for (let k = 0; k < repeats; k++) {
+    const start = performance.now();
+    run();
+    times.push(performance.now() - start);
+  }
+  return median(times);
+}
+
+const ms = (x: number) => `${x.toFixed(2).padStart(9)} ms`;
+
+console.log('American put, S = K = 100, r = 5 %, σ = 30 %, T = 1 (median of runs)');
+console.log('  steps      engine (crr)     quantlib.js (CRR)   ratio');
+for (const steps of [1000, 2000, 5000]) {
+  const model: ProjectModel = {
+    underlying: { value: 100, volatility: 0.3 },
+    riskFreeRate: 0.05,
+    horizon: 1,
+    steps,
+    options: [{ type: 'abandon', salvage: 100, window: { kind: 'american', from: 0, to: 1 } }],
+  };
+  const engine = time(() => valueProject(model, { extras: false }), 7);
+  const quantlib = time(
+    () => quantlibAmerican({ kind: 'put', spot: 100, strike: 100, rate: 0.05, dividendYield: 0, volatility: 0.3, days: 365, steps, tree: 'crr' }),
+    steps >= 5000 ? 3 : 5,
+  );
+  console.log(`  ${String(steps).padStart(5)}  ${ms(engine)}      ${ms(quantlib)}     ${(quantlib / engine).toFixed(1)}×`);
+}
+
+const fourOptions: ProjectModel = {
+  underlying: { value: 100, volatility: 0.3, payoutYield: 0.02 },
+  riskFreeRate: 0.05,
+  horizon: 5,
+  steps: 500,
+  options: [
+    { type: 'defer', cost: 90, window: { kind: 'american', from: 0, to: 2 } },
+    { type: 'expand', factor: 0.5, cost: 40, window: { kind: 'american', from: 1, to: 4 } },
+    { type: 'contract', fraction: 0.3, savings: 25, window: { kind: 'american', from: 1, to: 5 } },
+    { type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 5 } },
+  ],
+};
+const single = time(() => valueProject(fourOptions, { extras: false }), 7);
+const full = time(() => valueProject(fourOptions), 5);
+console.log('\nFour options (defer, expand, contract, abandon), 500 steps, 6 modes');
+console.log(`  one lattice pass (extras: false)                          ${ms(single)}`);
+console.log(`  full valuation with breakdown, convergence, sensitivities ${ms(full)}`);

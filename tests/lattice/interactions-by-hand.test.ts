@@ -1,0 +1,113 @@
+/**
+ * Interaction cases worked by hand on small CRR trees (arithmetic in the comments; common
+ * practice, no source). The tree is chosen so every number is simple: σ = ln 1.25 and Δt = 1
+ * give u = 1.25, d = 0.8; r = ln 1.05 gives e^{rΔt} = 1.05 and p = (1.05 − 0.8)/(1.25 − 0.8) = 5/9.
+ * From V0 = 100 the nodes are 125, 80 at t = 1 and 156.25, 100, 64 at t = 2.
+ * Tolerance 1e-9: the hand figures are exact fractions rounded to 1e-6 only where printed.
+ */
+import { describe, expect, it } from 'vitest';
+import { valueProject, type ProjectModel } from '@/lattice';
+import { expectClose } from './support/check';
+
+const base = {
+  underlying: { value: 100, volatility: Math.log(1.25) },
+  riskFreeRate: Math.log(1.05),
+  tree: 'crr' as const,
+};
+const p = 5 / 9;
+const q = 4 / 9;
+
+describe('interacting rights worked by hand', () => {
+  it('the tree is u = 1.25, d = 0.8, p = 5/9', () => {
+    const r = valueProject({ ...base, horizon: 2, steps: 2 }, { extras: false });
+    expectClose(r.tree.u, 1.25, { abs: 1e-12 }, {});
+    expectClose(r.tree.d, 0.8, { abs: 1e-12 }, {});
+    expectClose(r.tree.p, p, { abs: 1e-12 }, {});
+  });
+
+  it('expand (+50 % for 30) and abandon (for 70) on one project, two steps', () => {
+    // t = 2, operating: max(V, 1.5V − 30, 70) → 204.375 (expand), 120 (expand), 70 (abandon).
+    //        expanded:  max(1.5V, 70)       → 234.375, 150, 96.
+    // t = 1, operating at 125: C = (5/9·204.375 + 4/9·120)/1.05 = 166.875/1.05 = 158.928571;
+    //        expanding is worth 1.5·125 − 30 = 157.5 and abandoning 70, so it continues.
+    //        operating at 80: C = (5/9·120 + 4/9·70)/1.05 = 97.777778/1.05 = 93.121693;
+    //        expanding 1.5·80 − 30 = 90, abandoning 70: continues.
+    // t = 0: C = (5/9·158.928571 + 4/9·93.121693)/1.05 = 123.505781; expanding now 150 − 30 = 120.
+    const model: ProjectModel = {
+      ...base,
+      horizon: 2,
+      steps: 2,
+      options: [
+        { type: 'expand', factor: 0.5, cost: 30, window: { kind: 'american', from: 0, to: 2 } },
+        { type: 'abandon', salvage: 70, window: { kind: 'american', from: 0, to: 2 } },
+      ],
+    };
+    const r = valueProject(model, { extras: false });
+    const t1up = (p * 204.375 + q * 120) / 1.05;
+    const t1down = (p * 120 + q * 70) / 1.05;
+    const root = (p * t1up + q * t1down) / 1.05;
+    expectClose(t1up, 158.928571, { abs: 1e-6 }, { step: 'hand arithmetic' });
+    expectClose(root, 123.505781, { abs: 1e-6 }, { step: 'hand arithmetic' });
+    expectClose(r.value, root, { abs: 1e-9 }, { case: 'expand + abandon' });
+    expectClose(r.staticNpv, 100, { abs: 1e-9 }, {});
+    // Expand is taken at (2,2) and (2,1): probability p² + 2pq = 65/81; abandon at (2,0): q² = 16/81.
+    const [expand, abandon] = r.switches;
+    expectClose(expand!.exerciseProbability, 65 / 81, { abs: 1e-12 }, {});
+    expectClose(abandon!.exerciseProbability, 16 / 81, { abs: 1e-12 }, {});
+    const last = abandon!.boundary.at(-1)!;
+    expect(last.t).toBe(2);
+    expectClose(last.low!, 64, { abs: 1e-9 }, { boundary: 'abandon at t = 2' });
+    expectClose(last.high!, 64, { abs: 1e-9 }, { boundary: 'abandon at t = 2' });
+  });
+
+  it('defer (for 90, until year 1) and expand (+50 % for 30, in year 2 only), two steps', () => {
+    // t = 2, operating: max(V, 1.5V − 30) → 204.375, 120, 66 (expansion always pays).
+    // t = 1, operating: (5/9·204.375 + 4/9·120)/1.05 = 158.928571 at 125,
+    //                   (5/9·120 + 4/9·66)/1.05 = 96/1.05 = 91.428571 at 80.
+    //        waiting: investing gives 158.928571 − 90 = 68.928571 and 91.428571 − 90 = 1.428571;
+    //        the window closes after t = 1, so waiting on is worth 0: invest at both nodes.
+    // t = 0, waiting: (5/9·68.928571 + 4/9·1.428571)/1.05 = 37.074830;
+    //        investing now: (5/9·158.928571 + 4/9·91.428571)/1.05 − 90 = 122.789116 − 90 = 32.789116.
+    //        So wait. Expanded NPV = 37.074830; static NPV = 100 − 90 = 10.
+    const model: ProjectModel = {
+      ...base,
+      horizon: 2,
+      steps: 2,
+      options: [
+        { type: 'defer', cost: 90, window: { kind: 'american', from: 0, to: 1 } },
+        { type: 'expand', factor: 0.5, cost: 30, window: { kind: 'european', at: 2 } },
+      ],
+    };
+    const r = valueProject(model, { extras: false });
+    expectClose(r.expandedNpv, 37.07483, { abs: 1e-6 }, { case: 'defer + expand' });
+    expectClose(r.staticNpv, 10, { abs: 1e-9 }, {});
+    expectClose(r.modes.operating!, 122.789116, { abs: 1e-6 }, {});
+    const [defer, expand] = r.switches;
+    expectClose(defer!.exerciseProbability, 1, { abs: 1e-12 }, {});
+    expect(defer!.exerciseTiming).toEqual([{ t: 1, probability: expect.closeTo(1, 12) }]);
+    expectClose(expand!.exerciseProbability, 1, { abs: 1e-12 }, {});
+  });
+
+  it('mothball and restart around a discrete payout, two steps', () => {
+    // The project pays 25 % of its value at t = 1 (so t = 2 nodes are 117.1875, 75, 48).
+    // Mothballing costs 2, earns savings of 8 a year and forgoes the project's payouts;
+    // restarting costs 4. Operating for good is worth exactly V0 = 100.
+    // t = 1, mothballed: restarting gives the operating continuation (which includes the 25 %
+    //        payout at t = 1) minus 4: 125 − 4 = 121 and 80 − 4 = 76, better than staying
+    //        mothballed (97.94 and 64.19), so restart at both nodes.
+    // t = 0, operating: mothballing gives 8 + (5/9·121 + 4/9·76)/1.05 − 2 = 8 + 100 − 4/1.05 − 2
+    //        = 102.190476 > 100, so mothball for one year.
+    const model: ProjectModel = {
+      underlying: { ...base.underlying, payouts: [{ at: 1, fraction: 0.25 }] },
+      riskFreeRate: base.riskFreeRate,
+      tree: 'crr',
+      horizon: 2,
+      steps: 2,
+      options: [{ type: 'switch', toScale: 0, cost: 2, backCost: 4, flowPerYear: 8 }],
+    };
+    const r = valueProject(model, { extras: false });
+    expectClose(r.value, 100 + 8 - 2 - 4 / 1.05, { abs: 1e-9 }, { case: 'mothball + restart' });
+    expectClose(r.switches[0]!.exerciseProbability, 1, { abs: 1e-12 }, {});
+    expect(r.switches[0]!.exerciseTiming).toEqual([{ t: 0, probability: 1 }]);
+  });
+});
