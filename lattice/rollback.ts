@@ -7,20 +7,21 @@
  *      each switch worth the *continuation* of the mode it leads to minus its cost (so at most
  *      one switch per mode per node, and a switch never chains into another at the same node);
  *      a switch wins only if strictly better, so ties continue;
- *   3. record the decision and, for boundaries, the project value where each switch is taken.
+ *   3. record the decision (run-length encoded, see decision-runs.ts).
  * Values are rolled back as O = W − A (see plan.ts), so step 1 is a plain discounted average of
- * O and step 2 adds the closed-form difference A_to − A_from = Δscale·V + offset.
+ * O and step 2 adds the closed-form difference A_to − A_from = Δscale·V + offset. A mode with no
+ * switch out of it has O ≡ 0 and is not rolled at all.
  *
- * The hot loop allocates nothing, calls no closure per node and never calls Math.pow: V at node
- * (i, j + 1) is V at (i, j) times u/d.
+ * The hot loops allocate nothing, call no closure per node and never call Math.pow: V at node
+ * (i, j + 1) is V at (i, j) times u/d. Values the loops read are copied into locals first so
+ * the JIT keeps them in registers.
  */
+import { DecisionRuns } from './decision-runs';
 import type { LatticePlan } from './plan';
 
 export interface RollbackOptions {
-  /** Keep one byte per node per mode with the decision taken (needed for probabilities). */
+  /** Record the decision map and the exercise boundaries (needed for probabilities). */
   decisions: boolean;
-  /** Track, per switch and step, the lowest and highest project value where it is taken. */
-  boundaries: boolean;
   /** Copy the values of every mode for steps 0..gridSteps (the node grid on request). */
   gridSteps: number;
   /** Copy the continuation and values at this step and the values one step on (explainNode). */
@@ -30,8 +31,7 @@ export interface RollbackOptions {
 export interface RollbackResult {
   /** O at the root for every mode. */
   rootOption: Float64Array;
-  /** Per mode, decision bytes indexed by i(i+1)/2 + j: 0 = continue, k = byMode[m][k − 1]. */
-  decisions: Uint8Array[] | null;
+  decisions: DecisionRuns | null;
   /** [switch·(N+1) + i] lowest / highest V where the switch is taken (NaN when never). */
   boundaryLow: Float64Array | null;
   boundaryHigh: Float64Array | null;
@@ -40,10 +40,7 @@ export interface RollbackResult {
   capture: { continuation: Float64Array[]; value: Float64Array[]; next: Float64Array[] | null } | null;
 }
 
-/** Option values below this (in money) are zero for every purpose and are flushed to 0. */
-const TINY = 1e-200;
-
-const none: RollbackOptions = { decisions: false, boundaries: false, gridSteps: -1, captureStep: -1 };
+const none: RollbackOptions = { decisions: false, gridSteps: -1, captureStep: -1 };
 
 export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = {}): RollbackResult {
   const opts = { ...none, ...options };
@@ -56,85 +53,96 @@ export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = 
   const value: Float64Array[] = [];
   const cont: Float64Array[] = [];
   for (let m = 0; m < modeCount; m++) {
-    value.push(new Float64Array(width));
-    cont.push(new Float64Array(width));
+    const rolledMode = byMode[m]!.length > 0;
+    value.push(new Float64Array(rolledMode ? width : 0));
+    cont.push(new Float64Array(rolledMode ? width : 0));
   }
-  const decisions = opts.decisions
-    ? byMode.map((list) => (list.length > 0 ? new Uint8Array((width * (width + 1)) / 2) : new Uint8Array(0)))
-    : null;
-  const boundaryLow = opts.boundaries ? new Float64Array(plan.switchCount * width).fill(NaN) : null;
-  const boundaryHigh = opts.boundaries ? new Float64Array(plan.switchCount * width).fill(NaN) : null;
+  // A mode with no switch out of it is worth its closed form for good: O ≡ 0, nothing to roll.
+  const fixedValue = new Float64Array(width);
+  for (let m = 0; m < modeCount; m++) if (byMode[m]!.length === 0) value[m] = cont[m] = fixedValue;
+  const rolled: number[] = [];
+  for (let m = 0; m < modeCount; m++) if (byMode[m]!.length > 0) rolled.push(m);
+  // A rolled mode that no switch leads into, and whose switches all lead to fixed modes, is
+  // rolled in place in one fused loop: nobody else reads its continuation.
+  const isTarget = new Uint8Array(modeCount);
+  for (let s = 0; s < plan.switchCount; s++) isTarget[to[s]!] = 1;
+  const fused = new Uint8Array(modeCount);
+  const snapshots = opts.gridSteps >= 0 || opts.captureStep >= 0;
+  for (const m of rolled)
+    if (!snapshots && isTarget[m] === 0 && byMode[m]!.every((s) => byMode[to[s]!]!.length === 0)) fused[m] = 1;
+
+  const decisions = opts.decisions ? new DecisionRuns(modeCount, width) : null;
+  const boundaryLow = opts.decisions ? new Float64Array(plan.switchCount * width).fill(NaN) : null;
+  const boundaryHigh = opts.decisions ? new Float64Array(plan.switchCount * width).fill(NaN) : null;
   const grid: Float64Array[][] | null = opts.gridSteps >= 0 ? [] : null;
   let capture: RollbackResult['capture'] = null;
   const openList = new Int32Array(plan.switchCount);
   const swapped = new Int32Array(modeCount);
 
-  // A mode with no switch out of it is worth its closed form for good: O ≡ 0, nothing to roll.
-  const rolled: number[] = [];
-  for (let m = 0; m < modeCount; m++) if (byMode[m]!.length > 0) rolled.push(m);
-  const targetIsFixed = Uint8Array.from(to, (m) => (byMode[m]!.length === 0 ? 1 : 0));
-  // A rolled mode that no switch leads into, and whose switches all lead to fixed modes, can be
-  // rolled in place in one fused loop: nobody else reads its continuation.
-  const isTarget = new Uint8Array(modeCount);
-  for (let s = 0; s < plan.switchCount; s++) isTarget[to[s]!] = 1;
-  const fused = rolled.filter((m) => isTarget[m] === 0 && byMode[m]!.every((s) => targetIsFixed[s] === 1));
-  const separate = rolled.filter((m) => !fused.includes(m));
-  const fuseAllowed = opts.gridSteps < 0 && opts.captureStep < 0;
+  /** Boundaries of one finished row, read from its runs (a few per row, so Math.pow is fine). */
+  function recordBoundaries(m: number, i: number) {
+    if (!decisions || !boundaryLow || !boundaryHigh) return;
+    const row = m * width + i;
+    const first = decisions.rowFirst[row]!;
+    const count = decisions.rowCount[row]!;
+    const list = byMode[m]!;
+    for (let k = first; k < first + count; k++) {
+      const choice = decisions.choices[k]!;
+      if (choice === 0) continue;
+      const startJ = decisions.starts[k]!;
+      const endJ = k + 1 < first + count ? decisions.starts[k + 1]! - 1 : i;
+      const cell = list[choice - 1]! * width + i;
+      const low = lowest[i]! * Math.pow(ratio, startJ);
+      const high = lowest[i]! * Math.pow(ratio, endJ);
+      if (!(low >= boundaryLow[cell]!)) boundaryLow[cell] = low;
+      if (!(high <= boundaryHigh[cell]!)) boundaryHigh[cell] = high;
+    }
+  }
 
-  /** Steps 1–3 for one fused mode at step i < N, in place (j ascending reads w[j + 1] unchanged). */
-  function fusedStep(m: number, i: number) {
-    const w = value[m]!;
+  /** Collects the open switches of mode m at step i into openList; returns how many. */
+  function openAt(m: number, i: number): number {
     const list = byMode[m]!;
     let n = 0;
     for (let k = 0; k < list.length; k++) if (open[list[k]! * width + i] === 1) openList[n++] = k;
-    if (n === 0) {
-      for (let j = 0; j <= i; j++) {
-        const x = pu * w[j + 1]! + pd * w[j]!;
-        w[j] = x > TINY || x < -TINY ? x : 0;
-      }
-      return;
-    }
-    const map = decisions ? decisions[m]! : null;
-    const base = (i * (i + 1)) / 2;
+    return n;
+  }
+
+  /** Steps 1–3 for a fused mode with one open switch, in place (j ascending reads w[j+1] unchanged). */
+  function fusedSingle(m: number, i: number, k: number) {
+    const w = value[m]!;
+    const s = byMode[m]![k]!;
+    const ds = deltaScale[s]!;
+    const off = offset[s * width + i]!;
+    const up = pu;
+    const down = pd;
+    const step = ratio;
+    const last = i === steps;
     let v = lowest[i]!;
-    if (n === 1 && !map && !boundaryLow) {
-      // Locals, not captured variables, so the loop keeps everything in registers.
-      const s = list[openList[0]!]!;
-      const ds = deltaScale[s]!;
-      const off = offset[s * width + i]!;
-      const up = pu;
-      const down = pd;
-      const step = ratio;
+    if (!decisions) {
       for (let j = 0; j <= i; j++) {
-        const hold = up * w[j + 1]! + down * w[j]!;
+        const hold = last ? 0 : up * w[j + 1]! + down * w[j]!;
         const x = ds * v + off;
         w[j] = x > hold ? x : hold;
         v *= step;
       }
       return;
     }
+    const row = m * width + i;
+    decisions.rowFirst[row] = decisions.length;
+    let previous = -1;
     for (let j = 0; j <= i; j++) {
-      const hold = pu * w[j + 1]! + pd * w[j]!;
-      let best = hold > TINY || hold < -TINY ? hold : 0;
-      let choice = 0;
-      for (let q = 0; q < n; q++) {
-        const k = openList[q]!;
-        const s = list[k]!;
-        const x = deltaScale[s]! * v + offset[s * width + i]!;
-        if (x > best) {
-          best = x;
-          choice = k + 1;
-        }
+      const hold = last ? 0 : up * w[j + 1]! + down * w[j]!;
+      const x = ds * v + off;
+      const choice = x > hold ? k + 1 : 0;
+      w[j] = x > hold ? x : hold;
+      if (choice !== previous) {
+        decisions.push(j, choice);
+        previous = choice;
       }
-      w[j] = best;
-      if (map) map[base + j] = choice;
-      if (choice !== 0 && boundaryLow && boundaryHigh) {
-        const cell = list[choice - 1]! * width + i;
-        if (!(v >= boundaryLow[cell]!)) boundaryLow[cell] = v;
-        if (!(v <= boundaryHigh[cell]!)) boundaryHigh[cell] = v;
-      }
-      v *= ratio;
+      v *= step;
     }
+    decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
+    recordBoundaries(m, i);
   }
 
   for (let i = steps; i >= 0; i--) {
@@ -142,53 +150,47 @@ export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = 
       // Before step i is rolled back, `value` still holds step i + 1.
       capture = { continuation: [], value: [], next: i < steps ? value.map((row) => row.slice(0, i + 2)) : null };
     }
-    if (fuseAllowed && i < steps) for (const m of fused) fusedStep(m, i);
-    const pending = fuseAllowed ? separate : rolled;
+    // Fused modes do all three steps in one loop.
+    for (const m of rolled) {
+      if (fused[m] !== 1) continue;
+      const n = openAt(m, i);
+      if (n === 1) {
+        fusedSingle(m, i, openList[0]!);
+        continue;
+      }
+      // Nothing open (or several switches at once): fall back to the two-pass path below.
+      fused[m] = 2;
+    }
     // 1. continuation
-    for (const m of i === steps ? rolled : pending) {
+    for (const m of rolled) {
+      if (fused[m] === 1) continue;
       const c = cont[m]!;
       if (i === steps) {
         c.fill(0);
         continue;
       }
       const w = value[m]!;
-      for (let j = 0; j <= i; j++) {
-        const x = pu * w[j + 1]! + pd * w[j]!;
-        // Flush values far below any money amount to zero: left alone they decay into subnormal
-        // numbers deep out of the money, which the processor handles many times slower.
-        c[j] = x > TINY || x < -TINY ? x : 0;
-      }
+      const up = pu;
+      const down = pd;
+      for (let j = 0; j <= i; j++) c[j] = up * w[j + 1]! + down * w[j]!;
     }
     // 2. exercise, for modes with a switch open at this step; 3. decisions and boundaries.
     let swappedCount = 0;
-    for (const m of i === steps || !fuseAllowed ? rolled : separate) {
-      const list = byMode[m]!;
-      let n = 0;
-      for (let k = 0; k < list.length; k++) if (open[list[k]! * width + i] === 1) openList[n++] = k;
+    for (const m of rolled) {
+      if (fused[m] === 1) continue;
+      if (fused[m] === 2) fused[m] = 1;
+      const n = openAt(m, i);
       if (n === 0) {
         swapped[swappedCount++] = m;
         continue;
       }
+      const list = byMode[m]!;
       const c = cont[m]!;
       const w = value[m]!;
-      const map = decisions ? decisions[m]! : null;
-      const base = (i * (i + 1)) / 2;
-      const v0 = lowest[i]!;
-      if (n === 1 && targetIsFixed[list[openList[0]!]!] === 1 && !map && !boundaryLow) {
-        // The common case (one right into a mode worth its closed form), kept branch-light.
-        const s = list[openList[0]!]!;
-        const ds = deltaScale[s]!;
-        const off = offset[s * width + i]!;
-        let v = v0;
-        for (let j = 0; j <= i; j++) {
-          const x = ds * v + off;
-          const hold = c[j]!;
-          w[j] = x > hold ? x : hold;
-          v *= ratio;
-        }
-        continue;
-      }
-      let v = v0;
+      const row = m * width + i;
+      if (decisions) decisions.rowFirst[row] = decisions.length;
+      let previous = -1;
+      let v = lowest[i]!;
       for (let j = 0; j <= i; j++) {
         let best = c[j]!;
         let choice = 0;
@@ -202,13 +204,15 @@ export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = 
           }
         }
         w[j] = best;
-        if (map) map[base + j] = choice;
-        if (choice !== 0 && boundaryLow && boundaryHigh) {
-          const cell = list[choice - 1]! * width + i;
-          if (!(v >= boundaryLow[cell]!)) boundaryLow[cell] = v;
-          if (!(v <= boundaryHigh[cell]!)) boundaryHigh[cell] = v;
+        if (decisions && choice !== previous) {
+          decisions.push(j, choice);
+          previous = choice;
         }
         v *= ratio;
+      }
+      if (decisions) {
+        decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
+        recordBoundaries(m, i);
       }
     }
     // Modes with nothing open keep their continuation: swap buffers (after every mode above
@@ -229,7 +233,7 @@ export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = 
   }
 
   return {
-    rootOption: Float64Array.from(value, (row) => row[0]!),
+    rootOption: Float64Array.from(value, (row) => row[0] ?? 0),
     decisions,
     boundaryLow,
     boundaryHigh,

@@ -35,11 +35,7 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
   const plan = buildPlan(model, compiled);
   const width = plan.steps + 1;
   const detailed = !options.valueOnly && compiled.switches.length > 0;
-  const result = rollback(plan, {
-    decisions: detailed,
-    boundaries: detailed,
-    gridSteps: options.gridSteps ?? -1,
-  });
+  const result = rollback(plan, { decisions: detailed, gridSteps: options.gridSteps ?? -1 });
   const rootOf = (m: number) => plan.scale[m]! * plan.lowest[0]! + plan.fixed[m * width]! + result.rootOption[m]!;
   const value = rootOf(compiled.start);
   const modes: Record<string, number> = {};
@@ -97,11 +93,10 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
       const entry: NodeGrid['steps'][number] = { t: i * plan.dt, underlying, modes: {} };
       compiled.modes.forEach((mode, m) => {
         const list = plan.byMode[m]!;
-        const map = result.decisions?.[m];
         entry.modes[mode.id] = {
-          value: underlying.map((vj, j) => plan.scale[m]! * vj + plan.fixed[m * width + i]! + rows[m]![j]!),
+          value: underlying.map((vj, j) => plan.scale[m]! * vj + plan.fixed[m * width + i]! + (rows[m]![j] ?? 0)),
           decision: underlying.map((_, j) => {
-            const choice = map && map.length > 0 ? map[(i * (i + 1)) / 2 + j]! : 0;
+            const choice = result.decisions ? result.decisions.at(m * width + i, j) : 0;
             return choice === 0 ? null : compiled.rights[compiled.switches[list[choice - 1]!]!.right]!.id;
           }),
         };

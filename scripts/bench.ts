@@ -37,10 +37,10 @@ for (const steps of [1000, 2000, 5000]) {
     steps,
     options: [{ type: 'abandon', salvage: 100, window: { kind: 'american', from: 0, to: 1 } }],
   };
-  const engine = time(() => valueProject(model, { extras: false }), 7);
+  const engine = time(() => valueProject(model, { extras: false }), 21);
   const quantlib = time(
     () => quantlibAmerican({ kind: 'put', spot: 100, strike: 100, rate: 0.05, dividendYield: 0, volatility: 0.3, days: 365, steps, tree: 'crr' }),
-    steps >= 5000 ? 3 : 5,
+    steps >= 5000 ? 5 : 11,
   );
   console.log(`  ${String(steps).padStart(5)}  ${ms(engine)}      ${ms(quantlib)}     ${(quantlib / engine).toFixed(1)}×`);
 }
@@ -57,8 +57,8 @@ const fourOptions: ProjectModel = {
     { type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 5 } },
   ],
 };
-const single = time(() => valueProject(fourOptions, { extras: false }), 7);
-const full = time(() => valueProject(fourOptions), 5);
+const single = time(() => valueProject(fourOptions, { extras: false }), 21);
+const full = time(() => valueProject(fourOptions), 11);
 console.log('\nFour options (defer, expand, contract, abandon), 500 steps, 6 modes');
 console.log(`  one lattice pass (extras: false)                          ${ms(single)}`);
 console.log(`  full valuation with breakdown, convergence, sensitivities ${ms(full)}`);
