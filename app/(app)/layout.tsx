@@ -1,0 +1,44 @@
+import { redirect } from 'next/navigation';
+import type { ReactNode } from 'react';
+import { NavLinks } from '@/components/nav-links';
+import { SignOutButton } from '@/components/sign-out-button';
+import { Wordmark } from '@/components/wordmark';
+import { currentViewer } from '@/lib/dal';
+import { navigationFor } from '@/lib/navigation';
+import { roleLabels } from '@/lib/permissions';
+
+export default async function AppLayout({ children }: { children: ReactNode }) {
+  const viewer = await currentViewer();
+  if (!viewer) redirect('/sign-in');
+  const items = viewer.role ? navigationFor(viewer.role) : [];
+  return (
+    <div className="flex min-h-screen">
+      <aside className="flex w-rail shrink-0 flex-col border-r border-line bg-paper-raised px-4 py-6">
+        <div className="px-3">
+          <Wordmark />
+        </div>
+        {viewer.orgName ? (
+          <p className="mt-6 px-3 text-caption uppercase tracking-wide text-ink-muted" data-testid="organisation-name">
+            {viewer.orgName}
+          </p>
+        ) : null}
+        <div className="mt-2">
+          <NavLinks items={items} />
+        </div>
+        <div className="mt-auto border-t border-line px-3 pt-4">
+          <p className="text-body font-medium text-ink">{viewer.name}</p>
+          <p className="text-caption text-ink-muted">
+            {viewer.email}
+            {viewer.role ? ` · ${roleLabels[viewer.role]}` : ''}
+          </p>
+          <div className="mt-3">
+            <SignOutButton />
+          </div>
+        </div>
+      </aside>
+      <main id="main" className="min-w-0 flex-1 px-8 py-8 xl:px-12">
+        {children}
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,73 @@
+'use client';
+
+import { useForm, type FieldErrors, type Resolver } from 'react-hook-form';
+import { Button } from '@/components/ui/button';
+import { Input } from '@/components/ui/input';
+import { Select } from '@/components/ui/select';
+import { useToast } from '@/components/ui/toast';
+import { monthNames } from '@/lib/format';
+import { settingsSchema, type SettingsInput } from '@/lib/validations/settings';
+import { updateSettingsAction } from '../actions';
+
+/** What the fields hold: rates typed as percentages. The schema (shared with the server) sees fractions. */
+interface SettingsFields {
+  currency: string;
+  riskFreeRate: string;
+  wacc: string;
+  fiscalYearStartMonth: string;
+}
+
+const percentToFraction = (v: string) => (v.trim() === '' ? NaN : Number(v) / 100);
+
+function toInput(fields: SettingsFields) {
+  return {
+    currency: fields.currency,
+    riskFreeRate: percentToFraction(fields.riskFreeRate),
+    wacc: percentToFraction(fields.wacc),
+    fiscalYearStartMonth: Number(fields.fiscalYearStartMonth),
+  };
+}
+
+const resolver: Resolver<SettingsFields> = async (values) => {
+  const parsed = settingsSchema.safeParse(toInput(values));
+  if (parsed.success) return { values, errors: {} };
+  const errors: FieldErrors<SettingsFields> = {};
+  for (const issue of parsed.error.issues) {
+    const key = issue.path[0] as keyof SettingsFields;
+    errors[key] ??= { type: issue.code, message: issue.message };
+  }
+  return { values: {}, errors };
+};
+
+export function SettingsForm({ initial }: { initial: SettingsInput }) {
+  const toast = useToast();
+  const form = useForm<SettingsFields>({
+    resolver,
+    defaultValues: {
+      currency: initial.currency,
+      riskFreeRate: (initial.riskFreeRate * 100).toFixed(2),
+      wacc: (initial.wacc * 100).toFixed(2),
+      fiscalYearStartMonth: String(initial.fiscalYearStartMonth),
+    },
+  });
+  const { errors, isSubmitting } = form.formState;
+  const onSubmit = form.handleSubmit(async (fields) => {
+    const result = await updateSettingsAction(toInput(fields));
+    if (result.ok) return toast(result.message, 'success');
+    for (const [field, messages] of Object.entries(result.fields ?? {})) form.setError(field as keyof SettingsFields, { message: messages[0] });
+    toast(result.message, 'error');
+  });
+  return (
+    <form onSubmit={onSubmit} noValidate className="grid max-w-xl gap-5 sm:grid-cols-2">
+      <Input label="Currency" hint="ISO 4217 code, e.g. EUR" maxLength={3} error={errors.currency?.message} {...form.register('currency')} />
+      <Select label="Fiscal year starts in" options={monthNames.map((m, k) => ({ value: String(k + 1), label: m }))} error={errors.fiscalYearStartMonth?.message} {...form.register('fiscalYearStartMonth')} />
+      <Input label="Risk-free rate (% a year)" type="number" step="0.01" inputMode="decimal" hint="Continuously compounded; used by the lattice" error={errors.riskFreeRate?.message} {...form.register('riskFreeRate')} />
+      <Input label="WACC (% a year)" type="number" step="0.01" inputMode="decimal" hint="Default discount rate for cash flows" error={errors.wacc?.message} {...form.register('wacc')} />
+      <div className="sm:col-span-2">
+        <Button type="submit" busy={isSubmitting}>
+          Save defaults
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,22 @@
+import '@fontsource/work-sans/400.css';
+import '@fontsource/work-sans/500.css';
+import '@fontsource/work-sans/600.css';
+import './globals.css';
+import type { Metadata } from 'next';
+import type { ReactNode } from 'react';
+import { ToastProvider } from '@/components/ui/toast';
+
+export const metadata: Metadata = {
+  title: { default: 'Leeway', template: '%s · Leeway' },
+  description: 'Leeway values the flexibility inside capital projects.',
+};
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en-GB">
+      <body className="min-h-screen">
+        <ToastProvider>{children}</ToastProvider>
+      </body>
+    </html>
+  );
+}

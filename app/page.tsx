@@ -1,0 +1,7 @@
+import { redirect } from 'next/navigation';
+import { currentViewer } from '@/lib/dal';
+
+export default async function Home() {
+  const viewer = await currentViewer();
+  redirect(viewer ? '/portfolio' : '/sign-in');
+}

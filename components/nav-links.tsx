@@ -1,0 +1,30 @@
+'use client';
+
+import Link from 'next/link';
+import { usePathname } from 'next/navigation';
+
+export interface NavItem {
+  href: string;
+  label: string;
+}
+
+export function NavLinks({ items }: { items: NavItem[] }) {
+  const pathname = usePathname();
+  return (
+    <nav aria-label="Main" className="flex flex-col gap-1">
+      {items.map((item) => {
+        const active = pathname === item.href || pathname.startsWith(`${item.href}/`);
+        return (
+          <Link
+            key={item.href}
+            href={item.href}
+            aria-current={active ? 'page' : undefined}
+            className={`rounded-md px-3 py-2 text-body ${active ? 'bg-tide-50 font-medium text-tide-700' : 'text-ink-soft hover:bg-paper-sunk hover:text-ink'}`}
+          >
+            {item.label}
+          </Link>
+        );
+      })}
+    </nav>
+  );
+}

@@ -1,0 +1,37 @@
+'use client';
+
+import { useEffect, useRef, type ReactNode } from 'react';
+
+export interface DialogProps {
+  open: boolean;
+  title: string;
+  onClose: () => void;
+  children: ReactNode;
+}
+
+/**
+ * A modal built on the native <dialog>: focus is trapped and restored, Escape closes it, and
+ * the page behind is inert, all by the browser.
+ */
+export function Dialog({ open, title, onClose, children }: DialogProps) {
+  const ref = useRef<HTMLDialogElement>(null);
+  useEffect(() => {
+    const dialog = ref.current;
+    if (!dialog) return;
+    if (open && !dialog.open) dialog.showModal();
+    if (!open && dialog.open) dialog.close();
+  }, [open]);
+  return (
+    <dialog
+      ref={ref}
+      onClose={onClose}
+      aria-labelledby="dialog-title"
+      className="m-auto w-full max-w-md rounded-card border border-line bg-paper-raised p-6 text-ink shadow-card backdrop:bg-ink/40"
+    >
+      <h2 id="dialog-title" className="mb-4">
+        {title}
+      </h2>
+      {children}
+    </dialog>
+  );
+}

@@ -1,0 +1,81 @@
+/**
+ * The database as Kysely sees it, kept by hand and checked against the migrated schema by
+ * tests/db/schema-types.test.ts. Nullable columns are `T | null`, never optional.
+ */
+import type { ColumnType, Generated, Insertable, Selectable, Updateable } from 'kysely';
+
+type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
+
+export interface UserTable {
+  id: string;
+  name: string;
+  email: string;
+  emailVerified: boolean;
+  image: string | null;
+  createdAt: Timestamp;
+  updatedAt: Timestamp;
+}
+
+export interface OrganizationTable {
+  id: string;
+  name: string;
+  slug: string;
+  logo: string | null;
+  createdAt: Timestamp;
+  metadata: string | null;
+}
+
+export interface MemberTable {
+  id: string;
+  organizationId: string;
+  userId: string;
+  role: string;
+  createdAt: Timestamp;
+}
+
+export interface InvitationTable {
+  id: string;
+  organizationId: string;
+  email: string;
+  role: string | null;
+  status: string;
+  expiresAt: Timestamp;
+  createdAt: Timestamp;
+  inviterId: string;
+}
+
+export interface OrganizationSettingsTable {
+  organization_id: string;
+  currency: Generated<string>;
+  risk_free_rate: Generated<number>;
+  wacc: Generated<number>;
+  fiscal_year_start_month: Generated<number>;
+  updated_at: Timestamp;
+  updated_by: string | null;
+}
+
+export interface AuditLogTable {
+  id: Generated<string>;
+  organization_id: string;
+  actor_id: string | null;
+  action: string;
+  subject_type: string;
+  subject_id: string | null;
+  detail: ColumnType<Record<string, unknown>, Record<string, unknown> | undefined, Record<string, unknown>>;
+  created_at: Timestamp;
+}
+
+export interface DB {
+  user: UserTable;
+  organization: OrganizationTable;
+  member: MemberTable;
+  invitation: InvitationTable;
+  organization_settings: OrganizationSettingsTable;
+  audit_log: AuditLogTable;
+}
+
+export type OrganizationSettings = Selectable<OrganizationSettingsTable>;
+export type OrganizationSettingsUpdate = Updateable<OrganizationSettingsTable>;
+export type AuditLogEntry = Selectable<AuditLogTable>;
+export type NewAuditLogEntry = Insertable<AuditLogTable>;
+export type Member = Selectable<MemberTable>;

@@ -1,0 +1,50 @@
+/**
+ * Errors are mapped in one place. An AppError carries one of a closed set of codes, each with
+ * its HTTP status; zod errors become 422 with field messages; anything else is a 500 with a
+ * generic message (the details go to the server log, never to the client).
+ */
+import { z } from 'zod';
+
+export const errorStatus = {
+  bad_request: 400,
+  unauthorized: 401,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  too_large: 413,
+  unprocessable: 422,
+  rate_limited: 429,
+} as const;
+
+export type ErrorCode = keyof typeof errorStatus;
+
+export class AppError extends Error {
+  constructor(
+    readonly code: ErrorCode,
+    message: string,
+    readonly fields?: Record<string, string[]>,
+  ) {
+    super(message);
+    this.name = 'AppError';
+  }
+}
+
+export interface ErrorBody {
+  error: { code: ErrorCode | 'internal'; message: string; fields?: Record<string, string[]> };
+}
+
+export function toErrorBody(error: unknown): { status: number; body: ErrorBody } {
+  if (error instanceof AppError) {
+    return { status: errorStatus[error.code], body: { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } } };
+  }
+  if (error instanceof z.ZodError) {
+    const fields: Record<string, string[]> = {};
+    for (const issue of error.issues) {
+      const key = issue.path.length ? issue.path.join('.') : '_';
+      (fields[key] ??= []).push(issue.message);
+    }
+    return { status: 422, body: { error: { code: 'unprocessable', message: 'Some fields are not valid.', fields } } };
+  }
+  console.error('[leeway] unexpected error', error);
+  return { status: 500, body: { error: { code: 'internal', message: 'Something went wrong on our side. Please try again.' } } };
+}

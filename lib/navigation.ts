@@ -1,0 +1,14 @@
+/** The main navigation, filtered by what the role may do (the server still checks every page). */
+import type { NavItem } from '@/components/nav-links';
+import { roleAllows, type Permission, type RoleName } from './permissions';
+
+const items: (NavItem & { needs: Permission })[] = [
+  { href: '/portfolio', label: 'Portfolio', needs: { project: ['read'] } },
+  { href: '/projects', label: 'Projects', needs: { project: ['read'] } },
+  { href: '/review', label: 'Review', needs: { review: ['read'] } },
+  { href: '/settings', label: 'Settings', needs: { settings: ['update'] } },
+];
+
+export function navigationFor(role: RoleName): NavItem[] {
+  return items.filter((item) => roleAllows(role, item.needs)).map(({ href, label }) => ({ href, label }));
+}

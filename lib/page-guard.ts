@@ -1,0 +1,18 @@
+/**
+ * The page-side use of lib/dal.ts: a page calls `guardPage(permission)` first. No session sends
+ * the user to sign-in, no organisation to the welcome page; a role without the permission gets
+ * `'forbidden'`, which the page renders as a refusal (nothing of the page's data is loaded).
+ */
+import 'server-only';
+import { redirect } from 'next/navigation';
+import { currentViewer, type Member } from './dal';
+import { roleAllows, type Permission } from './permissions';
+
+export async function guardPage(permission?: Permission): Promise<Member | 'forbidden'> {
+  const viewer = await currentViewer();
+  if (!viewer) redirect('/sign-in');
+  if (!viewer.orgId || !viewer.role) redirect('/welcome');
+  const member = viewer as Member;
+  if (permission && !roleAllows(member.role, permission)) return 'forbidden';
+  return member;
+}

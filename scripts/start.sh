@@ -1,0 +1,36 @@
+#!/usr/bin/env bash
+# npm start: on a fresh machine, installs packages, starts PostgreSQL and the mail sink,
+# migrates, seeds the invented demo data (local database only), builds when needed and serves
+# the app on http://127.0.0.1:${PORT:-3000}.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+export NEXT_TELEMETRY_DISABLED=1
+PORT=${PORT:-3000}
+HOST=${HOST:-127.0.0.1}
+export APP_URL=${APP_URL:-http://$HOST:$PORT}
+mkdir -p .data
+
+bash scripts/ensure-deps.sh
+bash scripts/db.sh start
+sink_pid=$(bash scripts/mail-sink.sh)
+cleanup() { [ -n "$sink_pid" ] && kill "$sink_pid" 2>/dev/null || true; }
+trap cleanup EXIT INT TERM
+npx tsx scripts/migrate.ts up
+npx tsx scripts/seed.ts
+bash scripts/build-if-needed.sh
+
+cat <<TXT
+
+  Leeway is running at $APP_URL
+  Demo sign-ins (invented organisations; password leeway-demo-2026, for local use only):
+    admin@kestrelbay.example      admin
+    analyst@kestrelbay.example    analyst
+    reviewer@kestrelbay.example   reviewer
+    executive@kestrelbay.example  executive (read-only)
+    owner@harrowfen.example       admin of a second, unrelated organisation
+  E-mail goes to the local inbox: $APP_URL/inbox
+
+TXT
+node node_modules/next/dist/bin/next start -H "$HOST" -p "$PORT" &
+next_pid=$!
+wait "$next_pid"
