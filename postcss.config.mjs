@@ -1,3 +1,5 @@
-export default {
+const config = {
   plugins: { '@tailwindcss/postcss': {} },
 };
+
+export default config;

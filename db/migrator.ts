@@ -1,16 +1,12 @@
 /**
- * Runs the migrations in migrations/ (NNNN_name.ts, each with up/down on Kysely<any>).
- * Used by scripts/migrate.ts, the start command and the database tests.
+ * Runs the migrations listed in migrations/index.ts (each NNNN_name.ts with up/down on
+ * Kysely<any>). Used by scripts/migrate.ts, the start command and the database tests.
  */
-import { promises as fs } from 'node:fs';
-import path from 'node:path';
-import { FileMigrationProvider, Migrator, type Kysely, type MigrationResultSet } from 'kysely';
+import { Migrator, type Kysely, type MigrationResultSet } from 'kysely';
+import { migrations } from '../migrations';
 
 export function migrator(db: Kysely<any>): Migrator {
-  return new Migrator({
-    db,
-    provider: new FileMigrationProvider({ fs, path, migrationFolder: path.join(/*turbopackIgnore: true*/ process.cwd(), 'migrations') }),
-  });
+  return new Migrator({ db, provider: { getMigrations: async () => migrations } });
 }
 
 /** Throws with the failing migration's name when a step fails. */

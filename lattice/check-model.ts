@@ -21,8 +21,7 @@ export function parseModel(input: unknown): ProjectModel {
 }
 
 function checkWindow(window: ExerciseWindow, horizon: number, field: string) {
-  if (window.kind === 'american' && window.from > window.to)
-    refuse(`${field}.from`, `must be ≤ ${field}.to, got ${window.from} > ${window.to}`);
+  if (window.kind === 'american' && window.from > window.to) refuse(`${field}.from`, `must be ≤ ${field}.to, got ${window.from} > ${window.to}`);
   const end = windowEnd(window);
   if (end > horizon + 1e-12) refuse(`${field}`, `must lie inside the horizon (0 to ${horizon} years), ends at ${end}`);
 }
@@ -31,7 +30,10 @@ function checkCost(cost: Cost, field: string) {
   if (!Array.isArray(cost)) return;
   for (let k = 1; k < cost.length; k++) {
     if (!(cost[k]!.from > cost[k - 1]!.from))
-      refuse(`${field}[${k}].from`, `must be later than ${field}[${k - 1}].from (schedules run in time order), got ${cost[k]!.from} after ${cost[k - 1]!.from}`);
+      refuse(
+        `${field}[${k}].from`,
+        `must be later than ${field}[${k - 1}].from (schedules run in time order), got ${cost[k]!.from} after ${cost[k - 1]!.from}`,
+      );
   }
 }
 
@@ -134,6 +136,9 @@ export function prepareModel(input: unknown): { model: ProjectModel; compiled: C
   const switchable = new Set(compiled.switches.map((s) => s.from)).size;
   const cells = ((model.steps + 1) * (model.steps + 2) * switchable) / 2;
   if (cells > MAX_DECISION_CELLS)
-    refuse('steps', `× switchable modes gives ${cells.toExponential(2)} decision cells, over the limit of ${MAX_DECISION_CELLS.toExponential(2)}; use fewer steps or fewer rights`);
+    refuse(
+      'steps',
+      `× switchable modes gives ${cells.toExponential(2)} decision cells, over the limit of ${MAX_DECISION_CELLS.toExponential(2)}; use fewer steps or fewer rights`,
+    );
   return { model, compiled };
 }

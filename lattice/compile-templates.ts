@@ -62,8 +62,7 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
   const stageAt = options.findIndex((o) => o.type === 'stage');
   if (options.filter((o) => o.type === 'defer').length > 1) refuse('options', 'may hold at most one defer option');
   if (options.filter((o) => o.type === 'stage').length > 1) refuse('options', 'may hold at most one stage option');
-  if (deferAt >= 0 && stageAt >= 0)
-    refuse(`options[${stageAt}]`, 'cannot be combined with a defer option: make the first stage payment the defer cost');
+  if (deferAt >= 0 && stageAt >= 0) refuse(`options[${stageAt}]`, 'cannot be combined with a defer option: make the first stage payment the defer cost');
   if ((deferAt >= 0 || stageAt >= 0) && model.investment !== undefined && model.investment !== 0)
     refuse('investment', 'must be omitted when a defer or stage option carries the outlay');
 
@@ -73,8 +72,7 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
   function modeOf(s: State): CompiledMode {
     if (s.phase === 'waiting') return { id: 'waiting', scale: 0, flowPerYear: 0, terminal: 0 };
     if (s.phase === 'closed') return { id: 'closed', scale: 0, flowPerYear: 0, terminal: 0 };
-    if (s.phase === 'staging')
-      return { id: `${ids[stageAt]} payment ${s.paid + 1} due`, scale: 0, flowPerYear: 0, terminal: 0 };
+    if (s.phase === 'staging') return { id: `${ids[stageAt]} payment ${s.paid + 1} due`, scale: 0, flowPerYear: 0, terminal: 0 };
     let scale = 1;
     let id = 'operating';
     options.forEach((o, k) => {
@@ -126,15 +124,13 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
         moves.push({ template: k, to: { ...s, exercised: s.exercised | (1 << k) }, cost: o.cost, window: o.window, field: field(k) });
       if (o.type === 'contract' && !done)
         moves.push({ template: k, to: { ...s, exercised: s.exercised | (1 << k) }, cost: negateCost(o.savings), window: o.window, field: field(k) });
-      if (o.type === 'switch')
-        moves.push({ template: k, to: { ...s, switched: k }, cost: o.cost, window: o.window ?? whole, field: field(k) });
+      if (o.type === 'switch') moves.push({ template: k, to: { ...s, switched: k }, cost: o.cost, window: o.window ?? whole, field: field(k) });
     });
     return moves;
   }
 
   const operatingBase: State = { phase: 'operating', paid: 0, exercised: 0, switched: -1 };
-  const startState: State =
-    deferAt >= 0 ? { ...operatingBase, phase: 'waiting' } : stage ? { ...operatingBase, phase: 'staging' } : operatingBase;
+  const startState: State = deferAt >= 0 ? { ...operatingBase, phase: 'waiting' } : stage ? { ...operatingBase, phase: 'staging' } : operatingBase;
 
   const modes: CompiledMode[] = [];
   const indexOf = new Map<string, number>();

@@ -66,8 +66,7 @@ export function explainNode(input: unknown, ref: NodeRef): NodeExplanation {
   const capture = rollback(plan, { captureStep: i }).capture!;
   const ratio = plan.u / plan.d;
   const underlyingAt = (step: number, node: number) => plan.lowest[step]! * Math.pow(ratio, node);
-  const closedForm = (mode: number, step: number, node: number) =>
-    plan.scale[mode]! * underlyingAt(step, node) + plan.fixed[mode * width + step]!;
+  const closedForm = (mode: number, step: number, node: number) => plan.scale[mode]! * underlyingAt(step, node) + plan.fixed[mode * width + step]!;
 
   const V = underlyingAt(i, j);
   const continuation = closedForm(m, i, j) + capture.continuation[m]![j]!;

@@ -15,13 +15,7 @@ export interface ExerciseProfile {
   byStep: Float64Array;
 }
 
-export function exerciseProfiles(
-  plan: LatticePlan,
-  decisions: DecisionRuns,
-  rightOfSwitch: Int32Array,
-  rightCount: number,
-  start: number,
-): ExerciseProfile[] {
+export function exerciseProfiles(plan: LatticePlan, decisions: DecisionRuns, rightOfSwitch: Int32Array, rightCount: number, start: number): ExerciseProfile[] {
   const { steps, p, modeCount, byMode, to } = plan;
   const width = steps + 1;
   const q = 1 - p;

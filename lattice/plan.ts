@@ -75,7 +75,10 @@ export function buildPlan(model: ProjectModel, compiled: CompiledModel, steps = 
   const logTop = Math.log(model.underlying.value) + steps * Math.log(u);
   const logBottom = Math.log(model.underlying.value) + steps * Math.log(d);
   if (!(logTop < 600) || !(logBottom > -600))
-    refuse('underlying.volatility', `with this horizon and step count spreads the lattice from e^${logBottom.toFixed(0)} to e^${logTop.toFixed(0)}, beyond what can be computed; lower the volatility, horizon or steps`);
+    refuse(
+      'underlying.volatility',
+      `with this horizon and step count spreads the lattice from e^${logBottom.toFixed(0)} to e^${logTop.toFixed(0)}, beyond what can be computed; lower the volatility, horizon or steps`,
+    );
   const lowest = new Float64Array(width);
   lowest[0] = model.underlying.value;
   for (let i = 0; i < steps; i++) lowest[i + 1] = lowest[i]! * retained[i]! * d;

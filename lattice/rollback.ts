@@ -68,8 +68,7 @@ export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = 
   for (let s = 0; s < plan.switchCount; s++) isTarget[to[s]!] = 1;
   const fused = new Uint8Array(modeCount);
   const snapshots = opts.gridSteps >= 0 || opts.captureStep >= 0;
-  for (const m of rolled)
-    if (!snapshots && isTarget[m] === 0 && byMode[m]!.every((s) => byMode[to[s]!]!.length === 0)) fused[m] = 1;
+  for (const m of rolled) if (!snapshots && isTarget[m] === 0 && byMode[m]!.every((s) => byMode[to[s]!]!.length === 0)) fused[m] = 1;
 
   const decisions = opts.decisions ? new DecisionRuns(modeCount, width) : null;
   const boundaryLow = opts.decisions ? new Float64Array(plan.switchCount * width).fill(NaN) : null;

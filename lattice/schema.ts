@@ -20,7 +20,13 @@ export const costSchema = z.union([
 
 export const windowSchema = z.discriminatedUnion('kind', [
   z.strictObject({ kind: z.literal('american'), from: years, to: years }),
-  z.strictObject({ kind: z.literal('bermudan'), dates: z.array(years).min(1).max(MAX_STEPS + 1) }),
+  z.strictObject({
+    kind: z.literal('bermudan'),
+    dates: z
+      .array(years)
+      .min(1)
+      .max(MAX_STEPS + 1),
+  }),
   z.strictObject({ kind: z.literal('european'), at: years }),
 ]);
 
@@ -68,7 +74,10 @@ const deferSchema = z.strictObject({
 const stageSchema = z.strictObject({
   type: z.literal('stage'),
   id: id.optional(),
-  payments: z.array(z.strictObject({ at: years, amount: z.number().min(0) })).min(1).max(12),
+  payments: z
+    .array(z.strictObject({ at: years, amount: z.number().min(0) }))
+    .min(1)
+    .max(12),
 });
 const switchTemplateSchema = z.strictObject({
   type: z.literal('switch'),
@@ -80,14 +89,7 @@ const switchTemplateSchema = z.strictObject({
   window: windowSchema.optional(),
 });
 
-export const optionTemplateSchema = z.discriminatedUnion('type', [
-  expandSchema,
-  contractSchema,
-  abandonSchema,
-  deferSchema,
-  stageSchema,
-  switchTemplateSchema,
-]);
+export const optionTemplateSchema = z.discriminatedUnion('type', [expandSchema, contractSchema, abandonSchema, deferSchema, stageSchema, switchTemplateSchema]);
 
 export const treeKindSchema = z.enum(['crr', 'jarrow-rudd', 'tian', 'trigeorgis']);
 

@@ -52,9 +52,7 @@ function convergenceOf(model: ProjectModel, value: number, warnings: string[]): 
   if (!half) return { points, extrapolated: value, errorEstimate: NaN };
   const errorEstimate = Math.abs(value - half.value);
   if (errorEstimate > 0.005 * Math.max(Math.abs(value), 1e-12))
-    warnings.push(
-      `the value moved by ${errorEstimate.toPrecision(3)} between ${half.steps} and ${n} steps (over 0.5 %); use more steps`,
-    );
+    warnings.push(`the value moved by ${errorEstimate.toPrecision(3)} between ${half.steps} and ${n} steps (over 0.5 %); use more steps`);
   return { points, extrapolated: 2 * value - half.value, errorEstimate };
 }
 
@@ -75,8 +73,7 @@ function assertFinite(value: unknown, path: string): void {
     return;
   }
   if (Array.isArray(value)) value.forEach((v, k) => assertFinite(v, `${path}[${k}]`));
-  else if (value && typeof value === 'object')
-    for (const [key, v] of Object.entries(value)) assertFinite(v, path ? `${path}.${key}` : key);
+  else if (value && typeof value === 'object') for (const [key, v] of Object.entries(value)) assertFinite(v, path ? `${path}.${key}` : key);
 }
 
 export function valueProject(input: unknown, options: ValueOptions = {}): ValuationResult {
@@ -86,7 +83,10 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
     const cells = ((gridSteps + 1) * (gridSteps + 2) * compiled.modes.length) / 2;
     if (cells > NODE_BUDGET)
       throw new ModelError([
-        { field: 'grid', message: `grid of ${gridSteps} steps × ${compiled.modes.length} modes holds ${cells} cells, over the budget of ${NODE_BUDGET}; ask for fewer steps` },
+        {
+          field: 'grid',
+          message: `grid of ${gridSteps} steps × ${compiled.modes.length} modes holds ${cells} cells, over the budget of ${NODE_BUDGET}; ask for fewer steps`,
+        },
       ]);
   }
   const pass = singlePass(model, compiled, { gridSteps });

@@ -23,13 +23,7 @@ function snapIndex(t: Years, dt: Years, steps: number, field: string, snaps: Sna
 }
 
 /** Marks the steps at which a window is open (1) in a mask of length steps + 1. */
-export function openSteps(
-  window: ExerciseWindow,
-  dt: Years,
-  steps: number,
-  field: string,
-  snaps: Snap[],
-): Uint8Array {
+export function openSteps(window: ExerciseWindow, dt: Years, steps: number, field: string, snaps: Snap[]): Uint8Array {
   const mask = new Uint8Array(steps + 1);
   switch (window.kind) {
     case 'american': {

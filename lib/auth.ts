@@ -25,14 +25,18 @@ export const auth = betterAuth({
     minPasswordLength: 10,
     maxPasswordLength: 128,
     sendResetPassword: async ({ user, url }) => {
-      await sendMail(linkMail(user.email, 'Reset your Leeway password', 'Someone asked to reset the password of your Leeway account.', 'Choose a new password', url));
+      await sendMail(
+        linkMail(user.email, 'Reset your Leeway password', 'Someone asked to reset the password of your Leeway account.', 'Choose a new password', url),
+      );
     },
   },
   emailVerification: {
     sendOnSignUp: true,
     autoSignInAfterVerification: true,
     sendVerificationEmail: async ({ user, url }) => {
-      await sendMail(linkMail(user.email, 'Confirm your e-mail for Leeway', 'Welcome to Leeway. Please confirm this is your e-mail address.', 'Confirm my e-mail', url));
+      await sendMail(
+        linkMail(user.email, 'Confirm your e-mail for Leeway', 'Welcome to Leeway. Please confirm this is your e-mail address.', 'Confirm my e-mail', url),
+      );
     },
   },
   rateLimit: {
@@ -70,7 +74,13 @@ export const auth = betterAuth({
       sendInvitationEmail: async ({ id, email, organization: org, inviter, role }) => {
         const url = `${env.APP_URL}/accept-invitation/${id}`;
         await sendMail(
-          linkMail(email, `Join ${org.name} on Leeway`, `${inviter.user.name} invited you to join ${org.name} on Leeway as ${role}.`, 'Accept the invitation', url),
+          linkMail(
+            email,
+            `Join ${org.name} on Leeway`,
+            `${inviter.user.name} invited you to join ${org.name} on Leeway as ${role}.`,
+            'Accept the invitation',
+            url,
+          ),
         );
       },
     }),

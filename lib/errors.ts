@@ -35,7 +35,10 @@ export interface ErrorBody {
 
 export function toErrorBody(error: unknown): { status: number; body: ErrorBody } {
   if (error instanceof AppError) {
-    return { status: errorStatus[error.code], body: { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } } };
+    return {
+      status: errorStatus[error.code],
+      body: { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } },
+    };
   }
   if (error instanceof z.ZodError) {
     const fields: Record<string, string[]> = {};

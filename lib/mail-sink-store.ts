@@ -28,7 +28,9 @@ export async function listMail(): Promise<StoredMail[]> {
     return [];
   }
   const messages = await Promise.all(
-    names.filter((n) => n.endsWith('.json')).map(async (n) => JSON.parse(await fs.readFile(path.join(/*turbopackIgnore: true*/ sinkDir(), n), 'utf8')) as StoredMail),
+    names
+      .filter((n) => n.endsWith('.json'))
+      .map(async (n) => JSON.parse(await fs.readFile(path.join(/*turbopackIgnore: true*/ sinkDir(), n), 'utf8')) as StoredMail),
   );
   return messages.sort((a, b) => b.receivedAt.localeCompare(a.receivedAt));
 }

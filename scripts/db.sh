@@ -95,7 +95,8 @@ psql_admin() {
 }
 
 ensure_databases() {
-  psql_admin -c "DO \$\$ BEGIN IF NOT EXISTS (SELECT FROM pg_roles WHERE rolname = '$DB_USER') THEN CREATE ROLE $DB_USER LOGIN PASSWORD '$DB_USER'; END IF; END \$\$;"
+  psql_admin -c "DO \$\$ BEGIN IF NOT EXISTS (SELECT FROM pg_roles WHERE rolname = '$DB_USER') THEN CREATE ROLE $DB_USER LOGIN CREATEDB PASSWORD '$DB_USER'; END IF; END \$\$;"
+  psql_admin -c "ALTER ROLE $DB_USER CREATEDB"
   for db in "$APP_DB" "$TEST_DB"; do
     if [ -z "$(psql_admin -c "SELECT 1 FROM pg_database WHERE datname = '$db'")" ]; then
       psql_admin -c "CREATE DATABASE $db OWNER $DB_USER"

@@ -1,3 +1,7 @@
 export default function Loading() {
-  return <p className="text-ink-muted" role="status">Loading…</p>;
+  return (
+    <p className="text-ink-muted" role="status">
+      Loading…
+    </p>
+  );
 }

@@ -17,7 +17,9 @@ export default async function InboxPage() {
     <main className="mx-auto max-w-4xl px-6 py-10">
       <Wordmark />
       <h1 className="mt-6">Local inbox</h1>
-      <p className="mt-1 text-ink-soft">This installation sends no real e-mail: every message is kept here. It exists only while the local mail sink is in use.</p>
+      <p className="mt-1 text-ink-soft">
+        This installation sends no real e-mail: every message is kept here. It exists only while the local mail sink is in use.
+      </p>
       {messages.length === 0 ? (
         <p className="mt-8 text-ink-muted">No messages yet.</p>
       ) : (

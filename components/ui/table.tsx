@@ -13,7 +13,13 @@ export function Table({ caption, children, className = '' }: { caption?: string;
 }
 
 export function Th({ numeric, className = '', ...rest }: ThHTMLAttributes<HTMLTableCellElement> & { numeric?: boolean }) {
-  return <th scope="col" className={`border-b border-line bg-paper-sunk px-4 py-2 text-caption font-semibold uppercase tracking-wide text-ink-soft ${numeric ? 'text-right' : ''} ${className}`} {...rest} />;
+  return (
+    <th
+      scope="col"
+      className={`border-b border-line bg-paper-sunk px-4 py-2 text-caption font-semibold uppercase tracking-wide text-ink-soft ${numeric ? 'text-right' : ''} ${className}`}
+      {...rest}
+    />
+  );
 }
 
 export function Td({ numeric, className = '', ...rest }: TdHTMLAttributes<HTMLTableCellElement> & { numeric?: boolean }) {

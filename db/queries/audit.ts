@@ -25,7 +25,10 @@ export async function recordAudit(db: Database, event: AuditEvent): Promise<void
     .execute();
 }
 
-export async function listAudit(db: Database, { orgId, limit = 50 }: { orgId: string; limit?: number }): Promise<(AuditLogEntry & { actor_name: string | null })[]> {
+export async function listAudit(
+  db: Database,
+  { orgId, limit = 50 }: { orgId: string; limit?: number },
+): Promise<(AuditLogEntry & { actor_name: string | null })[]> {
   return db
     .selectFrom('audit_log')
     .leftJoin('user', 'user.id', 'audit_log.actor_id')

@@ -5,7 +5,9 @@ import type { OrganizationSettings } from '../types';
 /** The organisation's defaults; an organisation that never saved any gets the column defaults. */
 export async function findSettings(db: Database, { orgId }: { orgId: string }): Promise<OrganizationSettings> {
   const row = await db.selectFrom('organization_settings').selectAll().where('organization_id', '=', orgId).executeTakeFirst();
-  return row ?? { organization_id: orgId, currency: 'EUR', risk_free_rate: 0.03, wacc: 0.08, fiscal_year_start_month: 1, updated_at: new Date(0), updated_by: null };
+  return (
+    row ?? { organization_id: orgId, currency: 'EUR', risk_free_rate: 0.03, wacc: 0.08, fiscal_year_start_month: 1, updated_at: new Date(0), updated_by: null }
+  );
 }
 
 export interface SettingsChange {
@@ -15,7 +17,10 @@ export interface SettingsChange {
   fiscalYearStartMonth: number;
 }
 
-export async function updateSettings(db: Database, { orgId, userId, change }: { orgId: string; userId: string; change: SettingsChange }): Promise<OrganizationSettings> {
+export async function updateSettings(
+  db: Database,
+  { orgId, userId, change }: { orgId: string; userId: string; change: SettingsChange },
+): Promise<OrganizationSettings> {
   return db
     .insertInto('organization_settings')
     .values({

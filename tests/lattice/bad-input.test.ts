@@ -32,16 +32,61 @@ const cases: [string, unknown, string][] = [
   ['negative horizon', { ...ok, horizon: -1 }, 'horizon must be > 0, got -1'],
   ['missing risk-free rate', { underlying: ok.underlying, horizon: 3, steps: 30 }, 'riskFreeRate is required'],
   ['unknown field', { ...ok, volatility: 0.3 }, 'model has unknown field(s) volatility'],
-  ['unknown option type', { ...ok, options: [{ type: 'grow', window: american }] }, 'options[0].type must be one of "expand", "contract", "abandon", "defer", "stage", "switch"'],
-  ['cost of the wrong kind', { ...ok, options: [{ type: 'expand', factor: 0.5, cost: 'lots', window: american }] }, 'options[0].cost must be a number, {amount, growth} or a schedule'],
-  ['window past the horizon', { ...ok, options: [{ type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 4 } }] }, 'options[0].window must lie inside the horizon (0 to 3 years), ends at 4'],
-  ['window backwards', { ...ok, options: [{ type: 'abandon', salvage: 50, window: { kind: 'american', from: 2, to: 1 } }] }, 'options[0].window.from must be ≤ options[0].window.to, got 2 > 1'],
-  ['unknown window kind', { ...ok, options: [{ type: 'abandon', salvage: 50, window: { kind: 'asian', at: 1 } }] }, 'options[0].window.kind must be one of "american", "bermudan", "european"'],
-  ['cost schedule out of order', { ...ok, options: [{ type: 'expand', factor: 0.5, cost: [{ from: 2, amount: 40 }, { from: 1, amount: 30 }], window: american }] }, 'options[0].cost[1].from must be later than options[0].cost[0].from'],
-  ['unknown mode in a switch', { ...ok, modes, switches: [{ id: 'close', from: ['on'], to: 'gone', cost: 0, window: american }] }, 'switches[0].to names mode "gone", which is not in modes'],
+  [
+    'unknown option type',
+    { ...ok, options: [{ type: 'grow', window: american }] },
+    'options[0].type must be one of "expand", "contract", "abandon", "defer", "stage", "switch"',
+  ],
+  [
+    'cost of the wrong kind',
+    { ...ok, options: [{ type: 'expand', factor: 0.5, cost: 'lots', window: american }] },
+    'options[0].cost must be a number, {amount, growth} or a schedule',
+  ],
+  [
+    'window past the horizon',
+    { ...ok, options: [{ type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 4 } }] },
+    'options[0].window must lie inside the horizon (0 to 3 years), ends at 4',
+  ],
+  [
+    'window backwards',
+    { ...ok, options: [{ type: 'abandon', salvage: 50, window: { kind: 'american', from: 2, to: 1 } }] },
+    'options[0].window.from must be ≤ options[0].window.to, got 2 > 1',
+  ],
+  [
+    'unknown window kind',
+    { ...ok, options: [{ type: 'abandon', salvage: 50, window: { kind: 'asian', at: 1 } }] },
+    'options[0].window.kind must be one of "american", "bermudan", "european"',
+  ],
+  [
+    'cost schedule out of order',
+    {
+      ...ok,
+      options: [
+        {
+          type: 'expand',
+          factor: 0.5,
+          cost: [
+            { from: 2, amount: 40 },
+            { from: 1, amount: 30 },
+          ],
+          window: american,
+        },
+      ],
+    },
+    'options[0].cost[1].from must be later than options[0].cost[0].from',
+  ],
+  [
+    'unknown mode in a switch',
+    { ...ok, modes, switches: [{ id: 'close', from: ['on'], to: 'gone', cost: 0, window: american }] },
+    'switches[0].to names mode "gone", which is not in modes',
+  ],
   ['unknown start mode', { ...ok, modes, start: 'idle' }, 'start names mode "idle", which is not in modes'],
   ['duplicate mode id', { ...ok, modes: [modes[0], modes[0]] }, 'modes[1].id must be unique, "on" appears twice'],
-  ['switch into its own mode', { ...ok, modes, switches: [{ id: 'loop', from: ['on'], to: 'on', cost: 1, window: american }] }, 'switches[0].from[0] must differ from to ("on")'],
+  [
+    'switch into its own mode',
+    { ...ok, modes, switches: [{ id: 'loop', from: ['on'], to: 'on', cost: 1, window: american }] },
+    'switches[0].from[0] must differ from to ("on")',
+  ],
   [
     'a cycle of switches that pays for itself',
     {
@@ -54,14 +99,63 @@ const cases: [string, unknown, string][] = [
     },
     'is part of a cycle of switches whose costs sum to less than zero',
   ],
-  ['p outside (0, 1)', { ...ok, underlying: { value: 100, volatility: 0.01 }, riskFreeRate: 0.2, steps: 3 }, 'steps gives a crr tree with risk-neutral probability p = '],
-  ['defer with a separate investment', { ...ok, investment: 80, options: [{ type: 'defer', cost: 80, window: american }] }, 'investment must be omitted when a defer or stage option carries the outlay'],
-  ['stage payments out of order', { ...ok, options: [{ type: 'stage', payments: [{ at: 2, amount: 10 }, { at: 1, amount: 10 }] }] }, 'options[0].payments[1].at must be later than the payment before it, got 1 after 2'],
-  ['payout at or above 100 %', { ...ok, underlying: { value: 100, volatility: 0.3, payouts: [{ at: 1, fraction: 1 }] } }, 'underlying.payouts[0].fraction must be < 1, got 1'],
-  ['options and modes together', { ...ok, modes, options: [{ type: 'abandon', salvage: 50, window: american }] }, 'options cannot be combined with modes and switches'],
-  ['contract of more than everything', { ...ok, options: [{ type: 'contract', fraction: 1.5, savings: 10, window: american }] }, 'options[0].fraction must be ≤ 1, got 1.5'],
-  ['duplicate option id', { ...ok, options: [{ type: 'abandon', id: 'exit', salvage: 50, window: american }, { type: 'expand', id: 'exit', factor: 1, cost: 9, window: american }] }, 'options[1].id must be unique, "exit" is used twice'],
-  ['a lattice too wide to compute', { ...ok, underlying: { value: 100, volatility: 50 }, horizon: 100, steps: 10_000 }, 'underlying.volatility with this horizon and step count spreads the lattice'],
+  [
+    'p outside (0, 1)',
+    { ...ok, underlying: { value: 100, volatility: 0.01 }, riskFreeRate: 0.2, steps: 3 },
+    'steps gives a crr tree with risk-neutral probability p = ',
+  ],
+  [
+    'defer with a separate investment',
+    { ...ok, investment: 80, options: [{ type: 'defer', cost: 80, window: american }] },
+    'investment must be omitted when a defer or stage option carries the outlay',
+  ],
+  [
+    'stage payments out of order',
+    {
+      ...ok,
+      options: [
+        {
+          type: 'stage',
+          payments: [
+            { at: 2, amount: 10 },
+            { at: 1, amount: 10 },
+          ],
+        },
+      ],
+    },
+    'options[0].payments[1].at must be later than the payment before it, got 1 after 2',
+  ],
+  [
+    'payout at or above 100 %',
+    { ...ok, underlying: { value: 100, volatility: 0.3, payouts: [{ at: 1, fraction: 1 }] } },
+    'underlying.payouts[0].fraction must be < 1, got 1',
+  ],
+  [
+    'options and modes together',
+    { ...ok, modes, options: [{ type: 'abandon', salvage: 50, window: american }] },
+    'options cannot be combined with modes and switches',
+  ],
+  [
+    'contract of more than everything',
+    { ...ok, options: [{ type: 'contract', fraction: 1.5, savings: 10, window: american }] },
+    'options[0].fraction must be ≤ 1, got 1.5',
+  ],
+  [
+    'duplicate option id',
+    {
+      ...ok,
+      options: [
+        { type: 'abandon', id: 'exit', salvage: 50, window: american },
+        { type: 'expand', id: 'exit', factor: 1, cost: 9, window: american },
+      ],
+    },
+    'options[1].id must be unique, "exit" is used twice',
+  ],
+  [
+    'a lattice too wide to compute',
+    { ...ok, underlying: { value: 100, volatility: 50 }, horizon: 100, steps: 10_000 },
+    'underlying.volatility with this horizon and step count spreads the lattice',
+  ],
 ];
 
 describe('bad input is refused with its own message', () => {

@@ -45,9 +45,14 @@ function rightsFor(horizon: number, V0: number) {
   const contract = fc.record({ type: fc.constant('contract' as const), fraction: fc.double({ min: 0.1, max: 0.6, noNaN: true }), savings: money, window });
   const abandon = fc.record({ type: fc.constant('abandon' as const), salvage: money, window });
   const defer = fc.record({ type: fc.constant('defer' as const), cost: money, window });
-  return fc.tuple(fc.option(expand, { nil: undefined }), fc.option(contract, { nil: undefined }), fc.option(abandon, { nil: undefined }), fc.option(defer, { nil: undefined })).map(
-    (list) => list.filter((o): o is NonNullable<typeof o> => o !== undefined) as OptionTemplate[],
-  );
+  return fc
+    .tuple(
+      fc.option(expand, { nil: undefined }),
+      fc.option(contract, { nil: undefined }),
+      fc.option(abandon, { nil: undefined }),
+      fc.option(defer, { nil: undefined }),
+    )
+    .map((list) => list.filter((o): o is NonNullable<typeof o> => o !== undefined) as OptionTemplate[]);
 }
 
 const withRights = market.chain((m) => rightsFor(m.horizon, m.underlying.value).map((options) => ({ ...m, options }) as ProjectModel));
@@ -105,13 +110,22 @@ describe('lattice properties', () => {
   it('value rises with volatility for a defer, expand or abandon right (σ raised by a half)', () => {
     // On a fixed step count the nodes move with σ, so a tiny change can wobble by the lattice
     // error; a 50 % rise in σ dominates it (checked at 200 steps on CRR).
-    const single = fc.record({ kind: fc.constantFrom('defer', 'expand', 'abandon'), V0: fc.double({ min: 50, max: 150, noNaN: true }), sigma: fc.double({ min: 0.1, max: 0.5, noNaN: true }) });
+    const single = fc.record({
+      kind: fc.constantFrom('defer', 'expand', 'abandon'),
+      V0: fc.double({ min: 50, max: 150, noNaN: true }),
+      sigma: fc.double({ min: 0.1, max: 0.5, noNaN: true }),
+    });
     fc.assert(
       fc.property(single, ({ kind, V0, sigma }) => {
         const window = { kind: 'american' as const, from: 0, to: 3 };
         const option: OptionTemplate =
-          kind === 'defer' ? { type: 'defer', cost: 100, window } : kind === 'expand' ? { type: 'expand', factor: 0.5, cost: 50, window } : { type: 'abandon', salvage: 90, window };
-        const at = (volatility: number) => valueProject({ underlying: { value: V0, volatility }, riskFreeRate: 0.04, horizon: 3, steps: 200, options: [option] }, { extras: false }).value;
+          kind === 'defer'
+            ? { type: 'defer', cost: 100, window }
+            : kind === 'expand'
+              ? { type: 'expand', factor: 0.5, cost: 50, window }
+              : { type: 'abandon', salvage: 90, window };
+        const at = (volatility: number) =>
+          valueProject({ underlying: { value: V0, volatility }, riskFreeRate: 0.04, horizon: 3, steps: 200, options: [option] }, { extras: false }).value;
         expect(at(sigma * 1.5)).toBeGreaterThanOrEqual(at(sigma) - 1e-9);
       }),
       { numRuns: 60 },
@@ -123,7 +137,11 @@ describe('lattice properties', () => {
       fc.property(market, fc.constantFrom('defer', 'abandon'), fc.double({ min: 0.6, max: 1.4, noNaN: true }), (m, kind, k) => {
         const strike = k * m.underlying.value;
         const T = m.horizon;
-        const make = (window: OptionTemplate extends never ? never : { kind: 'american'; from: number; to: number } | { kind: 'bermudan'; dates: number[] } | { kind: 'european'; at: number }): ProjectModel => ({
+        const make = (
+          window: OptionTemplate extends never
+            ? never
+            : { kind: 'american'; from: number; to: number } | { kind: 'bermudan'; dates: number[] } | { kind: 'european'; at: number },
+        ): ProjectModel => ({
           ...m,
           options: [kind === 'defer' ? { type: 'defer', cost: strike, window } : { type: 'abandon', salvage: strike, window }],
         });
@@ -159,7 +177,14 @@ describe('lattice properties', () => {
         // No payout: a deterministic call is never exercised early, so it is worth V0 − K·e^{−rT}.
         const K = 100;
         const value = valueProject(
-          { underlying: { value: V0, volatility: 1e-6 }, riskFreeRate: r, horizon: 2, steps: 50, tree: 'jarrow-rudd', options: [{ type: 'defer', cost: K, window: { kind: 'american', from: 0, to: 2 } }] },
+          {
+            underlying: { value: V0, volatility: 1e-6 },
+            riskFreeRate: r,
+            horizon: 2,
+            steps: 50,
+            tree: 'jarrow-rudd',
+            options: [{ type: 'defer', cost: K, window: { kind: 'american', from: 0, to: 2 } }],
+          },
           { extras: false },
         ).value;
         expect(Math.abs(value - Math.max(V0 - K * Math.exp(-r * 2), 0))).toBeLessThanOrEqual(1e-4);

@@ -129,7 +129,15 @@ describe('Geske (1979) compound option', () => {
       riskFreeRate: r,
       horizon: T2,
       steps: 1000,
-      options: [{ type: 'stage', payments: [{ at: t1, amount: I1 }, { at: T2, amount: I2 }] }],
+      options: [
+        {
+          type: 'stage',
+          payments: [
+            { at: t1, amount: I1 },
+            { at: T2, amount: I2 },
+          ],
+        },
+      ],
     };
     const value = valueProject(model, { extras: false }).value;
     expectClose(value, geske(V, I1, t1, I2, T2, r, sigma), { rel: 0.002 }, { source: 'Geske 1979', V, I1, t1, I2, T2, r, sigma });

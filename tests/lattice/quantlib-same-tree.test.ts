@@ -25,8 +25,7 @@ for (const value of [80, 100, 125])
       [730, 120],
       [365, 500],
     ] as const)
-      for (const payoutYield of [0, 0.04])
-        grid.push({ value, strike: 100, rate: 0.05, volatility, horizon: days / 365, steps, payoutYield });
+      for (const payoutYield of [0, 0.04]) grid.push({ value, strike: 100, rate: 0.05, volatility, horizon: days / 365, steps, payoutYield });
 
 function quote(kind: 'call' | 'put', c: Omit<VanillaCase, 'tree'>, tree: QuantLibTree) {
   return quantlibAmerican({

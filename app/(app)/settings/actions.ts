@@ -17,7 +17,14 @@ export async function updateSettingsAction(input: unknown): Promise<ActionResult
     if (!parsed.success) return { ok: false, message: 'Some fields are not valid.', fields: parsed.error.flatten().fieldErrors as Record<string, string[]> };
     await db.transaction().execute(async (trx) => {
       await updateSettings(trx, { orgId: member.orgId, userId: member.userId, change: parsed.data });
-      await recordAudit(trx, { orgId: member.orgId, actorId: member.userId, action: 'settings.update', subjectType: 'organization_settings', subjectId: member.orgId, detail: parsed.data });
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'settings.update',
+        subjectType: 'organization_settings',
+        subjectId: member.orgId,
+        detail: parsed.data,
+      });
     });
     revalidatePath('/settings');
     return { ok: true, message: 'Organisation defaults saved.' };

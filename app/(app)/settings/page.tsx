@@ -19,7 +19,12 @@ export default async function SettingsPage() {
       <PageHeader title="Settings" lead={`Defaults every new case of ${member.orgName} starts from.`} />
       <SettingsNav />
       <SettingsForm
-        initial={{ currency: settings.currency, riskFreeRate: settings.risk_free_rate, wacc: settings.wacc, fiscalYearStartMonth: settings.fiscal_year_start_month }}
+        initial={{
+          currency: settings.currency,
+          riskFreeRate: settings.risk_free_rate,
+          wacc: settings.wacc,
+          fiscalYearStartMonth: settings.fiscal_year_start_month,
+        }}
       />
       {settings.updated_by ? <p className="mt-6 text-caption text-ink-muted">Last saved {formatDateTime(settings.updated_at)}.</p> : null}
     </>

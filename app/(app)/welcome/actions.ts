@@ -9,7 +9,12 @@ import { organisationCreateSchema } from '@/lib/validations/auth';
 import type { ActionResult } from '../settings/actions';
 
 function slugFor(name: string): string {
-  const base = name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 40) || 'organisation';
+  const base =
+    name
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-|-$/g, '')
+      .slice(0, 40) || 'organisation';
   return `${base}-${Math.random().toString(36).slice(2, 8)}`;
 }
 
@@ -24,9 +29,20 @@ export async function createOrganisationAction(input: unknown): Promise<ActionRe
     const h = await headers();
     const org = await auth.api.createOrganization({ headers: h, body: { name: parsed.data.name, slug: slugFor(parsed.data.name) } });
     if (!org) return { ok: false, message: 'The organisation could not be created.' };
-    await db.insertInto('organization_settings').values({ organization_id: org.id }).onConflict((c) => c.doNothing()).execute();
+    await db
+      .insertInto('organization_settings')
+      .values({ organization_id: org.id })
+      .onConflict((c) => c.doNothing())
+      .execute();
     await auth.api.setActiveOrganization({ headers: h, body: { organizationId: org.id } });
-    await recordAudit(db, { orgId: org.id, actorId: viewer.userId, action: 'organization.create', subjectType: 'organization', subjectId: org.id, detail: { name: parsed.data.name } });
+    await recordAudit(db, {
+      orgId: org.id,
+      actorId: viewer.userId,
+      action: 'organization.create',
+      subjectType: 'organization',
+      subjectId: org.id,
+      detail: { name: parsed.data.name },
+    });
     return { ok: true, message: 'Organisation created.' };
   } catch (error) {
     console.error('[leeway] createOrganisationAction', error);

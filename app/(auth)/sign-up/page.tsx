@@ -9,7 +9,11 @@ export default async function SignUpPage({ searchParams }: { searchParams: Promi
   return (
     <>
       <h1>Create your account</h1>
-      <p className="mt-2 text-ink-soft">{invitation ? 'Create an account with the invited e-mail address, then accept the invitation.' : 'You will confirm your e-mail address before you sign in.'}</p>
+      <p className="mt-2 text-ink-soft">
+        {invitation
+          ? 'Create an account with the invited e-mail address, then accept the invitation.'
+          : 'You will confirm your e-mail address before you sign in.'}
+      </p>
       <SignUpForm email={email ?? ''} invitation={invitation} />
       <p className="mt-6 text-body">
         Already have an account?{' '}

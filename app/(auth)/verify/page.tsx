@@ -21,7 +21,8 @@ export default async function VerifyPage({ searchParams }: { searchParams: Promi
     <>
       <h1>Check your inbox</h1>
       <p className="mt-2 text-ink-soft">
-        We sent a confirmation link to {email ? <strong className="text-ink">{email}</strong> : 'your e-mail address'}. Follow it to finish creating your account.
+        We sent a confirmation link to {email ? <strong className="text-ink">{email}</strong> : 'your e-mail address'}. Follow it to finish creating your
+        account.
       </p>
       {usesMailSink() ? (
         <p className="mt-4 rounded-md bg-tide-50 px-3 py-2 text-tide-700">

@@ -4,12 +4,7 @@
  */
 import { expect } from 'vitest';
 
-export function expectClose(
-  computed: number,
-  expected: number,
-  tolerance: { abs?: number; rel?: number },
-  context: Record<string, unknown>,
-): void {
+export function expectClose(computed: number, expected: number, tolerance: { abs?: number; rel?: number }, context: Record<string, unknown>): void {
   const error = Math.abs(computed - expected);
   const allowed = Math.max(tolerance.abs ?? 0, (tolerance.rel ?? 0) * Math.abs(expected));
   if (!(error <= allowed)) {

@@ -54,10 +54,7 @@ export function quantlibAmerican(q: AmericanQuote): number {
   const dayCount = new Actual365Fixed();
   const maturity = DateExt.advance(today, q.days, TimeUnit.Days);
   const type = q.kind === 'call' ? Option.Type.Call : Option.Type.Put;
-  const option = new VanillaOption(
-    new PlainVanillaPayoff(type, q.strike),
-    new AmericanExercise().aeInit1(today, maturity),
-  );
+  const option = new VanillaOption(new PlainVanillaPayoff(type, q.strike), new AmericanExercise().aeInit1(today, maturity));
   const riskFree = new FlatForward().ffInit2(today, q.rate, dayCount);
   const dividends = new FlatForward().ffInit2(today, q.dividendYield, dayCount);
   const vol = new BlackConstantVol().bcvInit1(today, new NullCalendar(), q.volatility, dayCount);

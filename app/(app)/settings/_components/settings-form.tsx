@@ -60,9 +60,30 @@ export function SettingsForm({ initial }: { initial: SettingsInput }) {
   return (
     <form onSubmit={onSubmit} noValidate className="grid max-w-xl gap-5 sm:grid-cols-2">
       <Input label="Currency" hint="ISO 4217 code, e.g. EUR" maxLength={3} error={errors.currency?.message} {...form.register('currency')} />
-      <Select label="Fiscal year starts in" options={monthNames.map((m, k) => ({ value: String(k + 1), label: m }))} error={errors.fiscalYearStartMonth?.message} {...form.register('fiscalYearStartMonth')} />
-      <Input label="Risk-free rate (% a year)" type="number" step="0.01" inputMode="decimal" hint="Continuously compounded; used by the lattice" error={errors.riskFreeRate?.message} {...form.register('riskFreeRate')} />
-      <Input label="WACC (% a year)" type="number" step="0.01" inputMode="decimal" hint="Default discount rate for cash flows" error={errors.wacc?.message} {...form.register('wacc')} />
+      <Select
+        label="Fiscal year starts in"
+        options={monthNames.map((m, k) => ({ value: String(k + 1), label: m }))}
+        error={errors.fiscalYearStartMonth?.message}
+        {...form.register('fiscalYearStartMonth')}
+      />
+      <Input
+        label="Risk-free rate (% a year)"
+        type="number"
+        step="0.01"
+        inputMode="decimal"
+        hint="Continuously compounded; used by the lattice"
+        error={errors.riskFreeRate?.message}
+        {...form.register('riskFreeRate')}
+      />
+      <Input
+        label="WACC (% a year)"
+        type="number"
+        step="0.01"
+        inputMode="decimal"
+        hint="Default discount rate for cash flows"
+        error={errors.wacc?.message}
+        {...form.register('wacc')}
+      />
       <div className="sm:col-span-2">
         <Button type="submit" busy={isSubmitting}>
           Save defaults

@@ -13,7 +13,12 @@ export function SettingsNav() {
   return (
     <nav aria-label="Settings" className="mb-6 flex gap-1 border-b border-line">
       {links.map((l) => (
-        <Link key={l.href} href={l.href} aria-current={pathname === l.href ? 'page' : undefined} className={`-mb-px border-b-2 px-4 py-2 ${pathname === l.href ? 'border-tide-500 font-medium text-ink' : 'border-transparent text-ink-soft hover:text-ink'}`}>
+        <Link
+          key={l.href}
+          href={l.href}
+          aria-current={pathname === l.href ? 'page' : undefined}
+          className={`-mb-px border-b-2 px-4 py-2 ${pathname === l.href ? 'border-tide-500 font-medium text-ink' : 'border-transparent text-ink-soft hover:text-ink'}`}
+        >
           {l.label}
         </Link>
       ))}

@@ -25,7 +25,14 @@ export async function inviteMemberAction(input: unknown): Promise<ActionResult> 
     if (!parsed.success) return { ok: false, message: 'Some fields are not valid.', fields: parsed.error.flatten().fieldErrors as Record<string, string[]> };
     const { email, role } = parsed.data;
     await auth.api.createInvitation({ headers: await headers(), body: { email, role: role as 'viewer', organizationId: member.orgId, resend: true } });
-    await recordAudit(db, { orgId: member.orgId, actorId: member.userId, action: 'member.invite', subjectType: 'invitation', subjectId: email, detail: { email, role } });
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'member.invite',
+      subjectType: 'invitation',
+      subjectId: email,
+      detail: { email, role },
+    });
     revalidatePath('/settings/members');
     return { ok: true, message: `Invitation sent to ${email}.` };
   } catch (error) {
@@ -38,11 +45,26 @@ export async function changeRoleAction(input: unknown): Promise<ActionResult> {
     const member = await requirePermission({ member: ['update'] });
     const parsed = changeRoleSchema.safeParse(input);
     if (!parsed.success) return { ok: false, message: 'Choose a valid role.' };
-    const target = await db.selectFrom('member').select(['id', 'userId', 'role']).where('id', '=', parsed.data.memberId).where('organizationId', '=', member.orgId).executeTakeFirst();
+    const target = await db
+      .selectFrom('member')
+      .select(['id', 'userId', 'role'])
+      .where('id', '=', parsed.data.memberId)
+      .where('organizationId', '=', member.orgId)
+      .executeTakeFirst();
     if (!target) throw new AppError('not_found', 'That member is not in your organisation.');
     if (target.userId === member.userId) throw new AppError('forbidden', 'You cannot change your own role; ask another admin.');
-    await auth.api.updateMemberRole({ headers: await headers(), body: { memberId: target.id, role: parsed.data.role as 'viewer', organizationId: member.orgId } });
-    await recordAudit(db, { orgId: member.orgId, actorId: member.userId, action: 'member.role_change', subjectType: 'member', subjectId: target.id, detail: { from: target.role, to: parsed.data.role } });
+    await auth.api.updateMemberRole({
+      headers: await headers(),
+      body: { memberId: target.id, role: parsed.data.role as 'viewer', organizationId: member.orgId },
+    });
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'member.role_change',
+      subjectType: 'member',
+      subjectId: target.id,
+      detail: { from: target.role, to: parsed.data.role },
+    });
     revalidatePath('/settings/members');
     return { ok: true, message: 'Role changed.' };
   } catch (error) {
@@ -53,7 +75,12 @@ export async function changeRoleAction(input: unknown): Promise<ActionResult> {
 export async function removeMemberAction(memberId: string): Promise<ActionResult> {
   try {
     const member = await requirePermission({ member: ['delete'] });
-    const target = await db.selectFrom('member').select(['id', 'userId']).where('id', '=', String(memberId)).where('organizationId', '=', member.orgId).executeTakeFirst();
+    const target = await db
+      .selectFrom('member')
+      .select(['id', 'userId'])
+      .where('id', '=', String(memberId))
+      .where('organizationId', '=', member.orgId)
+      .executeTakeFirst();
     if (!target) throw new AppError('not_found', 'That member is not in your organisation.');
     if (target.userId === member.userId) throw new AppError('forbidden', 'You cannot remove yourself; ask another admin.');
     await auth.api.removeMember({ headers: await headers(), body: { memberIdOrEmail: target.id, organizationId: member.orgId } });
@@ -68,10 +95,21 @@ export async function removeMemberAction(memberId: string): Promise<ActionResult
 export async function cancelInvitationAction(invitationId: string): Promise<ActionResult> {
   try {
     const member = await requirePermission({ invitation: ['cancel'] });
-    const invitation = await db.selectFrom('invitation').select('id').where('id', '=', String(invitationId)).where('organizationId', '=', member.orgId).executeTakeFirst();
+    const invitation = await db
+      .selectFrom('invitation')
+      .select('id')
+      .where('id', '=', String(invitationId))
+      .where('organizationId', '=', member.orgId)
+      .executeTakeFirst();
     if (!invitation) throw new AppError('not_found', 'That invitation is not in your organisation.');
     await auth.api.cancelInvitation({ headers: await headers(), body: { invitationId: invitation.id } });
-    await recordAudit(db, { orgId: member.orgId, actorId: member.userId, action: 'member.invitation_cancel', subjectType: 'invitation', subjectId: invitation.id });
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'member.invitation_cancel',
+      subjectType: 'invitation',
+      subjectId: invitation.id,
+    });
     revalidatePath('/settings/members');
     return { ok: true, message: 'Invitation cancelled.' };
   } catch (error) {

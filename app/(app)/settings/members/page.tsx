@@ -54,7 +54,17 @@ export default async function MembersPage() {
                     {self ? <span className="ml-2 text-caption text-ink-muted">(you)</span> : null}
                   </Td>
                   <Td>{m.email}</Td>
-                  <Td>{self ? (isRoleName(m.role) ? roleLabels[m.role] : m.role) : <MemberRoleSelect memberId={m.id} role={m.role} name={m.name} disabled={false} />}</Td>
+                  <Td>
+                    {self ? (
+                      isRoleName(m.role) ? (
+                        roleLabels[m.role]
+                      ) : (
+                        m.role
+                      )
+                    ) : (
+                      <MemberRoleSelect memberId={m.id} role={m.role} name={m.name} disabled={false} />
+                    )}
+                  </Td>
                   <Td>{formatDate(m.createdAt)}</Td>
                   <Td className="text-right">{self ? null : <RemoveMemberButton memberId={m.id} name={m.name} />}</Td>
                 </Tr>

@@ -31,7 +31,10 @@ export default async function AcceptInvitationPage({ params }: { params: Promise
       </p>
       {!viewer ? (
         <div className="mt-6 flex flex-col gap-3">
-          <Link href={`/sign-up?email=${encodeURIComponent(invitation.email)}&invitation=${invitation.id}`} className="rounded-md bg-tide-500 px-4 py-2 text-center font-medium text-white hover:bg-tide-600">
+          <Link
+            href={`/sign-up?email=${encodeURIComponent(invitation.email)}&invitation=${invitation.id}`}
+            className="rounded-md bg-tide-500 px-4 py-2 text-center font-medium text-white hover:bg-tide-600"
+          >
             Create an account
           </Link>
           <Link href={`/sign-in?next=${encodeURIComponent(here)}`} className="text-center text-tide-600 underline">

@@ -25,7 +25,14 @@ export function ResetPasswordForm({ token }: { token: string }) {
 
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 flex flex-col gap-4">
-      <Input label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." error={errors.password?.message} {...form.register('password')} />
+      <Input
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        error={errors.password?.message}
+        {...form.register('password')}
+      />
       <Input label="Repeat it" type="password" autoComplete="new-password" error={errors.confirm?.message} {...form.register('confirm')} />
       {problem ? (
         <p role="alert" className="rounded-md bg-brick-100 px-3 py-2 text-brick-700">

@@ -33,7 +33,14 @@ export function SignUpForm({ email, invitation }: { email: string; invitation?: 
     <form onSubmit={onSubmit} noValidate className="mt-6 flex flex-col gap-4">
       <Input label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
       <Input label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
-      <Input label="Password" type="password" autoComplete="new-password" hint="At least 10 characters." error={errors.password?.message} {...form.register('password')} />
+      <Input
+        label="Password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        error={errors.password?.message}
+        {...form.register('password')}
+      />
       {problem ? (
         <p role="alert" className="rounded-md bg-brick-100 px-3 py-2 text-brick-700">
           {problem}

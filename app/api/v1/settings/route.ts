@@ -5,24 +5,26 @@ import { recordAudit } from '@/db/queries/audit';
 import { findSettings, updateSettings } from '@/db/queries/settings';
 import { withAuth } from '@/lib/api';
 import { settingsSchema } from '@/lib/validations/settings';
-import type { OrganizationSettings } from '@/db/types';
+import { presentSettings as present } from '@/lib/settings-response';
 
 export const dynamic = 'force-dynamic';
 
-function present(s: OrganizationSettings) {
-  return { currency: s.currency, riskFreeRate: s.risk_free_rate, wacc: s.wacc, fiscalYearStartMonth: s.fiscal_year_start_month };
-}
-
-export const GET = withAuth(
-  async ({ member }) => NextResponse.json({ settings: present(await findSettings(db, { orgId: member.orgId })) }),
-  { permission: { settings: ['read'] } },
-);
+export const GET = withAuth(async ({ member }) => NextResponse.json({ settings: present(await findSettings(db, { orgId: member.orgId })) }), {
+  permission: { settings: ['read'] },
+});
 
 export const PATCH = withAuth(
   async ({ member, body }) => {
     const saved = await db.transaction().execute(async (trx) => {
       const row = await updateSettings(trx, { orgId: member.orgId, userId: member.userId, change: body });
-      await recordAudit(trx, { orgId: member.orgId, actorId: member.userId, action: 'settings.update', subjectType: 'organization_settings', subjectId: member.orgId, detail: body });
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'settings.update',
+        subjectType: 'organization_settings',
+        subjectId: member.orgId,
+        detail: body,
+      });
       return row;
     });
     return NextResponse.json({ settings: present(saved) });

@@ -1,0 +1,12 @@
+/**
+ * The list of migrations, in order. A new migration is a new NNNN_name.ts file here plus one
+ * line below (a static import works the same in tsx scripts, vitest and Next.js).
+ */
+import type { Migration } from 'kysely';
+import * as m0001 from './0001_auth_tables';
+import * as m0002 from './0002_organisation_settings_and_audit_log';
+
+export const migrations: Record<string, Migration> = {
+  '0001_auth_tables': m0001,
+  '0002_organisation_settings_and_audit_log': m0002,
+};

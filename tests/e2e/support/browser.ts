@@ -1,0 +1,64 @@
+/**
+ * Debian's Chromium driven by playwright-core. Each test gets a fresh context with its own
+ * client address header, so the sign-in rate limit (per address) counts each test separately.
+ */
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { expect } from 'vitest';
+import { BASE_URL, DEMO_PASSWORD } from './env';
+
+let browser: Browser | null = null;
+let counter = 0;
+
+export async function openBrowser(): Promise<Browser> {
+  browser ??= await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: [
+      '--no-sandbox',
+      '--headless',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--disable-dev-shm-usage',
+    ],
+  });
+  return browser;
+}
+
+export async function closeBrowser() {
+  await browser?.close();
+  browser = null;
+}
+
+export async function newContext(): Promise<BrowserContext> {
+  counter += 1;
+  const b = await openBrowser();
+  return b.newContext({
+    baseURL: BASE_URL,
+    viewport: { width: 1280, height: 800 },
+    extraHTTPHeaders: { 'x-forwarded-for': `203.0.113.${(counter % 250) + 1}` },
+  });
+}
+
+export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+export async function signedInPage(email: string): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await newContext();
+  const page = await context.newPage();
+  await signIn(page, email);
+  await page.waitForURL('**/portfolio');
+  return { context, page };
+}
+
+export async function navLabels(page: Page): Promise<string[]> {
+  const nav = page.getByRole('navigation', { name: 'Main' });
+  await expect.poll(async () => nav.isVisible()).toBe(true);
+  return nav.getByRole('link').allInnerTexts();
+}
