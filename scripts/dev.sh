@@ -1,0 +1,12 @@
+#!/usr/bin/env bash
+# npm run dev: next dev with hot reload, on the project-local PostgreSQL and mail sink.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+export NEXT_TELEMETRY_DISABLED=1
+bash scripts/ensure-deps.sh
+bash scripts/db.sh start
+sink_pid=$(bash scripts/mail-sink.sh)
+trap '[ -n "$sink_pid" ] && kill "$sink_pid" 2>/dev/null || true' EXIT INT TERM
+npx tsx scripts/migrate.ts up
+npx tsx scripts/seed.ts
+npx next dev -H 127.0.0.1 -p "${PORT:-3000}"
