@@ -43,7 +43,7 @@ export function compileRaw(model: ProjectModel): CompiledModel {
     switches,
     rights,
     start,
-    staticMode: start,
+    staticPlan: { mode: start, enterAt: 0, outlays: [{ at: 0, cost: investment }] },
     staticInvestment: investment,
     upfront: investment,
   };

@@ -18,6 +18,7 @@ import { costAt, negateCost } from './cost';
 import { refuse } from './errors';
 import { MAX_MODES } from './limits';
 import type { Cost, ExerciseWindow, OptionTemplate, ProjectModel } from './schema';
+import { windowStart } from './window';
 
 type Phase = 'waiting' | 'staging' | 'operating' | 'closed';
 
@@ -167,12 +168,17 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
   }));
 
   const discount = (t: number) => Math.exp(-model.riskFreeRate * t);
-  const staticInvestment =
-    deferAt >= 0
-      ? costAt((options[deferAt] as Extract<OptionTemplate, { type: 'defer' }>).cost, 0)
-      : stage
-        ? stage.payments.reduce((sum, p) => sum + p.amount * discount(p.at), 0)
-        : (model.investment ?? 0);
+  let staticPlan: CompiledModel['staticPlan'];
+  if (deferAt >= 0) {
+    const defer = options[deferAt] as Extract<OptionTemplate, { type: 'defer' }>;
+    const at = windowStart(defer.window);
+    staticPlan = { mode: staticMode, enterAt: at, outlays: [{ at, cost: defer.cost }] };
+  } else if (stage) {
+    staticPlan = { mode: staticMode, enterAt: stage.payments.at(-1)!.at, outlays: stage.payments.map((p) => ({ at: p.at, cost: p.amount })) };
+  } else {
+    staticPlan = { mode: staticMode, enterAt: 0, outlays: [{ at: 0, cost: model.investment ?? 0 }] };
+  }
+  const staticInvestment = staticPlan.outlays.reduce((sum, o) => sum + costAt(o.cost, o.at) * discount(o.at), 0);
   const upfront = deferAt >= 0 || stage ? 0 : (model.investment ?? 0);
-  return { modes, switches, rights, start, staticMode, staticInvestment, upfront };
+  return { modes, switches, rights, start, staticPlan, staticInvestment, upfront };
 }

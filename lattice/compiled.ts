@@ -4,7 +4,7 @@
  * results are reported for.
  */
 import type { Cost, ExerciseWindow } from './schema';
-import type { Money } from './units';
+import type { Money, Years } from './units';
 
 export interface CompiledMode {
   id: string;
@@ -39,9 +39,14 @@ export interface CompiledModel {
   switches: CompiledSwitch[];
   rights: Right[];
   start: number;
-  /** The mode the static (no-flexibility) plan runs in from t = 0. */
-  staticMode: number;
-  /** The outlay of the static plan, at t = 0 (present value for staged payments). */
+  /**
+   * The static (no-flexibility) plan: committed today to run in `mode` from `enterAt` on and to
+   * pay `outlays`. Usually enterAt = 0 and one outlay at 0 (the investment); with a defer
+   * window opening later it is "build at the first date the window allows", and with staged
+   * payments "pay every stage and operate after the last".
+   */
+  staticPlan: { mode: number; enterAt: Years; outlays: { at: Years; cost: Cost }[] };
+  /** The static plan's outlays in present value at t = 0, for variants that build now. */
   staticInvestment: Money;
   /** The outlay charged against the lattice value to get the expanded NPV. */
   upfront: Money;

@@ -3,6 +3,7 @@
  * right its exercise probability, timing and boundary. No re-runs happen here.
  */
 import type { CompiledModel } from './compiled';
+import { costAt } from './cost';
 import { exerciseProfiles } from './forward';
 import { buildPlan, type LatticePlan } from './plan';
 import type { BoundaryPoint, NodeGrid, SwitchResult } from './result';
@@ -26,9 +27,22 @@ export interface PassOptions {
   gridSteps?: number;
 }
 
-function staticNpvOf(plan: LatticePlan, compiled: CompiledModel): number {
-  const m = compiled.staticMode;
-  return plan.scale[m]! * plan.lowest[0]! + plan.fixed[m * (plan.steps + 1)]! - compiled.staticInvestment;
+/**
+ * Static NPV: the value of the static plan, committed today. Times snap to the lattice's steps
+ * like every decision date, so the plan is one of the strategies the lattice can follow and
+ * the expanded NPV is never below it. Entering at step i receives scale·V0·Π_{k<i} kept_k (the
+ * project's value after the payouts before i) plus the mode's flows from i on.
+ */
+function staticNpvOf(plan: LatticePlan, compiled: CompiledModel, riskFreeRate: number): number {
+  const { mode, enterAt, outlays } = compiled.staticPlan;
+  const stepOf = (t: number) => Math.min(plan.steps, Math.max(0, Math.round(t / plan.dt)));
+  const enter = stepOf(enterAt);
+  let retained = 1;
+  for (let k = 0; k < enter; k++) retained *= plan.kept[k]!;
+  const timeOf = (i: number) => i * plan.dt;
+  const value = plan.scale[mode]! * plan.lowest[0]! * retained + plan.fixed[mode * (plan.steps + 1) + enter]! * Math.exp(-riskFreeRate * timeOf(enter));
+  const outlay = outlays.reduce((sum, o) => sum + costAt(o.cost, timeOf(stepOf(o.at))) * Math.exp(-riskFreeRate * timeOf(stepOf(o.at))), 0);
+  return value - outlay;
 }
 
 export function singlePass(model: ProjectModel, compiled: CompiledModel, options: PassOptions = {}): PassResult {
@@ -105,6 +119,6 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
     });
   }
 
-  const staticNpv = staticNpvOf(plan, compiled);
+  const staticNpv = staticNpvOf(plan, compiled, model.riskFreeRate);
   return { plan, value, staticNpv, expandedNpv: value - compiled.upfront, modes, switches, grid };
 }

@@ -62,3 +62,19 @@ export function windowEnd(window: ExerciseWindow): Years {
     }
   }
 }
+
+/** The earliest time a window can be exercised. */
+export function windowStart(window: ExerciseWindow): Years {
+  switch (window.kind) {
+    case 'american':
+      return window.from;
+    case 'bermudan':
+      return Math.min(...window.dates);
+    case 'european':
+      return window.at;
+    default: {
+      const unreachable: never = window;
+      return unreachable;
+    }
+  }
+}

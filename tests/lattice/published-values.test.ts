@@ -1,7 +1,7 @@
 /**
  * Published values beyond Hull (ENGINE.md §7).
  * - Longstaff & Schwartz (2001), *Review of Financial Studies* 14(1), Table 1 (all twenty rows,
- *   `shared/reference/longstaff-schwartz-2001-table1.csv`): their finite-difference American put
+ *   `tests/lattice/reference/longstaff-schwartz-2001-table1.csv`, a copy of the shared reference table): their finite-difference American put
  *   values. Their exercise is effectively discrete, so the engine uses a Bermudan window of 50
  *   dates a year on a 500-steps-a-year CRR tree. Tolerance 0.005: the table has three decimals
  *   and the finite-difference values carry their own grid error; the largest measured gap was
@@ -23,7 +23,7 @@ import { valueProject, type ProjectModel } from '@/lattice';
 import { expectClose } from './support/check';
 import { bivariateNormalCdf, normalCdf } from './support/normal';
 
-const csv = readFileSync(fileURLToPath(new URL('../../../shared/reference/longstaff-schwartz-2001-table1.csv', import.meta.url)), 'utf8');
+const csv = readFileSync(fileURLToPath(new URL('./reference/longstaff-schwartz-2001-table1.csv', import.meta.url)), 'utf8');
 const rows = csv
   .split('\n')
   .filter((line) => line.trim() !== '' && !line.startsWith('#') && !line.startsWith('S,'))
