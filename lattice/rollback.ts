@@ -7,14 +7,19 @@
  *      each switch worth the *continuation* of the mode it leads to minus its cost (so at most
  *      one switch per mode per node, and a switch never chains into another at the same node);
  *      a switch wins only if strictly better, so ties continue;
- *   3. record the decision (run-length encoded, see decision-runs.ts).
+ *   3. record the decision (run-length encoded, see decision-runs.ts) and the boundaries.
  * Values are rolled back as O = W − A (see plan.ts), so step 1 is a plain discounted average of
  * O and step 2 adds the closed-form difference A_to − A_from = Δscale·V + offset. A mode with no
  * switch out of it has O ≡ 0 and is not rolled at all.
  *
+ * Two schedules give the same numbers. When no switch path leads back to a mode (one-shot
+ * rights) modes are rolled targets first and each does steps 1–3 in one loop, reading its
+ * targets' continuations of this step; otherwise (reversible rights, or when a caller wants
+ * snapshots) every continuation is computed first and the exercise rule runs after.
+ *
  * The hot loops allocate nothing, call no closure per node and never call Math.pow: V at node
- * (i, j + 1) is V at (i, j) times u/d. Values the loops read are copied into locals first so
- * the JIT keeps them in registers.
+ * (i, j + 1) is V at (i, j) times u/d. The work lives in methods of one class (stable call
+ * targets for the JIT) that copy what they read into locals first.
  */
 import { DecisionRuns } from './decision-runs';
 import type { LatticePlan } from './plan';
@@ -43,94 +48,160 @@ export interface RollbackResult {
 const none: RollbackOptions = { decisions: false, gridSteps: -1, captureStep: -1 };
 
 export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = {}): RollbackResult {
-  const opts = { ...none, ...options };
-  const { steps, p, discount, lowest, modeCount, deltaScale, offset, open, byMode, to } = plan;
-  const width = steps + 1;
-  const ratio = plan.u / plan.d;
-  const pu = discount * p;
-  const pd = discount * (1 - p);
+  return new Rollback(plan, { ...none, ...options }).run();
+}
 
-  const value: Float64Array[] = [];
-  const cont: Float64Array[] = [];
-  for (let m = 0; m < modeCount; m++) {
-    const rolledMode = byMode[m]!.length > 0;
-    value.push(new Float64Array(rolledMode ? width : 0));
-    cont.push(new Float64Array(rolledMode ? width : 0));
-  }
-  // A mode with no switch out of it is worth its closed form for good: O ≡ 0, nothing to roll.
-  const fixedValue = new Float64Array(width);
-  for (let m = 0; m < modeCount; m++) if (byMode[m]!.length === 0) value[m] = cont[m] = fixedValue;
-  const rolled: number[] = [];
-  for (let m = 0; m < modeCount; m++) if (byMode[m]!.length > 0) rolled.push(m);
-  // A rolled mode that no switch leads into, and whose switches all lead to fixed modes, is
-  // rolled in place in one fused loop: nobody else reads its continuation.
-  const isTarget = new Uint8Array(modeCount);
-  for (let s = 0; s < plan.switchCount; s++) isTarget[to[s]!] = 1;
-  const fused = new Uint8Array(modeCount);
-  const snapshots = opts.gridSteps >= 0 || opts.captureStep >= 0;
-  for (const m of rolled) if (!snapshots && isTarget[m] === 0 && byMode[m]!.every((s) => byMode[to[s]!]!.length === 0)) fused[m] = 1;
+class Rollback {
+  private readonly width: number;
+  private readonly ratio: number;
+  private readonly pu: number;
+  private readonly pd: number;
+  /** value[m]: O of mode m at the step being rolled (in place); cont[m]: its continuation. */
+  private readonly value: Float64Array[] = [];
+  private readonly cont: Float64Array[] = [];
+  private readonly rolled: number[] = [];
+  /** 1 when the mode's only targets are fixed modes and nothing leads into it. */
+  private readonly fused: Uint8Array;
+  /** 1 when some switch leads into the mode, so its continuation must be kept. */
+  private readonly needed: Uint8Array;
+  private readonly order: number[] | null;
+  private readonly openList: Int32Array;
+  private readonly decisions: DecisionRuns | null;
+  private readonly boundaryLow: Float64Array | null;
+  private readonly boundaryHigh: Float64Array | null;
 
-  const decisions = opts.decisions ? new DecisionRuns(modeCount, width) : null;
-  const boundaryLow = opts.decisions ? new Float64Array(plan.switchCount * width).fill(NaN) : null;
-  const boundaryHigh = opts.decisions ? new Float64Array(plan.switchCount * width).fill(NaN) : null;
-  const grid: Float64Array[][] | null = opts.gridSteps >= 0 ? [] : null;
-  let capture: RollbackResult['capture'] = null;
-  const openList = new Int32Array(plan.switchCount);
-  const swapped = new Int32Array(modeCount);
-
-  /** Boundaries of one finished row, read from its runs (a few per row, so Math.pow is fine). */
-  function recordBoundaries(m: number, i: number) {
-    if (!decisions || !boundaryLow || !boundaryHigh) return;
-    const row = m * width + i;
-    const first = decisions.rowFirst[row]!;
-    const count = decisions.rowCount[row]!;
-    const list = byMode[m]!;
-    for (let k = first; k < first + count; k++) {
-      const choice = decisions.choices[k]!;
-      if (choice === 0) continue;
-      const startJ = decisions.starts[k]!;
-      const endJ = k + 1 < first + count ? decisions.starts[k + 1]! - 1 : i;
-      const cell = list[choice - 1]! * width + i;
-      const low = lowest[i]! * Math.pow(ratio, startJ);
-      const high = lowest[i]! * Math.pow(ratio, endJ);
-      if (!(low >= boundaryLow[cell]!)) boundaryLow[cell] = low;
-      if (!(high <= boundaryHigh[cell]!)) boundaryHigh[cell] = high;
+  constructor(
+    private readonly plan: LatticePlan,
+    private readonly opts: RollbackOptions,
+  ) {
+    const { steps, modeCount, byMode, to, switchCount } = plan;
+    this.width = steps + 1;
+    this.ratio = plan.u / plan.d;
+    this.pu = plan.discount * plan.p;
+    this.pd = plan.discount * (1 - plan.p);
+    // A mode with no switch out of it is worth its closed form for good: O ≡ 0 (shared zeros).
+    const zeros = new Float64Array(this.width + 1);
+    for (let m = 0; m < modeCount; m++) {
+      const rolls = byMode[m]!.length > 0;
+      this.value.push(rolls ? new Float64Array(this.width + 1) : zeros);
+      this.cont.push(rolls ? new Float64Array(this.width + 1) : zeros);
+      if (rolls) this.rolled.push(m);
     }
+    this.needed = new Uint8Array(modeCount);
+    for (let s = 0; s < switchCount; s++) this.needed[to[s]!] = 1;
+    const snapshots = opts.gridSteps >= 0 || opts.captureStep >= 0;
+    this.fused = new Uint8Array(modeCount);
+    for (const m of this.rolled) {
+      if (this.needed[m] === 0 && byMode[m]!.every((s) => byMode[to[s]!]!.length === 0)) this.fused[m] = 1;
+    }
+    this.order = snapshots ? null : targetsFirst(this.rolled, byMode, to);
+    this.openList = new Int32Array(Math.max(1, switchCount));
+    this.decisions = opts.decisions ? new DecisionRuns(modeCount, this.width) : null;
+    this.boundaryLow = opts.decisions ? new Float64Array(switchCount * this.width).fill(NaN) : null;
+    this.boundaryHigh = opts.decisions ? new Float64Array(switchCount * this.width).fill(NaN) : null;
   }
 
-  /** Collects the open switches of mode m at step i into openList; returns how many. */
-  function openAt(m: number, i: number): number {
-    const list = byMode[m]!;
+  run(): RollbackResult {
+    const { steps, modeCount } = this.plan;
+    const grid: Float64Array[][] | null = this.opts.gridSteps >= 0 ? [] : null;
+    let capture: RollbackResult['capture'] = null;
+    const swapped = new Int32Array(modeCount);
+
+    for (let i = steps; i >= 0; i--) {
+      if (i === this.opts.captureStep) {
+        // Before step i is rolled back, `value` still holds step i + 1.
+        capture = { continuation: [], value: [], next: i < steps ? this.value.map((row) => row.slice(0, i + 2)) : null };
+      }
+      if (this.order && i < steps) {
+        for (const m of this.order) {
+          if (this.fused[m] === 1 && this.openAt(m, i) === 1) this.fusedSingle(m, i, this.openList[0]!);
+          else this.onePassRow(m, i);
+        }
+        continue;
+      }
+      // 1. every continuation first (zero at the horizon) …
+      for (const m of this.rolled) {
+        const c = this.cont[m]!;
+        if (i === steps) c.fill(0);
+        else this.continuationRow(m, i);
+      }
+      // … 2–3. then the exercise rule; modes with nothing open keep their continuation, by a
+      // buffer swap after every mode has read the continuations it needs.
+      let swappedCount = 0;
+      for (const m of this.rolled) {
+        const n = this.openAt(m, i);
+        if (n === 0) swapped[swappedCount++] = m;
+        else this.exerciseRow(m, i, n);
+      }
+      for (let k = 0; k < swappedCount; k++) {
+        const m = swapped[k]!;
+        const t = this.value[m]!;
+        this.value[m] = this.cont[m]!;
+        this.cont[m] = t;
+      }
+      if (grid && i <= this.opts.gridSteps) grid[i] = this.value.map((row) => row.slice(0, i + 1));
+      if (capture && i === this.opts.captureStep) {
+        // For swapped modes the continuation now sits in value; it equals the value there.
+        const kept = Array.from(swapped.subarray(0, swappedCount));
+        capture.continuation = this.value.map((row, m) => (kept.includes(m) ? row.slice(0, i + 1) : this.cont[m]!.slice(0, i + 1)));
+        capture.value = this.value.map((row) => row.slice(0, i + 1));
+      }
+    }
+    return {
+      rootOption: Float64Array.from(this.value, (row) => row[0] ?? 0),
+      decisions: this.decisions,
+      boundaryLow: this.boundaryLow,
+      boundaryHigh: this.boundaryHigh,
+      grid,
+      capture,
+    };
+  }
+
+  /** Collects the open switches of mode m at step i into openList (as indices into byMode[m]). */
+  private openAt(m: number, i: number): number {
+    const list = this.plan.byMode[m]!;
+    const open = this.plan.open;
+    const width = this.width;
+    const openList = this.openList;
     let n = 0;
     for (let k = 0; k < list.length; k++) if (open[list[k]! * width + i] === 1) openList[n++] = k;
     return n;
   }
 
+  private continuationRow(m: number, i: number) {
+    const w = this.value[m]!;
+    const c = this.cont[m]!;
+    const up = this.pu;
+    const down = this.pd;
+    for (let j = 0; j <= i; j++) c[j] = up * w[j + 1]! + down * w[j]!;
+  }
+
   /** Steps 1–3 for a fused mode with one open switch, in place (j ascending reads w[j+1] unchanged). */
-  function fusedSingle(m: number, i: number, k: number) {
-    const w = value[m]!;
-    const s = byMode[m]![k]!;
-    const ds = deltaScale[s]!;
-    const off = offset[s * width + i]!;
-    const up = pu;
-    const down = pd;
-    const step = ratio;
-    const last = i === steps;
-    let v = lowest[i]!;
+  private fusedSingle(m: number, i: number, k: number) {
+    const plan = this.plan;
+    const w = this.value[m]!;
+    const s = plan.byMode[m]![k]!;
+    const ds = plan.deltaScale[s]!;
+    const off = plan.offset[s * this.width + i]!;
+    const up = this.pu;
+    const down = this.pd;
+    const step = this.ratio;
+    let v = plan.lowest[i]!;
+    const decisions = this.decisions;
     if (!decisions) {
       for (let j = 0; j <= i; j++) {
-        const hold = last ? 0 : up * w[j + 1]! + down * w[j]!;
+        const hold = up * w[j + 1]! + down * w[j]!;
         const x = ds * v + off;
         w[j] = x > hold ? x : hold;
         v *= step;
       }
       return;
     }
-    const row = m * width + i;
+    const row = m * this.width + i;
     decisions.rowFirst[row] = decisions.length;
     let previous = -1;
     for (let j = 0; j <= i; j++) {
-      const hold = last ? 0 : up * w[j + 1]! + down * w[j]!;
+      const hold = up * w[j + 1]! + down * w[j]!;
       const x = ds * v + off;
       const choice = x > hold ? k + 1 : 0;
       w[j] = x > hold ? x : hold;
@@ -141,102 +212,170 @@ export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = 
       v *= step;
     }
     decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
-    recordBoundaries(m, i);
+    this.recordBoundaries(m, i);
   }
 
-  for (let i = steps; i >= 0; i--) {
-    if (i === opts.captureStep) {
-      // Before step i is rolled back, `value` still holds step i + 1.
-      capture = { continuation: [], value: [], next: i < steps ? value.map((row) => row.slice(0, i + 2)) : null };
-    }
-    // Fused modes do all three steps in one loop.
-    for (const m of rolled) {
-      if (fused[m] !== 1) continue;
-      const n = openAt(m, i);
-      if (n === 1) {
-        fusedSingle(m, i, openList[0]!);
-        continue;
-      }
-      // Nothing open (or several switches at once): fall back to the two-pass path below.
-      fused[m] = 2;
-    }
-    // 1. continuation
-    for (const m of rolled) {
-      if (fused[m] === 1) continue;
-      const c = cont[m]!;
-      if (i === steps) {
-        c.fill(0);
-        continue;
-      }
-      const w = value[m]!;
-      const up = pu;
-      const down = pd;
-      for (let j = 0; j <= i; j++) c[j] = up * w[j + 1]! + down * w[j]!;
-    }
-    // 2. exercise, for modes with a switch open at this step; 3. decisions and boundaries.
-    let swappedCount = 0;
-    for (const m of rolled) {
-      if (fused[m] === 1) continue;
-      if (fused[m] === 2) fused[m] = 1;
-      const n = openAt(m, i);
-      if (n === 0) {
-        swapped[swappedCount++] = m;
-        continue;
-      }
-      const list = byMode[m]!;
-      const c = cont[m]!;
-      const w = value[m]!;
-      const row = m * width + i;
-      if (decisions) decisions.rowFirst[row] = decisions.length;
-      let previous = -1;
-      let v = lowest[i]!;
+  /** Steps 1–3 in one loop for mode m at step i < N (modes rolled targets first, see `order`). */
+  private onePassRow(m: number, i: number) {
+    const plan = this.plan;
+    const width = this.width;
+    const n = this.openAt(m, i);
+    const w = this.value[m]!;
+    const c = this.cont[m]!;
+    const keep = this.needed[m] === 1;
+    const up = this.pu;
+    const down = this.pd;
+    const decisions = this.decisions;
+    const row = m * width + i;
+    if (n === 0) {
       for (let j = 0; j <= i; j++) {
-        let best = c[j]!;
-        let choice = 0;
-        for (let q = 0; q < n; q++) {
+        const hold = up * w[j + 1]! + down * w[j]!;
+        w[j] = hold;
+        if (keep) c[j] = hold;
+      }
+      if (decisions) decisions.rowCount[row] = 0;
+      return;
+    }
+    const list = plan.byMode[m]!;
+    const openList = this.openList;
+    const cont = this.cont;
+    if (decisions) decisions.rowFirst[row] = decisions.length;
+    let previous = -1;
+    let v = plan.lowest[i]!;
+    const step = this.ratio;
+    const k1 = openList[0]!;
+    const s1 = list[k1]!;
+    const ds1 = plan.deltaScale[s1]!;
+    const off1 = plan.offset[s1 * width + i]!;
+    const c1 = cont[plan.to[s1]!]!;
+    const k2 = n >= 2 ? openList[1]! : k1;
+    const s2 = list[k2]!;
+    const ds2 = plan.deltaScale[s2]!;
+    const off2 = plan.offset[s2 * width + i]!;
+    const c2 = cont[plan.to[s2]!]!;
+    for (let j = 0; j <= i; j++) {
+      const hold = up * w[j + 1]! + down * w[j]!;
+      if (keep) c[j] = hold;
+      let best = hold;
+      let choice = 0;
+      const x1 = ds1 * v + off1 + c1[j]!;
+      if (x1 > best) {
+        best = x1;
+        choice = k1 + 1;
+      }
+      if (n >= 2) {
+        const x2 = ds2 * v + off2 + c2[j]!;
+        if (x2 > best) {
+          best = x2;
+          choice = k2 + 1;
+        }
+        for (let q = 2; q < n; q++) {
           const k = openList[q]!;
           const s = list[k]!;
-          const x = deltaScale[s]! * v + offset[s * width + i]! + cont[to[s]!]![j]!;
+          const x = plan.deltaScale[s]! * v + plan.offset[s * width + i]! + cont[plan.to[s]!]![j]!;
           if (x > best) {
             best = x;
             choice = k + 1;
           }
         }
-        w[j] = best;
-        if (decisions && choice !== previous) {
-          decisions.push(j, choice);
-          previous = choice;
-        }
-        v *= ratio;
       }
-      if (decisions) {
-        decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
-        recordBoundaries(m, i);
+      w[j] = best;
+      if (decisions && choice !== previous) {
+        decisions.push(j, choice);
+        previous = choice;
       }
+      v *= step;
     }
-    // Modes with nothing open keep their continuation: swap buffers (after every mode above
-    // has read the continuations it needs).
-    for (let k = 0; k < swappedCount; k++) {
-      const m = swapped[k]!;
-      const t = value[m]!;
-      value[m] = cont[m]!;
-      cont[m] = t;
-    }
-    if (grid && i <= opts.gridSteps) grid[i] = value.map((row) => row.slice(0, i + 1));
-    if (capture && i === opts.captureStep) {
-      // For swapped modes the continuation now sits in value; it equals the value there.
-      const kept = Array.from(swapped.subarray(0, swappedCount));
-      capture.continuation = value.map((row, m) => (kept.includes(m) ? row.slice(0, i + 1) : cont[m]!.slice(0, i + 1)));
-      capture.value = value.map((row) => row.slice(0, i + 1));
+    if (decisions) {
+      decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
+      this.recordBoundaries(m, i);
     }
   }
 
-  return {
-    rootOption: Float64Array.from(value, (row) => row[0] ?? 0),
-    decisions,
-    boundaryLow,
-    boundaryHigh,
-    grid,
-    capture,
+  /** Steps 2–3 for mode m at step i with n switches open (in openList), continuations computed. */
+  private exerciseRow(m: number, i: number, n: number) {
+    const plan = this.plan;
+    const width = this.width;
+    const list = plan.byMode[m]!;
+    const openList = this.openList;
+    const cont = this.cont;
+    const c = cont[m]!;
+    const w = this.value[m]!;
+    const decisions = this.decisions;
+    const row = m * width + i;
+    if (decisions) decisions.rowFirst[row] = decisions.length;
+    let previous = -1;
+    let v = plan.lowest[i]!;
+    const step = this.ratio;
+    for (let j = 0; j <= i; j++) {
+      let best = c[j]!;
+      let choice = 0;
+      for (let q = 0; q < n; q++) {
+        const k = openList[q]!;
+        const s = list[k]!;
+        const x = plan.deltaScale[s]! * v + plan.offset[s * width + i]! + cont[plan.to[s]!]![j]!;
+        if (x > best) {
+          best = x;
+          choice = k + 1;
+        }
+      }
+      w[j] = best;
+      if (decisions && choice !== previous) {
+        decisions.push(j, choice);
+        previous = choice;
+      }
+      v *= step;
+    }
+    if (decisions) {
+      decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
+      this.recordBoundaries(m, i);
+    }
+  }
+
+  /** Boundaries of one finished row, read from its runs (a few per row, so Math.pow is fine). */
+  private recordBoundaries(m: number, i: number) {
+    const { decisions, boundaryLow, boundaryHigh } = this;
+    if (!decisions || !boundaryLow || !boundaryHigh) return;
+    const row = m * this.width + i;
+    const first = decisions.rowFirst[row]!;
+    const count = decisions.rowCount[row]!;
+    const list = this.plan.byMode[m]!;
+    const base = this.plan.lowest[i]!;
+    for (let k = first; k < first + count; k++) {
+      const choice = decisions.choices[k]!;
+      if (choice === 0) continue;
+      const startJ = decisions.starts[k]!;
+      const endJ = k + 1 < first + count ? decisions.starts[k + 1]! - 1 : i;
+      const cell = list[choice - 1]! * this.width + i;
+      const low = base * Math.pow(this.ratio, startJ);
+      const high = base * Math.pow(this.ratio, endJ);
+      if (!(low >= boundaryLow[cell]!)) boundaryLow[cell] = low;
+      if (!(high <= boundaryHigh[cell]!)) boundaryHigh[cell] = high;
+    }
+  }
+}
+
+/**
+ * The rolled modes ordered so that every switch's target comes before its source, or null when
+ * switches form a cycle (reversible rights such as mothball and restart).
+ */
+function targetsFirst(rolled: number[], byMode: Int32Array[], to: Int32Array): number[] | null {
+  const state = new Map<number, 'visiting' | 'done'>();
+  const order: number[] = [];
+  const isRolled = new Set(rolled);
+  const visit = (m: number): boolean => {
+    const seen = state.get(m);
+    if (seen === 'done') return true;
+    if (seen === 'visiting') return false;
+    state.set(m, 'visiting');
+    for (const s of byMode[m]!) {
+      const target = to[s]!;
+      if (isRolled.has(target) && !visit(target)) return false;
+    }
+    state.set(m, 'done');
+    order.push(m);
+    return true;
   };
+  for (const m of rolled) if (!visit(m)) return null;
+  return order;
 }

@@ -5,6 +5,8 @@
  *    CoxRossRubinstein; median of several runs, with the ratio.
  * 2. A full valuation with expand + contract + abandon + defer at 500 steps, including the
  *    stand-alone and incremental breakdown, convergence and sensitivities.
+ * The script is bundled with esbuild and run by plain node, as the app ships the engine (tsx's
+ * on-the-fly loader made the same loops about twice as slow when measured).
  */
 import { valueProject, type ProjectModel } from '../lattice';
 import { quantlibAmerican } from '../tests/lattice/support/quantlib';
