@@ -69,6 +69,17 @@ class Rollback {
   private readonly decisions: DecisionRuns | null;
   private readonly boundaryLow: Float64Array | null;
   private readonly boundaryHigh: Float64Array | null;
+  /**
+   * Trimming of single-switch fused modes (see trimmedSingle): per mode, `edge` is the first
+   * node past the pure-exercise region (Δscale < 0: nodes below it are exercised; Δscale > 0:
+   * nodes from it up are exercised) and `live` the last (Δscale < 0) or first (Δscale > 0)
+   * node that may hold a non-zero value; beyond it every value is exactly 0.
+   */
+  private readonly trims: Uint8Array;
+  private readonly edge: Int32Array;
+  private readonly live: Int32Array;
+  /** Values below this (money) are zero for every purpose; flushing them lets the rows trim. */
+  private readonly tiny: number;
 
   constructor(
     private readonly plan: LatticePlan,
@@ -95,6 +106,18 @@ class Rollback {
       if (this.needed[m] === 0 && byMode[m]!.every((s) => byMode[to[s]!]!.length === 0)) this.fused[m] = 1;
     }
     this.order = snapshots ? null : targetsFirst(this.rolled, byMode, to);
+    this.trims = new Uint8Array(modeCount);
+    this.edge = new Int32Array(modeCount);
+    this.live = new Int32Array(modeCount);
+    for (const m of this.rolled) {
+      const list = byMode[m]!;
+      if (this.fused[m] === 1 && list.length === 1 && plan.deltaScale[list[0]!] !== 0) this.trims[m] = 1;
+      this.resetTrim(m, steps);
+    }
+    let money = 0;
+    for (let k = 0; k < plan.offset.length; k++) money = Math.max(money, Math.abs(plan.offset[k]!));
+    for (let k = 0; k < plan.scale.length; k++) money = Math.max(money, plan.scale[k]! * plan.lowest[0]!);
+    this.tiny = 1e-17 * money;
     this.openList = new Int32Array(Math.max(1, switchCount));
     this.decisions = opts.decisions ? new DecisionRuns(modeCount, this.width) : null;
     this.boundaryLow = opts.decisions ? new Float64Array(switchCount * this.width).fill(NaN) : null;
@@ -114,7 +137,17 @@ class Rollback {
       }
       if (this.order && i < steps) {
         for (const m of this.order) {
-          if (this.fused[m] === 1 && this.openAt(m, i) === 1) this.fusedSingle(m, i, this.openList[0]!);
+          const n = this.openAt(m, i);
+          if (this.trims[m] === 1) {
+            if (n === 1) {
+              this.trimmedSingle(m, i);
+              continue;
+            }
+            // Window closed here: make the row explicit again and roll it in full.
+            this.materialize(m, i + 1);
+            this.resetTrim(m, i);
+          }
+          if (this.fused[m] === 1 && n === 1) this.fusedSingle(m, i, this.openList[0]!);
           else this.onePassRow(m, i);
         }
         continue;
@@ -147,6 +180,8 @@ class Rollback {
         capture.value = this.value.map((row) => row.slice(0, i + 1));
       }
     }
+    // Trimmed rows keep their pure-exercise nodes implicit: write the root out.
+    for (const m of this.rolled) if (this.trims[m] === 1 && this.order) this.materialize(m, 0);
     return {
       rootOption: Float64Array.from(this.value, (row) => row[0] ?? 0),
       decisions: this.decisions,
@@ -213,6 +248,184 @@ class Rollback {
     }
     decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
     this.recordBoundaries(m, i);
+  }
+
+  /** Trim state meaning "every node of step t is stored explicitly". */
+  private resetTrim(m: number, t: number) {
+    const s = this.plan.byMode[m]![0];
+    const falling = s !== undefined && this.plan.deltaScale[s]! < 0;
+    this.edge[m] = falling ? 0 : t + 1;
+    this.live[m] = falling ? t : 0;
+  }
+
+  /** Writes the implicit pure-exercise values of step t into the row, so it can be read in full. */
+  private materialize(m: number, t: number) {
+    if (this.trims[m] !== 1) return;
+    const plan = this.plan;
+    const s = plan.byMode[m]![0]!;
+    const ds = plan.deltaScale[s]!;
+    const off = plan.offset[s * this.width + Math.min(t, plan.steps)]!;
+    const w = this.value[m]!;
+    const from = ds < 0 ? 0 : this.edge[m]!;
+    const to = ds < 0 ? this.edge[m]! : t + 1;
+    let v = plan.lowest[t]! * Math.pow(this.ratio, from);
+    for (let j = from; j < to; j++) {
+      w[j] = ds * v + off;
+      v *= this.ratio;
+    }
+  }
+
+  /**
+   * Steps 1–3 for a fused mode whose one switch leads to a fixed mode, computing only the nodes
+   * that can change. Its exercise value x = Δscale·V + offset is linear in V, so:
+   * - where both children were exercised at step i+1 the continuation is linear in V too, and
+   *   the exercise test reduces to one linear inequality; checked at both ends of that run, it
+   *   holds throughout (a half-line), so the run stays exercised without visiting its nodes;
+   * - where both children were 0 the continuation is 0 and the node is worth max(x, 0), which is
+   *   0 past the point where x turns negative;
+   * - values below `tiny` are flushed to 0, so the zero region grows as the value decays.
+   * Only the nodes in between are computed. The numbers equal the full loop's (the tests compare
+   * the trimmed engine with quantlib.js at 1e-9 and with itself untrimmed).
+   */
+  private trimmedSingle(m: number, i: number) {
+    const plan = this.plan;
+    const width = this.width;
+    const s = plan.byMode[m]![0]!;
+    const ds = plan.deltaScale[s]!;
+    const off = plan.offset[s * width + i]!;
+    const offNext = plan.offset[s * width + i + 1]!;
+    const w = this.value[m]!;
+    const up = this.pu;
+    const down = this.pd;
+    const step = this.ratio;
+    const tiny = this.tiny;
+    const base = plan.lowest[i]!;
+    const vAt = (j: number) => base * Math.pow(step, j);
+    // Continuation of a node whose children are both exercised: ds·G·V + D·offNext.
+    const G = (plan.lowest[i + 1]! / base) * (up * step + down);
+    const D = up + down;
+    const staysExercised = (j: number) => ds * vAt(j) + off > ds * G * vAt(j) + D * offNext;
+    const decisions = this.decisions;
+    const row = m * width + i;
+    if (decisions) decisions.rowFirst[row] = decisions.length;
+    let previous = -1;
+    // Decisions are recorded as runs: a new run starts where the choice changes.
+    const push = (j: number, choice: number) => {
+      if (decisions && choice !== previous) {
+        decisions.push(j, choice);
+        previous = choice;
+      }
+    };
+    const record = decisions !== null;
+
+    if (ds < 0) {
+      // Exercised at the bottom, zero at the top.
+      const edgeNext = this.edge[m]!;
+      const liveNext = this.live[m]!;
+      let pure = Math.max(0, edgeNext - 1);
+      if (pure > 0 && !(staysExercised(0) && staysExercised(pure - 1))) pure = 0;
+      if (pure === 0 && edgeNext > 0) this.materialize(m, i + 1);
+      // The first computed node reads one child inside the pure region: write that child out.
+      else if (edgeNext > 0) w[edgeNext - 1] = ds * plan.lowest[i + 1]! * Math.pow(step, edgeNext - 1) + offNext;
+      if (pure > 0) push(0, 1);
+      let edge = pure;
+      let streak = true;
+      let last = pure - 1;
+      let v = vAt(pure);
+      const end = Math.min(i, liveNext);
+      let j = pure;
+      for (; j <= end; j++) {
+        let hold = up * w[j + 1]! + down * w[j]!;
+        if (hold < tiny && hold > -tiny) hold = 0;
+        const x = ds * v + off;
+        if (x > hold) {
+          w[j] = x;
+          if (record && previous !== 1) {
+            decisions.push(j, 1);
+            previous = 1;
+          }
+          if (streak) edge = j + 1;
+          last = j;
+        } else {
+          w[j] = hold;
+          if (record && previous !== 0) {
+            decisions.push(j, 0);
+            previous = 0;
+          }
+          streak = false;
+          if (hold !== 0) last = j;
+        }
+        v *= step;
+      }
+      // Above the live region the continuation is 0: exercised while x > 0, zero after.
+      for (; j <= i; j++) {
+        const x = ds * v + off;
+        if (!(x > 0)) break;
+        w[j] = x;
+        push(j, 1);
+        if (streak) edge = j + 1;
+        last = j;
+        v *= step;
+      }
+      if (j <= i) push(j, 0);
+      this.edge[m] = edge;
+      this.live[m] = Math.max(last, edge - 1);
+    } else {
+      // Zero at the bottom, exercised at the top.
+      const edgeNext = this.edge[m]!;
+      const liveNext = this.live[m]!;
+      let pure = edgeNext;
+      if (pure <= i && !(staysExercised(pure) && staysExercised(i))) pure = i + 1;
+      if (pure > i && edgeNext <= i + 1) {
+        this.materialize(m, i + 1);
+      } else if (edgeNext <= i + 1) w[edgeNext] = ds * plan.lowest[i + 1]! * Math.pow(step, edgeNext) + offNext;
+      const start = Math.max(0, liveNext - 1);
+      // Below the live region the continuation is 0: worth max(x, 0), x falling with j.
+      let first = start;
+      let v = vAt(start - 1);
+      for (let jj = start - 1; jj >= 0; jj--) {
+        const x = ds * v + off;
+        if (!(x > 0)) break;
+        w[jj] = x;
+        first = jj;
+        v /= step;
+      }
+      if (first > 0) push(0, 0);
+      if (first < start) push(first, 1);
+      let firstNonZero = first < start ? first : -1;
+      let streakStart = first < start ? first : -1;
+      v = vAt(start);
+      for (let j = start; j < pure; j++) {
+        let hold = up * w[j + 1]! + down * w[j]!;
+        if (hold < tiny && hold > -tiny) hold = 0;
+        const x = ds * v + off;
+        if (x > hold) {
+          w[j] = x;
+          if (record && previous !== 1) {
+            decisions.push(j, 1);
+            previous = 1;
+          }
+          if (streakStart < 0) streakStart = j;
+          if (firstNonZero < 0) firstNonZero = j;
+        } else {
+          w[j] = hold;
+          if (record && previous !== 0) {
+            decisions.push(j, 0);
+            previous = 0;
+          }
+          streakStart = -1;
+          if (firstNonZero < 0 && hold !== 0) firstNonZero = j;
+        }
+        v *= step;
+      }
+      if (pure <= i) push(pure, 1);
+      this.edge[m] = streakStart >= 0 ? streakStart : pure;
+      this.live[m] = firstNonZero >= 0 ? firstNonZero : Math.min(pure, i + 1);
+    }
+    if (decisions) {
+      decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
+      this.recordBoundaries(m, i);
+    }
   }
 
   /** Steps 1–3 in one loop for mode m at step i < N (modes rolled targets first, see `order`). */

@@ -80,6 +80,11 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
       profile.byStep.forEach((probability, i) => {
         if (probability > 1e-15) timing.push({ t: i * plan.dt, probability });
       });
+      const paths = own.map((k) => ({
+        from: compiled.modes[compiled.switches[k]!.from]!.id,
+        to: compiled.modes[compiled.switches[k]!.to]!.id,
+        boundary: boundaryOf(k),
+      }));
       switches.push({
         id: right.id,
         kind: right.kind,
@@ -87,12 +92,8 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
         incremental: null,
         exerciseProbability: profile.probability,
         exerciseTiming: timing,
-        boundary: primary === undefined ? [] : boundaryOf(primary),
-        paths: own.map((k) => ({
-          from: compiled.modes[compiled.switches[k]!.from]!.id,
-          to: compiled.modes[compiled.switches[k]!.to]!.id,
-          boundary: boundaryOf(k),
-        })),
+        boundary: primary === undefined ? [] : paths[own.indexOf(primary)]!.boundary,
+        paths,
       });
     });
   }

@@ -66,14 +66,20 @@ function sensitivitiesOf(model: ProjectModel, compiled: CompiledModel): Sensitiv
   }));
 }
 
-function assertFinite(value: unknown, path: string): void {
-  if (typeof value === 'number') {
-    if (!Number.isFinite(value) && !(path.endsWith('errorEstimate') && Number.isNaN(value)))
-      throw new ModelError([{ field: 'model', message: `model produces a non-finite ${path}; check the magnitudes of its inputs` }]);
-    return;
+/** Refuses to return a result holding NaN or ±Infinity anywhere (errorEstimate may be NaN). */
+function assertFinite(root: unknown): void {
+  const stack: [unknown, string][] = [[root, '']];
+  while (stack.length > 0) {
+    const [value, path] = stack.pop()!;
+    if (typeof value === 'number') {
+      if (!Number.isFinite(value) && !(path.endsWith('errorEstimate') && Number.isNaN(value)))
+        throw new ModelError([{ field: 'model', message: `model produces a non-finite ${path}; check the magnitudes of its inputs` }]);
+    } else if (Array.isArray(value)) {
+      for (let k = 0; k < value.length; k++) stack.push([value[k], `${path}[${k}]`]);
+    } else if (value !== null && typeof value === 'object') {
+      for (const key in value) stack.push([(value as Record<string, unknown>)[key], path ? `${path}.${key}` : key]);
+    }
   }
-  if (Array.isArray(value)) value.forEach((v, k) => assertFinite(v, `${path}[${k}]`));
-  else if (value && typeof value === 'object') for (const [key, v] of Object.entries(value)) assertFinite(v, path ? `${path}.${key}` : key);
 }
 
 export function valueProject(input: unknown, options: ValueOptions = {}): ValuationResult {
@@ -129,6 +135,6 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
     engineVersion: ENGINE_VERSION,
   };
   if (pass.grid) result.grid = pass.grid;
-  assertFinite(result, '');
+  assertFinite(result);
   return result;
 }

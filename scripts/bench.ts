@@ -17,7 +17,7 @@ function median(times: number[]): number {
 }
 
 function time(run: () => unknown, repeats: number): number {
-  run(); // warm-up: let the JIT compile the hot loop first
+  for (let k = 0; k < 5; k++) run(); // warm-up: let the JIT compile the hot loops first
   const times: number[] = [];
   for (let k = 0; k < repeats; k++) {
     const start = performance.now();

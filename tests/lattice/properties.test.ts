@@ -5,7 +5,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { valueProject, type OptionTemplate, type ProjectModel, type TreeKind } from '@/lattice';
+import { explainNode, valueProject, type OptionTemplate, type ProjectModel, type TreeKind } from '@/lattice';
 
 const tree = fc.constantFrom<TreeKind>('crr', 'jarrow-rudd', 'tian', 'trigeorgis');
 const underlying = fc.record({
@@ -220,6 +220,45 @@ describe('lattice properties', () => {
         for (const sw of r.switches) expect(sw.incremental!).toBeLessThanOrEqual(sw.standalone! + 1e-9 * V0);
       }),
       { numRuns: 60 },
+    );
+  });
+});
+
+describe('the trimmed and the full rollback agree', () => {
+  // A single right into a fixed mode is rolled by a trimmed loop that skips nodes it can prove
+  // are exercised or zero (lattice/rollback.ts, trimmedSingle); explainNode always rolls every
+  // node. Their root values must agree to rounding (1e-10 relative) — including for windows that
+  // close and open, and for proceeds larger than the project.
+  it('for a single defer, expand or abandon right with random windows', () => {
+    const right = fc.record({
+      kind: fc.constantFrom('defer', 'expand', 'abandon', 'contract'),
+      money: fc.double({ min: 0.05, max: 2, noNaN: true }),
+      a: fc.double({ min: 0, max: 1, noNaN: true }),
+      b: fc.double({ min: 0, max: 1, noNaN: true }),
+      bermudan: fc.boolean(),
+    });
+    fc.assert(
+      fc.property(market, right, (m, { kind, money, a, b, bermudan }) => {
+        const T = m.horizon;
+        const window = bermudan
+          ? { kind: 'bermudan' as const, dates: [Math.min(a, b) * T, ((a + b) / 2) * T, Math.max(a, b) * T] }
+          : { kind: 'american' as const, from: Math.min(a, b) * T, to: Math.max(a, b) * T };
+        const amount = money * m.underlying.value;
+        const option: OptionTemplate =
+          kind === 'defer'
+            ? { type: 'defer', cost: amount, window }
+            : kind === 'expand'
+              ? { type: 'expand', factor: 0.5, cost: amount, window }
+              : kind === 'abandon'
+                ? { type: 'abandon', salvage: amount, window }
+                : { type: 'contract', fraction: 0.4, savings: amount, window };
+        const model: ProjectModel = { ...m, options: [option] };
+        const trimmed = valueProject(model, { extras: false });
+        const start = kind === 'defer' ? 'waiting' : 'operating';
+        const full = explainNode(model, { step: 0, node: 0, mode: start }).value;
+        expect(Math.abs(trimmed.value - full)).toBeLessThanOrEqual(1e-10 * Math.max(1, Math.abs(full)));
+      }),
+      { numRuns: Number(process.env.PROPERTY_RUNS ?? 300) },
     );
   });
 });
