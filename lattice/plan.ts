@@ -30,6 +30,8 @@ export interface LatticePlan {
   discount: number;
   /** V at the lowest node (j = 0) of each step, after the payouts of earlier steps. */
   lowest: Float64Array;
+  /** (u/d)^j for j = 0..N, so V(i, j) = lowest[i]·rise[j] without Math.pow. */
+  rise: Float64Array;
   /**
    * Fraction of V left in the project after the payouts at each step: e^{−δΔt}·(1 − f_i). The
    * continuous yield only tilts p (the tree grows at r − δ); a discrete payout f_i also moves
@@ -83,6 +85,10 @@ export function buildPlan(model: ProjectModel, compiled: CompiledModel, steps = 
   lowest[0] = model.underlying.value;
   for (let i = 0; i < steps; i++) lowest[i + 1] = lowest[i]! * retained[i]! * d;
 
+  const rise = new Float64Array(width);
+  rise[0] = 1;
+  for (let j = 1; j < width; j++) rise[j] = rise[j - 1]! * (u / d);
+
   const modeCount = compiled.modes.length;
   const scale = new Float64Array(modeCount);
   const fixed = new Float64Array(modeCount * width);
@@ -120,5 +126,5 @@ export function buildPlan(model: ProjectModel, compiled: CompiledModel, steps = 
   });
   const byMode = compiled.modes.map((_, m) => Int32Array.from(compiled.switches.flatMap((sw, s) => (sw.from === m ? [s] : []))));
 
-  return { kind, steps, dt, u, d, p, discount, lowest, kept, modeCount, scale, fixed, switchCount, from, to, deltaScale, offset, open, byMode, snaps };
+  return { kind, steps, dt, u, d, p, discount, lowest, rise, kept, modeCount, scale, fixed, switchCount, from, to, deltaScale, offset, open, byMode, snaps };
 }

@@ -268,7 +268,7 @@ class Rollback {
     const w = this.value[m]!;
     const from = ds < 0 ? 0 : this.edge[m]!;
     const to = ds < 0 ? this.edge[m]! : t + 1;
-    let v = plan.lowest[t]! * Math.pow(this.ratio, from);
+    let v = plan.lowest[t]! * plan.rise[from]!;
     for (let j = from; j < to; j++) {
       w[j] = ds * v + off;
       v *= this.ratio;
@@ -300,7 +300,8 @@ class Rollback {
     const step = this.ratio;
     const tiny = this.tiny;
     const base = plan.lowest[i]!;
-    const vAt = (j: number) => base * Math.pow(step, j);
+    const rise = plan.rise;
+    const vAt = (j: number) => base * (j >= 0 ? rise[j]! : 1 / step);
     // Continuation of a node whose children are both exercised: ds·G·V + D·offNext.
     const G = (plan.lowest[i + 1]! / base) * (up * step + down);
     const D = up + down;
@@ -326,7 +327,7 @@ class Rollback {
       if (pure > 0 && !(staysExercised(0) && staysExercised(pure - 1))) pure = 0;
       if (pure === 0 && edgeNext > 0) this.materialize(m, i + 1);
       // The first computed node reads one child inside the pure region: write that child out.
-      else if (edgeNext > 0) w[edgeNext - 1] = ds * plan.lowest[i + 1]! * Math.pow(step, edgeNext - 1) + offNext;
+      else if (edgeNext > 0) w[edgeNext - 1] = ds * plan.lowest[i + 1]! * rise[edgeNext - 1]! + offNext;
       if (pure > 0) push(0, 1);
       let edge = pure;
       let streak = true;
@@ -378,7 +379,7 @@ class Rollback {
       if (pure <= i && !(staysExercised(pure) && staysExercised(i))) pure = i + 1;
       if (pure > i && edgeNext <= i + 1) {
         this.materialize(m, i + 1);
-      } else if (edgeNext <= i + 1) w[edgeNext] = ds * plan.lowest[i + 1]! * Math.pow(step, edgeNext) + offNext;
+      } else if (edgeNext <= i + 1) w[edgeNext] = ds * plan.lowest[i + 1]! * rise[edgeNext]! + offNext;
       const start = Math.max(0, liveNext - 1);
       // Below the live region the continuation is 0: worth max(x, 0), x falling with j.
       let first = start;
@@ -545,7 +546,7 @@ class Rollback {
     }
   }
 
-  /** Boundaries of one finished row, read from its runs (a few per row, so Math.pow is fine). */
+  /** Boundaries of one finished row, read from its runs. */
   private recordBoundaries(m: number, i: number) {
     const { decisions, boundaryLow, boundaryHigh } = this;
     if (!decisions || !boundaryLow || !boundaryHigh) return;
@@ -560,8 +561,8 @@ class Rollback {
       const startJ = decisions.starts[k]!;
       const endJ = k + 1 < first + count ? decisions.starts[k + 1]! - 1 : i;
       const cell = list[choice - 1]! * this.width + i;
-      const low = base * Math.pow(this.ratio, startJ);
-      const high = base * Math.pow(this.ratio, endJ);
+      const low = base * this.plan.rise[startJ]!;
+      const high = base * this.plan.rise[endJ]!;
       if (!(low >= boundaryLow[cell]!)) boundaryLow[cell] = low;
       if (!(high <= boundaryHigh[cell]!)) boundaryHigh[cell] = high;
     }
