@@ -66,18 +66,37 @@ function sensitivitiesOf(model: ProjectModel, compiled: CompiledModel): Sensitiv
   }));
 }
 
-/** Refuses to return a result holding NaN or ±Infinity anywhere (errorEstimate may be NaN). */
+/**
+ * Refuses to return a result holding NaN or ±Infinity anywhere (errorEstimate may be NaN). The
+ * path of a bad number is only spelled out when one is found.
+ */
 function assertFinite(root: unknown): void {
-  const stack: [unknown, string][] = [[root, '']];
-  while (stack.length > 0) {
-    const [value, path] = stack.pop()!;
+  const values: unknown[] = [root];
+  const parents: number[] = [-1];
+  const keys: string[] = [''];
+  const pathOf = (k: number): string => {
+    const parts: string[] = [];
+    for (let at = k; at > 0; at = parents[at]!) parts.unshift(keys[at]!);
+    return parts.join('').replace(/^\./, '');
+  };
+  for (let k = 0; k < values.length; k++) {
+    const value = values[k];
     if (typeof value === 'number') {
-      if (!Number.isFinite(value) && !(path.endsWith('errorEstimate') && Number.isNaN(value)))
-        throw new ModelError([{ field: 'model', message: `model produces a non-finite ${path}; check the magnitudes of its inputs` }]);
-    } else if (Array.isArray(value)) {
-      for (let k = 0; k < value.length; k++) stack.push([value[k], `${path}[${k}]`]);
+      if (Number.isFinite(value) || (keys[k] === '.errorEstimate' && Number.isNaN(value))) continue;
+      throw new ModelError([{ field: 'model', message: `model produces a non-finite ${pathOf(k)}; check the magnitudes of its inputs` }]);
+    }
+    if (Array.isArray(value)) {
+      for (let j = 0; j < value.length; j++) {
+        values.push(value[j]);
+        parents.push(k);
+        keys.push(`[${j}]`);
+      }
     } else if (value !== null && typeof value === 'object') {
-      for (const key in value) stack.push([(value as Record<string, unknown>)[key], path ? `${path}.${key}` : key]);
+      for (const key in value) {
+        values.push((value as Record<string, unknown>)[key]);
+        parents.push(k);
+        keys.push(`.${key}`);
+      }
     }
   }
 }
