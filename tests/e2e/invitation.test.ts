@@ -1,7 +1,8 @@
 /**
  * An admin invites a new member; the invitation e-mail is captured by the sink; the invitee
  * creates an account, confirms the address from the second e-mail, accepts and is in, with the
- * invited role's navigation; later they sign in again with their own password.
+ * invited role's navigation; later they sign in again with their own password. The admin then
+ * changes their role and removes them, and the server applies both at once.
  */
 import { afterAll, describe, expect, it } from 'vitest';
 import { closeBrowser, navLabels, newContext, signIn, signedInPage } from './support/browser';
@@ -49,6 +50,21 @@ describe('inviting a member', () => {
 
     await admin.page.goto('/settings/members');
     await expect.poll(() => admin.page.getByRole('cell', { name: 'Robin Castell', exact: true }).isVisible()).toBe(true);
+
+    // The admin makes the new member a read-only executive: the server applies it on their next request.
+    await admin.page.getByLabel('Role of Robin Castell').selectOption('viewer');
+    await expect.poll(() => admin.page.getByText('Role changed.').isVisible()).toBe(true);
+    await page.goto('/portfolio');
+    expect(await navLabels(page)).toEqual(['Portfolio', 'Projects']);
+    await page.goto('/review');
+    await expect.poll(() => page.getByRole('heading', { name: 'Your role cannot open this page' }).isVisible()).toBe(true);
+
+    // The admin removes them: they keep their account but no longer see the organisation.
+    await admin.page.getByRole('button', { name: 'Remove Robin Castell' }).click();
+    await admin.page.getByRole('dialog').getByRole('button', { name: 'Remove' }).click();
+    await expect.poll(() => admin.page.getByText('Member removed.').isVisible()).toBe(true);
+    await page.goto('/portfolio');
+    await page.waitForURL('**/welcome');
     await context.close();
     await admin.context.close();
   });
