@@ -22,6 +22,8 @@ export interface Viewer {
   orgId: string | null;
   orgName: string | null;
   role: RoleName | null;
+  /** The organisation is one of the invented demo organisations. */
+  isDemo: boolean;
 }
 
 export interface Member extends Viewer {
@@ -47,12 +49,14 @@ export const currentViewer = cache(async (): Promise<Viewer | null> => {
       orgName = first.organizationName;
     }
   }
-  if (orgId && !orgName) {
-    const org = await db.selectFrom('organization').select('name').where('id', '=', orgId).executeTakeFirst();
+  let isDemo = false;
+  if (orgId) {
+    const org = await db.selectFrom('organization').select(['name', 'metadata']).where('id', '=', orgId).executeTakeFirst();
     orgName = org?.name ?? null;
+    isDemo = org?.metadata?.includes('"demo":true') ?? false;
   }
   const role = membership && isRoleName(membership.role) ? membership.role : null;
-  return { userId: user.id, name: user.name, email: user.email, orgId, orgName, role };
+  return { userId: user.id, name: user.name, email: user.email, orgId, orgName, role, isDemo };
 });
 
 /** A signed-in member of an organisation, or an AppError (401 without a session, 403 without a membership). */

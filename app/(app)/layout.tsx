@@ -22,6 +22,9 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
             {viewer.orgName}
           </p>
         ) : null}
+        {viewer.isDemo ? (
+          <p className="mx-3 mt-2 rounded bg-ember-100 px-2 py-1 text-caption text-ember-700">Demo organisation: invented company and figures</p>
+        ) : null}
         <div className="mt-2">
           <NavLinks items={items} />
         </div>

@@ -12,7 +12,7 @@ export default async function PortfolioPage() {
   if (member === 'forbidden') return <Forbidden />;
   return (
     <>
-      <PageHeader title="Portfolio" lead={`Static and expanded NPV of ${member.orgName}'s projects, side by side.`} />
+      <PageHeader title="Portfolio" lead={`Static and expanded NPV of the projects at ${member.orgName}, side by side.`} />
       <EmptyState title="No projects have been valued yet">
         When analysts value a project, it appears here with its static NPV, option premium and expanded NPV.
       </EmptyState>

@@ -20,7 +20,7 @@ export default async function MembersPage() {
   const [members, invitations] = await Promise.all([listMembers(db, { orgId: member.orgId }), listPendingInvitations(db, { orgId: member.orgId })]);
   return (
     <>
-      <PageHeader title="Settings" lead={`Who works on ${member.orgName}'s cases, and in which role.`} />
+      <PageHeader title="Settings" lead={`Who works on the cases of ${member.orgName}, and in which role.`} />
       <SettingsNav />
       <section aria-labelledby="invite-heading" className="mb-10">
         <h2 id="invite-heading" className="mb-3">
