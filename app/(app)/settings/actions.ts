@@ -2,8 +2,7 @@
 
 import { revalidatePath } from 'next/cache';
 import { db } from '@/db';
-import { recordAudit } from '@/db/queries/audit';
-import { updateSettings } from '@/db/queries/settings';
+import { saveSettingsAudited } from '@/db/queries/settings';
 import { requirePermission } from '@/lib/dal';
 import { AppError } from '@/lib/errors';
 import { settingsSchema } from '@/lib/validations/settings';
@@ -15,17 +14,7 @@ export async function updateSettingsAction(input: unknown): Promise<ActionResult
     const member = await requirePermission({ settings: ['update'] });
     const parsed = settingsSchema.safeParse(input);
     if (!parsed.success) return { ok: false, message: 'Some fields are not valid.', fields: parsed.error.flatten().fieldErrors as Record<string, string[]> };
-    await db.transaction().execute(async (trx) => {
-      await updateSettings(trx, { orgId: member.orgId, userId: member.userId, change: parsed.data });
-      await recordAudit(trx, {
-        orgId: member.orgId,
-        actorId: member.userId,
-        action: 'settings.update',
-        subjectType: 'organization_settings',
-        subjectId: member.orgId,
-        detail: parsed.data,
-      });
-    });
+    await saveSettingsAudited(db, { orgId: member.orgId, userId: member.userId, change: parsed.data });
     revalidatePath('/settings');
     return { ok: true, message: 'Organisation defaults saved.' };
   } catch (error) {

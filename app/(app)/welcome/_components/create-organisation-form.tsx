@@ -1,5 +1,6 @@
 'use client';
 
+import { FormProblem } from '@/components/form-problem';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
@@ -28,11 +29,7 @@ export function CreateOrganisationForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 flex max-w-md flex-col gap-4">
       <Input label="Organisation name" error={errors.name?.message} {...form.register('name')} />
-      {problem ? (
-        <p role="alert" className="rounded-md bg-brick-100 px-3 py-2 text-brick-700">
-          {problem}
-        </p>
-      ) : null}
+      <FormProblem message={problem} />
       <Button type="submit" busy={isSubmitting}>
         Create organisation
       </Button>

@@ -1,5 +1,6 @@
 'use client';
 
+import { FormProblem } from '@/components/form-problem';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
@@ -27,11 +28,7 @@ export function ForgotPasswordForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 flex flex-col gap-4">
       <Input label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
-      {problem ? (
-        <p role="alert" className="rounded-md bg-brick-100 px-3 py-2 text-brick-700">
-          {problem}
-        </p>
-      ) : null}
+      <FormProblem message={problem} />
       <Button type="submit" busy={isSubmitting}>
         Send reset link
       </Button>

@@ -1,5 +1,6 @@
 'use client';
 
+import { FormProblem } from '@/components/form-problem';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
@@ -34,11 +35,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
         {...form.register('password')}
       />
       <Input label="Repeat it" type="password" autoComplete="new-password" error={errors.confirm?.message} {...form.register('confirm')} />
-      {problem ? (
-        <p role="alert" className="rounded-md bg-brick-100 px-3 py-2 text-brick-700">
-          {problem}
-        </p>
-      ) : null}
+      <FormProblem message={problem} />
       <Button type="submit" busy={isSubmitting}>
         Save new password
       </Button>

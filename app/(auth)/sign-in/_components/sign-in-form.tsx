@@ -1,5 +1,6 @@
 'use client';
 
+import { FormProblem } from '@/components/form-problem';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
@@ -33,11 +34,7 @@ export function SignInForm({ next }: { next: string }) {
     <form onSubmit={onSubmit} noValidate className="mt-6 flex flex-col gap-4">
       <Input label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
       <Input label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...form.register('password')} />
-      {problem ? (
-        <p role="alert" className="rounded-md bg-brick-100 px-3 py-2 text-brick-700">
-          {problem}
-        </p>
-      ) : null}
+      <FormProblem message={problem} />
       <Button type="submit" busy={isSubmitting}>
         Sign in
       </Button>

@@ -1,5 +1,6 @@
 'use client';
 
+import { FormProblem } from '@/components/form-problem';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
@@ -41,11 +42,7 @@ export function SignUpForm({ email, invitation }: { email: string; invitation?: 
         error={errors.password?.message}
         {...form.register('password')}
       />
-      {problem ? (
-        <p role="alert" className="rounded-md bg-brick-100 px-3 py-2 text-brick-700">
-          {problem}
-        </p>
-      ) : null}
+      <FormProblem message={problem} />
       <Button type="submit" busy={isSubmitting}>
         Create account
       </Button>

@@ -1,8 +1,7 @@
 // GET /api/v1/settings – the organisation's defaults; PATCH – change them (admins)
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
-import { recordAudit } from '@/db/queries/audit';
-import { findSettings, updateSettings } from '@/db/queries/settings';
+import { findSettings, saveSettingsAudited } from '@/db/queries/settings';
 import { withAuth } from '@/lib/api';
 import { settingsSchema } from '@/lib/validations/settings';
 import { presentSettings as present } from '@/lib/settings-response';
@@ -15,18 +14,7 @@ export const GET = withAuth(async ({ member }) => NextResponse.json({ settings: 
 
 export const PATCH = withAuth(
   async ({ member, body }) => {
-    const saved = await db.transaction().execute(async (trx) => {
-      const row = await updateSettings(trx, { orgId: member.orgId, userId: member.userId, change: body });
-      await recordAudit(trx, {
-        orgId: member.orgId,
-        actorId: member.userId,
-        action: 'settings.update',
-        subjectType: 'organization_settings',
-        subjectId: member.orgId,
-        detail: body,
-      });
-      return row;
-    });
+    const saved = await saveSettingsAudited(db, { orgId: member.orgId, userId: member.userId, change: body });
     return NextResponse.json({ settings: present(saved) });
   },
   { permission: { settings: ['update'] }, body: settingsSchema },

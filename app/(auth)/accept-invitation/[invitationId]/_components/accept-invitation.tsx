@@ -1,5 +1,6 @@
 'use client';
 
+import { FormProblem } from '@/components/form-problem';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
@@ -23,11 +24,7 @@ export function AcceptInvitation({ invitationId }: { invitationId: string }) {
   };
   return (
     <div className="mt-6 flex flex-col gap-3">
-      {problem ? (
-        <p role="alert" className="rounded-md bg-brick-100 px-3 py-2 text-brick-700">
-          {problem}
-        </p>
-      ) : null}
+      <FormProblem message={problem} />
       <Button onClick={accept} busy={busy}>
         Accept and continue
       </Button>
