@@ -138,7 +138,7 @@ export function prepareModel(input: unknown): { model: ProjectModel; compiled: C
   if (cells > MAX_DECISION_CELLS)
     refuse(
       'steps',
-      `× switchable modes gives ${cells.toExponential(2)} decision cells, over the limit of ${MAX_DECISION_CELLS.toExponential(2)}; use fewer steps or fewer rights`,
+      `× switchable modes gives ${cells.toExponential(2)} node × mode cells to visit, over the limit of ${MAX_DECISION_CELLS.toExponential(2)}; use fewer steps or fewer rights`,
     );
   return { model, compiled };
 }

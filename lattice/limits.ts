@@ -8,9 +8,9 @@ export const MAX_STEPS = 10_000;
 /** Most operating modes after templates are compiled (the combinations of exercised rights). */
 export const MAX_MODES = 64;
 /**
- * Most (node × switchable mode) cells in the decision map, one byte each. The map is the only
- * structure that grows with steps²; it is kept for the forward pass that gives exercise
- * probabilities. 150 million cells is 150 MB.
+ * Most (node × switchable mode) cells one lattice pass may visit: a bound on the work of one
+ * valuation (about a second here). Memory stays linear in steps per mode: values live in one
+ * row per mode, and the decision map is run-length encoded by row.
  */
 export const MAX_DECISION_CELLS = 150_000_000;
 /** Most (node × mode) cells returned when the caller asks for the full node grid. */

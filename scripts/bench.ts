@@ -9,6 +9,8 @@
  * on-the-fly loader made the same loops about twice as slow when measured).
  */
 import { valueProject, type ProjectModel } from '../lattice';
+import { prepareModel } from '../lattice/check-model';
+import { singlePass } from '../lattice/single-pass';
 import { quantlibAmerican } from '../tests/lattice/support/quantlib';
 
 function median(times: number[]): number {
@@ -30,7 +32,9 @@ function time(run: () => unknown, repeats: number): number {
 const ms = (x: number) => `${x.toFixed(2).padStart(9)} ms`;
 
 console.log('American put, S = K = 100, r = 5 %, σ = 30 %, T = 1 (median of runs)');
-console.log('  steps      engine (crr)     quantlib.js (CRR)   ratio');
+console.log('  engine pass = valueProject(extras: false): value, boundaries and exercise probabilities');
+console.log('  engine value = the same lattice, value only (what quantlib.js computes)');
+console.log('  steps   engine pass   engine value   quantlib.js (CRR)   ratio pass   ratio value');
 for (const steps of [1000, 2000, 5000]) {
   const model: ProjectModel = {
     underlying: { value: 100, volatility: 0.3 },
@@ -40,11 +44,15 @@ for (const steps of [1000, 2000, 5000]) {
     options: [{ type: 'abandon', salvage: 100, window: { kind: 'american', from: 0, to: 1 } }],
   };
   const engine = time(() => valueProject(model, { extras: false }), 21);
+  const prepared = prepareModel(model);
+  const valueOnly = time(() => singlePass(prepared.model, prepared.compiled, { valueOnly: true }), 21);
   const quantlib = time(
     () => quantlibAmerican({ kind: 'put', spot: 100, strike: 100, rate: 0.05, dividendYield: 0, volatility: 0.3, days: 365, steps, tree: 'crr' }),
     steps >= 5000 ? 5 : 11,
   );
-  console.log(`  ${String(steps).padStart(5)}  ${ms(engine)}      ${ms(quantlib)}     ${(quantlib / engine).toFixed(1)}×`);
+  console.log(
+    `  ${String(steps).padStart(5)} ${ms(engine)}   ${ms(valueOnly)}   ${ms(quantlib)}      ${(quantlib / engine).toFixed(1).padStart(6)}×     ${(quantlib / valueOnly).toFixed(1).padStart(6)}×`,
+  );
 }
 
 const fourOptions: ProjectModel = {
