@@ -111,3 +111,30 @@ describe('interacting rights worked by hand', () => {
     expect(r.switches[0]!.exerciseTiming).toEqual([{ t: 0, probability: 1 }]);
   });
 });
+
+describe('the node grid on request', () => {
+  const model: ProjectModel = {
+    ...base,
+    horizon: 2,
+    steps: 2,
+    options: [
+      { type: 'expand', factor: 0.5, cost: 30, window: { kind: 'american', from: 0, to: 2 } },
+      { type: 'abandon', salvage: 70, window: { kind: 'american', from: 0, to: 2 } },
+    ],
+  };
+
+  it('holds the hand-worked values and decisions of the expand + abandon case', () => {
+    const grid = valueProject(model, { extras: false, grid: true }).grid!;
+    const t2 = grid.steps[2]!;
+    t2.underlying.forEach((v, j) => expectClose(v, [64, 100, 156.25][j]!, { abs: 1e-9 }, { j }));
+    t2.modes.operating!.value.forEach((w, j) => expectClose(w, [70, 120, 204.375][j]!, { abs: 1e-9 }, { j }));
+    expect(t2.modes.operating!.decision).toEqual(['abandon-1', 'expand-1', 'expand-1']);
+    expect(grid.steps[1]!.modes.operating!.decision).toEqual([null, null]);
+    expectClose(grid.steps[1]!.modes.operating!.value[1]!, 158.928571, { abs: 1e-6 }, {});
+    expectClose(grid.steps[0]!.modes.operating!.value[0]!, 123.505781, { abs: 1e-6 }, {});
+  });
+
+  it('is refused beyond the node budget', () => {
+    expect(() => valueProject({ ...model, steps: 1000, horizon: 2 }, { extras: false, grid: true })).toThrow('over the budget of 200000');
+  });
+});
