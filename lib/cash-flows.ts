@@ -1,0 +1,109 @@
+/**
+ * From a yearly cash-flow schedule to what the lattice needs: the static NPV at the WACC, the
+ * underlying value V0 (PV of the operating cash flows, i.e. without the investment) and the
+ * payout schedule (the share of the project's value it pays out each year).
+ *
+ * Conventions (common practice, no source):
+ * - free cash flow FCF = revenue − operating cost − tax − capex − increase in working capital;
+ *   the operating cash flow OCF is the same without capex;
+ * - discount factors at the WACC, 1/(1+WACC)^t at year ends, or 1/(1+WACC)^(t−½) for years ≥ 1
+ *   with mid-year timing (year 0 is always today);
+ * - V0 = Σ OCF·DF, investment = Σ capex·DF, static NPV = Σ FCF·DF = V0 − investment;
+ * - the payout of year t is OCF_t / V_t, where V_t is the value at t of the OCF from t on
+ *   (cum-payout): the project's value drops by that share when the cash is paid (Copeland &
+ *   Antikarov's payout ratio). The last year's cash is all that is left, so it is not a payout;
+ *   a negative OCF cannot be a payout and is reported.
+ */
+import { z } from 'zod';
+
+const amount = z.number({ error: 'Enter a number.' }).finite().min(-1e15).max(1e15);
+
+export const cashFlowYearSchema = z.object({
+  year: z.number().int().min(0, 'Years start at 0.').max(100, 'At most 100 years.'),
+  revenue: amount,
+  operatingCost: amount,
+  capex: amount,
+  tax: amount,
+  workingCapital: amount,
+});
+
+export const cashFlowScheduleSchema = z
+  .object({
+    rows: z.array(cashFlowYearSchema).min(1, 'Add at least one year.').max(60, 'At most 60 years.'),
+    wacc: z.number().gt(-0.5, 'WACC must be above −50 %.').lt(1, 'WACC must be below 100 %.'),
+    timing: z.enum(['end-of-year', 'mid-year']).default('end-of-year'),
+  })
+  .superRefine((value, ctx) => {
+    value.rows.forEach((row, k) => {
+      if (k > 0 && row.year !== value.rows[k - 1]!.year + 1)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['rows', k, 'year'],
+          message: `Years must follow one another: expected ${value.rows[k - 1]!.year + 1}, got ${row.year}.`,
+        });
+    });
+  });
+
+export type CashFlowYear = z.infer<typeof cashFlowYearSchema>;
+export type CashFlowSchedule = z.input<typeof cashFlowScheduleSchema>;
+
+export interface CashFlowAnalysis {
+  rows: { year: number; freeCashFlow: number; operatingCashFlow: number; discountFactor: number; presentValue: number }[];
+  totals: { revenue: number; operatingCost: number; capex: number; tax: number; workingCapital: number; freeCashFlow: number };
+  underlyingValue: number;
+  investment: number;
+  staticNpv: number;
+  payouts: { at: number; fraction: number }[];
+  warnings: string[];
+}
+
+export function analyseCashFlows(input: CashFlowSchedule): CashFlowAnalysis {
+  const { rows, wacc, timing } = cashFlowScheduleSchema.parse(input);
+  const discountFactor = (year: number) => Math.pow(1 + wacc, -(timing === 'mid-year' && year >= 1 ? year - 0.5 : year));
+  const warnings: string[] = [];
+  const analysed = rows.map((r) => {
+    const operatingCashFlow = r.revenue - r.operatingCost - r.tax - r.workingCapital;
+    const freeCashFlow = operatingCashFlow - r.capex;
+    const df = discountFactor(r.year);
+    return { year: r.year, freeCashFlow, operatingCashFlow, discountFactor: df, presentValue: freeCashFlow * df, capex: r.capex };
+  });
+  const underlyingValue = analysed.reduce((sum, r) => sum + r.operatingCashFlow * r.discountFactor, 0);
+  const investment = analysed.reduce((sum, r) => sum + r.capex * r.discountFactor, 0);
+  const staticNpv = analysed.reduce((sum, r) => sum + r.presentValue, 0);
+
+  const payouts: CashFlowAnalysis['payouts'] = [];
+  for (let k = 0; k < analysed.length - 1; k++) {
+    const r = analysed[k]!;
+    if (r.year === 0) continue;
+    // Value at year t of the operating cash from t on, in year-t money.
+    const remaining = analysed.slice(k).reduce((sum, s) => sum + s.operatingCashFlow * s.discountFactor, 0) / r.discountFactor;
+    if (!(remaining > 0)) {
+      warnings.push(`Year ${r.year}: the value of the cash flows still to come is not positive, so no payout is derived from it.`);
+      continue;
+    }
+    if (r.operatingCashFlow < 0) {
+      warnings.push(`Year ${r.year}: the operating cash flow is negative; the lattice takes no payout that year.`);
+      continue;
+    }
+    payouts.push({ at: r.year, fraction: Math.min(r.operatingCashFlow / remaining, 0.999999) });
+  }
+  if (underlyingValue <= 0) warnings.push('The operating cash flows are worth nothing or less (V0 ≤ 0): the lattice needs a positive project value.');
+
+  const sum = (key: keyof CashFlowYear) => rows.reduce((s, r) => s + r[key], 0);
+  return {
+    rows: analysed.map(({ capex: _capex, ...rest }) => rest),
+    totals: {
+      revenue: sum('revenue'),
+      operatingCost: sum('operatingCost'),
+      capex: sum('capex'),
+      tax: sum('tax'),
+      workingCapital: sum('workingCapital'),
+      freeCashFlow: analysed.reduce((s, r) => s + r.freeCashFlow, 0),
+    },
+    underlyingValue,
+    investment,
+    staticNpv,
+    payouts,
+    warnings,
+  };
+}
