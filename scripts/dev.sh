@@ -9,4 +9,5 @@ sink_pid=$(bash scripts/mail-sink.sh)
 trap '[ -n "$sink_pid" ] && kill "$sink_pid" 2>/dev/null || true' EXIT INT TERM
 npx tsx scripts/migrate.ts up
 npx tsx scripts/seed.ts
+bash scripts/build-engine-worker.sh
 npx next dev -H 127.0.0.1 -p "${PORT:-3000}"

@@ -1,0 +1,26 @@
+// POST /api/v1/valuations – value an engine model (stateless: nothing is stored); ?extras=false for one lattice pass
+import { NextResponse } from 'next/server';
+import { readJson, withAuth } from '@/lib/api';
+import { EngineRefusal, valueInWorker } from '@/lib/engine/pool';
+import { AppError } from '@/lib/errors';
+
+export const dynamic = 'force-dynamic';
+export const runtime = 'nodejs';
+
+export const POST = withAuth(
+  async ({ request }) => {
+    const input = await readJson(request);
+    const extras = request.nextUrl.searchParams.get('extras') !== 'false';
+    try {
+      return NextResponse.json(await valueInWorker(input, { extras }));
+    } catch (error) {
+      if (error instanceof EngineRefusal) {
+        const fields: Record<string, string[]> = {};
+        for (const issue of error.issues) (fields[issue.field] ??= []).push(issue.message);
+        throw new AppError('unprocessable', error.issues[0]?.message ?? 'The model is not valid.', fields);
+      }
+      throw error;
+    }
+  },
+  { permission: { project: ['read'] } },
+);
