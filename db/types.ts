@@ -65,6 +65,49 @@ export interface AuditLogTable {
   created_at: Timestamp;
 }
 
+export interface ProjectTable {
+  id: Generated<string>;
+  organization_id: string;
+  name: string;
+  description: Generated<string>;
+  owner_id: string | null;
+  currency: string;
+  status: Generated<'active' | 'archived'>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+/** jsonb: read as parsed JSON; written as JSON text (pg would turn a JS array into a PostgreSQL array). */
+type Json<T> = ColumnType<T, string, string>;
+
+export interface CaseTable {
+  id: Generated<string>;
+  organization_id: string;
+  project_id: string;
+  name: string;
+  version: Generated<number>;
+  status: Generated<string>;
+  cash_flows: Json<unknown>;
+  settings: Json<unknown>;
+  options: Json<unknown[]>;
+  created_by: string | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface ValuationRunTable {
+  id: Generated<string>;
+  organization_id: string;
+  case_id: string;
+  case_version: number;
+  input: Json<unknown>;
+  input_hash: string;
+  result: Json<unknown>;
+  engine_version: string;
+  created_by: string | null;
+  created_at: Timestamp;
+}
+
 export interface DB {
   user: UserTable;
   organization: OrganizationTable;
@@ -72,6 +115,9 @@ export interface DB {
   invitation: InvitationTable;
   organization_settings: OrganizationSettingsTable;
   audit_log: AuditLogTable;
+  project: ProjectTable;
+  case: CaseTable;
+  valuation_run: ValuationRunTable;
 }
 
 export type OrganizationSettings = Selectable<OrganizationSettingsTable>;
@@ -79,3 +125,6 @@ export type OrganizationSettingsUpdate = Updateable<OrganizationSettingsTable>;
 export type AuditLogEntry = Selectable<AuditLogTable>;
 export type NewAuditLogEntry = Insertable<AuditLogTable>;
 export type Member = Selectable<MemberTable>;
+export type Project = Selectable<ProjectTable>;
+export type Case = Selectable<CaseTable>;
+export type ValuationRun = Selectable<ValuationRunTable>;

@@ -23,13 +23,16 @@ describe('migrations', () => {
     expect(up).toEqual([
       'account',
       'audit_log',
+      'case',
       'invitation',
       'member',
       'organization',
       'organization_settings',
+      'project',
       'rateLimit',
       'session',
       'user',
+      'valuation_run',
       'verification',
     ]);
     const all = await m.getMigrations();

@@ -1,0 +1,76 @@
+/**
+ * Cases: named scenarios of a project, each edited independently. Every save names the version
+ * it was based on; a save against a stale version changes nothing and reports a conflict, so
+ * two people editing one case never overwrite each other silently.
+ */
+import type { Database } from '../index';
+import type { Case } from '../types';
+
+export interface CaseContent {
+  name: string;
+  cashFlows: unknown;
+  settings: unknown;
+  options: unknown[];
+}
+
+export type CaseSave = { ok: true; row: Case } | { ok: false; reason: 'not_found' | 'conflict'; currentVersion?: number };
+
+export async function createCase(db: Database, args: { orgId: string; projectId: string; createdBy: string; content: CaseContent }): Promise<Case | undefined> {
+  const project = await db.selectFrom('project').select('id').where('organization_id', '=', args.orgId).where('id', '=', args.projectId).executeTakeFirst();
+  if (!project) return undefined;
+  return db
+    .insertInto('case')
+    .values({
+      organization_id: args.orgId,
+      project_id: project.id,
+      name: args.content.name,
+      cash_flows: JSON.stringify(args.content.cashFlows),
+      settings: JSON.stringify(args.content.settings),
+      options: JSON.stringify(args.content.options),
+      created_by: args.createdBy,
+    })
+    .returningAll()
+    .executeTakeFirstOrThrow();
+}
+
+export async function findCase(db: Database, { orgId, caseId }: { orgId: string; caseId: string }): Promise<Case | undefined> {
+  return db.selectFrom('case').selectAll().where('organization_id', '=', orgId).where('id', '=', caseId).executeTakeFirst();
+}
+
+export async function listCases(db: Database, { orgId, projectId }: { orgId: string; projectId: string }): Promise<Case[]> {
+  return db.selectFrom('case').selectAll().where('organization_id', '=', orgId).where('project_id', '=', projectId).orderBy('created_at').execute();
+}
+
+/** Saves new content if the case is still at `expectedVersion`, and moves it to the next version. */
+export async function saveCase(db: Database, args: { orgId: string; caseId: string; expectedVersion: number; content: CaseContent }): Promise<CaseSave> {
+  const row = await db
+    .updateTable('case')
+    .set((eb) => ({
+      name: args.content.name,
+      cash_flows: JSON.stringify(args.content.cashFlows),
+      settings: JSON.stringify(args.content.settings),
+      options: JSON.stringify(args.content.options),
+      version: eb('version', '+', 1),
+      updated_at: new Date(),
+    }))
+    .where('organization_id', '=', args.orgId)
+    .where('id', '=', args.caseId)
+    .where('version', '=', args.expectedVersion)
+    .returningAll()
+    .executeTakeFirst();
+  if (row) return { ok: true, row };
+  const current = await findCase(db, { orgId: args.orgId, caseId: args.caseId });
+  return current ? { ok: false, reason: 'conflict', currentVersion: current.version } : { ok: false, reason: 'not_found' };
+}
+
+/** A copy of a case, as a new case at version 1 under the same project. */
+export async function duplicateCase(db: Database, args: { orgId: string; caseId: string; name: string; createdBy: string }): Promise<Case | undefined> {
+  const source = await findCase(db, args);
+  if (!source) return undefined;
+  return createCase(db, {
+    orgId: args.orgId,
+    projectId: source.project_id,
+    createdBy: args.createdBy,
+    content: { name: args.name, cashFlows: source.cash_flows, settings: source.settings, options: source.options },
+  });
+}

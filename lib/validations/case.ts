@@ -1,0 +1,23 @@
+/** A case's inputs: its cash-flow schedule, valuation settings and option templates. */
+import { z } from 'zod';
+import { MAX_STEPS, optionTemplateSchema, treeKindSchema } from '@/lattice';
+import { cashFlowScheduleSchema } from '../cash-flows';
+
+export const caseSettingsSchema = z.object({
+  /** Annualised volatility of the project's value, as a fraction. */
+  volatility: z.number().gt(0, 'Volatility must be above 0 %.').max(3, 'Volatility must be at most 300 %.'),
+  /** Continuously compounded risk-free rate, as a fraction a year. */
+  riskFreeRate: z.number().gt(-0.05).lt(0.25),
+  steps: z.number().int().min(1).max(MAX_STEPS),
+  tree: treeKindSchema.default('crr'),
+});
+
+export const caseInputSchema = z.object({
+  name: z.string().trim().min(1, 'Give the case a name.').max(120),
+  cashFlows: cashFlowScheduleSchema,
+  settings: caseSettingsSchema,
+  options: z.array(optionTemplateSchema).max(12).default([]),
+});
+
+export type CaseSettings = z.infer<typeof caseSettingsSchema>;
+export type CaseInput = z.input<typeof caseInputSchema>;
