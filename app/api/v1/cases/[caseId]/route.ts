@@ -1,0 +1,65 @@
+// GET /api/v1/cases/{id} – one case; PATCH – save it (names the version it was based on: 409 if stale); DELETE – remove it
+import { NextResponse } from 'next/server';
+import { z } from 'zod';
+import { db } from '@/db';
+import { recordAudit } from '@/db/queries/audit';
+import { findCase, saveCase } from '@/db/queries/cases';
+import { withAuth } from '@/lib/api';
+import { presentCase } from '@/lib/case-response';
+import { AppError } from '@/lib/errors';
+import { caseInputSchema } from '@/lib/validations/case';
+
+export const dynamic = 'force-dynamic';
+
+type Params = { caseId: string };
+const missing = () => new AppError('not_found', 'No such case in your organisation.');
+const caseSaveSchema = caseInputSchema.extend({ version: z.number().int().min(1, 'Send the version the edit was based on.') });
+
+export const GET = withAuth<Params>(
+  async ({ member, params }) => {
+    const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
+    if (!found) throw missing();
+    return NextResponse.json({ case: presentCase(found) });
+  },
+  { permission: { case: ['read'] } },
+);
+
+export const PATCH = withAuth<Params, typeof caseSaveSchema>(
+  async ({ member, params, body }) => {
+    const { version, ...content } = body;
+    const saved = await saveCase(db, { orgId: member.orgId, caseId: params.caseId, expectedVersion: version, content });
+    if (!saved.ok && saved.reason === 'not_found') throw missing();
+    if (!saved.ok)
+      throw new AppError(
+        'conflict',
+        `This case was saved by someone else meanwhile (now version ${saved.currentVersion}); reload it and apply your change again. Nothing was overwritten.`,
+      );
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.update',
+      subjectType: 'case',
+      subjectId: saved.row.id,
+      detail: { version: saved.row.version },
+    });
+    return NextResponse.json({ case: presentCase(saved.row) });
+  },
+  { permission: { case: ['update'] }, body: caseSaveSchema },
+);
+
+export const DELETE = withAuth<Params>(
+  async ({ member, params }) => {
+    const gone = await db.deleteFrom('case').where('organization_id', '=', member.orgId).where('id', '=', params.caseId).returning('name').executeTakeFirst();
+    if (!gone) throw missing();
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.delete',
+      subjectType: 'case',
+      subjectId: params.caseId,
+      detail: { name: gone.name },
+    });
+    return new NextResponse(null, { status: 204 });
+  },
+  { permission: { case: ['delete'] } },
+);

@@ -1,0 +1,96 @@
+// POST /api/v1/cases/{id}/valuations – value the stored case and keep the run; GET – its runs, newest first
+import { createHash } from 'node:crypto';
+import { NextResponse } from 'next/server';
+import { db } from '@/db';
+import { recordAudit } from '@/db/queries/audit';
+import { findCase } from '@/db/queries/cases';
+import { listValuationRuns, recordValuationRun } from '@/db/queries/valuation-runs';
+import { withAuth } from '@/lib/api';
+import { caseToModel } from '@/lib/case-model';
+import { EngineRefusal, valueInWorker } from '@/lib/engine/pool';
+import { AppError } from '@/lib/errors';
+import type { CaseInput } from '@/lib/validations/case';
+
+export const dynamic = 'force-dynamic';
+export const runtime = 'nodejs';
+
+type Params = { caseId: string };
+const missing = () => new AppError('not_found', 'No such case in your organisation.');
+
+function summary(result: { value: number; staticNpv: number; expandedNpv: number; optionPremium: number }) {
+  return { value: result.value, staticNpv: result.staticNpv, expandedNpv: result.expandedNpv, optionPremium: result.optionPremium };
+}
+
+export const POST = withAuth<Params>(
+  async ({ member, params }) => {
+    const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
+    if (!stored) throw missing();
+    const { model, warnings } = caseToModel({
+      name: stored.name,
+      cashFlows: stored.cash_flows,
+      settings: stored.settings,
+      options: stored.options,
+    } as CaseInput);
+    let result;
+    try {
+      result = await valueInWorker(model);
+    } catch (error) {
+      if (error instanceof EngineRefusal) throw new AppError('unprocessable', `The case cannot be valued: ${error.issues[0]?.message}`);
+      throw error;
+    }
+    const inputHash = createHash('sha256').update(JSON.stringify(model)).digest('hex');
+    const run = await recordValuationRun(db, {
+      orgId: member.orgId,
+      caseId: stored.id,
+      caseVersion: stored.version,
+      input: model,
+      inputHash,
+      result,
+      engineVersion: result.engineVersion,
+      createdBy: member.userId,
+    });
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.value',
+      subjectType: 'case',
+      subjectId: stored.id,
+      detail: { run: run.id, ...summary(result) },
+    });
+    return NextResponse.json(
+      {
+        run: {
+          id: run.id,
+          caseVersion: run.case_version,
+          inputHash,
+          engineVersion: run.engine_version,
+          createdAt: run.created_at,
+          warnings,
+          input: model,
+          result,
+        },
+      },
+      { status: 201 },
+    );
+  },
+  { permission: { case: ['update'] } },
+);
+
+export const GET = withAuth<Params>(
+  async ({ member, params }) => {
+    if (!(await findCase(db, { orgId: member.orgId, caseId: params.caseId }))) throw missing();
+    const runs = await listValuationRuns(db, { orgId: member.orgId, caseId: params.caseId });
+    return NextResponse.json({
+      runs: runs.map((r) => ({
+        id: r.id,
+        caseVersion: r.case_version,
+        inputHash: r.input_hash,
+        engineVersion: r.engine_version,
+        createdAt: r.created_at,
+        createdBy: r.created_by_name,
+        ...summary(r.result as never),
+      })),
+    });
+  },
+  { permission: { case: ['read'] } },
+);

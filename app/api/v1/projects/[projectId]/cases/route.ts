@@ -1,0 +1,40 @@
+// GET /api/v1/projects/{id}/cases – a project's cases; POST – create a case
+import { NextResponse } from 'next/server';
+import { db } from '@/db';
+import { recordAudit } from '@/db/queries/audit';
+import { createCase, listCases } from '@/db/queries/cases';
+import { findProject } from '@/db/queries/projects';
+import { withAuth } from '@/lib/api';
+import { presentCase } from '@/lib/case-response';
+import { AppError } from '@/lib/errors';
+import { caseInputSchema } from '@/lib/validations/case';
+
+export const dynamic = 'force-dynamic';
+
+type Params = { projectId: string };
+
+export const GET = withAuth<Params>(
+  async ({ member, params }) => {
+    if (!(await findProject(db, { orgId: member.orgId, projectId: params.projectId })))
+      throw new AppError('not_found', 'No such project in your organisation.');
+    return NextResponse.json({ cases: (await listCases(db, { orgId: member.orgId, projectId: params.projectId })).map(presentCase) });
+  },
+  { permission: { case: ['read'] } },
+);
+
+export const POST = withAuth<Params, typeof caseInputSchema>(
+  async ({ member, params, body }) => {
+    const made = await createCase(db, { orgId: member.orgId, projectId: params.projectId, createdBy: member.userId, content: body });
+    if (!made) throw new AppError('not_found', 'No such project in your organisation.');
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.create',
+      subjectType: 'case',
+      subjectId: made.id,
+      detail: { name: body.name },
+    });
+    return NextResponse.json({ case: presentCase(made) }, { status: 201 });
+  },
+  { permission: { case: ['create'] }, body: caseInputSchema },
+);

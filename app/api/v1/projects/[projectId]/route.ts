@@ -1,0 +1,68 @@
+// GET /api/v1/projects/{id} – one project; PATCH – rename, describe or archive it; DELETE – remove it with its cases
+import { NextResponse } from 'next/server';
+import { db } from '@/db';
+import { recordAudit } from '@/db/queries/audit';
+import { findProject } from '@/db/queries/projects';
+import { withAuth } from '@/lib/api';
+import { presentProject } from '@/lib/case-response';
+import { AppError } from '@/lib/errors';
+import { projectUpdateSchema } from '@/lib/validations/project';
+
+export const dynamic = 'force-dynamic';
+
+type Params = { projectId: string };
+const missing = () => new AppError('not_found', 'No such project in your organisation.');
+
+export const GET = withAuth<Params>(
+  async ({ member, params }) => {
+    const project = await findProject(db, { orgId: member.orgId, projectId: params.projectId });
+    if (!project) throw missing();
+    return NextResponse.json({ project: presentProject(project) });
+  },
+  { permission: { project: ['read'] } },
+);
+
+export const PATCH = withAuth<Params, typeof projectUpdateSchema>(
+  async ({ member, params, body }) => {
+    const project = await db
+      .updateTable('project')
+      .set({ ...body, updated_at: new Date() })
+      .where('organization_id', '=', member.orgId)
+      .where('id', '=', params.projectId)
+      .returningAll()
+      .executeTakeFirst();
+    if (!project) throw missing();
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'project.update',
+      subjectType: 'project',
+      subjectId: project.id,
+      detail: body,
+    });
+    return NextResponse.json({ project: presentProject(project) });
+  },
+  { permission: { project: ['update'] }, body: projectUpdateSchema },
+);
+
+export const DELETE = withAuth<Params>(
+  async ({ member, params }) => {
+    const gone = await db
+      .deleteFrom('project')
+      .where('organization_id', '=', member.orgId)
+      .where('id', '=', params.projectId)
+      .returning('name')
+      .executeTakeFirst();
+    if (!gone) throw missing();
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'project.delete',
+      subjectType: 'project',
+      subjectId: params.projectId,
+      detail: { name: gone.name },
+    });
+    return new NextResponse(null, { status: 204 });
+  },
+  { permission: { project: ['delete'] } },
+);

@@ -1,0 +1,32 @@
+// GET /api/v1/projects – the organisation's projects; POST – create one (analysts, admins)
+import { NextResponse } from 'next/server';
+import { db } from '@/db';
+import { recordAudit } from '@/db/queries/audit';
+import { createProject, listProjects } from '@/db/queries/projects';
+import { findSettings } from '@/db/queries/settings';
+import { withAuth } from '@/lib/api';
+import { presentProject } from '@/lib/case-response';
+import { projectCreateSchema } from '@/lib/validations/project';
+
+export const dynamic = 'force-dynamic';
+
+export const GET = withAuth(async ({ member }) => NextResponse.json({ projects: (await listProjects(db, { orgId: member.orgId })).map(presentProject) }), {
+  permission: { project: ['read'] },
+});
+
+export const POST = withAuth(
+  async ({ member, body }) => {
+    const currency = body.currency ?? (await findSettings(db, { orgId: member.orgId })).currency;
+    const project = await createProject(db, { orgId: member.orgId, ownerId: member.userId, name: body.name, description: body.description, currency });
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'project.create',
+      subjectType: 'project',
+      subjectId: project.id,
+      detail: { name: body.name },
+    });
+    return NextResponse.json({ project: presentProject(project) }, { status: 201 });
+  },
+  { permission: { project: ['create'] }, body: projectCreateSchema },
+);

@@ -1,0 +1,42 @@
+/** Stored valuation runs: the exact engine input, its hash, the result and who ran it. */
+import type { Database } from '../index';
+import type { ValuationRun } from '../types';
+
+export async function recordValuationRun(
+  db: Database,
+  args: { orgId: string; caseId: string; caseVersion: number; input: unknown; inputHash: string; result: unknown; engineVersion: string; createdBy: string },
+): Promise<ValuationRun> {
+  return db
+    .insertInto('valuation_run')
+    .values({
+      organization_id: args.orgId,
+      case_id: args.caseId,
+      case_version: args.caseVersion,
+      input: JSON.stringify(args.input),
+      input_hash: args.inputHash,
+      result: JSON.stringify(args.result),
+      engine_version: args.engineVersion,
+      created_by: args.createdBy,
+    })
+    .returningAll()
+    .executeTakeFirstOrThrow();
+}
+
+export async function listValuationRuns(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
+  return db
+    .selectFrom('valuation_run')
+    .leftJoin('user', 'user.id', 'valuation_run.created_by')
+    .select([
+      'valuation_run.id',
+      'valuation_run.case_version',
+      'valuation_run.input_hash',
+      'valuation_run.engine_version',
+      'valuation_run.created_at',
+      'valuation_run.result',
+      'user.name as created_by_name',
+    ])
+    .where('valuation_run.organization_id', '=', orgId)
+    .where('valuation_run.case_id', '=', caseId)
+    .orderBy('valuation_run.created_at', 'desc')
+    .execute();
+}

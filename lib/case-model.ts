@@ -1,0 +1,31 @@
+/**
+ * Builds the engine's model from a stored case: V0, the payout schedule and the investment
+ * come from the cash-flow schedule (lib/cash-flows.ts); volatility, rate, steps and tree from
+ * the case's settings; the rights from its option templates. The horizon is the schedule's
+ * last year (the value beyond it is carried by V, ENGINE.md §2).
+ */
+import type { ProjectModel } from '@/lattice';
+import { analyseCashFlows } from './cash-flows';
+import { AppError } from './errors';
+import { caseInputSchema, type CaseInput } from './validations/case';
+
+export function caseToModel(input: CaseInput): { model: ProjectModel; warnings: string[] } {
+  const parsed = caseInputSchema.parse(input);
+  const analysis = analyseCashFlows(parsed.cashFlows);
+  if (!(analysis.underlyingValue > 0))
+    throw new AppError('unprocessable', 'The operating cash flows are worth nothing or less (V0 ≤ 0), so there is no project value to put on a lattice.', {
+      cashFlows: ['V0 must be positive.'],
+    });
+  const horizon = Math.max(1, parsed.cashFlows.rows.at(-1)!.year);
+  const carriesOutlay = parsed.options.some((o) => o.type === 'defer' || o.type === 'stage');
+  const model: ProjectModel = {
+    underlying: { value: analysis.underlyingValue, volatility: parsed.settings.volatility, payouts: analysis.payouts.filter((p) => p.at < horizon) },
+    riskFreeRate: parsed.settings.riskFreeRate,
+    horizon,
+    steps: parsed.settings.steps,
+    tree: parsed.settings.tree,
+    ...(carriesOutlay ? {} : { investment: analysis.investment }),
+    options: parsed.options,
+  };
+  return { model, warnings: analysis.warnings };
+}

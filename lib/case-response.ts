@@ -1,0 +1,30 @@
+/** How projects and cases appear in the API. */
+import type { Case, Project } from '@/db/types';
+
+export function presentProject(p: Project) {
+  return {
+    id: p.id,
+    name: p.name,
+    description: p.description,
+    currency: p.currency,
+    status: p.status,
+    ownerId: p.owner_id,
+    createdAt: p.created_at,
+    updatedAt: p.updated_at,
+  };
+}
+
+export function presentCase(c: Case) {
+  return {
+    id: c.id,
+    projectId: c.project_id,
+    name: c.name,
+    version: c.version,
+    status: c.status,
+    cashFlows: c.cash_flows,
+    settings: c.settings,
+    options: c.options,
+    createdAt: c.created_at,
+    updatedAt: c.updated_at,
+  };
+}
