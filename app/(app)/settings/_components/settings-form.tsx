@@ -41,15 +41,16 @@ const resolver: Resolver<SettingsFields> = async (values) => {
 
 export function SettingsForm({ initial }: { initial: SettingsInput }) {
   const toast = useToast();
-  const form = useForm<SettingsFields>({
-    resolver,
-    defaultValues: {
-      currency: initial.currency,
-      riskFreeRate: (initial.riskFreeRate * 100).toFixed(2),
-      wacc: (initial.wacc * 100).toFixed(2),
-      fiscalYearStartMonth: String(initial.fiscalYearStartMonth),
-    },
-  });
+  const defaults: SettingsFields = {
+    currency: initial.currency,
+    riskFreeRate: (initial.riskFreeRate * 100).toFixed(2),
+    wacc: (initial.wacc * 100).toFixed(2),
+    fiscalYearStartMonth: String(initial.fiscalYearStartMonth),
+  };
+  const form = useForm<SettingsFields>({ resolver, defaultValues: defaults });
+  // register() fills uncontrolled fields only after hydration; defaultValue puts the saved
+  // figures in the server-rendered HTML, so nobody sees (or types into) empty fields first.
+  const field = (name: keyof SettingsFields) => ({ defaultValue: defaults[name], ...form.register(name) });
   const { errors, isSubmitting } = form.formState;
   const onSubmit = form.handleSubmit(async (fields) => {
     const result = await updateSettingsAction(toInput(fields));
@@ -59,12 +60,12 @@ export function SettingsForm({ initial }: { initial: SettingsInput }) {
   });
   return (
     <form onSubmit={onSubmit} noValidate className="grid max-w-xl gap-5 sm:grid-cols-2">
-      <Input label="Currency" hint="ISO 4217 code, e.g. EUR" maxLength={3} error={errors.currency?.message} {...form.register('currency')} />
+      <Input label="Currency" hint="ISO 4217 code, e.g. EUR" maxLength={3} error={errors.currency?.message} {...field('currency')} />
       <Select
         label="Fiscal year starts in"
         options={monthNames.map((m, k) => ({ value: String(k + 1), label: m }))}
         error={errors.fiscalYearStartMonth?.message}
-        {...form.register('fiscalYearStartMonth')}
+        {...field('fiscalYearStartMonth')}
       />
       <Input
         label="Risk-free rate (% a year)"
@@ -73,7 +74,7 @@ export function SettingsForm({ initial }: { initial: SettingsInput }) {
         inputMode="decimal"
         hint="Continuously compounded; used by the lattice"
         error={errors.riskFreeRate?.message}
-        {...form.register('riskFreeRate')}
+        {...field('riskFreeRate')}
       />
       <Input
         label="WACC (% a year)"
@@ -82,7 +83,7 @@ export function SettingsForm({ initial }: { initial: SettingsInput }) {
         inputMode="decimal"
         hint="Default discount rate for cash flows"
         error={errors.wacc?.message}
-        {...form.register('wacc')}
+        {...field('wacc')}
       />
       <div className="sm:col-span-2">
         <Button type="submit" busy={isSubmitting}>

@@ -33,7 +33,7 @@ export function SignUpForm({ email, invitation }: { email: string; invitation?: 
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 flex flex-col gap-4">
       <Input label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
-      <Input label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
+      <Input label="E-mail" type="email" autoComplete="email" error={errors.email?.message} defaultValue={email} {...form.register('email')} />
       <Input
         label="Password"
         type="password"
