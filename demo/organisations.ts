@@ -12,6 +12,8 @@ export interface DemoOrganisation {
   slug: string;
   settings: { currency: string; riskFreeRate: number; wacc: number; fiscalYearStartMonth: number };
   users: { email: string; name: string; role: RoleName }[];
+  /** The member who builds and values the invented portfolio (demo/portfolio.ts), if the organisation has one. */
+  portfolioBy?: string;
 }
 
 export const demoOrganisations: DemoOrganisation[] = [
@@ -25,6 +27,7 @@ export const demoOrganisations: DemoOrganisation[] = [
       { email: 'reviewer@kestrelbay.example', name: 'Tomasz Okafor', role: 'reviewer' },
       { email: 'executive@kestrelbay.example', name: 'Helen Marsh', role: 'viewer' },
     ],
+    portfolioBy: 'analyst@kestrelbay.example',
   },
   {
     name: 'Harrow Fen Logistics',

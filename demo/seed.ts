@@ -7,6 +7,7 @@ import { randomUUID } from 'node:crypto';
 import { db } from '@/db';
 import { auth } from '@/lib/auth';
 import { DEMO_PASSWORD, demoOrganisations } from './organisations';
+import { seedPortfolio } from './seed-portfolio';
 
 export async function seedDemo(): Promise<{ created: string[] }> {
   const ctx = await auth.$context;
@@ -51,6 +52,10 @@ export async function seedDemo(): Promise<{ created: string[] }> {
           .insertInto('member')
           .values({ id: randomUUID(), organizationId: orgRow.id, userId: user.id, role: person.role, createdAt: new Date() })
           .execute();
+    }
+    if (org.portfolioBy) {
+      const builder = await db.selectFrom('user').select('id').where('email', '=', org.portfolioBy).executeTakeFirstOrThrow();
+      created.push(...(await seedPortfolio({ orgId: orgRow.id, analystId: builder.id, currency: org.settings.currency })));
     }
   }
   return { created };

@@ -1,6 +1,7 @@
-/** The demo seed creates the invented organisations once, with the right roles, and is idempotent. */
+/** The demo seed creates the invented organisations and portfolio once, with the right roles, and is idempotent. */
 import { describe, expect, it } from 'vitest';
 import { db } from '@/db';
+import { demoPortfolio } from '@/demo/portfolio';
 import { seedDemo } from '@/demo/seed';
 
 describe('demo seed', () => {
@@ -22,5 +23,31 @@ describe('demo seed', () => {
       { email: 'owner@harrowfen.example', role: 'admin', name: 'Harrow Fen Logistics', emailVerified: true },
       { email: 'reviewer@kestrelbay.example', role: 'reviewer', name: 'Kestrel Bay Materials', emailVerified: true },
     ]);
+  });
+
+  it('gives Kestrel Bay the four invented projects, each with two valued cases, and Harrow Fen none of them', async () => {
+    const names = demoPortfolio.map((p) => p.name);
+    const projects = await db
+      .selectFrom('project')
+      .innerJoin('organization', 'organization.id', 'project.organization_id')
+      .select(['project.id', 'project.name', 'organization.slug'])
+      .where('project.name', 'in', names)
+      .orderBy('project.name')
+      .execute();
+    expect(projects.map((p) => [p.name, p.slug])).toEqual(
+      ['Cold-storage hub', 'Older extrusion line', 'Phased bio-resin plant', 'Staged pilot line'].map((name) => [name, 'kestrel-bay-materials']),
+    );
+    const cases = await db
+      .selectFrom('case')
+      .leftJoin('valuation_run', 'valuation_run.case_id', 'case.id')
+      .select((eb) => ['case.id', eb.fn.count<string>('valuation_run.id').as('runs')])
+      .where(
+        'case.project_id',
+        'in',
+        projects.map((p) => p.id),
+      )
+      .groupBy('case.id')
+      .execute();
+    expect(cases.map((c) => Number(c.runs))).toEqual([1, 1, 1, 1, 1, 1, 1, 1]);
   });
 });

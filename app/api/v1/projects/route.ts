@@ -1,16 +1,17 @@
-// GET /api/v1/projects – the organisation's projects; POST – create one (analysts, admins)
+// GET /api/v1/projects – the organisation's projects with their latest valuation; POST – create one (analysts, admins)
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
-import { createProject, listProjects } from '@/db/queries/projects';
+import { createProject } from '@/db/queries/projects';
 import { findSettings } from '@/db/queries/settings';
+import { listProjectSummaries } from '@/db/queries/summaries';
 import { withAuth } from '@/lib/api';
 import { presentProject } from '@/lib/case-response';
 import { projectCreateSchema } from '@/lib/validations/project';
 
 export const dynamic = 'force-dynamic';
 
-export const GET = withAuth(async ({ member }) => NextResponse.json({ projects: (await listProjects(db, { orgId: member.orgId })).map(presentProject) }), {
+export const GET = withAuth(async ({ member }) => NextResponse.json({ projects: await listProjectSummaries(db, { orgId: member.orgId }) }), {
   permission: { project: ['read'] },
 });
 

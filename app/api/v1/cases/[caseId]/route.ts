@@ -40,7 +40,7 @@ export const PATCH = withAuth<Params, typeof caseSaveSchema>(
       action: 'case.update',
       subjectType: 'case',
       subjectId: saved.row.id,
-      detail: { version: saved.row.version },
+      detail: { version: saved.row.version, name: saved.row.name },
     });
     return NextResponse.json({ case: presentCase(saved.row) });
   },
@@ -49,7 +49,12 @@ export const PATCH = withAuth<Params, typeof caseSaveSchema>(
 
 export const DELETE = withAuth<Params>(
   async ({ member, params }) => {
-    const gone = await db.deleteFrom('case').where('organization_id', '=', member.orgId).where('id', '=', params.caseId).returning('name').executeTakeFirst();
+    const gone = await db
+      .deleteFrom('case')
+      .where('organization_id', '=', member.orgId)
+      .where('id', '=', params.caseId)
+      .returning(['name', 'project_id'])
+      .executeTakeFirst();
     if (!gone) throw missing();
     await recordAudit(db, {
       orgId: member.orgId,
@@ -57,7 +62,7 @@ export const DELETE = withAuth<Params>(
       action: 'case.delete',
       subjectType: 'case',
       subjectId: params.caseId,
-      detail: { name: gone.name },
+      detail: { name: gone.name, projectId: gone.project_id },
     });
     return new NextResponse(null, { status: 204 });
   },

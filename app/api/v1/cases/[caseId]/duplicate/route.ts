@@ -22,7 +22,7 @@ export const POST = withAuth<{ caseId: string }, typeof duplicateSchema>(
       action: 'case.duplicate',
       subjectType: 'case',
       subjectId: copy.id,
-      detail: { from: params.caseId },
+      detail: { from: params.caseId, name: copy.name, projectId: copy.project_id },
     });
     return NextResponse.json({ case: presentCase(copy) }, { status: 201 });
   },

@@ -1,5 +1,4 @@
 // POST /api/v1/cases/{id}/valuations – value the stored case and keep the run; GET – its runs, newest first
-import { createHash } from 'node:crypto';
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
@@ -9,6 +8,7 @@ import { withAuth } from '@/lib/api';
 import { caseToModel } from '@/lib/case-model';
 import { EngineRefusal, valueInWorker } from '@/lib/engine/pool';
 import { AppError } from '@/lib/errors';
+import { hashModel } from '@/lib/model-hash';
 import type { CaseInput } from '@/lib/validations/case';
 
 export const dynamic = 'force-dynamic';
@@ -38,7 +38,7 @@ export const POST = withAuth<Params>(
       if (error instanceof EngineRefusal) throw new AppError('unprocessable', `The case cannot be valued: ${error.issues[0]?.message}`);
       throw error;
     }
-    const inputHash = createHash('sha256').update(JSON.stringify(model)).digest('hex');
+    const inputHash = hashModel(model);
     const run = await recordValuationRun(db, {
       orgId: member.orgId,
       caseId: stored.id,

@@ -1,9 +1,10 @@
-// GET /api/v1/projects/{id}/cases – a project's cases; POST – create a case
+// GET /api/v1/projects/{id}/cases – a project's cases, each with its latest valuation; POST – create a case
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { createCase, listCases } from '@/db/queries/cases';
 import { findProject } from '@/db/queries/projects';
+import { latestRunByCase } from '@/db/queries/summaries';
 import { withAuth } from '@/lib/api';
 import { presentCase } from '@/lib/case-response';
 import { AppError } from '@/lib/errors';
@@ -17,7 +18,9 @@ export const GET = withAuth<Params>(
   async ({ member, params }) => {
     if (!(await findProject(db, { orgId: member.orgId, projectId: params.projectId })))
       throw new AppError('not_found', 'No such project in your organisation.');
-    return NextResponse.json({ cases: (await listCases(db, { orgId: member.orgId, projectId: params.projectId })).map(presentCase) });
+    const scope = { orgId: member.orgId, projectId: params.projectId };
+    const [cases, latest] = await Promise.all([listCases(db, scope), latestRunByCase(db, scope)]);
+    return NextResponse.json({ cases: cases.map((c) => ({ ...presentCase(c), latest: latest.get(c.id) ?? null })) });
   },
   { permission: { case: ['read'] } },
 );
@@ -32,7 +35,7 @@ export const POST = withAuth<Params, typeof caseInputSchema>(
       action: 'case.create',
       subjectType: 'case',
       subjectId: made.id,
-      detail: { name: body.name },
+      detail: { name: body.name, projectId: params.projectId },
     });
     return NextResponse.json({ case: presentCase(made) }, { status: 201 });
   },

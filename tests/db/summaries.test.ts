@@ -1,0 +1,85 @@
+/**
+ * The portfolio and project read models: a project's headline is its most recently valued
+ * case's latest run, read from the stored result; activity covers the project and its cases,
+ * and nothing of another organisation shows up.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { db } from '@/db';
+import { recordAudit } from '@/db/queries/audit';
+import { createCase } from '@/db/queries/cases';
+import { createProject } from '@/db/queries/projects';
+import { latestRunByCase, listProjectActivity, listProjectSummaries } from '@/db/queries/summaries';
+import { recordValuationRun } from '@/db/queries/valuation-runs';
+import { seedDemo } from '@/demo/seed';
+
+let kestrel = '';
+let harrow = '';
+let analyst = '';
+
+const content = {
+  name: 'Base',
+  cashFlows: { wacc: 0.08, rows: [{ year: 0, revenue: 10, operatingCost: 0, capex: 0, tax: 0, workingCapital: 0 }] },
+  settings: { volatility: 0.3, riskFreeRate: 0.03, steps: 10 },
+  options: [],
+};
+
+function run(caseId: string, expandedNpv: number) {
+  return recordValuationRun(db, {
+    orgId: kestrel,
+    caseId,
+    caseVersion: 1,
+    input: {},
+    inputHash: 'x',
+    result: { value: expandedNpv, staticNpv: 1, expandedNpv, optionPremium: expandedNpv - 1 },
+    engineVersion: 'test',
+    createdBy: analyst,
+  });
+}
+
+beforeAll(async () => {
+  await seedDemo();
+  kestrel = (await db.selectFrom('organization').select('id').where('slug', '=', 'kestrel-bay-materials').executeTakeFirstOrThrow()).id;
+  harrow = (await db.selectFrom('organization').select('id').where('slug', '=', 'harrow-fen-logistics').executeTakeFirstOrThrow()).id;
+  analyst = (await db.selectFrom('user').select('id').where('email', '=', 'analyst@kestrelbay.example').executeTakeFirstOrThrow()).id;
+});
+
+describe('project summaries', () => {
+  it("take the latest run of the most recently valued case, and count the project's cases", async () => {
+    const project = await createProject(db, { orgId: kestrel, ownerId: analyst, name: 'Summary plant', currency: 'EUR' });
+    const a = (await createCase(db, { orgId: kestrel, projectId: project.id, createdBy: analyst, content }))!;
+    const b = (await createCase(db, { orgId: kestrel, projectId: project.id, createdBy: analyst, content: { ...content, name: 'Copy' } }))!;
+    await run(a.id, 10);
+    await run(a.id, 11);
+    await run(b.id, 7);
+    const summary = (await listProjectSummaries(db, { orgId: kestrel })).find((p) => p.id === project.id)!;
+    expect(summary.caseCount).toBe(2);
+    expect(summary.ownerName).toBe('Priya Lindqvist');
+    expect(summary.latest).toMatchObject({ caseId: b.id, caseName: 'Copy', expandedNpv: 7, optionPremium: 6, staticNpv: 1 });
+    const byCase = await latestRunByCase(db, { orgId: kestrel, projectId: project.id });
+    expect(byCase.get(a.id)?.expandedNpv).toBe(11);
+    expect(byCase.get(b.id)?.expandedNpv).toBe(7);
+    expect((await listProjectSummaries(db, { orgId: harrow })).map((p) => p.id)).not.toContain(project.id);
+  });
+
+  it('a project never valued has no headline', async () => {
+    const project = await createProject(db, { orgId: kestrel, ownerId: analyst, name: 'Unvalued plant', currency: 'EUR' });
+    const summary = (await listProjectSummaries(db, { orgId: kestrel })).find((p) => p.id === project.id)!;
+    expect(summary).toMatchObject({ caseCount: 0, latest: null });
+  });
+});
+
+describe('project activity', () => {
+  it("lists the project's and its cases' entries (a deleted case's too), not other projects'", async () => {
+    const project = await createProject(db, { orgId: kestrel, ownerId: analyst, name: 'Activity plant', currency: 'EUR' });
+    const other = await createProject(db, { orgId: kestrel, ownerId: analyst, name: 'Other plant', currency: 'EUR' });
+    const c = (await createCase(db, { orgId: kestrel, projectId: project.id, createdBy: analyst, content }))!;
+    const base = { orgId: kestrel, actorId: analyst };
+    await recordAudit(db, { ...base, action: 'project.create', subjectType: 'project', subjectId: project.id });
+    await recordAudit(db, { ...base, action: 'case.update', subjectType: 'case', subjectId: c.id });
+    await recordAudit(db, { ...base, action: 'case.delete', subjectType: 'case', subjectId: 'gone', detail: { projectId: project.id } });
+    await recordAudit(db, { ...base, action: 'project.create', subjectType: 'project', subjectId: other.id });
+    await recordAudit(db, { orgId: harrow, actorId: null, action: 'project.update', subjectType: 'project', subjectId: project.id });
+    const actions = (await listProjectActivity(db, { orgId: kestrel, projectId: project.id })).map((e) => `${e.action}:${e.subject_id}`);
+    expect(actions).toEqual([`case.delete:gone`, `case.update:${c.id}`, `project.create:${project.id}`]);
+  });
+});
