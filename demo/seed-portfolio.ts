@@ -48,7 +48,14 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; cu
         action: 'case.value',
         subjectType: 'case',
         subjectId: made.id,
-        detail: { run: run.id, value: result.value, staticNpv: result.staticNpv, expandedNpv: result.expandedNpv, optionPremium: result.optionPremium },
+        detail: {
+          run: run.id,
+          name: input.name,
+          value: result.value,
+          staticNpv: result.staticNpv,
+          expandedNpv: result.expandedNpv,
+          optionPremium: result.optionPremium,
+        },
       });
     }
     created.push(demo.name);

@@ -23,7 +23,7 @@ export function Th({ numeric, className = '', ...rest }: ThHTMLAttributes<HTMLTa
 }
 
 export function Td({ numeric, className = '', ...rest }: TdHTMLAttributes<HTMLTableCellElement> & { numeric?: boolean }) {
-  return <td className={`border-b border-line px-4 py-2 align-middle ${numeric ? 'figures text-right' : ''} ${className}`} {...rest} />;
+  return <td className={`border-b border-line px-4 py-2 align-middle ${numeric ? 'figures whitespace-nowrap text-right' : ''} ${className}`} {...rest} />;
 }
 
 export function Tr(props: HTMLAttributes<HTMLTableRowElement>) {

@@ -29,6 +29,7 @@ function latestRuns(db: Database, orgId: string, projectId?: string) {
       'valuation_run.case_id as caseId',
       'case.name as caseName',
       'case.project_id as projectId',
+      'case.created_at as caseCreatedAt',
       'valuation_run.created_at as valuedAt',
       figure('staticNpv').as('staticNpv'),
       figure('optionPremium').as('optionPremium'),
@@ -50,7 +51,7 @@ export interface ProjectSummary {
   ownerName: string | null;
   caseCount: number;
   updatedAt: Date;
-  /** The most recently valued case's latest run, or null when no case has been valued. */
+  /** The latest run of the project's first valued case (its base case), or null when no case has been valued. */
   latest: Headline | null;
 }
 
@@ -77,7 +78,8 @@ export async function listProjectSummaries(db: Database, { orgId }: { orgId: str
     .execute();
   const runs = await latestRuns(db, orgId);
   return projects.map((p) => {
-    const mine = runs.filter((r) => r.projectId === p.id).sort((a, b) => +b.valuedAt - +a.valuedAt);
+    // The base case speaks for the project: scenarios are read on the project's own page.
+    const mine = runs.filter((r) => r.projectId === p.id).sort((a, b) => +a.caseCreatedAt - +b.caseCreatedAt);
     const latest = mine[0] ? toHeadline(mine[0]) : null;
     return {
       id: p.id,

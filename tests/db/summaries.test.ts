@@ -44,7 +44,7 @@ beforeAll(async () => {
 });
 
 describe('project summaries', () => {
-  it("take the latest run of the most recently valued case, and count the project's cases", async () => {
+  it("take the latest run of the first valued case (the base case), and count the project's cases", async () => {
     const project = await createProject(db, { orgId: kestrel, ownerId: analyst, name: 'Summary plant', currency: 'EUR' });
     const a = (await createCase(db, { orgId: kestrel, projectId: project.id, createdBy: analyst, content }))!;
     const b = (await createCase(db, { orgId: kestrel, projectId: project.id, createdBy: analyst, content: { ...content, name: 'Copy' } }))!;
@@ -54,7 +54,7 @@ describe('project summaries', () => {
     const summary = (await listProjectSummaries(db, { orgId: kestrel })).find((p) => p.id === project.id)!;
     expect(summary.caseCount).toBe(2);
     expect(summary.ownerName).toBe('Priya Lindqvist');
-    expect(summary.latest).toMatchObject({ caseId: b.id, caseName: 'Copy', expandedNpv: 7, optionPremium: 6, staticNpv: 1 });
+    expect(summary.latest).toMatchObject({ caseId: a.id, caseName: 'Base', expandedNpv: 11, optionPremium: 10, staticNpv: 1 });
     const byCase = await latestRunByCase(db, { orgId: kestrel, projectId: project.id });
     expect(byCase.get(a.id)?.expandedNpv).toBe(11);
     expect(byCase.get(b.id)?.expandedNpv).toBe(7);

@@ -1,9 +1,10 @@
 import type { Metadata } from 'next';
-import { EmptyState } from '@/components/empty-state';
 import { Forbidden } from '@/components/forbidden';
 import { PageHeader } from '@/components/page-header';
 import { ValuationCaution } from '@/components/valuation-caution';
 import { guardPage } from '@/lib/page-guard';
+import { roleAllows } from '@/lib/permissions';
+import { PortfolioView } from './_components/portfolio-view';
 
 export const metadata: Metadata = { title: 'Portfolio' };
 
@@ -13,9 +14,7 @@ export default async function PortfolioPage() {
   return (
     <>
       <PageHeader title="Portfolio" lead={`Static and expanded NPV of the projects at ${member.orgName}, side by side.`} />
-      <EmptyState title="No projects have been valued yet">
-        When analysts value a project, it appears here with its static NPV, option premium and expanded NPV.
-      </EmptyState>
+      <PortfolioView canCreate={roleAllows(member.role, { project: ['create'] })} />
       <div className="mt-8">
         <ValuationCaution />
       </div>

@@ -1,18 +1,28 @@
 import type { Metadata } from 'next';
-import { EmptyState } from '@/components/empty-state';
 import { Forbidden } from '@/components/forbidden';
 import { PageHeader } from '@/components/page-header';
+import { db } from '@/db';
+import { findSettings } from '@/db/queries/settings';
 import { guardPage } from '@/lib/page-guard';
+import { roleAllows } from '@/lib/permissions';
+import { NewProjectButton } from './_components/new-project-button';
+import { ProjectList } from './_components/project-list';
 
 export const metadata: Metadata = { title: 'Projects' };
 
 export default async function ProjectsPage() {
   const member = await guardPage({ project: ['read'] });
   if (member === 'forbidden') return <Forbidden />;
+  const canCreate = roleAllows(member.role, { project: ['create'] });
+  const currency = canCreate ? (await findSettings(db, { orgId: member.orgId })).currency : '';
   return (
     <>
-      <PageHeader title="Projects" lead="Each project holds its cases: cash flows, uncertainty and the flexibility management has." />
-      <EmptyState title="No projects yet">Projects created by your analysts will be listed here.</EmptyState>
+      <PageHeader
+        title="Projects"
+        lead="Each project holds its cases: cash flows, uncertainty and the flexibility management has."
+        actions={canCreate ? <NewProjectButton defaultCurrency={currency} /> : null}
+      />
+      <ProjectList canCreate={canCreate} />
     </>
   );
 }

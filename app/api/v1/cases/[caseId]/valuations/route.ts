@@ -55,7 +55,7 @@ export const POST = withAuth<Params>(
       action: 'case.value',
       subjectType: 'case',
       subjectId: stored.id,
-      detail: { run: run.id, ...summary(result) },
+      detail: { run: run.id, name: stored.name, ...summary(result) },
     });
     return NextResponse.json(
       {

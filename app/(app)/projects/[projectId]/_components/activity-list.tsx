@@ -1,0 +1,56 @@
+'use client';
+
+import useSWR from 'swr';
+import { LoadError, LoadingBlock } from '@/components/load-state';
+import { getJson } from '@/lib/api-client';
+import { formatDateTime, formatMoney } from '@/lib/format';
+
+interface Entry {
+  id: string;
+  action: string;
+  detail: Record<string, unknown>;
+  actor: string | null;
+  at: string;
+}
+
+/** One audit entry in words a reader of the project page understands. */
+function describe(e: Entry, currency: string): string {
+  const name = typeof e.detail.name === 'string' ? `“${e.detail.name}”` : 'a case';
+  switch (e.action) {
+    case 'project.create':
+      return 'created the project';
+    case 'project.update':
+      return 'changed the project';
+    case 'case.create':
+      return `created the case ${name}`;
+    case 'case.update':
+      return `saved ${name} (version ${String(e.detail.version ?? '?')})`;
+    case 'case.duplicate':
+      return `duplicated a case as ${name}`;
+    case 'case.delete':
+      return `deleted the case ${name}`;
+    case 'case.value':
+      return `valued ${name}: expanded NPV ${formatMoney(Number(e.detail.expandedNpv), currency)}`;
+    default:
+      return e.action;
+  }
+}
+
+export function ActivityList({ projectId, currency }: { projectId: string; currency: string }) {
+  const { data, error, isLoading, mutate } = useSWR<{ activity: Entry[] }>(`/api/v1/projects/${projectId}/activity`, getJson);
+  if (isLoading) return <LoadingBlock label="Loading activity" lines={3} />;
+  if (error || !data) return <LoadError message={error?.message ?? 'No answer from the server.'} onRetry={() => mutate()} />;
+  if (data.activity.length === 0) return <p className="text-ink-soft">Nothing has happened here yet.</p>;
+  return (
+    <ol className="flex flex-col gap-3">
+      {data.activity.map((e) => (
+        <li key={e.id} className="border-l-2 border-line pl-3">
+          <p className="text-body">
+            <span className="font-medium">{e.actor ?? 'Someone'}</span> {describe(e, currency)}
+          </p>
+          <p className="text-caption text-ink-muted">{formatDateTime(e.at)}</p>
+        </li>
+      ))}
+    </ol>
+  );
+}

@@ -1,0 +1,57 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { Forbidden } from '@/components/forbidden';
+import { PageHeader } from '@/components/page-header';
+import { ValuationCaution } from '@/components/valuation-caution';
+import { db } from '@/db';
+import { findProject } from '@/db/queries/projects';
+import { findSettings } from '@/db/queries/settings';
+import { guardPage } from '@/lib/page-guard';
+import { roleAllows } from '@/lib/permissions';
+import { ActivityList } from './_components/activity-list';
+import { CaseTable } from './_components/case-table';
+
+export const metadata: Metadata = { title: 'Project' };
+
+export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
+  const member = await guardPage({ project: ['read'] });
+  if (member === 'forbidden') return <Forbidden />;
+  const { projectId } = await params;
+  const project = await findProject(db, { orgId: member.orgId, projectId });
+  if (!project) notFound();
+  const settings = await findSettings(db, { orgId: member.orgId });
+  return (
+    <>
+      <nav aria-label="Breadcrumb" className="mb-2 text-caption text-ink-muted">
+        <Link href="/projects" className="hover:underline">
+          Projects
+        </Link>{' '}
+        / {project.name}
+      </nav>
+      <PageHeader title={project.name} lead={project.description || undefined} />
+      <div className="grid gap-8 xl:grid-cols-[minmax(0,1fr)_20rem]">
+        <section aria-labelledby="cases-heading">
+          <h2 id="cases-heading" className="mb-3">
+            Cases
+          </h2>
+          <CaseTable
+            projectId={project.id}
+            currency={project.currency}
+            canEdit={roleAllows(member.role, { case: ['create', 'delete'] })}
+            defaults={{ wacc: settings.wacc, riskFreeRate: settings.risk_free_rate }}
+          />
+          <div className="mt-6">
+            <ValuationCaution />
+          </div>
+        </section>
+        <section aria-labelledby="activity-heading">
+          <h2 id="activity-heading" className="mb-3">
+            Activity
+          </h2>
+          <ActivityList projectId={project.id} currency={project.currency} />
+        </section>
+      </div>
+    </>
+  );
+}

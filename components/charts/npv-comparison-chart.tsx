@@ -1,0 +1,62 @@
+'use client';
+
+import { layoutNpvComparison, type NpvPair } from '@/lib/charts/npv-comparison';
+import { formatMoney } from '@/lib/format';
+import { useWidth } from './use-width';
+
+/**
+ * NPV without flexibility (hollow ring) and with it (filled dot), one row per project or case;
+ * the bar between them is the option premium. Shapes and the legend carry the meaning, not colour.
+ */
+export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[]; currency?: string; title: string }) {
+  const { ref, width } = useWidth<HTMLDivElement>();
+  const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(220, width * 0.3) });
+  return (
+    <figure ref={ref} className="w-full">
+      <figcaption className="mb-2 flex flex-wrap items-center gap-x-6 gap-y-1 text-caption text-ink-soft">
+        <span className="font-semibold uppercase tracking-wide">{title}</span>
+        <span className="inline-flex items-center gap-1.5">
+          <svg width="12" height="12" aria-hidden>
+            <circle cx="6" cy="6" r="4.5" fill="white" stroke="#3c4b57" strokeWidth="1.5" />
+          </svg>
+          Static NPV (no flexibility)
+        </span>
+        <span className="inline-flex items-center gap-1.5">
+          <svg width="12" height="12" aria-hidden>
+            <circle cx="6" cy="6" r="5" fill="#23727a" />
+          </svg>
+          Expanded NPV (with flexibility)
+        </span>
+      </figcaption>
+      <svg
+        width={layout.width}
+        height={layout.height}
+        role="img"
+        aria-label={`${title}: ${items.map((i) => `${i.label} static ${formatMoney(i.staticNpv, currency)}, expanded ${formatMoney(i.expandedNpv, currency)}`).join('; ')}`}
+      >
+        {layout.ticks.map((t) => (
+          <g key={t.value}>
+            <line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke="#ece8df" />
+            <text x={t.x} y={layout.height - layout.margin.bottom + 16} textAnchor="middle" className="fill-ink-muted text-caption figures">
+              {formatMoney(t.value, undefined, Math.abs(t.value) < 10 && t.value % 1 !== 0 ? 1 : 0)}
+            </text>
+          </g>
+        ))}
+        <line x1={layout.zeroX} x2={layout.zeroX} y1={layout.margin.top - 4} y2={layout.height - layout.margin.bottom} stroke="#66737d" strokeDasharray="3 3" />
+        {layout.rows.map((r) => (
+          <g key={r.id}>
+            <text x={layout.margin.left - 12} y={r.y} dy="0.35em" textAnchor="end" className="fill-ink text-body">
+              {r.label.length > 30 ? `${r.label.slice(0, 29)}…` : r.label}
+            </text>
+            <line x1={r.staticX} x2={r.expandedX} y1={r.y} y2={r.y} stroke="#7fbcc0" strokeWidth="6" strokeLinecap="round" />
+            <circle cx={r.staticX} cy={r.y} r="6" fill="white" stroke="#3c4b57" strokeWidth="2" />
+            <circle cx={r.expandedX} cy={r.y} r="6.5" fill="#23727a" />
+            <text x={Math.max(r.staticX, r.expandedX) + 12} y={r.y} dy="0.35em" className="fill-ink-soft text-caption figures">
+              {formatMoney(r.staticNpv)} → {formatMoney(r.expandedNpv)}
+            </text>
+          </g>
+        ))}
+      </svg>
+    </figure>
+  );
+}

@@ -1,0 +1,42 @@
+/**
+ * The browser's side of the JSON API: every page fetches and writes through `/api/v1` with
+ * these, so errors arrive in one shape. A non-2xx answer becomes an `ApiError` carrying the
+ * server's code, message and field messages, ready to show to the user.
+ */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields?: Record<string, string[]>,
+  ) {
+    super(message);
+    this.name = 'ApiError';
+  }
+}
+
+async function parse<T>(res: Response): Promise<T> {
+  if (res.status === 204) return undefined as T;
+  const body = await res.json().catch(() => null);
+  if (!res.ok) {
+    const error = body?.error;
+    throw new ApiError(res.status, error?.code ?? 'unknown', error?.message ?? `The server answered ${res.status}.`, error?.fields);
+  }
+  return body as T;
+}
+
+/** GET a JSON resource (SWR's fetcher). */
+export async function getJson<T>(url: string): Promise<T> {
+  return parse<T>(await fetch(url, { headers: { accept: 'application/json' } }));
+}
+
+/** Send a JSON body with POST, PATCH or DELETE. */
+export async function sendJson<T>(method: 'POST' | 'PATCH' | 'DELETE', url: string, body?: unknown): Promise<T> {
+  return parse<T>(
+    await fetch(url, {
+      method,
+      headers: body === undefined ? { accept: 'application/json' } : { 'content-type': 'application/json', accept: 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    }),
+  );
+}

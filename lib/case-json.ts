@@ -1,0 +1,29 @@
+/** The shape of a case as the API sends it to the browser (dates as ISO text). */
+import type { CashFlowSchedule } from './cash-flows';
+import type { CaseSettings } from './validations/case';
+import type { OptionTemplate } from '@/lattice';
+
+export interface CaseJson {
+  id: string;
+  projectId: string;
+  name: string;
+  version: number;
+  status: string;
+  cashFlows: CashFlowSchedule;
+  settings: CaseSettings;
+  options: OptionTemplate[];
+  createdAt: string;
+  updatedAt: string;
+  latest?: { runId: string; staticNpv: number; optionPremium: number; expandedNpv: number; valuedAt: string } | null;
+}
+
+export interface ProjectJson {
+  id: string;
+  name: string;
+  description: string;
+  currency: string;
+  status: 'active' | 'archived';
+  ownerId: string | null;
+  createdAt: string;
+  updatedAt: string;
+}
