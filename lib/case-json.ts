@@ -1,6 +1,6 @@
 /** The shape of a case as the API sends it to the browser (dates as ISO text). */
 import type { CashFlowSchedule } from './cash-flows';
-import type { CaseSettings } from './validations/case';
+import type { CaseInput } from './validations/case';
 import type { OptionTemplate } from '@/lattice';
 
 export interface CaseJson {
@@ -10,7 +10,7 @@ export interface CaseJson {
   version: number;
   status: string;
   cashFlows: CashFlowSchedule;
-  settings: CaseSettings;
+  settings: CaseInput['settings'];
   options: OptionTemplate[];
   createdAt: string;
   updatedAt: string;

@@ -1,0 +1,302 @@
+'use client';
+
+import Link from 'next/link';
+import { useEffect, useMemo, useState } from 'react';
+import useSWR from 'swr';
+import { LoadError, LoadingBlock } from '@/components/load-state';
+import { Button } from '@/components/ui/button';
+import { Tabs } from '@/components/ui/tabs';
+import { useToast } from '@/components/ui/toast';
+import { ModelError, prepareModel, type OptionTemplate, type ProjectModel } from '@/lattice';
+import { ApiError, getJson, sendJson } from '@/lib/api-client';
+import type { CaseJson } from '@/lib/case-json';
+import { caseToModel } from '@/lib/case-model';
+import { analyseCashFlows, type CashFlowAnalysis } from '@/lib/cash-flows';
+import { useValuation } from '@/lib/engine/use-engine';
+import { formatDateTime, formatMoney } from '@/lib/format';
+import type { CaseInput } from '@/lib/validations/case';
+import { CashFlowSection } from './cash-flow-section';
+import { CompiledView } from './compiled-view';
+import { LatticeSection } from './lattice-section';
+import { LatticeSettingsSection } from './lattice-settings-section';
+import { OptionCards } from './option-cards';
+import { ResultsSection } from './results-section';
+
+interface Props {
+  caseId: string;
+  projectId: string;
+  projectName: string;
+  currency: string;
+  canEdit: boolean;
+}
+
+interface RunSummary {
+  id: string;
+  caseVersion: number;
+  createdAt: string;
+  createdBy: string | null;
+  expandedNpv: number;
+}
+
+export function CaseEditor(props: Props) {
+  const { data, error, isLoading, mutate } = useSWR<{ case: CaseJson }>(`/api/v1/cases/${props.caseId}`, getJson, { revalidateOnFocus: false });
+  if (isLoading) return <LoadingBlock label="Loading the case" lines={8} />;
+  if (error || !data) return <LoadError message={error?.message ?? 'No answer from the server.'} onRetry={() => mutate()} />;
+  return <LoadedEditor key={`${data.case.id}:${data.case.version}`} {...props} initial={data.case} reload={() => mutate()} />;
+}
+
+function toInput(c: CaseJson): CaseInput {
+  return { name: c.name, cashFlows: c.cashFlows, settings: c.settings, options: c.options };
+}
+
+function Headline({ label, value, strong, busy }: { label: string; value: string; strong?: boolean; busy: boolean }) {
+  return (
+    <div className={`rounded-card border px-4 py-3 ${strong ? 'border-tide-500 bg-tide-50' : 'border-line bg-paper-raised'}`}>
+      <p className="text-caption font-medium uppercase tracking-wide text-ink-soft">{label}</p>
+      <p className={`figures mt-0.5 text-title ${busy ? 'opacity-60' : ''}`} aria-live="polite">
+        {value}
+      </p>
+    </div>
+  );
+}
+
+function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, initial, reload }: Props & { initial: CaseJson; reload: () => void }) {
+  const toast = useToast();
+  const [draft, setDraft] = useState<CaseInput>(() => toInput(initial));
+  const [version, setVersion] = useState(initial.version);
+  const [dirty, setDirty] = useState(false);
+  const [invalidCells, setInvalidCells] = useState(0);
+  const [optionProblems, setOptionProblems] = useState(0);
+  const [saving, setSaving] = useState(false);
+  const [valuing, setValuing] = useState(false);
+  const [conflict, setConflict] = useState<string | null>(null);
+  const runs = useSWR<{ runs: RunSummary[] }>(`/api/v1/cases/${caseId}/valuations`, getJson, { revalidateOnFocus: false });
+
+  const update = (patch: Partial<CaseInput>) => {
+    setDraft((d) => ({ ...d, ...patch }));
+    setDirty(true);
+  };
+
+  const analysis: CashFlowAnalysis | null = useMemo(() => {
+    try {
+      return analyseCashFlows(draft.cashFlows);
+    } catch {
+      return null;
+    }
+  }, [draft.cashFlows]);
+  const horizon = Math.max(1, draft.cashFlows.rows.at(-1)?.year ?? 1);
+
+  const built = useMemo((): { model: ProjectModel; modes: string[]; start: string } | { problem: string } => {
+    try {
+      const { model } = caseToModel(draft);
+      const { compiled } = prepareModel(model);
+      return { model, modes: compiled.modes.map((m) => m.id), start: compiled.modes[compiled.start]!.id };
+    } catch (error) {
+      if (error instanceof ModelError) return { problem: error.issues.map((i) => i.message).join('; ') };
+      return { problem: error instanceof Error ? error.message : 'The case cannot be valued yet.' };
+    }
+  }, [draft]);
+  const model = 'model' in built ? built.model : null;
+  const valuation = useValuation(model, {});
+  const result = model ? valuation.result : null;
+
+  useEffect(() => {
+    if (!dirty) return;
+    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [dirty]);
+
+  const blocked =
+    invalidCells > 0
+      ? 'Fix the cells marked in red first.'
+      : optionProblems > 0
+        ? 'Fix the option fields marked in red first.'
+        : draft.name.trim() === ''
+          ? 'Give the case a name first.'
+          : null;
+
+  const save = async (): Promise<boolean> => {
+    if (blocked) {
+      toast(blocked, 'error');
+      return false;
+    }
+    setSaving(true);
+    try {
+      const { case: saved } = await sendJson<{ case: CaseJson }>('PATCH', `/api/v1/cases/${caseId}`, { ...draft, version });
+      setVersion(saved.version);
+      setDirty(false);
+      setConflict(null);
+      toast(`Saved as version ${saved.version}.`, 'success');
+      return true;
+    } catch (error) {
+      if (error instanceof ApiError && error.status === 409) setConflict(error.message);
+      else toast(error instanceof Error ? error.message : 'Saving did not work.', 'error');
+      return false;
+    } finally {
+      setSaving(false);
+    }
+  };
+
+  const valueCase = async () => {
+    if (dirty && !(await save())) return;
+    setValuing(true);
+    try {
+      const { run } = await sendJson<{ run: { result: { expandedNpv: number } } }>('POST', `/api/v1/cases/${caseId}/valuations`);
+      toast(`Valuation stored: expanded NPV ${formatMoney(run.result.expandedNpv, currency)}.`, 'success');
+      await runs.mutate();
+    } catch (error) {
+      toast(error instanceof Error ? error.message : 'Valuing did not work.', 'error');
+    } finally {
+      setValuing(false);
+    }
+  };
+
+  const latestRun = runs.data?.runs[0];
+  const busy = valuation.computing;
+  const readOnly = !canEdit;
+
+  return (
+    <div className="flex flex-col gap-6">
+      <div>
+        <nav aria-label="Breadcrumb" className="mb-2 text-caption text-ink-muted">
+          <Link href="/projects" className="hover:underline">
+            Projects
+          </Link>{' '}
+          /{' '}
+          <Link href={`/projects/${projectId}`} className="hover:underline">
+            {projectName}
+          </Link>{' '}
+          / {draft.name || 'Untitled case'}
+        </nav>
+        <div className="flex flex-wrap items-end justify-between gap-4">
+          <div className="flex flex-col gap-1">
+            {readOnly ? (
+              <h1>{draft.name}</h1>
+            ) : (
+              <label className="flex flex-col">
+                <span className="sr-only">Case name</span>
+                <input
+                  value={draft.name}
+                  onChange={(e) => update({ name: e.target.value })}
+                  maxLength={120}
+                  className="-ml-2 rounded-md border border-transparent bg-transparent px-2 py-1 text-title hover:border-line focus:border-tide-500"
+                />
+              </label>
+            )}
+            <p className="text-caption text-ink-muted">
+              Version {version}
+              {dirty ? ' · unsaved changes' : ' · saved'}
+              {latestRun
+                ? ` · last stored valuation ${formatDateTime(latestRun.createdAt)} by ${latestRun.createdBy ?? 'someone'} (version ${latestRun.caseVersion})`
+                : ' · never valued on the server'}
+            </p>
+          </div>
+          {readOnly ? (
+            <p className="rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">Read-only: your role can read this case but not change it.</p>
+          ) : (
+            <div className="flex gap-2">
+              <Button variant="secondary" onClick={() => void save()} busy={saving} disabled={!dirty}>
+                Save
+              </Button>
+              <Button onClick={() => void valueCase()} busy={valuing} disabled={!model}>
+                Value case
+              </Button>
+            </div>
+          )}
+        </div>
+      </div>
+
+      {conflict ? (
+        <div
+          role="alert"
+          className="flex flex-wrap items-center justify-between gap-3 rounded-md border border-brick-500 bg-brick-100 px-4 py-3 text-brick-700"
+        >
+          <p>{conflict}</p>
+          <Button variant="secondary" onClick={reload}>
+            Load the saved version (drops my changes)
+          </Button>
+        </div>
+      ) : null}
+
+      <div className="grid gap-4 sm:grid-cols-3">
+        <Headline label="Static NPV" value={formatMoney(result?.staticNpv ?? analysis?.staticNpv, currency)} busy={busy} />
+        <Headline label="Option premium" value={formatMoney(result?.optionPremium, currency)} busy={busy} />
+        <Headline label="Expanded NPV" value={formatMoney(result?.expandedNpv, currency)} strong busy={busy} />
+      </div>
+      <p className="-mt-3 text-caption text-ink-muted" aria-live="polite">
+        {'problem' in built
+          ? `Not valued: ${built.problem}`
+          : valuation.issues
+            ? `Not valued: ${valuation.issues.map((i) => i.message).join('; ')}`
+            : busy
+              ? 'Recomputing in your browser…'
+              : 'Computed live in your browser from the figures on screen; “Value case” stores a run on the server.'}
+      </p>
+
+      <Tabs
+        tabs={[
+          {
+            id: 'cash-flows',
+            label: 'Cash flows',
+            content: (
+              <CashFlowSection
+                cashFlows={draft.cashFlows}
+                analysis={analysis}
+                currency={currency}
+                readOnly={readOnly}
+                onChange={(cashFlows) => update({ cashFlows })}
+                onInvalidCount={setInvalidCells}
+              />
+            ),
+          },
+          {
+            id: 'uncertainty',
+            label: 'Uncertainty & lattice',
+            content: <LatticeSettingsSection settings={draft.settings} horizon={horizon} readOnly={readOnly} onChange={(settings) => update({ settings })} />,
+          },
+          {
+            id: 'flexibility',
+            label: 'Flexibility',
+            content: (
+              <div className="flex flex-col gap-6">
+                <OptionCards
+                  options={(draft.options ?? []) as OptionTemplate[]}
+                  horizon={horizon}
+                  v0={analysis?.underlyingValue && analysis.underlyingValue > 0 ? analysis.underlyingValue : 100}
+                  readOnly={readOnly}
+                  onChange={(options, problems) => {
+                    setOptionProblems(problems);
+                    if (options) update({ options });
+                    else setDirty(true);
+                  }}
+                />
+                <details className="rounded-card border border-line bg-paper-raised p-5">
+                  <summary className="cursor-pointer font-medium">Advanced: the operating modes and switches these options compile to</summary>
+                  <div className="mt-4">
+                    <CompiledView model={model} />
+                  </div>
+                </details>
+              </div>
+            ),
+          },
+          {
+            id: 'results',
+            label: 'Results',
+            content: result ? <ResultsSection result={result} currency={currency} /> : <LoadingBlock label="Valuing the case" lines={5} />,
+          },
+          {
+            id: 'lattice',
+            label: 'Lattice',
+            content:
+              model && 'modes' in built ? (
+                <LatticeSection model={model} modes={built.modes} startMode={built.start} result={result} currency={currency} />
+              ) : (
+                <p className="text-ink-soft">The lattice appears once the case can be valued.</p>
+              ),
+          },
+        ]}
+      />
+    </div>
+  );
+}

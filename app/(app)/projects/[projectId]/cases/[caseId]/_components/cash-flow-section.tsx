@@ -1,0 +1,107 @@
+'use client';
+
+import { NumberField } from '@/components/number-field';
+import { Select } from '@/components/ui/select';
+import type { CashFlowAnalysis, CashFlowSchedule } from '@/lib/cash-flows';
+import { formatMoney, formatPercent } from '@/lib/format';
+import { CashFlowGrid } from './cash-flow-grid';
+
+interface Props {
+  cashFlows: CashFlowSchedule;
+  analysis: CashFlowAnalysis | null;
+  currency: string;
+  readOnly: boolean;
+  onChange: (cashFlows: CashFlowSchedule) => void;
+  onInvalidCount: (count: number) => void;
+}
+
+function Derived({ label, value, note }: { label: string; value: string; note: string }) {
+  return (
+    <div className="rounded-card border border-line bg-paper-raised px-4 py-3 shadow-card">
+      <dt className="text-caption font-medium uppercase tracking-wide text-ink-soft">{label}</dt>
+      <dd className="figures mt-0.5 text-lead font-semibold">{value}</dd>
+      <dd className="text-caption text-ink-muted">{note}</dd>
+    </div>
+  );
+}
+
+/** The case's cash flows: the grid, the discounting conventions, and what the lattice takes from them, all live. */
+export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onChange, onInvalidCount }: Props) {
+  const wacc = (value: number) => (value <= -0.5 || value >= 1 ? 'WACC must lie between −50 % and 100 %.' : null);
+  return (
+    <div className="flex flex-col gap-6">
+      <div className="flex flex-wrap items-end gap-4">
+        <NumberField
+          label="WACC"
+          percent
+          value={cashFlows.wacc}
+          check={wacc}
+          readOnly={readOnly}
+          onChange={(v) => onChange({ ...cashFlows, wacc: v })}
+          className="w-40"
+        />
+        <Select
+          label="Cash-flow timing"
+          value={cashFlows.timing ?? 'end-of-year'}
+          disabled={readOnly}
+          onChange={(e) => onChange({ ...cashFlows, timing: e.target.value as 'end-of-year' | 'mid-year' })}
+          options={[
+            { value: 'end-of-year', label: 'End of year' },
+            { value: 'mid-year', label: 'Mid-year' },
+          ]}
+          className="w-44"
+        />
+        <p className="max-w-md pb-1 text-caption text-ink-muted">
+          Amounts in {currency}, as entered (the demo uses millions). Year 0 is today and is never discounted.
+        </p>
+      </div>
+      <CashFlowGrid
+        rows={cashFlows.rows}
+        analysis={analysis}
+        readOnly={readOnly}
+        onInvalidCount={onInvalidCount}
+        onChange={(rows) => onChange({ ...cashFlows, rows })}
+      />
+      {analysis ? (
+        <>
+          <dl className="grid gap-4 sm:grid-cols-3">
+            <Derived label="Static NPV at the WACC" value={formatMoney(analysis.staticNpv, currency)} note="Σ free cash flow × discount factor" />
+            <Derived
+              label="Underlying value V₀"
+              value={formatMoney(analysis.underlyingValue, currency)}
+              note="PV of operating cash flows (before capex): the lattice's start"
+            />
+            <Derived label="PV of capex" value={formatMoney(analysis.investment, currency)} note="The outlay of the static plan" />
+          </dl>
+          <section aria-labelledby="payouts-heading">
+            <h3 id="payouts-heading" className="text-body font-semibold">
+              Payout schedule for the lattice
+            </h3>
+            <p className="mb-2 text-caption text-ink-muted">
+              Each year the project pays out its operating cash flow, a share of the value still to come; the lattice lowers V by that share (the value&rsquo;s
+              leakage).
+            </p>
+            {analysis.payouts.length === 0 ? (
+              <p className="text-ink-soft">No payouts: the cash arrives only in the last year, or none is positive.</p>
+            ) : (
+              <ul className="figures flex flex-wrap gap-2">
+                {analysis.payouts.map((p) => (
+                  <li key={p.at} className="rounded bg-paper-sunk px-2 py-1 text-caption">
+                    Year {p.at}: {formatPercent(p.fraction)}
+                  </li>
+                ))}
+              </ul>
+            )}
+          </section>
+          {analysis.warnings.length > 0 ? (
+            <ul className="rounded-md border border-ember-500 bg-ember-100 px-4 py-2 text-caption text-ember-700">
+              {analysis.warnings.map((w) => (
+                <li key={w}>{w}</li>
+              ))}
+            </ul>
+          ) : null}
+        </>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,116 @@
+'use client';
+
+import { select, zoom, zoomIdentity, type ZoomBehavior } from 'd3';
+import { useEffect, useRef } from 'react';
+import type { NodeGrid } from '@/lattice';
+import { layoutLatticeTree, NODE_HEIGHT, NODE_WIDTH } from '@/lib/charts/lattice-tree';
+import { formatNumber } from '@/lib/format';
+
+/** Fills for decisions, in order; continuing is always white. The decision's name is printed on the node too. */
+export const decisionFills = ['#cfe7e8', '#f7e3d6', '#dcebdc', '#f5dcd6', '#e6e0f2', '#f2ecc9'];
+
+interface Props {
+  grid: NodeGrid;
+  mode: string;
+  steps: number;
+  selected: { step: number; node: number } | null;
+  onSelect: (ref: { step: number; node: number }) => void;
+  decisionOrder: string[];
+}
+
+/**
+ * The first steps of the lattice as a tree: each node shows the project's value (V) and the
+ * mode's value with flexibility (W), and names the decision taken there. Drag to pan, scroll
+ * or pinch to zoom; nodes are buttons (Tab, Enter) that open the inspector.
+ */
+export function LatticeTree({ grid, mode, steps, selected, onSelect, decisionOrder }: Props) {
+  const svgRef = useRef<SVGSVGElement>(null);
+  const layerRef = useRef<SVGGElement>(null);
+  const zoomRef = useRef<ZoomBehavior<SVGSVGElement, unknown> | null>(null);
+  const layout = layoutLatticeTree(grid, mode, steps);
+  const viewHeight = Math.min(560, Math.max(260, layout.height));
+
+  useEffect(() => {
+    if (!svgRef.current || !layerRef.current) return;
+    const layer = select(layerRef.current);
+    const behaviour = zoom<SVGSVGElement, unknown>()
+      .scaleExtent([0.3, 3])
+      .on('zoom', (event) => layer.attr('transform', event.transform.toString()));
+    zoomRef.current = behaviour;
+    const svg = select(svgRef.current).call(behaviour);
+    const fit = Math.min(1, (svgRef.current.clientWidth || 800) / layout.width, viewHeight / layout.height);
+    svg.call(behaviour.transform, zoomIdentity.translate(0, (viewHeight - layout.height * fit) / 2).scale(fit));
+    return () => {
+      svg.on('.zoom', null);
+    };
+  }, [layout.width, layout.height, viewHeight]);
+
+  const zoomBy = (k: number) => svgRef.current && zoomRef.current && select(svgRef.current).call(zoomRef.current.scaleBy, k);
+  const fillOf = (decision: string | null) => (decision === null ? '#ffffff' : decisionFills[decisionOrder.indexOf(decision) % decisionFills.length]);
+
+  return (
+    <div className="relative rounded-card border border-line bg-paper-raised">
+      <div className="absolute right-2 top-2 z-10 flex gap-1">
+        <button type="button" onClick={() => zoomBy(1.25)} className="h-8 w-8 rounded border border-line-strong bg-paper-raised" aria-label="Zoom in">
+          +
+        </button>
+        <button type="button" onClick={() => zoomBy(0.8)} className="h-8 w-8 rounded border border-line-strong bg-paper-raised" aria-label="Zoom out">
+          −
+        </button>
+      </div>
+      <svg
+        ref={svgRef}
+        width="100%"
+        height={viewHeight}
+        className="cursor-grab touch-none active:cursor-grabbing"
+        role="group"
+        aria-label={`Lattice, first ${steps} steps, mode ${mode}`}
+      >
+        <g ref={layerRef}>
+          {layout.edges.map((e) => (
+            <line key={`${e.from.step}:${e.from.node}-${e.to.node}`} x1={e.from.x + NODE_WIDTH} y1={e.from.y} x2={e.to.x} y2={e.to.y} stroke="#b9b1a2" />
+          ))}
+          {layout.nodes.map((n) => {
+            const isSelected = selected?.step === n.step && selected.node === n.node;
+            return (
+              <g
+                key={`${n.step}:${n.node}`}
+                transform={`translate(${n.x},${n.y - NODE_HEIGHT / 2})`}
+                role="button"
+                tabIndex={0}
+                aria-pressed={isSelected}
+                aria-label={`Step ${n.step}, node ${n.node}: project value ${formatNumber(n.underlying)}, value with flexibility ${formatNumber(n.value)}, ${n.decision ? `decision: ${n.decision}` : 'continue'}`}
+                onClick={() => onSelect({ step: n.step, node: n.node })}
+                onKeyDown={(e) => {
+                  if (e.key === 'Enter' || e.key === ' ') {
+                    e.preventDefault();
+                    onSelect({ step: n.step, node: n.node });
+                  }
+                }}
+                className="cursor-pointer outline-none [&:focus-visible>rect]:stroke-tide-500 [&:focus-visible>rect]:stroke-[3]"
+              >
+                <rect
+                  width={NODE_WIDTH}
+                  height={NODE_HEIGHT}
+                  rx="6"
+                  fill={fillOf(n.decision)}
+                  stroke={isSelected ? '#16232d' : '#b9b1a2'}
+                  strokeWidth={isSelected ? 2.5 : 1}
+                />
+                <text x="8" y="16" className="figures fill-ink-soft text-[11px]">
+                  V {formatNumber(n.underlying)}
+                </text>
+                <text x="8" y="31" className="figures fill-ink text-[12px] font-semibold">
+                  W {formatNumber(n.value)}
+                </text>
+                <text x="8" y="45" className="fill-ink-soft text-[10px]">
+                  {n.decision ? `▶ ${n.decision.length > 15 ? `${n.decision.slice(0, 14)}…` : n.decision}` : 'continue'}
+                </text>
+              </g>
+            );
+          })}
+        </g>
+      </svg>
+    </div>
+  );
+}

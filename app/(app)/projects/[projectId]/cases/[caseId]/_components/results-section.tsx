@@ -1,0 +1,151 @@
+'use client';
+
+import { ConvergenceChart } from '@/components/charts/convergence-chart';
+import { TornadoChart } from '@/components/charts/tornado-chart';
+import { WaterfallChart } from '@/components/charts/waterfall-chart';
+import { Table, Td, Th, Tr } from '@/components/ui/table';
+import { ValuationCaution } from '@/components/valuation-caution';
+import type { SwitchResult, ValuationResult } from '@/lattice';
+import { decisionRule } from '@/lib/decision-rules';
+import { formatMoney, formatPercent } from '@/lib/format';
+import { optionTypeLabels, type OptionType } from '@/lib/option-form';
+
+/** Probability of first exercise per year (summed over the steps of each year), as small bars with the numbers in a tooltip. */
+function TimingBars({ s }: { s: SwitchResult }) {
+  const byYear = new Map<number, number>();
+  for (const p of s.exerciseTiming) {
+    const year = Math.min(Math.floor(p.t + 1e-9), 1000);
+    byYear.set(year, (byYear.get(year) ?? 0) + p.probability);
+  }
+  const entries = [...byYear.entries()].sort((a, b) => a[0] - b[0]);
+  if (entries.length === 0) return <span className="text-ink-muted">never</span>;
+  const max = Math.max(...entries.map(([, p]) => p));
+  const peak = entries.reduce((best, e) => (e[1] > best[1] ? e : best));
+  return (
+    <span className="inline-flex items-end gap-2">
+      <svg width={entries.length * 9} height="24" aria-hidden>
+        {entries.map(([year, p], k) => (
+          <rect key={year} x={k * 9} y={24 - (p / max) * 22} width="7" height={Math.max(1, (p / max) * 22)} fill="#23727a">
+            <title>{`year ${year}–${year + 1}: ${formatPercent(p)}`}</title>
+          </rect>
+        ))}
+      </svg>
+      <span className="text-caption text-ink-soft">
+        most likely year {peak[0]}–{peak[0] + 1} ({formatPercent(peak[1])})
+      </span>
+    </span>
+  );
+}
+
+function Panel({ title, note, children }: { title: string; note?: string; children: React.ReactNode }) {
+  return (
+    <section className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
+      <h3 className="text-body font-semibold">{title}</h3>
+      {note ? <p className="mb-3 text-caption text-ink-muted">{note}</p> : <div className="mb-3" />}
+      {children}
+    </section>
+  );
+}
+
+/** What the valuation says: the bridge, each right's value and use, sensitivities, convergence, and the cautions. */
+export function ResultsSection({ result, currency }: { result: ValuationResult; currency: string }) {
+  return (
+    <div className="flex flex-col gap-6">
+      <Panel
+        title="From static to expanded NPV"
+        note="Each right's incremental value (all rights less all but this one), then what they add together beyond their increments."
+      >
+        <WaterfallChart result={result} currency={currency} />
+      </Panel>
+      <Panel
+        title="The rights, one by one"
+        note="Stand-alone: the right alone on the project. Incremental: what it adds to the others. Probabilities are risk-neutral."
+      >
+        {result.switches.length === 0 ? (
+          <p className="text-ink-soft">No options: expanded NPV equals static NPV.</p>
+        ) : (
+          <Table caption="Option values and exercise">
+            <thead>
+              <tr>
+                <Th>Right</Th>
+                <Th numeric>Stand-alone</Th>
+                <Th numeric>Incremental</Th>
+                <Th numeric>Ever exercised</Th>
+                <Th>When (first exercise)</Th>
+              </tr>
+            </thead>
+            <tbody>
+              {result.switches.map((s) => (
+                <Tr key={s.id}>
+                  <Td>
+                    <span className="font-medium">{s.id}</span>
+                    <span className="ml-2 text-caption text-ink-muted">{optionTypeLabels[s.kind as OptionType] ?? s.kind}</span>
+                    <p className="mt-0.5 max-w-xl text-caption text-ink-soft">{decisionRule(s, currency).text}</p>
+                  </Td>
+                  <Td numeric>{formatMoney(s.standalone, currency)}</Td>
+                  <Td numeric>{formatMoney(s.incremental, currency)}</Td>
+                  <Td numeric>{formatPercent(s.exerciseProbability)}</Td>
+                  <Td>
+                    <TimingBars s={s} />
+                  </Td>
+                </Tr>
+              ))}
+            </tbody>
+          </Table>
+        )}
+      </Panel>
+      {result.sensitivities ? (
+        <Panel
+          title="Sensitivity of the expanded NPV"
+          note="Each input moved on its own, all else as valued: V0 and σ by ±10 %, rates by ±1 point, each right's money by ±10 %."
+        >
+          <TornadoChart sensitivities={result.sensitivities} base={result.expandedNpv} currency={currency} />
+        </Panel>
+      ) : null}
+      <div className="grid gap-6 xl:grid-cols-2">
+        {result.convergence ? (
+          <Panel
+            title="Convergence as steps grow"
+            note={
+              Number.isFinite(result.convergence.errorEstimate)
+                ? `Change over the last halving of steps: ${formatMoney(result.convergence.errorEstimate, currency, 2)}; extrapolated value ${formatMoney(result.convergence.extrapolated, currency, 2)}.`
+                : 'Too few steps to estimate the error.'
+            }
+          >
+            <ConvergenceChart convergence={result.convergence} currency={currency} />
+          </Panel>
+        ) : null}
+        <Panel title="The lattice" note={`${result.tree.kind.toUpperCase()} tree, engine ${result.engineVersion}.`}>
+          <dl className="figures grid grid-cols-3 gap-3 text-body">
+            {[
+              ['Steps', String(result.tree.steps)],
+              ['Δt (years)', result.tree.dt.toFixed(4)],
+              ['Discount a step', result.tree.discount.toFixed(6)],
+              ['Up factor u', result.tree.u.toFixed(5)],
+              ['Down factor d', result.tree.d.toFixed(5)],
+              ['Risk-neutral p', result.tree.p.toFixed(5)],
+            ].map(([k, v]) => (
+              <div key={k}>
+                <dt className="text-caption uppercase tracking-wide text-ink-muted">{k}</dt>
+                <dd>{v}</dd>
+              </div>
+            ))}
+          </dl>
+          {result.snaps.length > 0 ? (
+            <p className="mt-3 text-caption text-ink-soft">
+              Dates moved to the nearest step: {result.snaps.map((s) => `${s.field} ${s.requested} → ${s.used.toFixed(3)}`).join('; ')}.
+            </p>
+          ) : null}
+        </Panel>
+      </div>
+      {result.warnings.length > 0 ? (
+        <ul className="rounded-md border border-ember-500 bg-ember-100 px-4 py-2 text-caption text-ember-700">
+          {result.warnings.map((w) => (
+            <li key={w}>{w.charAt(0).toUpperCase() + w.slice(1)}.</li>
+          ))}
+        </ul>
+      ) : null}
+      <ValuationCaution />
+    </div>
+  );
+}

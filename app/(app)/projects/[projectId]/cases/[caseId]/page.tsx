@@ -1,0 +1,28 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { Forbidden } from '@/components/forbidden';
+import { db } from '@/db';
+import { findCase } from '@/db/queries/cases';
+import { findProject } from '@/db/queries/projects';
+import { guardPage } from '@/lib/page-guard';
+import { roleAllows } from '@/lib/permissions';
+import { CaseEditor } from './_components/case-editor';
+
+export const metadata: Metadata = { title: 'Case' };
+
+export default async function CasePage({ params }: { params: Promise<{ projectId: string; caseId: string }> }) {
+  const member = await guardPage({ case: ['read'] });
+  if (member === 'forbidden') return <Forbidden />;
+  const { projectId, caseId } = await params;
+  const [project, found] = await Promise.all([findProject(db, { orgId: member.orgId, projectId }), findCase(db, { orgId: member.orgId, caseId })]);
+  if (!project || !found || found.project_id !== project.id) notFound();
+  return (
+    <CaseEditor
+      caseId={found.id}
+      projectId={project.id}
+      projectName={project.name}
+      currency={project.currency}
+      canEdit={roleAllows(member.role, { case: ['update'] })}
+    />
+  );
+}

@@ -1,0 +1,85 @@
+'use client';
+
+import { line, scaleLinear } from 'd3';
+import type { SwitchResult } from '@/lattice';
+import { decisionRule } from '@/lib/decision-rules';
+import { formatMoney } from '@/lib/format';
+import { useWidth } from './use-width';
+
+const strokes = ['#23727a', '#b9622f', '#3f7a4b', '#ad3f2b', '#5b4a8a', '#8a7a20'];
+const dashes = ['', '6 3', '2 3', '8 3 2 3', '1 2', '10 4'];
+
+/**
+ * The exercise boundary over time: for each right, the critical project value at each step
+ * where it is used (above the line for expand, defer and stages; below it for abandon, contract
+ * and mothballing). Lines differ by dash as well as colour, and are named in the legend.
+ */
+export function BoundaryChart({ switches, v0, horizon, currency }: { switches: SwitchResult[]; v0: number; horizon: number; currency: string }) {
+  const { ref, width } = useWidth<HTMLDivElement>();
+  const height = 280;
+  const margin = { top: 16, right: 24, bottom: 36, left: 64 };
+  const series = switches.map((s, k) => {
+    const rule = decisionRule(s, currency);
+    const edge = (b: SwitchResult['boundary'][number]) => (rule.side === 'above' ? b.low : b.high);
+    return { s, k, rule, points: s.boundary.filter((b) => edge(b) !== null).map((b) => ({ t: b.t, v: edge(b)! })) };
+  });
+  const values = series.flatMap((x) => x.points.map((p) => p.v)).concat(v0);
+  const x = scaleLinear()
+    .domain([0, horizon])
+    .range([margin.left, width - margin.right]);
+  const y = scaleLinear()
+    .domain([0, Math.max(...values) * 1.1])
+    .nice()
+    .range([height - margin.bottom, margin.top]);
+  const path = line<{ t: number; v: number }>()
+    .x((p) => x(p.t))
+    .y((p) => y(p.v));
+  return (
+    <div ref={ref} className="w-full">
+      <svg width={width} height={height} role="img" aria-label={series.map((x) => x.rule.text).join(' ')}>
+        {y.ticks(5).map((t) => (
+          <g key={t}>
+            <line x1={margin.left} x2={width - margin.right} y1={y(t)} y2={y(t)} stroke="#ece8df" />
+            <text x={margin.left - 8} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
+              {formatMoney(t, undefined, 0)}
+            </text>
+          </g>
+        ))}
+        {x.ticks(Math.min(10, horizon)).map((t) => (
+          <text key={t} x={x(t)} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
+            {t}
+          </text>
+        ))}
+        <text x={(margin.left + width - margin.right) / 2} y={height - 4} textAnchor="middle" className="fill-ink-muted text-caption">
+          years
+        </text>
+        <line x1={margin.left} x2={width - margin.right} y1={y(v0)} y2={y(v0)} stroke="#66737d" strokeDasharray="3 3" />
+        <text x={margin.left + 4} y={y(v0) - 4} className="fill-ink-muted text-caption">
+          V₀ today {formatMoney(v0)}
+        </text>
+        {series.map(({ s, k, points }) =>
+          points.length > 0 ? (
+            <path
+              key={s.id}
+              d={path(points) ?? ''}
+              fill="none"
+              stroke={strokes[k % strokes.length]}
+              strokeWidth="2"
+              strokeDasharray={dashes[k % dashes.length]}
+            />
+          ) : null,
+        )}
+      </svg>
+      <ul className="mt-2 flex flex-col gap-1 text-caption text-ink-soft">
+        {series.map(({ s, k, rule }) => (
+          <li key={s.id} className="flex items-start gap-2">
+            <svg width="28" height="10" aria-hidden className="mt-1 shrink-0">
+              <line x1="0" x2="28" y1="5" y2="5" stroke={strokes[k % strokes.length]} strokeWidth="2" strokeDasharray={dashes[k % dashes.length]} />
+            </svg>
+            {rule.text}
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}

@@ -1,0 +1,66 @@
+'use client';
+
+import { line, scaleLinear } from 'd3';
+import type { Convergence } from '@/lattice';
+import { formatMoney } from '@/lib/format';
+import { useWidth } from './use-width';
+
+/** The lattice value as steps grow, with the extrapolated value and a band of ± the error estimate. */
+export function ConvergenceChart({ convergence, currency }: { convergence: Convergence; currency: string }) {
+  const { ref, width } = useWidth<HTMLDivElement>(480);
+  const height = 200;
+  const margin = { top: 16, right: 24, bottom: 36, left: 64 };
+  const { points, extrapolated, errorEstimate } = convergence;
+  const band = Number.isFinite(errorEstimate) ? errorEstimate : 0;
+  const values = points.map((p) => p.value).concat(extrapolated - band, extrapolated + band);
+  const x = scaleLinear()
+    .domain([0, Math.max(...points.map((p) => p.steps))])
+    .range([margin.left, width - margin.right]);
+  const pad = (Math.max(...values) - Math.min(...values)) * 0.15 || Math.abs(extrapolated) * 0.01 || 1;
+  const y = scaleLinear()
+    .domain([Math.min(...values) - pad, Math.max(...values) + pad])
+    .nice()
+    .range([height - margin.bottom, margin.top]);
+  const path = line<{ steps: number; value: number }>()
+    .x((p) => x(p.steps))
+    .y((p) => y(p.value))(points);
+  return (
+    <div ref={ref} className="w-full">
+      <svg
+        width={width}
+        height={height}
+        role="img"
+        aria-label={`Value at ${points.map((p) => `${p.steps} steps ${formatMoney(p.value, currency)}`).join(', ')}; extrapolated ${formatMoney(extrapolated, currency)}`}
+      >
+        <rect
+          x={margin.left}
+          width={width - margin.left - margin.right}
+          y={y(extrapolated + band)}
+          height={Math.max(1, y(extrapolated - band) - y(extrapolated + band))}
+          fill="#e9f4f4"
+        />
+        <line x1={margin.left} x2={width - margin.right} y1={y(extrapolated)} y2={y(extrapolated)} stroke="#23727a" strokeDasharray="4 3" />
+        <text x={width - margin.right} y={y(extrapolated) - 6} textAnchor="end" className="fill-tide-700 text-caption">
+          extrapolated {formatMoney(extrapolated, currency, 2)}
+        </text>
+        {y.ticks(4).map((t) => (
+          <text key={t} x={margin.left - 8} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
+            {formatMoney(t, undefined, 1)}
+          </text>
+        ))}
+        {path ? <path d={path} fill="none" stroke="#16232d" strokeWidth="1.5" /> : null}
+        {points.map((p) => (
+          <g key={p.steps}>
+            <circle cx={x(p.steps)} cy={y(p.value)} r="4" fill="#16232d" />
+            <text x={x(p.steps)} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-soft text-caption">
+              {p.steps}
+            </text>
+          </g>
+        ))}
+        <text x={(margin.left + width - margin.right) / 2} y={height - 4} textAnchor="middle" className="fill-ink-muted text-caption">
+          lattice steps
+        </text>
+      </svg>
+    </div>
+  );
+}

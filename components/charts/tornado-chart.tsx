@@ -1,0 +1,70 @@
+'use client';
+
+import { layoutTornado } from '@/lib/charts/tornado';
+import { formatMoney, formatPercent } from '@/lib/format';
+import type { Sensitivity } from '@/lattice';
+import { useWidth } from './use-width';
+
+/** How an input's move reads for people: money for V0, percentages for rates, ±10 % for costs. */
+export function describeBump(s: Sensitivity, side: 'low' | 'high'): string {
+  const input = s[side].input;
+  if (s.parameter === 'underlying.value') return formatMoney(input);
+  if (['underlying.volatility', 'riskFreeRate', 'underlying.payoutYield'].includes(s.parameter)) return formatPercent(input);
+  return `${input >= 1 ? '+' : '−'}${Math.round(Math.abs(input - 1) * 100)} %`;
+}
+
+/** Expanded NPV when each input moves down (left label) and up (right label); the widest swing is on top. */
+export function TornadoChart({ sensitivities, base, currency }: { sensitivities: Sensitivity[]; base: number; currency: string }) {
+  const { ref, width } = useWidth<HTMLDivElement>();
+  const layout = layoutTornado(sensitivities, base, width, { labelWidth: Math.min(240, width * 0.35) });
+  return (
+    <div ref={ref} className="w-full">
+      <svg width={layout.width} height={layout.height} role="img" aria-label={`Sensitivity of expanded NPV (${currency}); base ${formatMoney(base)}`}>
+        {layout.ticks.map((t) => (
+          <g key={t.value}>
+            <line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke="#ece8df" />
+            <text x={t.x} y={layout.height - layout.margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
+              {formatMoney(t.value, undefined, 0)}
+            </text>
+          </g>
+        ))}
+        {layout.rows.map((r) => {
+          const mid = r.y + r.bandHeight / 2;
+          const bar = (x: number | null, side: 'low' | 'high') =>
+            x === null ? null : (
+              <g>
+                <rect
+                  x={Math.min(x, layout.baseX)}
+                  y={r.y}
+                  width={Math.max(1, Math.abs(x - layout.baseX))}
+                  height={r.bandHeight}
+                  fill={side === 'low' ? '#b9b1a2' : '#23727a'}
+                  rx="2"
+                />
+              </g>
+            );
+          return (
+            <g key={r.sensitivity.parameter}>
+              <text x={layout.margin.left - 10} y={mid} dy="0.35em" textAnchor="end" className="fill-ink text-caption">
+                {r.sensitivity.label} ({describeBump(r.sensitivity, 'low')} / {describeBump(r.sensitivity, 'high')})
+              </text>
+              {bar(r.lowX, 'low')}
+              {bar(r.highX, 'high')}
+              <title>{`${r.sensitivity.label}: ${formatMoney(r.sensitivity.low.expandedNpv, currency)} when ${describeBump(r.sensitivity, 'low')}, ${formatMoney(r.sensitivity.high.expandedNpv, currency)} when ${describeBump(r.sensitivity, 'high')}`}</title>
+            </g>
+          );
+        })}
+        <line x1={layout.baseX} x2={layout.baseX} y1={layout.margin.top - 4} y2={layout.height - layout.margin.bottom} stroke="#16232d" strokeWidth="1.5" />
+      </svg>
+      <p className="mt-1 flex flex-wrap gap-4 text-caption text-ink-soft">
+        <span className="inline-flex items-center gap-1.5">
+          <span aria-hidden className="inline-block h-3 w-5 rounded-sm bg-line-strong" /> input moved down (first figure in brackets)
+        </span>
+        <span className="inline-flex items-center gap-1.5">
+          <span aria-hidden className="inline-block h-3 w-5 rounded-sm bg-tide-500" /> input moved up (second figure)
+        </span>
+        <span>Vertical line: the expanded NPV as valued, {formatMoney(base, currency)}.</span>
+      </p>
+    </div>
+  );
+}

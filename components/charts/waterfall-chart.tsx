@@ -1,0 +1,58 @@
+'use client';
+
+import { layoutWaterfall, waterfallSteps } from '@/lib/charts/waterfall';
+import { formatChange, formatMoney } from '@/lib/format';
+import type { ValuationResult } from '@/lattice';
+import { useWidth } from './use-width';
+
+/** From static to expanded NPV: each right's incremental value and their interaction, signed in text as well as colour. */
+export function WaterfallChart({ result, currency }: { result: ValuationResult; currency: string }) {
+  const { ref, width } = useWidth<HTMLDivElement>();
+  const steps = waterfallSteps(result);
+  const layout = layoutWaterfall(steps, width);
+  return (
+    <div ref={ref} className="w-full">
+      <svg
+        width={layout.width}
+        height={layout.height}
+        role="img"
+        aria-label={`Bridge from static to expanded NPV: ${steps.map((s) => `${s.label} ${s.kind === 'total' ? formatMoney(s.value, currency) : formatChange(s.value, currency)}`).join(', ')}`}
+      >
+        {layout.ticks.map((t) => (
+          <g key={t.value}>
+            <line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={t.y} y2={t.y} stroke="#ece8df" />
+            <text x={layout.margin.left - 8} y={t.y} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
+              {formatMoney(t.value, undefined, 0)}
+            </text>
+          </g>
+        ))}
+        <line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={layout.zeroY} y2={layout.zeroY} stroke="#66737d" />
+        {layout.bars.map((b, k) => {
+          const fill = b.kind === 'total' ? '#16232d' : b.value >= 0 ? '#23727a' : '#ad3f2b';
+          const next = layout.bars[k + 1];
+          return (
+            <g key={b.key}>
+              <rect x={b.x} y={b.y} width={b.width} height={b.height} fill={fill} rx="2" opacity={b.kind === 'total' ? 0.85 : 1} />
+              {next ? (
+                <line
+                  x1={b.x + b.width}
+                  x2={next.x}
+                  y1={b.to >= b.from ? b.y : b.y + b.height}
+                  y2={b.to >= b.from ? b.y : b.y + b.height}
+                  stroke="#b9b1a2"
+                  strokeDasharray="2 2"
+                />
+              ) : null}
+              <text x={b.center} y={b.y - 6} textAnchor="middle" className="figures fill-ink text-caption font-semibold">
+                {b.kind === 'total' ? formatMoney(b.value) : formatChange(b.value)}
+              </text>
+              <text x={b.center} y={layout.height - layout.margin.bottom + 16} textAnchor="middle" className="fill-ink-soft text-caption">
+                {b.label.length > 18 ? `${b.label.slice(0, 17)}…` : b.label}
+              </text>
+            </g>
+          );
+        })}
+      </svg>
+    </div>
+  );
+}

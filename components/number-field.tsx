@@ -1,0 +1,57 @@
+'use client';
+
+import { useEffect, useState } from 'react';
+import { Input } from './ui/input';
+
+interface Props {
+  label: string;
+  /** The model's value (a fraction when `percent`). */
+  value: number;
+  onChange: (value: number) => void;
+  /** Shown and typed as a percentage, stored as a fraction. */
+  percent?: boolean;
+  /** Checks a parsed value; returns a message when it is out of range. */
+  check?: (value: number) => string | null;
+  hint?: string;
+  readOnly?: boolean;
+  integer?: boolean;
+  className?: string;
+}
+
+const show = (value: number, percent: boolean) => (percent ? String(Number((value * 100).toFixed(6))) : String(value));
+
+/**
+ * A number input that lets people type freely: the text is kept as typed, and the model only
+ * changes when it reads as a valid number; otherwise the field says what is wrong.
+ */
+export function NumberField({ label, value, onChange, percent = false, check, hint, readOnly, integer, className }: Props) {
+  const [text, setText] = useState(show(value, percent));
+  const [error, setError] = useState<string | null>(null);
+  // Follow outside changes (a reload, an import) without fighting the user's typing.
+  useEffect(() => {
+    setText((current) => (Number(current) * (percent ? 0.01 : 1) === value ? current : show(value, percent)));
+  }, [value, percent]);
+  const change = (next: string) => {
+    setText(next);
+    const cleaned = next.trim().replace(/^−/, '-');
+    const parsed = cleaned === '' ? NaN : Number(cleaned);
+    if (!Number.isFinite(parsed)) return setError('Enter a number.');
+    if (integer && !Number.isInteger(parsed)) return setError('Enter a whole number.');
+    const model = percent ? parsed / 100 : parsed;
+    const problem = check?.(model) ?? null;
+    setError(problem);
+    if (!problem) onChange(model);
+  };
+  return (
+    <Input
+      label={percent ? `${label} (%)` : label}
+      inputMode="decimal"
+      value={text}
+      onChange={(e) => change(e.target.value)}
+      error={error ?? undefined}
+      hint={hint}
+      readOnly={readOnly}
+      className={className}
+    />
+  );
+}

@@ -1,0 +1,69 @@
+/**
+ * Geometry of the bridge from static to expanded NPV: the static NPV, each right's incremental
+ * value, the interaction (what the rights are worth together beyond the sum of their
+ * increments) and the expanded NPV. Pure (d3-scale only), shared by the web and PDF charts.
+ */
+import { scaleBand, scaleLinear } from 'd3';
+import type { ValuationResult } from '@/lattice';
+
+export interface WaterfallStep {
+  key: string;
+  label: string;
+  /** 'total' bars start at 0; 'change' bars float from the running total. */
+  kind: 'total' | 'change';
+  value: number;
+  from: number;
+  to: number;
+}
+
+export function waterfallSteps(result: Pick<ValuationResult, 'staticNpv' | 'expandedNpv' | 'optionPremium' | 'switches'>): WaterfallStep[] {
+  const steps: WaterfallStep[] = [{ key: 'static', label: 'Static NPV', kind: 'total', value: result.staticNpv, from: 0, to: result.staticNpv }];
+  let running = result.staticNpv;
+  let increments = 0;
+  for (const s of result.switches) {
+    if (s.incremental === null) continue;
+    steps.push({ key: `right:${s.id}`, label: s.id, kind: 'change', value: s.incremental, from: running, to: running + s.incremental });
+    running += s.incremental;
+    increments += s.incremental;
+  }
+  const interaction = result.optionPremium - increments;
+  // One right has no interaction by definition; several almost always do, and it is shown even when small.
+  if (result.switches.filter((s) => s.incremental !== null).length > 1)
+    steps.push({ key: 'interaction', label: 'Interaction', kind: 'change', value: interaction, from: running, to: running + interaction });
+  steps.push({ key: 'expanded', label: 'Expanded NPV', kind: 'total', value: result.expandedNpv, from: 0, to: result.expandedNpv });
+  return steps;
+}
+
+export interface WaterfallLayout {
+  width: number;
+  height: number;
+  margin: { top: number; right: number; bottom: number; left: number };
+  bars: (WaterfallStep & { x: number; width: number; y: number; height: number; center: number })[];
+  ticks: { value: number; y: number }[];
+  zeroY: number;
+}
+
+export function layoutWaterfall(steps: WaterfallStep[], width: number, height = 300): WaterfallLayout {
+  const margin = { top: 24, right: 16, bottom: 48, left: 56 };
+  const values = steps.flatMap((s) => [s.from, s.to, 0]);
+  const y = scaleLinear()
+    .domain([Math.min(...values), Math.max(...values)])
+    .nice()
+    .range([height - margin.bottom, margin.top]);
+  const x = scaleBand()
+    .domain(steps.map((s) => s.key))
+    .range([margin.left, width - margin.right])
+    .padding(0.3);
+  return {
+    width,
+    height,
+    margin,
+    zeroY: y(0),
+    ticks: y.ticks(5).map((value) => ({ value, y: y(value) })),
+    bars: steps.map((s) => {
+      const top = y(Math.max(s.from, s.to));
+      const bottom = y(Math.min(s.from, s.to));
+      return { ...s, x: x(s.key) ?? 0, width: x.bandwidth(), y: top, height: Math.max(1, bottom - top), center: (x(s.key) ?? 0) + x.bandwidth() / 2 };
+    }),
+  };
+}

@@ -1,0 +1,239 @@
+/**
+ * The option cards' form model and its two-way mapping to the engine's option templates.
+ * Forms hold text (what people type); templates hold numbers. `toTemplates` turns every card
+ * into a template and collects a message per field that does not read, keyed by the form path
+ * (`options.1.cost.amount`), so each message appears beside its input. Percentages on the cards
+ * (growth, expansion factor, fraction kept) are fractions in the templates.
+ */
+import { optionTemplateSchema, type Cost, type ExerciseWindow, type OptionTemplate } from '@/lattice';
+
+export type OptionType = OptionTemplate['type'];
+export type CostKind = 'constant' | 'growing' | 'scheduled';
+
+export interface CostForm {
+  kind: CostKind;
+  amount: string;
+  /** Growth a year, in %. */
+  growth: string;
+  schedule: { from: string; amount: string }[];
+}
+
+export interface WindowForm {
+  kind: ExerciseWindow['kind'];
+  from: string;
+  to: string;
+  /** Bermudan dates in years, separated by commas or spaces. */
+  dates: string;
+  at: string;
+}
+
+export interface OptionForm {
+  type: OptionType;
+  label: string;
+  /** Expand: added scale in %; contract: share given up in %; switch: scale kept while switched in %. */
+  share: string;
+  cost: CostForm;
+  backCost: CostForm;
+  flowPerYear: string;
+  window: WindowForm;
+  payments: { at: string; amount: string }[];
+}
+
+export const optionTypeLabels: Record<OptionType, string> = {
+  expand: 'Expand',
+  contract: 'Contract',
+  abandon: 'Abandon',
+  defer: 'Defer',
+  stage: 'Stage',
+  switch: 'Mothball & restart',
+};
+
+const num = (value: number) => String(Number(value.toPrecision(12)));
+const pct = (fraction: number) => num(fraction * 100);
+
+function costToForm(cost: Cost | undefined): CostForm {
+  if (cost === undefined || typeof cost === 'number')
+    return { kind: 'constant', amount: num(cost ?? 0), growth: '0', schedule: [{ from: '0', amount: num(cost ?? 0) }] };
+  if (Array.isArray(cost))
+    return { kind: 'scheduled', amount: num(cost[0]?.amount ?? 0), growth: '0', schedule: cost.map((s) => ({ from: num(s.from), amount: num(s.amount) })) };
+  return { kind: 'growing', amount: num(cost.amount), growth: pct(cost.growth), schedule: [{ from: '0', amount: num(cost.amount) }] };
+}
+
+function windowToForm(window: ExerciseWindow | undefined, horizon: number): WindowForm {
+  const base = { kind: 'american' as const, from: '0', to: num(horizon), dates: '', at: num(horizon) };
+  if (!window) return base;
+  if (window.kind === 'american') return { ...base, from: num(window.from), to: num(window.to) };
+  if (window.kind === 'bermudan') return { ...base, kind: 'bermudan', dates: window.dates.map(num).join(', ') };
+  return { ...base, kind: 'european', at: num(window.at) };
+}
+
+export function templateToForm(t: OptionTemplate, horizon: number): OptionForm {
+  const form: OptionForm = {
+    type: t.type,
+    label: t.id ?? '',
+    share: '',
+    cost: costToForm(0),
+    backCost: costToForm(0),
+    flowPerYear: '0',
+    window: windowToForm(undefined, horizon),
+    payments: [],
+  };
+  switch (t.type) {
+    case 'expand':
+      return { ...form, share: pct(t.factor), cost: costToForm(t.cost), window: windowToForm(t.window, horizon) };
+    case 'contract':
+      return { ...form, share: pct(t.fraction), cost: costToForm(t.savings), window: windowToForm(t.window, horizon) };
+    case 'abandon':
+      return { ...form, cost: costToForm(t.salvage), window: windowToForm(t.window, horizon) };
+    case 'defer':
+      return { ...form, cost: costToForm(t.cost), window: windowToForm(t.window, horizon) };
+    case 'stage':
+      return { ...form, payments: t.payments.map((p) => ({ at: num(p.at), amount: num(p.amount) })) };
+    case 'switch':
+      return {
+        ...form,
+        share: pct(t.toScale),
+        cost: costToForm(t.cost),
+        backCost: costToForm(t.backCost),
+        flowPerYear: num(t.flowPerYear ?? 0),
+        window: windowToForm(t.window, horizon),
+      };
+  }
+}
+
+/** A fresh card of a kind, with figures that make sense for a project worth `v0` over `horizon` years. */
+export function newOptionForm(type: OptionType, horizon: number, v0: number): OptionForm {
+  const round = (x: number) => Math.max(1, Math.round(x));
+  const templates: Record<OptionType, OptionTemplate> = {
+    expand: { type: 'expand', id: 'Expand', factor: 0.3, cost: round(v0 * 0.25), window: { kind: 'american', from: 1, to: horizon } },
+    contract: { type: 'contract', id: 'Contract', fraction: 0.3, savings: round(v0 * 0.2), window: { kind: 'american', from: 1, to: horizon } },
+    abandon: { type: 'abandon', id: 'Abandon', salvage: round(v0 * 0.5), window: { kind: 'american', from: 0, to: horizon } },
+    defer: { type: 'defer', id: 'Defer', cost: round(v0 * 0.9), window: { kind: 'american', from: 0, to: Math.min(2, horizon) } },
+    stage: {
+      type: 'stage',
+      id: 'Stages',
+      payments: [
+        { at: 0, amount: round(v0 * 0.2) },
+        { at: Math.min(1, horizon), amount: round(v0 * 0.5) },
+      ],
+    },
+    switch: {
+      type: 'switch',
+      id: 'Mothball',
+      toScale: 0,
+      cost: round(v0 * 0.02),
+      backCost: round(v0 * 0.04),
+      flowPerYear: 0,
+      window: { kind: 'american', from: 0, to: horizon },
+    },
+  };
+  return templateToForm(templates[type], horizon);
+}
+
+type Problems = Record<string, string>;
+
+function readNumber(text: string, path: string, problems: Problems, rule?: (x: number) => string | null): number {
+  const cleaned = text.trim().replace(/^−/, '-').replace(/,/g, '');
+  const value = cleaned === '' ? NaN : Number(cleaned);
+  if (!Number.isFinite(value)) {
+    problems[path] ??= 'Enter a number.';
+    return 0;
+  }
+  const broken = rule?.(value);
+  if (broken) problems[path] ??= broken;
+  return value;
+}
+
+const nonNegative = (x: number) => (x < 0 ? 'Must be 0 or more.' : null);
+
+function readCost(form: CostForm, path: string, problems: Problems): Cost {
+  if (form.kind === 'constant') return readNumber(form.amount, `${path}.amount`, problems);
+  if (form.kind === 'growing')
+    return { amount: readNumber(form.amount, `${path}.amount`, problems), growth: readNumber(form.growth, `${path}.growth`, problems) / 100 };
+  if (form.schedule.length === 0) problems[`${path}.kind`] = 'Add at least one period to the schedule.';
+  const schedule = form.schedule.map((s, k) => ({
+    from: readNumber(s.from, `${path}.schedule.${k}.from`, problems, nonNegative),
+    amount: readNumber(s.amount, `${path}.schedule.${k}.amount`, problems),
+  }));
+  schedule.forEach((s, k) => {
+    if (k > 0 && s.from <= schedule[k - 1]!.from) problems[`${path}.schedule.${k}.from`] ??= `Must come after year ${schedule[k - 1]!.from}.`;
+  });
+  return schedule;
+}
+
+function readWindow(form: WindowForm, path: string, horizon: number, problems: Problems): ExerciseWindow {
+  const inside = (x: number) => (x < 0 || x > horizon + 1e-9 ? `Must lie between year 0 and the horizon, year ${horizon}.` : null);
+  if (form.kind === 'american') {
+    const from = readNumber(form.from, `${path}.from`, problems, inside);
+    const to = readNumber(form.to, `${path}.to`, problems, inside);
+    if (from > to) problems[`${path}.to`] ??= 'Must not come before the opening year.';
+    return { kind: 'american', from, to };
+  }
+  if (form.kind === 'european') return { kind: 'european', at: readNumber(form.at, `${path}.at`, problems, inside) };
+  const parts = form.dates.split(/[\s,;]+/).filter(Boolean);
+  if (parts.length === 0) problems[`${path}.dates`] = 'List at least one date, e.g. 1, 2, 3.';
+  const dates = parts.map((p) => readNumber(p, `${path}.dates`, problems, inside));
+  return { kind: 'bermudan', dates };
+}
+
+/** Every card as an engine template, with the problems of those that do not read (empty when all do). */
+export function toTemplates(forms: OptionForm[], horizon: number): { templates: OptionTemplate[]; problems: Problems } {
+  const problems: Problems = {};
+  const templates = forms.map((f, i): OptionTemplate => {
+    const at = `options.${i}`;
+    const id = f.label.trim() || undefined;
+    const labelsBefore = forms.slice(0, i).map((g) => g.label.trim());
+    if (id && labelsBefore.includes(id)) problems[`${at}.label`] = 'Another option already has this name.';
+    const window = () => readWindow(f.window, `${at}.window`, horizon, problems);
+    const share = (rule: (x: number) => string | null) => readNumber(f.share, `${at}.share`, problems, rule) / 100;
+    switch (f.type) {
+      case 'expand':
+        return {
+          type: 'expand',
+          id,
+          factor: share((x) => (x <= 0 ? 'Must be above 0 %.' : null)),
+          cost: readCost(f.cost, `${at}.cost`, problems),
+          window: window(),
+        };
+      case 'contract':
+        return {
+          type: 'contract',
+          id,
+          fraction: share((x) => (x <= 0 || x > 100 ? 'Must be above 0 % and at most 100 %.' : null)),
+          savings: readCost(f.cost, `${at}.cost`, problems),
+          window: window(),
+        };
+      case 'abandon':
+        return { type: 'abandon', id, salvage: readCost(f.cost, `${at}.cost`, problems), window: window() };
+      case 'defer':
+        return { type: 'defer', id, cost: readCost(f.cost, `${at}.cost`, problems), window: window() };
+      case 'stage':
+        if (f.payments.length === 0) problems[`${at}.payments`] = 'Add at least one payment.';
+        return {
+          type: 'stage',
+          id,
+          payments: f.payments.map((p, k) => ({
+            at: readNumber(p.at, `${at}.payments.${k}.at`, problems, (x) => (x < 0 || x > horizon ? `Must lie between year 0 and year ${horizon}.` : null)),
+            amount: readNumber(p.amount, `${at}.payments.${k}.amount`, problems, nonNegative),
+          })),
+        };
+      case 'switch':
+        return {
+          type: 'switch',
+          id,
+          toScale: share(nonNegative),
+          cost: readCost(f.cost, `${at}.cost`, problems),
+          backCost: readCost(f.backCost, `${at}.backCost`, problems),
+          flowPerYear: readNumber(f.flowPerYear, `${at}.flowPerYear`, problems),
+          window: window(),
+        };
+    }
+  });
+  // The engine's own schema has the last word on shapes (the same one the server uses).
+  templates.forEach((t, i) => {
+    if (Object.keys(problems).some((path) => path.startsWith(`options.${i}.`))) return;
+    const parsed = optionTemplateSchema.safeParse(t);
+    if (!parsed.success) for (const issue of parsed.error.issues) problems[`options.${i}.${issue.path.join('.')}`] ??= issue.message;
+  });
+  return { templates, problems };
+}
