@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { Input } from './ui/input';
 
 interface Props {
@@ -27,10 +27,13 @@ const show = (value: number, percent: boolean) => (percent ? String(Number((valu
 export function NumberField({ label, value, onChange, percent = false, check, hint, readOnly, integer, className }: Props) {
   const [text, setText] = useState(show(value, percent));
   const [error, setError] = useState<string | null>(null);
-  // Follow outside changes (a reload, an import) without fighting the user's typing.
-  useEffect(() => {
-    setText((current) => (Number(current) * (percent ? 0.01 : 1) === value ? current : show(value, percent)));
-  }, [value, percent]);
+  // Follow outside changes (a reload, an import) without fighting the user's typing: adjust
+  // the text while rendering when the model's value moved away from what the text says.
+  const [seen, setSeen] = useState(value);
+  if (value !== seen) {
+    setSeen(value);
+    if (Number(text) * (percent ? 0.01 : 1) !== value) setText(show(value, percent));
+  }
   const change = (next: string) => {
     setText(next);
     const cleaned = next.trim().replace(/^−/, '-');

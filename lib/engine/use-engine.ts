@@ -69,7 +69,7 @@ type Job = { kind: 'value'; model: unknown; options?: ValueOptions } | { kind: '
  */
 function useEngineJob<T>(job: Job | null, delay: number): EngineState<T> {
   const client = useRef<EngineClient | null>(null);
-  const [state, setState] = useState<EngineState<T>>({ result: null, issues: null, computing: false });
+  const [answered, setAnswered] = useState<{ key: string | null; result: T | null; issues: ModelIssue[] | null }>({ key: null, result: null, issues: null });
   const key = job === null ? null : JSON.stringify(job);
   useEffect(() => {
     const own = new EngineClient();
@@ -77,23 +77,20 @@ function useEngineJob<T>(job: Job | null, delay: number): EngineState<T> {
     return () => own.stop();
   }, []);
   useEffect(() => {
-    if (key === null) {
-      setState({ result: null, issues: null, computing: false });
-      return;
-    }
+    if (key === null) return;
     let live = true;
-    setState((s) => ({ ...s, computing: true }));
     const timer = setTimeout(async () => {
       const answer = await client.current!.send(JSON.parse(key) as Job);
       if (!live || answer === null) return;
-      setState(answer.ok ? { result: answer.result as T, issues: null, computing: false } : { result: null, issues: answer.issues, computing: false });
+      setAnswered(answer.ok ? { key, result: answer.result as T, issues: null } : { key, result: null, issues: answer.issues });
     }, delay);
     return () => {
       live = false;
       clearTimeout(timer);
     };
   }, [key, delay]);
-  return state;
+  if (key === null) return { result: null, issues: null, computing: false };
+  return { result: answered.result, issues: answered.issues, computing: answered.key !== key };
 }
 
 /** Values `model` with the engine (debounced while the user types); `null` clears the result. */

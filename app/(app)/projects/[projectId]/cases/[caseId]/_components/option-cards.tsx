@@ -246,7 +246,6 @@ interface Props {
  */
 export function OptionCards({ options, horizon, v0, readOnly, onChange }: Props) {
   const horizonRef = useRef(horizon);
-  horizonRef.current = horizon;
   const resolver: Resolver<Fields> = async (values, _context, resolverOptions) => {
     const { problems } = toTemplates(values.options, horizonRef.current);
     if (Object.keys(problems).length === 0) return { values, errors: {} };
@@ -257,16 +256,24 @@ export function OptionCards({ options, horizon, v0, readOnly, onChange }: Props)
   const list = useFieldArray({ control: form.control, name: 'options' });
   const { errors } = form.formState;
   const onChangeRef = useRef(onChange);
-  onChangeRef.current = onChange;
-
+  // The resolver and the subscription read the latest horizon and callback through refs.
   useEffect(() => {
-    const subscription = form.watch((values) => {
-      const { templates, problems } = toTemplates((values.options ?? []) as OptionForm[], horizonRef.current);
-      const count = Object.keys(problems).length;
-      onChangeRef.current(count === 0 ? templates : null, count);
-    });
-    return () => subscription.unsubscribe();
-  }, [form]);
+    horizonRef.current = horizon;
+    onChangeRef.current = onChange;
+  });
+
+  useEffect(
+    () =>
+      form.subscribe({
+        formState: { values: true },
+        callback: ({ values }) => {
+          const { templates, problems } = toTemplates(values.options ?? [], horizonRef.current);
+          const count = Object.keys(problems).length;
+          onChangeRef.current(count === 0 ? templates : null, count);
+        },
+      }),
+    [form],
+  );
   // A change of horizon can move a window outside it: check again.
   useEffect(() => {
     void form.trigger();
