@@ -53,11 +53,14 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
             );
           }),
         )}
-        {y.ticks(5).map((t) => (
-          <text key={t} x={margin.left - 8} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
-            {formatMoney(t, undefined, 0)}
-          </text>
-        ))}
+        {y
+          .ticks(4)
+          .filter((t) => Math.log10(t) % 1 === 0)
+          .map((t) => (
+            <text key={t} x={margin.left - 8} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
+              {formatMoney(t, undefined, t < 1 ? 2 : 0)}
+            </text>
+          ))}
         {x.ticks(8).map((t) => (
           <text key={t} x={x(t)} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
             {t}

@@ -252,7 +252,7 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, initi
           },
           {
             id: 'uncertainty',
-            label: 'Uncertainty & lattice',
+            label: 'Uncertainty',
             content: <LatticeSettingsSection settings={draft.settings} horizon={horizon} readOnly={readOnly} onChange={(settings) => update({ settings })} />,
           },
           {

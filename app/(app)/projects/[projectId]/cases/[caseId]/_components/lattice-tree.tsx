@@ -31,16 +31,30 @@ export function LatticeTree({ grid, mode, steps, selected, onSelect, decisionOrd
   const viewHeight = Math.min(560, Math.max(260, layout.height));
 
   useEffect(() => {
-    if (!svgRef.current || !layerRef.current) return;
+    const element = svgRef.current;
+    if (!element || !layerRef.current) return;
     const layer = select(layerRef.current);
+    let touched = false;
     const behaviour = zoom<SVGSVGElement, unknown>()
       .scaleExtent([0.3, 3])
-      .on('zoom', (event) => layer.attr('transform', event.transform.toString()));
+      .on('zoom', (event) => {
+        if (event.sourceEvent) touched = true;
+        layer.attr('transform', event.transform.toString());
+      });
     zoomRef.current = behaviour;
-    const svg = select(svgRef.current).call(behaviour);
-    const fit = Math.min(1, (svgRef.current.clientWidth || 800) / layout.width, viewHeight / layout.height);
-    svg.call(behaviour.transform, zoomIdentity.translate(0, (viewHeight - layout.height * fit) / 2).scale(fit));
+    const svg = select(element).call(behaviour);
+    // Fit the tree to the box, again whenever the box changes size (e.g. its tab is shown),
+    // until the user pans or zooms themselves.
+    const fit = () => {
+      if (touched || element.clientWidth === 0) return;
+      const k = Math.min(1, element.clientWidth / layout.width, viewHeight / layout.height);
+      svg.call(behaviour.transform, zoomIdentity.translate((element.clientWidth - layout.width * k) / 2, (viewHeight - layout.height * k) / 2).scale(k));
+    };
+    fit();
+    const observer = new ResizeObserver(fit);
+    observer.observe(element);
     return () => {
+      observer.disconnect();
       svg.on('.zoom', null);
     };
   }, [layout.width, layout.height, viewHeight]);

@@ -49,6 +49,14 @@ function Panel({ title, note, children }: { title: string; note?: string; childr
 
 /** What the valuation says: the bridge, each right's value and use, sensitivities, convergence, and the cautions. */
 export function ResultsSection({ result, currency }: { result: ValuationResult; currency: string }) {
+  // The engine reports convergence of the lattice value; the page speaks in expanded NPV, which
+  // differs from it by the fixed outlay.
+  const outlay = result.value - result.expandedNpv;
+  const convergence = result.convergence && {
+    points: result.convergence.points.map((p) => ({ steps: p.steps, value: p.value - outlay })),
+    extrapolated: result.convergence.extrapolated - outlay,
+    errorEstimate: result.convergence.errorEstimate,
+  };
   return (
     <div className="flex flex-col gap-6">
       <Panel
@@ -103,16 +111,16 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
         </Panel>
       ) : null}
       <div className="grid gap-6 xl:grid-cols-2">
-        {result.convergence ? (
+        {convergence ? (
           <Panel
             title="Convergence as steps grow"
             note={
-              Number.isFinite(result.convergence.errorEstimate)
-                ? `Change over the last halving of steps: ${formatMoney(result.convergence.errorEstimate, currency, 2)}; extrapolated value ${formatMoney(result.convergence.extrapolated, currency, 2)}.`
+              Number.isFinite(convergence.errorEstimate)
+                ? `Expanded NPV at fewer steps. Change over the last halving: ${formatMoney(convergence.errorEstimate, currency, 2)}; extrapolated expanded NPV ${formatMoney(convergence.extrapolated, currency, 2)}.`
                 : 'Too few steps to estimate the error.'
             }
           >
-            <ConvergenceChart convergence={result.convergence} currency={currency} />
+            <ConvergenceChart convergence={convergence} currency={currency} />
           </Panel>
         ) : null}
         <Panel title="The lattice" note={`${result.tree.kind.toUpperCase()} tree, engine ${result.engineVersion}.`}>
