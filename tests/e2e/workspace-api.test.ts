@@ -74,6 +74,7 @@ describe('workspace API by role', () => {
     for (const url of [
       `/api/v1/projects/${projectId}`,
       `/api/v1/projects/${projectId}/cases`,
+      `/api/v1/projects/${projectId}/activity`,
       `/api/v1/cases/${caseId}`,
       `/api/v1/cases/${caseId}/valuations`,
     ]) {

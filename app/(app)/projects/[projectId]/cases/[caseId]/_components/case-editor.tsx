@@ -232,6 +232,9 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, initi
             : busy
               ? 'Recomputing in your browser…'
               : 'Computed live in your browser from the figures on screen; “Value case” stores a run on the server.'}
+        {result && analysis && Math.abs(result.staticNpv - analysis.staticNpv) > 0.05
+          ? ` Static NPV here is the plan without flexibility as the lattice values it: a defer cost or stage payments are discounted at the risk-free rate (at the WACC it is ${formatMoney(analysis.staticNpv, currency)}, see Cash flows).`
+          : ''}
       </p>
 
       <Tabs
