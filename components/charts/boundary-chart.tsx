@@ -57,18 +57,15 @@ export function BoundaryChart({ switches, v0, horizon, currency }: { switches: S
         <text x={margin.left + 4} y={y(v0) - 4} className="fill-ink-muted text-caption">
           V₀ today {formatMoney(v0)}
         </text>
-        {series.map(({ s, k, points }) =>
-          points.length > 0 ? (
-            <path
-              key={s.id}
-              d={path(points) ?? ''}
-              fill="none"
-              stroke={strokes[k % strokes.length]}
-              strokeWidth="2"
-              strokeDasharray={dashes[k % dashes.length]}
-            />
-          ) : null,
-        )}
+        {series.map(({ s, k, points }) => (
+          <g key={s.id}>
+            {points.length > 1 ? (
+              <path d={path(points) ?? ''} fill="none" stroke={strokes[k % strokes.length]} strokeWidth="2" strokeDasharray={dashes[k % dashes.length]} />
+            ) : null}
+            {/* A right open at a single date has a point, not a line. */}
+            {points.length < 3 ? points.map((p) => <circle key={p.t} cx={x(p.t)} cy={y(p.v)} r="4" fill={strokes[k % strokes.length]} />) : null}
+          </g>
+        ))}
       </svg>
       <ul className="mt-2 flex flex-col gap-1 text-caption text-ink-soft">
         {series.map(({ s, k, rule }) => (
