@@ -86,7 +86,7 @@ export interface CaseTable {
   project_id: string;
   name: string;
   version: Generated<number>;
-  status: Generated<string>;
+  status: Generated<CaseStatus>;
   cash_flows: Json<unknown>;
   settings: Json<unknown>;
   options: Json<unknown[]>;
@@ -108,6 +108,48 @@ export interface ValuationRunTable {
   created_at: Timestamp;
 }
 
+export type CaseStatus = 'draft' | 'in_review' | 'approved' | 'returned';
+
+export interface CaseSnapshotTable {
+  id: Generated<string>;
+  organization_id: string;
+  case_id: string;
+  case_version: number;
+  case_name: string;
+  inputs: Json<unknown>;
+  model: Json<unknown>;
+  result: Json<unknown>;
+  engine_version: string;
+  input_hash: string;
+  submitted_by: string | null;
+  submitted_at: Timestamp;
+  status: Generated<'in_review' | 'approved' | 'returned'>;
+  decided_by: string | null;
+  decided_at: Date | null;
+  decision_reason: string | null;
+}
+
+export interface ReviewCommentTable {
+  id: Generated<string>;
+  organization_id: string;
+  case_id: string;
+  snapshot_id: string | null;
+  section: string;
+  body: string;
+  author_id: string | null;
+  created_at: Timestamp;
+}
+
+export interface BoardPackTable {
+  id: Generated<string>;
+  organization_id: string;
+  snapshot_id: string;
+  page_size: 'A4' | 'LETTER';
+  pdf: Buffer;
+  sha256: string;
+  created_at: Timestamp;
+}
+
 export interface DB {
   user: UserTable;
   organization: OrganizationTable;
@@ -118,6 +160,9 @@ export interface DB {
   project: ProjectTable;
   case: CaseTable;
   valuation_run: ValuationRunTable;
+  case_snapshot: CaseSnapshotTable;
+  review_comment: ReviewCommentTable;
+  board_pack: BoardPackTable;
 }
 
 export type OrganizationSettings = Selectable<OrganizationSettingsTable>;
@@ -128,3 +173,5 @@ export type Member = Selectable<MemberTable>;
 export type Project = Selectable<ProjectTable>;
 export type Case = Selectable<CaseTable>;
 export type ValuationRun = Selectable<ValuationRunTable>;
+export type CaseSnapshot = Selectable<CaseSnapshotTable>;
+export type ReviewComment = Selectable<ReviewCommentTable>;

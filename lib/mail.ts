@@ -12,6 +12,7 @@ export interface Mail {
   subject: string;
   text: string;
   html?: string;
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
 }
 
 export async function sendMail(mail: Mail): Promise<void> {

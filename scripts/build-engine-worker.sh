@@ -1,6 +1,12 @@
 #!/usr/bin/env bash
-# Bundles the engine's worker-thread entry into .data/engine-worker.mjs (loaded by lib/engine/pool.ts).
+# Bundles the worker-thread entries: the engine (.data/engine-worker.mjs, loaded by
+# lib/engine/pool.ts) and the board pack renderer (.data/board-pack-worker.mjs, loaded by
+# lib/board-pack/store.ts), so CPU-bound work never runs on a request's event loop.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 mkdir -p .data
 npx esbuild lattice/worker-entry.ts --bundle --platform=node --format=esm --target=node20 --outfile=.data/engine-worker.mjs --log-level=warning
+# react-pdf's packages stay outside the bundle (they load their own assets at run time); the
+# worker imports them from node_modules like the app does.
+npx esbuild lib/board-pack/worker-entry.ts --bundle --platform=node --format=esm --target=node20 --jsx=automatic --alias:@=. \
+  --external:@react-pdf/renderer --external:react --outfile=.data/board-pack-worker.mjs --log-level=warning

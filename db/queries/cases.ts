@@ -13,7 +13,7 @@ export interface CaseContent {
   options: unknown[];
 }
 
-export type CaseSave = { ok: true; row: Case } | { ok: false; reason: 'not_found' | 'conflict'; currentVersion?: number };
+export type CaseSave = { ok: true; row: Case } | { ok: false; reason: 'not_found' | 'conflict' | 'in_review'; currentVersion?: number };
 
 export async function createCase(db: Database, args: { orgId: string; projectId: string; createdBy: string; content: CaseContent }): Promise<Case | undefined> {
   const project = await db.selectFrom('project').select('id').where('organization_id', '=', args.orgId).where('id', '=', args.projectId).executeTakeFirst();
@@ -41,7 +41,11 @@ export async function listCases(db: Database, { orgId, projectId }: { orgId: str
   return db.selectFrom('case').selectAll().where('organization_id', '=', orgId).where('project_id', '=', projectId).orderBy('created_at').execute();
 }
 
-/** Saves new content if the case is still at `expectedVersion`, and moves it to the next version. */
+/**
+ * Saves new content if the case is still at `expectedVersion` and not in review, and moves it to
+ * the next version. A saved case is a draft: an approval or a return belongs to the snapshot
+ * that was reviewed, not to later edits (lib/review/transitions.ts).
+ */
 export async function saveCase(db: Database, args: { orgId: string; caseId: string; expectedVersion: number; content: CaseContent }): Promise<CaseSave> {
   const row = await db
     .updateTable('case')
@@ -51,16 +55,19 @@ export async function saveCase(db: Database, args: { orgId: string; caseId: stri
       settings: JSON.stringify(args.content.settings),
       options: JSON.stringify(args.content.options),
       version: eb('version', '+', 1),
+      status: 'draft' as const,
       updated_at: new Date(),
     }))
     .where('organization_id', '=', args.orgId)
     .where('id', '=', args.caseId)
     .where('version', '=', args.expectedVersion)
+    .where('status', '!=', 'in_review')
     .returningAll()
     .executeTakeFirst();
   if (row) return { ok: true, row };
   const current = await findCase(db, { orgId: args.orgId, caseId: args.caseId });
-  return current ? { ok: false, reason: 'conflict', currentVersion: current.version } : { ok: false, reason: 'not_found' };
+  if (!current) return { ok: false, reason: 'not_found' };
+  return { ok: false, reason: current.status === 'in_review' ? 'in_review' : 'conflict', currentVersion: current.version };
 }
 
 /** A copy of a case, as a new case at version 1 under the same project. */

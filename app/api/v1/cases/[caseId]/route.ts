@@ -29,6 +29,8 @@ export const PATCH = withAuth<Params, typeof caseSaveSchema>(
     const { version, ...content } = body;
     const saved = await saveCase(db, { orgId: member.orgId, caseId: params.caseId, expectedVersion: version, content });
     if (!saved.ok && saved.reason === 'not_found') throw missing();
+    if (!saved.ok && saved.reason === 'in_review')
+      throw new AppError('conflict', 'This case is in review and cannot be edited until a reviewer returns it. Nothing was changed.');
     if (!saved.ok)
       throw new AppError(
         'conflict',

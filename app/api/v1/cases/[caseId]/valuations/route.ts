@@ -5,11 +5,8 @@ import { recordAudit } from '@/db/queries/audit';
 import { findCase } from '@/db/queries/cases';
 import { listValuationRuns, recordValuationRun } from '@/db/queries/valuation-runs';
 import { withAuth } from '@/lib/api';
-import { caseToModel } from '@/lib/case-model';
-import { EngineRefusal, valueInWorker } from '@/lib/engine/pool';
 import { AppError } from '@/lib/errors';
-import { hashModel } from '@/lib/model-hash';
-import type { CaseInput } from '@/lib/validations/case';
+import { valueStoredCase } from '@/lib/value-case';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -25,20 +22,7 @@ export const POST = withAuth<Params>(
   async ({ member, params }) => {
     const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
     if (!stored) throw missing();
-    const { model, warnings } = caseToModel({
-      name: stored.name,
-      cashFlows: stored.cash_flows,
-      settings: stored.settings,
-      options: stored.options,
-    } as CaseInput);
-    let result;
-    try {
-      result = await valueInWorker(model);
-    } catch (error) {
-      if (error instanceof EngineRefusal) throw new AppError('unprocessable', `The case cannot be valued: ${error.issues[0]?.message}`);
-      throw error;
-    }
-    const inputHash = hashModel(model);
+    const { model, warnings, result, inputHash } = await valueStoredCase(stored);
     const run = await recordValuationRun(db, {
       orgId: member.orgId,
       caseId: stored.id,

@@ -2,20 +2,9 @@
 
 import { useMemo } from 'react';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
-import { ModelError, prepareModel, type Cost, type ExerciseWindow, type ProjectModel } from '@/lattice';
-import { formatNumber, formatPercent } from '@/lib/format';
-
-function describeCost(cost: Cost): string {
-  if (typeof cost === 'number') return formatNumber(cost, 2);
-  if (Array.isArray(cost)) return cost.map((s) => `${formatNumber(s.amount, 2)} from year ${s.from}`).join('; ');
-  return `${formatNumber(cost.amount, 2)} growing ${formatPercent(cost.growth)} a year`;
-}
-
-function describeWindow(w: ExerciseWindow): string {
-  if (w.kind === 'american') return `any time, years ${w.from}–${w.to}`;
-  if (w.kind === 'bermudan') return `years ${w.dates.join(', ')}`;
-  return `year ${w.at}`;
-}
+import { ModelError, prepareModel, type ProjectModel } from '@/lattice';
+import { formatNumber } from '@/lib/format';
+import { describeCost, describeWindow } from '@/lib/option-words';
 
 /**
  * The advanced view: the operating modes and switches the option cards compile to, as the

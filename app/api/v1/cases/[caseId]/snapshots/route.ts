@@ -1,0 +1,35 @@
+// GET /api/v1/cases/{id}/snapshots – the case's review history: every frozen snapshot and its decision
+import { NextResponse } from 'next/server';
+import { db } from '@/db';
+import { findCase } from '@/db/queries/cases';
+import { listSnapshots } from '@/db/queries/reviews';
+import { withAuth } from '@/lib/api';
+import { AppError } from '@/lib/errors';
+
+export const dynamic = 'force-dynamic';
+
+export const GET = withAuth<{ caseId: string }>(
+  async ({ member, params }) => {
+    const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
+    if (!found) throw new AppError('not_found', 'No such case in your organisation.');
+    const snapshots = await listSnapshots(db, { orgId: member.orgId, caseId: found.id });
+    return NextResponse.json({
+      status: found.status,
+      snapshots: snapshots.map((s) => ({
+        id: s.id,
+        caseVersion: s.case_version,
+        caseName: s.case_name,
+        status: s.status,
+        submittedAt: s.submitted_at,
+        submittedBy: s.submitted_by_name,
+        decidedAt: s.decided_at,
+        decidedBy: s.decided_by_name,
+        decisionReason: s.decision_reason,
+        engineVersion: s.engine_version,
+        inputHash: s.input_hash,
+        expandedNpv: s.expanded_npv,
+      })),
+    });
+  },
+  { permission: { case: ['read'] } },
+);

@@ -1,0 +1,53 @@
+// POST /api/v1/cases/{id}/submit – value the case, freeze the snapshot and send it for review
+import { NextResponse } from 'next/server';
+import { db } from '@/db';
+import { recordAudit } from '@/db/queries/audit';
+import { submitCase } from '@/db/queries/reviews';
+import { withAuth } from '@/lib/api';
+import { AppError } from '@/lib/errors';
+import { loadCaseRef, refOf } from '@/lib/review/case-ref';
+import { notifySubmitted } from '@/lib/review/notify';
+import { presentSnapshot } from '@/lib/review/present';
+import { checkTransition } from '@/lib/review/transitions';
+import { valueStoredCase } from '@/lib/value-case';
+
+export const dynamic = 'force-dynamic';
+export const runtime = 'nodejs';
+
+export const POST = withAuth<{ caseId: string }>(
+  async ({ member, params }) => {
+    const stored = await loadCaseRef(member.orgId, params.caseId);
+    // Refuse early (before the valuation) when the status does not allow it; the transaction checks again.
+    const early = checkTransition(member.role, 'submit', stored.status);
+    if (!early.ok) throw new AppError(early.code, early.message);
+    const valuation = await valueStoredCase(stored);
+    const outcome = await db.transaction().execute((trx) =>
+      submitCase(trx, {
+        orgId: member.orgId,
+        caseId: stored.id,
+        role: member.role,
+        userId: member.userId,
+        caseVersion: stored.version,
+        frozen: {
+          inputs: valuation.inputs,
+          model: valuation.model,
+          result: valuation.result,
+          engineVersion: valuation.result.engineVersion,
+          inputHash: valuation.inputHash,
+        },
+      }),
+    );
+    if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
+    await recordAudit(db, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.submit',
+      subjectType: 'case',
+      subjectId: stored.id,
+      detail: { name: stored.name, snapshot: outcome.value.id, expandedNpv: valuation.result.expandedNpv },
+    });
+    await notifySubmitted(refOf(stored, valuation.result.expandedNpv), member.name);
+    return NextResponse.json({ snapshot: presentSnapshot(outcome.value) }, { status: 201 });
+  },
+  { permission: { case: ['submit'] } },
+);

@@ -1,0 +1,196 @@
+/**
+ * The review workflow's data: snapshots frozen at submission, decisions, comments and the review
+ * queue. Every status change locks the case row (SELECT … FOR UPDATE) inside the caller's
+ * transaction and checks the status machine there, so two reviewers acting at once cannot both
+ * win: the second sees the first one's status and gets a conflict.
+ */
+import { sql, type Transaction } from 'kysely';
+import type { RoleName } from '@/lib/permissions';
+import { checkTransition, type ReviewAction } from '@/lib/review/transitions';
+import type { Database } from '../index';
+import type { CaseSnapshot, CaseStatus, DB } from '../types';
+
+export type ReviewOutcome<T> = { ok: true; value: T } | { ok: false; code: 'not_found' | 'forbidden' | 'conflict'; message: string };
+
+async function lockCase(trx: Transaction<DB>, orgId: string, caseId: string) {
+  return trx.selectFrom('case').selectAll().where('organization_id', '=', orgId).where('id', '=', caseId).forUpdate().executeTakeFirst();
+}
+
+export interface FrozenValuation {
+  inputs: unknown;
+  model: unknown;
+  result: unknown;
+  engineVersion: string;
+  inputHash: string;
+}
+
+/**
+ * Submits the case for review: freezes `frozen` (valued from the case at `caseVersion`) as a
+ * snapshot and moves the case to in_review. Refused if the case changed since it was valued.
+ */
+export async function submitCase(
+  trx: Transaction<DB>,
+  args: { orgId: string; caseId: string; role: RoleName; userId: string; caseVersion: number; frozen: FrozenValuation },
+): Promise<ReviewOutcome<CaseSnapshot>> {
+  const row = await lockCase(trx, args.orgId, args.caseId);
+  if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
+  const check = checkTransition(args.role, 'submit', row.status);
+  if (!check.ok) return check;
+  if (row.version !== args.caseVersion)
+    return { ok: false, code: 'conflict', message: 'The case was saved again while it was being valued; submit it once more.' };
+  const snapshot = await trx
+    .insertInto('case_snapshot')
+    .values({
+      organization_id: args.orgId,
+      case_id: row.id,
+      case_version: row.version,
+      case_name: row.name,
+      inputs: JSON.stringify(args.frozen.inputs),
+      model: JSON.stringify(args.frozen.model),
+      result: JSON.stringify(args.frozen.result),
+      engine_version: args.frozen.engineVersion,
+      input_hash: args.frozen.inputHash,
+      submitted_by: args.userId,
+    })
+    .returningAll()
+    .executeTakeFirstOrThrow();
+  await trx.updateTable('case').set({ status: check.to }).where('id', '=', row.id).execute();
+  return { ok: true, value: snapshot };
+}
+
+/** Approves or returns the case's snapshot under review. */
+export async function decideCase(
+  trx: Transaction<DB>,
+  args: { orgId: string; caseId: string; role: RoleName; userId: string; action: Exclude<ReviewAction, 'submit'>; reason?: string },
+): Promise<ReviewOutcome<CaseSnapshot>> {
+  const row = await lockCase(trx, args.orgId, args.caseId);
+  if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
+  const check = checkTransition(args.role, args.action, row.status);
+  if (!check.ok) return check;
+  const snapshot = await trx
+    .updateTable('case_snapshot')
+    .set({ status: check.to as 'approved' | 'returned', decided_by: args.userId, decided_at: new Date(), decision_reason: args.reason ?? null })
+    .where('organization_id', '=', args.orgId)
+    .where('case_id', '=', row.id)
+    .where('status', '=', 'in_review')
+    .returningAll()
+    .executeTakeFirst();
+  if (!snapshot) return { ok: false, code: 'conflict', message: 'There is no snapshot waiting for a decision.' };
+  await trx.updateTable('case').set({ status: check.to }).where('id', '=', row.id).execute();
+  return { ok: true, value: snapshot };
+}
+
+export async function listSnapshots(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
+  return db
+    .selectFrom('case_snapshot')
+    .leftJoin('user as submitter', 'submitter.id', 'case_snapshot.submitted_by')
+    .leftJoin('user as decider', 'decider.id', 'case_snapshot.decided_by')
+    .select([
+      'case_snapshot.id',
+      'case_snapshot.case_version',
+      'case_snapshot.case_name',
+      'case_snapshot.status',
+      'case_snapshot.submitted_at',
+      'case_snapshot.decided_at',
+      'case_snapshot.decision_reason',
+      'case_snapshot.engine_version',
+      'case_snapshot.input_hash',
+      'submitter.name as submitted_by_name',
+      'decider.name as decided_by_name',
+      sql<number>`(case_snapshot.result->>'expandedNpv')::float8`.as('expanded_npv'),
+    ])
+    .where('case_snapshot.organization_id', '=', orgId)
+    .where('case_snapshot.case_id', '=', caseId)
+    .orderBy('case_snapshot.submitted_at', 'desc')
+    .execute();
+}
+
+export async function findSnapshot(db: Database, { orgId, snapshotId }: { orgId: string; snapshotId: string }) {
+  return db.selectFrom('case_snapshot').selectAll().where('organization_id', '=', orgId).where('id', '=', snapshotId).executeTakeFirst();
+}
+
+export async function latestApprovedSnapshot(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
+  return db
+    .selectFrom('case_snapshot')
+    .selectAll()
+    .where('organization_id', '=', orgId)
+    .where('case_id', '=', caseId)
+    .where('status', '=', 'approved')
+    .orderBy('decided_at', 'desc')
+    .limit(1)
+    .executeTakeFirst();
+}
+
+/** Cases waiting for a decision, oldest submission first, with their headline figures. */
+export async function listReviewQueue(db: Database, { orgId, statuses = ['in_review'] }: { orgId: string; statuses?: CaseStatus[] }) {
+  return (
+    db
+      .selectFrom('case')
+      .innerJoin('project', 'project.id', 'case.project_id')
+      .innerJoin('case_snapshot', (join) => join.onRef('case_snapshot.case_id', '=', 'case.id'))
+      .leftJoin('user', 'user.id', 'case_snapshot.submitted_by')
+      .select([
+        'case.id as caseId',
+        'case.name as caseName',
+        'case.status',
+        'project.id as projectId',
+        'project.name as projectName',
+        'project.currency',
+        'case_snapshot.id as snapshotId',
+        'case_snapshot.submitted_at as submittedAt',
+        'case_snapshot.decided_at as decidedAt',
+        'user.name as submittedBy',
+        sql<number>`(case_snapshot.result->>'staticNpv')::float8`.as('staticNpv'),
+        sql<number>`(case_snapshot.result->>'expandedNpv')::float8`.as('expandedNpv'),
+      ])
+      .where('case.organization_id', '=', orgId)
+      .where('case.status', 'in', statuses)
+      // The snapshot that holds the case's current status: the latest one.
+      .where('case_snapshot.submitted_at', '=', (eb) =>
+        eb
+          .selectFrom('case_snapshot as s')
+          .select((e) => e.fn.max('s.submitted_at').as('m'))
+          .whereRef('s.case_id', '=', 'case.id'),
+      )
+      .orderBy('case_snapshot.submitted_at')
+      .execute()
+  );
+}
+
+export const commentSections = ['general', 'cash-flows', 'uncertainty', 'flexibility', 'results', 'lattice'] as const;
+
+export async function addComment(db: Database, args: { orgId: string; caseId: string; authorId: string; section: string; body: string }) {
+  const row = await db.selectFrom('case').select(['id']).where('organization_id', '=', args.orgId).where('id', '=', args.caseId).executeTakeFirst();
+  if (!row) return undefined;
+  const snapshot = await db.selectFrom('case_snapshot').select('id').where('case_id', '=', row.id).orderBy('submitted_at', 'desc').limit(1).executeTakeFirst();
+  return db
+    .insertInto('review_comment')
+    .values({
+      organization_id: args.orgId,
+      case_id: row.id,
+      snapshot_id: snapshot?.id ?? null,
+      section: args.section,
+      body: args.body,
+      author_id: args.authorId,
+    })
+    .returningAll()
+    .executeTakeFirstOrThrow();
+}
+
+export async function listComments(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
+  return db
+    .selectFrom('review_comment')
+    .leftJoin('user', 'user.id', 'review_comment.author_id')
+    .select([
+      'review_comment.id',
+      'review_comment.section',
+      'review_comment.body',
+      'review_comment.created_at',
+      'review_comment.snapshot_id',
+      'user.name as author',
+    ])
+    .where('review_comment.organization_id', '=', orgId)
+    .where('review_comment.case_id', '=', caseId)
+    .orderBy('review_comment.created_at')
+    .execute();
+}

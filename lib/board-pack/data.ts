@@ -1,0 +1,28 @@
+/** Everything a board pack shows, gathered from one approved snapshot (and nothing else). */
+import type { NodeGrid, ProjectModel, ValuationResult } from '@/lattice';
+import type { CaseInput } from '../validations/case';
+
+export type PageSize = 'A4' | 'LETTER';
+
+export interface BoardPackData {
+  pageSize: PageSize;
+  organisation: string;
+  isDemo: boolean;
+  project: { name: string; description: string; currency: string };
+  snapshot: {
+    id: string;
+    caseName: string;
+    caseVersion: number;
+    inputs: CaseInput;
+    model: ProjectModel;
+    result: ValuationResult;
+    engineVersion: string;
+    inputHash: string;
+    submittedBy: string;
+    submittedAt: string;
+    decidedBy: string;
+    decidedAt: string;
+  };
+  /** The first steps of the lattice, for the diagram; computed from the snapshot's model. */
+  grid?: NodeGrid;
+}

@@ -1,0 +1,439 @@
+/**
+ * The board pack, drawn with @react-pdf/renderer: cover and recommendation, NPV with and without
+ * flexibility, decision rules, an excerpt of the lattice, option values and their interactions,
+ * sensitivities, assumptions, methodology and limitations with the cautions, and the approval
+ * record. Charts are vector drawings laid out by the same functions as the web charts
+ * (lib/charts/*). Everything comes from the approved snapshot, so the same snapshot always gives
+ * the same document.
+ */
+import { Circle, Document, G, Line, Page, Rect, StyleSheet, Svg, Text, View } from '@react-pdf/renderer';
+import type { ReactNode } from 'react';
+import { VALUATION_CAUTION } from '@/components/valuation-caution';
+import { analyseCashFlows } from '../cash-flows';
+import { layoutLatticeTree } from '../charts/lattice-tree';
+import { layoutNpvComparison } from '../charts/npv-comparison';
+import { layoutTornado } from '../charts/tornado';
+import { layoutWaterfall, waterfallSteps } from '../charts/waterfall';
+import { decisionRule } from '../decision-rules';
+import { formatChange, formatDateTime, formatMoney, formatPercent } from '../format';
+import { optionTypeLabels, type OptionType } from '../option-form';
+import { describeOption } from '../option-words';
+import type { BoardPackData } from './data';
+import { recommendation } from './recommendation';
+import { pdfText } from './text';
+
+const ink = '#16232d';
+const soft = '#3c4b57';
+const muted = '#66737d';
+const line = '#d9d3c7';
+const tide = '#23727a';
+const brick = '#ad3f2b';
+
+const styles = StyleSheet.create({
+  page: { fontFamily: 'Work Sans', fontSize: 10, color: ink, paddingTop: 48, paddingBottom: 56, paddingHorizontal: 48 },
+  // Line height is set per paragraph, never on the page: on the page it drops the footer's page numbers (react-pdf 4.9).
+  para: { fontSize: 10, lineHeight: 1.4 },
+  footer: { position: 'absolute', bottom: 24, left: 48, right: 48, fontSize: 8, color: muted, flexDirection: 'row', justifyContent: 'space-between' },
+  eyebrow: { fontSize: 8, letterSpacing: 1, color: muted, textTransform: 'uppercase' },
+  h1: { fontSize: 24, fontWeight: 600, marginTop: 6, marginBottom: 6, lineHeight: 1.2 },
+  h2: { fontSize: 14, fontWeight: 600, marginBottom: 8, marginTop: 4 },
+  h3: { fontSize: 11, fontWeight: 600, marginBottom: 4, marginTop: 10 },
+  lead: { lineHeight: 1.4, fontSize: 11, color: soft, marginTop: 6 },
+  tiles: { flexDirection: 'row', gap: 10, marginTop: 18 },
+  tile: { flex: 1, borderWidth: 1, borderColor: line, borderRadius: 4, padding: 10 },
+  tileStrong: { flex: 1, borderWidth: 1.5, borderColor: tide, borderRadius: 4, padding: 10, backgroundColor: '#e9f4f4' },
+  tileLabel: { fontSize: 8, color: muted, textTransform: 'uppercase', letterSpacing: 0.6 },
+  tileValue: { fontSize: 16, fontWeight: 600, marginTop: 3 },
+  caution: { lineHeight: 1.4, marginTop: 14, padding: 10, backgroundColor: '#ece8df', fontSize: 8.5, color: soft, borderRadius: 3 },
+  demo: { lineHeight: 1.4, marginTop: 10, padding: 6, backgroundColor: '#f7e3d6', color: '#8a4520', fontSize: 8.5, borderRadius: 3 },
+  table: { borderWidth: 1, borderColor: line, borderRadius: 3, marginTop: 6 },
+  row: { flexDirection: 'row', borderBottomWidth: 1, borderBottomColor: line },
+  head: { backgroundColor: '#ece8df' },
+  cell: { padding: 4, fontSize: 8.5 },
+  num: { textAlign: 'right' },
+  rule: { fontSize: 10, lineHeight: 1.4, marginBottom: 5, paddingLeft: 8, borderLeftWidth: 2, borderLeftColor: tide },
+});
+
+const money = (value: number | null | undefined, currency?: string, digits = 1) => formatMoney(value, currency, digits);
+
+function Footer({ data }: { data: BoardPackData }) {
+  return (
+    <View style={styles.footer} fixed>
+      <Text>
+        {pdfText(`${data.project.name} · ${data.snapshot.caseName} · approved ${formatDateTime(data.snapshot.decidedAt)}`)}
+        {data.isDemo ? ' · invented demo figures' : ''}
+      </Text>
+      <Text render={({ pageNumber, totalPages }) => `Leeway board pack · page ${pageNumber} of ${totalPages}`} />
+    </View>
+  );
+}
+
+function Section({ data, title, children }: { data: BoardPackData; title: string; children: ReactNode }) {
+  return (
+    <Page size={data.pageSize} style={styles.page}>
+      <Text style={styles.h2}>{title}</Text>
+      {children}
+      <Footer data={data} />
+    </Page>
+  );
+}
+
+function Table({ columns, rows, widths }: { columns: string[]; rows: string[][]; widths: number[] }) {
+  const numeric = (k: number) => k > 0;
+  return (
+    <View style={styles.table}>
+      <View style={[styles.row, styles.head]}>
+        {columns.map((c, k) => (
+          <Text key={c} style={[styles.cell, { width: `${widths[k]}%`, fontWeight: 600 }, numeric(k) ? styles.num : {}]}>
+            {c}
+          </Text>
+        ))}
+      </View>
+      {rows.map((r, i) => (
+        <View key={i} style={[styles.row, i === rows.length - 1 ? { borderBottomWidth: 0 } : {}]} wrap={false}>
+          {r.map((c, k) => (
+            <Text key={k} style={[styles.cell, { width: `${widths[k]}%` }, numeric(k) ? styles.num : {}]}>
+              {pdfText(c)}
+            </Text>
+          ))}
+        </View>
+      ))}
+    </View>
+  );
+}
+
+function SvgText({
+  x,
+  y,
+  children,
+  anchor = 'start',
+  size = 7.5,
+  color = soft,
+  bold = false,
+}: {
+  x: number;
+  y: number;
+  children: string;
+  anchor?: 'start' | 'middle' | 'end';
+  size?: number;
+  color?: string;
+  bold?: boolean;
+}) {
+  return (
+    <Text x={x} y={y} fill={color} textAnchor={anchor} style={{ fontSize: size, fontFamily: 'Work Sans', fontWeight: bold ? 600 : 400 }}>
+      {pdfText(children)}
+    </Text>
+  );
+}
+
+function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
+  const r = data.snapshot.result;
+  const layout = layoutNpvComparison([{ id: 'case', label: data.snapshot.caseName, staticNpv: r.staticNpv, expandedNpv: r.expandedNpv }], width, {
+    rowHeight: 56,
+    labelWidth: 110,
+  });
+  const row = layout.rows[0]!;
+  return (
+    <Svg width={layout.width} height={layout.height}>
+      {layout.ticks.map((t) => (
+        <G key={t.value}>
+          <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke="#ece8df" strokeWidth={1} />
+          <SvgText x={t.x} y={layout.height - layout.margin.bottom + 12} anchor="middle" color={muted}>
+            {money(t.value, undefined, 0)}
+          </SvgText>
+        </G>
+      ))}
+      <Line
+        x1={layout.zeroX}
+        x2={layout.zeroX}
+        y1={layout.margin.top}
+        y2={layout.height - layout.margin.bottom}
+        stroke={muted}
+        strokeWidth={1}
+        strokeDasharray="3 3"
+      />
+      <SvgText x={layout.margin.left - 8} y={row.y + 3} anchor="end" color={ink} size={8.5}>
+        {row.label.length > 22 ? `${row.label.slice(0, 21)}…` : row.label}
+      </SvgText>
+      <Line x1={row.staticX} x2={row.expandedX} y1={row.y} y2={row.y} stroke="#7fbcc0" strokeWidth={6} />
+      <Circle cx={row.staticX} cy={row.y} r={5} fill="#ffffff" stroke={soft} strokeWidth={1.5} />
+      <Circle cx={row.expandedX} cy={row.y} r={5.5} fill={tide} />
+      <SvgText x={row.staticX} y={row.y - 10} anchor="middle">{`static ${money(r.staticNpv)}`}</SvgText>
+      <SvgText x={row.expandedX} y={row.y + 17} anchor="middle" color={tide} bold>
+        {`expanded ${money(r.expandedNpv)}`}
+      </SvgText>
+    </Svg>
+  );
+}
+
+function WaterfallPdf({ data, width }: { data: BoardPackData; width: number }) {
+  const layout = layoutWaterfall(waterfallSteps(data.snapshot.result), width, 220);
+  return (
+    <Svg width={layout.width} height={layout.height}>
+      {layout.ticks.map((t) => (
+        <G key={t.value}>
+          <Line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={t.y} y2={t.y} stroke="#ece8df" strokeWidth={1} />
+          <SvgText x={layout.margin.left - 6} y={t.y + 3} anchor="end" color={muted}>
+            {money(t.value, undefined, 0)}
+          </SvgText>
+        </G>
+      ))}
+      <Line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={layout.zeroY} y2={layout.zeroY} stroke={muted} strokeWidth={1} />
+      {layout.bars.map((b) => (
+        <G key={b.key}>
+          <Rect x={b.x} y={b.y} width={b.width} height={b.height} fill={b.kind === 'total' ? ink : b.value >= 0 ? tide : brick} />
+          <SvgText x={b.center} y={b.y - 4} anchor="middle" color={ink} bold>
+            {b.kind === 'total' ? money(b.value) : formatChange(b.value)}
+          </SvgText>
+          <SvgText x={b.center} y={layout.height - layout.margin.bottom + 12} anchor="middle">
+            {b.label.length > 16 ? `${b.label.slice(0, 15)}…` : b.label}
+          </SvgText>
+        </G>
+      ))}
+    </Svg>
+  );
+}
+
+function TornadoPdf({ data, width }: { data: BoardPackData; width: number }) {
+  const r = data.snapshot.result;
+  if (!r.sensitivities) return null;
+  const layout = layoutTornado(r.sensitivities, r.expandedNpv, width, { labelWidth: 190 });
+  return (
+    <Svg width={layout.width} height={layout.height}>
+      {layout.ticks.map((t) => (
+        <G key={t.value}>
+          <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke="#ece8df" strokeWidth={1} />
+          <SvgText x={t.x} y={layout.height - layout.margin.bottom + 12} anchor="middle" color={muted}>
+            {money(t.value, undefined, 0)}
+          </SvgText>
+        </G>
+      ))}
+      {layout.rows.map((row) => {
+        const s = row.sensitivity;
+        const bar = (x: number | null, fill: string) =>
+          x === null ? null : (
+            <Rect x={Math.min(x, layout.baseX)} y={row.y} width={Math.max(1, Math.abs(x - layout.baseX))} height={row.bandHeight} fill={fill} />
+          );
+        return (
+          <G key={s.parameter}>
+            <SvgText x={layout.margin.left - 8} y={row.y + row.bandHeight / 2 + 3} anchor="end" color={ink}>
+              {s.label}
+            </SvgText>
+            {bar(row.lowX, '#b9b1a2')}
+            {bar(row.highX, tide)}
+            <SvgText
+              x={layout.width - layout.margin.right + 4}
+              y={row.y + row.bandHeight / 2 + 3}
+            >{`${money(s.low.expandedNpv)} / ${money(s.high.expandedNpv)}`}</SvgText>
+          </G>
+        );
+      })}
+      <Line x1={layout.baseX} x2={layout.baseX} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={ink} strokeWidth={1.2} />
+    </Svg>
+  );
+}
+
+function LatticePdf({ data, width }: { data: BoardPackData; width: number }) {
+  if (!data.grid) return null;
+  const mode = Object.keys(data.grid.steps[0]!.modes)[0]!;
+  const start = data.snapshot.result.modes ? (Object.keys(data.snapshot.result.modes).find((m) => m in data.grid!.steps[0]!.modes) ?? mode) : mode;
+  const layout = layoutLatticeTree(data.grid, start, Math.min(4, data.grid.steps.length - 1));
+  const scale = Math.min(1, width / layout.width);
+  const fills = ['#cfe7e8', '#f7e3d6', '#dcebdc', '#f5dcd6'];
+  return (
+    <Svg width={layout.width * scale} height={layout.height * scale} viewBox={`0 0 ${layout.width} ${layout.height}`}>
+      {layout.edges.map((e) => (
+        <Line key={`${e.from.step}:${e.from.node}-${e.to.node}`} x1={e.from.x + 112} y1={e.from.y} x2={e.to.x} y2={e.to.y} stroke="#b9b1a2" strokeWidth={1} />
+      ))}
+      {layout.nodes.map((n) => (
+        <G key={`${n.step}:${n.node}`}>
+          <Rect
+            x={n.x}
+            y={n.y - 26}
+            width={112}
+            height={52}
+            rx={5}
+            fill={n.decision ? fills[layout.decisions.indexOf(n.decision) % fills.length] : '#ffffff'}
+            stroke="#b9b1a2"
+            strokeWidth={1}
+          />
+          <SvgText x={n.x + 8} y={n.y - 10} size={10}>{`V ${money(n.underlying)}`}</SvgText>
+          <SvgText x={n.x + 8} y={n.y + 5} size={11} color={ink} bold>{`W ${money(n.value)}`}</SvgText>
+          <SvgText x={n.x + 8} y={n.y + 19} size={9}>
+            {n.decision ? `> ${n.decision.length > 15 ? `${n.decision.slice(0, 14)}…` : n.decision}` : 'continue'}
+          </SvgText>
+        </G>
+      ))}
+    </Svg>
+  );
+}
+
+export function BoardPackDocument({ data }: { data: BoardPackData }) {
+  const { project, snapshot } = data;
+  const r = snapshot.result;
+  const currency = project.currency;
+  const contentWidth = (data.pageSize === 'A4' ? 595.28 : 612) - 96;
+  const rec = recommendation(r, currency);
+  const rules = r.switches.map((s) => decisionRule(s, currency));
+  const analysis = analyseCashFlows(snapshot.inputs.cashFlows);
+  const rows = snapshot.inputs.cashFlows.rows;
+  const options = snapshot.inputs.options ?? [];
+  return (
+    <Document
+      title={pdfText(`${project.name} – ${snapshot.caseName}: board pack`)}
+      author="Leeway"
+      subject="Real-options valuation of a capital project"
+      creator="Leeway"
+      producer="Leeway"
+      creationDate={new Date(snapshot.decidedAt)}
+      modificationDate={new Date(snapshot.decidedAt)}
+    >
+      <Page size={data.pageSize} style={styles.page}>
+        <Text style={styles.eyebrow}>{pdfText(`${data.organisation} · board pack`)}</Text>
+        <Text style={styles.h1}>{pdfText(project.name)}</Text>
+        <Text style={styles.lead}>{pdfText(`${snapshot.caseName} (version ${snapshot.caseVersion}), approved ${formatDateTime(snapshot.decidedAt)}`)}</Text>
+        {project.description ? <Text style={[styles.lead, { fontSize: 10 }]}>{pdfText(project.description)}</Text> : null}
+        {data.isDemo ? <Text style={styles.demo}>Demo organisation: the company, the project and every figure in this pack are invented.</Text> : null}
+        <View style={styles.tiles}>
+          <View style={styles.tile}>
+            <Text style={styles.tileLabel}>Static NPV</Text>
+            <Text style={styles.tileValue}>{money(r.staticNpv, currency)}</Text>
+          </View>
+          <View style={styles.tile}>
+            <Text style={styles.tileLabel}>Option premium</Text>
+            <Text style={styles.tileValue}>{money(r.optionPremium, currency)}</Text>
+          </View>
+          <View style={styles.tileStrong}>
+            <Text style={styles.tileLabel}>Expanded NPV</Text>
+            <Text style={styles.tileValue}>{money(r.expandedNpv, currency)}</Text>
+          </View>
+        </View>
+        <Text style={styles.h3}>Recommendation</Text>
+        <Text style={{ fontSize: 10, lineHeight: 1.4, fontWeight: 600 }}>{rec.headline}</Text>
+        <Text style={{ fontSize: 10, lineHeight: 1.4, marginTop: 4 }}>{pdfText(rec.body)}</Text>
+        <Text style={styles.h3}>NPV with and without flexibility</Text>
+        <NpvChart data={data} width={contentWidth} />
+        <Text style={styles.h3}>Decision rules</Text>
+        {rules.length === 0 ? <Text style={styles.para}>The case holds no options: it is a now-or-never commitment.</Text> : null}
+        {rules.map((rule) => (
+          <Text key={rule.right} style={styles.rule}>
+            {pdfText(rule.text)}
+          </Text>
+        ))}
+        <Text style={styles.caution}>{pdfText(VALUATION_CAUTION)}</Text>
+        <Footer data={data} />
+      </Page>
+
+      <Section data={data} title="Option values and their interactions">
+        <Text style={{ fontSize: 10, lineHeight: 1.4, color: soft, marginBottom: 6 }}>
+          Stand-alone: the option alone on the project. Incremental: what it adds to all the others. The interaction is what the options are worth together
+          beyond the sum of their increments. Probabilities are risk-neutral.
+        </Text>
+        <Table
+          columns={['Option', 'Stand-alone', 'Incremental', 'Ever exercised']}
+          widths={[46, 18, 18, 18]}
+          rows={r.switches.map((s) => [
+            `${s.id} (${optionTypeLabels[s.kind as OptionType] ?? s.kind})`,
+            money(s.standalone, currency),
+            money(s.incremental, currency),
+            formatPercent(s.exerciseProbability),
+          ])}
+        />
+        <Text style={styles.h3}>From static to expanded NPV ({currency})</Text>
+        <WaterfallPdf data={data} width={contentWidth} />
+        <Text style={styles.h3}>Sensitivity of the expanded NPV ({currency})</Text>
+        <Text style={{ lineHeight: 1.4, color: soft, fontSize: 8.5 }}>
+          Each input moved on its own: V0 and volatility by 10 % down (grey) and up (teal), rates by one point, each option&apos;s money by 10 %. Figures:
+          expanded NPV when moved down / up; the vertical line is the valued expanded NPV, {money(r.expandedNpv, currency)}.
+        </Text>
+        <TornadoPdf data={data} width={contentWidth} />
+      </Section>
+
+      <Section data={data} title="The lattice">
+        <Text style={{ fontSize: 10, lineHeight: 1.4, color: soft }}>
+          {pdfText(
+            `A ${r.tree.kind.toUpperCase()} binomial lattice of ${r.tree.steps} steps over ${snapshot.model.horizon} years (step ${r.tree.dt.toFixed(4)} years; up ${r.tree.u.toFixed(4)}, down ${r.tree.d.toFixed(4)}, risk-neutral probability ${r.tree.p.toFixed(4)}). The excerpt shows its first steps from today: V is the project's value, W its value with every option, and the label the decision taken at the node.`,
+          )}
+        </Text>
+        <View style={{ marginTop: 10 }}>
+          <LatticePdf data={data} width={contentWidth} />
+        </View>
+        {r.convergence ? (
+          <Text style={{ fontSize: 10, lineHeight: 1.4, marginTop: 10, color: soft }}>
+            {pdfText(
+              `Convergence: at ${r.convergence.points.map((p) => `${p.steps} steps ${money(p.value - (r.value - r.expandedNpv), currency, 2)}`).join(', ')} (expanded NPV); the last halving of steps moved it by ${money(r.convergence.errorEstimate, currency, 2)}.`,
+            )}
+          </Text>
+        ) : null}
+      </Section>
+
+      <Section data={data} title="Assumptions">
+        <Table
+          columns={['Assumption', 'Value']}
+          widths={[60, 40]}
+          rows={[
+            ['Underlying value V0 (PV of operating cash flows)', money(analysis.underlyingValue, currency)],
+            ['Static NPV at the WACC', money(analysis.staticNpv, currency)],
+            ['WACC', formatPercent(snapshot.inputs.cashFlows.wacc)],
+            ['Cash-flow timing', snapshot.inputs.cashFlows.timing === 'mid-year' ? 'mid-year' : 'end of year'],
+            ['Volatility of the project value', formatPercent(snapshot.inputs.settings.volatility)],
+            ['Risk-free rate (continuous)', formatPercent(snapshot.inputs.settings.riskFreeRate, 2)],
+            ['Lattice', `${snapshot.inputs.settings.tree ?? 'crr'}, ${snapshot.inputs.settings.steps} steps`],
+            ['Horizon', `${snapshot.model.horizon} years`],
+          ]}
+        />
+        <Text style={styles.h3}>Cash flows ({currency})</Text>
+        <Table
+          columns={['Year', 'Revenue', 'Operating cost', 'Tax', 'Working capital', 'Capex', 'Free cash flow']}
+          widths={[10, 15, 15, 15, 15, 15, 15]}
+          rows={rows.map((row, k) => [
+            String(row.year),
+            money(row.revenue),
+            money(row.operatingCost),
+            money(row.tax),
+            money(row.workingCapital),
+            money(row.capex),
+            money(analysis.rows[k]?.freeCashFlow),
+          ])}
+        />
+        <Text style={styles.h3}>Option terms</Text>
+        {options.length === 0 ? <Text style={styles.para}>None.</Text> : null}
+        {options.map((o, k) => (
+          <Text key={k} style={{ marginBottom: 3 }}>
+            {pdfText(`${o.id ?? `Option ${k + 1}`}: ${describeOption(o, currency)}`)}
+          </Text>
+        ))}
+      </Section>
+
+      <Section data={data} title="Methodology, limitations and approval">
+        <Text style={styles.para}>
+          The project&apos;s value is modelled as a lognormal process on a recombining binomial lattice under the risk-neutral measure; the rights management
+          holds are valued together by backward induction, so their interactions are captured (their values are not additive). The underlying value is the
+          present value of the operating cash flows at the WACC; the cash it pays out each year lowers it along the lattice. Volatility is the annualised
+          volatility of the project&apos;s value returns.
+        </Text>
+        <Text style={styles.h3}>Limitations</Text>
+        <Text style={styles.para}>
+          The results rest on the stated assumptions: a lognormal value with constant volatility, a traded-twin or consolidated-uncertainty argument for
+          risk-neutral valuation, the chosen discount and risk-free rates, and decisions taken as the rules say. Exercise probabilities are risk-neutral, not
+          forecasts. The lattice is a discrete approximation (see the convergence note).
+        </Text>
+        <Text style={styles.caution}>{pdfText(VALUATION_CAUTION)}</Text>
+        <Text style={styles.h3}>Approval record</Text>
+        <Table
+          columns={['Event', 'By', 'When']}
+          widths={[34, 33, 33]}
+          rows={[
+            ['Submitted for review', snapshot.submittedBy, formatDateTime(snapshot.submittedAt)],
+            ['Approved', snapshot.decidedBy, formatDateTime(snapshot.decidedAt)],
+          ]}
+        />
+        <Text style={{ lineHeight: 1.4, marginTop: 8, fontSize: 8, color: muted }}>
+          {pdfText(
+            `Snapshot ${snapshot.id} of case version ${snapshot.caseVersion}; engine ${snapshot.engineVersion}; input fingerprint (SHA-256) ${snapshot.inputHash}.`,
+          )}
+        </Text>
+      </Section>
+    </Document>
+  );
+}

@@ -1,0 +1,37 @@
+/**
+ * An option's terms in one sentence, for readers who never see the option cards:
+ * "expand by 50 % for EUR 95.0, any time in years 2–4".
+ */
+import type { Cost, ExerciseWindow, OptionTemplate } from '@/lattice';
+import { formatMoney, formatPercent } from './format';
+
+export function describeCost(cost: Cost, currency?: string): string {
+  if (typeof cost === 'number') return formatMoney(cost, currency);
+  if (Array.isArray(cost))
+    return cost.map((s, k) => `${formatMoney(s.amount, currency)} ${k === 0 ? `from year ${s.from}` : `from year ${s.from}`}`).join(', then ');
+  return `${formatMoney(cost.amount, currency)} growing ${formatPercent(cost.growth)} a year`;
+}
+
+export function describeWindow(w: ExerciseWindow | undefined): string {
+  if (!w) return 'at any time';
+  if (w.kind === 'american') return w.from === w.to ? `in year ${w.from}` : `any time in years ${w.from}–${w.to}`;
+  if (w.kind === 'bermudan') return `in years ${w.dates.join(', ')}`;
+  return `in year ${w.at} only`;
+}
+
+export function describeOption(o: OptionTemplate, currency?: string): string {
+  switch (o.type) {
+    case 'expand':
+      return `expand by ${formatPercent(o.factor, 0)} of the project for ${describeCost(o.cost, currency)}, ${describeWindow(o.window)}`;
+    case 'contract':
+      return `give up ${formatPercent(o.fraction, 0)} of the project for savings of ${describeCost(o.savings, currency)}, ${describeWindow(o.window)}`;
+    case 'abandon':
+      return `abandon for a salvage value of ${describeCost(o.salvage, currency)}, ${describeWindow(o.window)}`;
+    case 'defer':
+      return `invest ${describeCost(o.cost, currency)} ${describeWindow(o.window)}, or never`;
+    case 'stage':
+      return `pay in stages: ${o.payments.map((p) => `${formatMoney(p.amount, currency)} in year ${p.at}`).join(', ')}; stopping at any stage`;
+    case 'switch':
+      return `switch to ${formatPercent(o.toScale, 0)} of scale for ${describeCost(o.cost, currency)} and back for ${describeCost(o.backCost, currency)}, earning ${formatMoney(o.flowPerYear ?? 0, currency)} a year while switched, ${describeWindow(o.window)}`;
+  }
+}

@@ -1,0 +1,29 @@
+/** A case with its project, as the review routes and e-mails name it; scoped by organisation. */
+import 'server-only';
+import { db } from '@/db';
+import { AppError } from '../errors';
+
+export async function loadCaseRef(orgId: string, caseId: string) {
+  const row = await db
+    .selectFrom('case')
+    .innerJoin('project', 'project.id', 'case.project_id')
+    .selectAll('case')
+    .select(['project.name as project_name', 'project.currency'])
+    .where('case.organization_id', '=', orgId)
+    .where('case.id', '=', caseId)
+    .executeTakeFirst();
+  if (!row) throw new AppError('not_found', 'No such case in your organisation.');
+  return row;
+}
+
+export function refOf(row: Awaited<ReturnType<typeof loadCaseRef>>, expandedNpv: number) {
+  return {
+    orgId: row.organization_id,
+    caseId: row.id,
+    projectId: row.project_id,
+    projectName: row.project_name,
+    caseName: row.name,
+    currency: row.currency,
+    expandedNpv,
+  };
+}

@@ -1,0 +1,48 @@
+/**
+ * The review workflow's status machine, written once: which action moves a case from which
+ * status to which, and which permission it needs. The server checks both for every action
+ * inside the transaction that changes the status (db/queries/reviews.ts).
+ *
+ *   draft ──submit──▶ in_review ──approve──▶ approved
+ *     ▲                  │
+ *     │               return (with a reason)
+ *     │                  ▼
+ *     └──── (edit) ── returned ──submit──▶ in_review
+ *
+ * Saving edits to a returned or approved case makes it a draft again (an approval belongs to
+ * the snapshot that was reviewed, never to later edits); a case in review cannot be edited.
+ */
+import type { CaseStatus } from '@/db/types';
+import { roleAllows, type Permission, type RoleName } from '../permissions';
+
+export type ReviewAction = 'submit' | 'approve' | 'return';
+
+export const transitions: Record<ReviewAction, { from: CaseStatus[]; to: CaseStatus; permission: Permission }> = {
+  submit: { from: ['draft', 'returned'], to: 'in_review', permission: { case: ['submit'] } },
+  approve: { from: ['in_review'], to: 'approved', permission: { review: ['decide'] } },
+  return: { from: ['in_review'], to: 'returned', permission: { review: ['decide'] } },
+};
+
+export const statusLabels: Record<CaseStatus, string> = {
+  draft: 'Draft',
+  in_review: 'In review',
+  approved: 'Approved',
+  returned: 'Returned',
+};
+
+/** Statuses in which a case's inputs may be saved. */
+export const editableStatuses: CaseStatus[] = ['draft', 'returned', 'approved'];
+
+export type TransitionCheck = { ok: true; to: CaseStatus } | { ok: false; code: 'forbidden' | 'conflict'; message: string };
+
+export function checkTransition(role: RoleName, action: ReviewAction, status: CaseStatus): TransitionCheck {
+  const rule = transitions[action];
+  if (!roleAllows(role, rule.permission)) return { ok: false, code: 'forbidden', message: `Your role cannot ${action} a case.` };
+  if (!rule.from.includes(status))
+    return {
+      ok: false,
+      code: 'conflict',
+      message: `A case that is ${statusLabels[status].toLowerCase()} cannot be ${action === 'submit' ? 'submitted' : action === 'approve' ? 'approved' : 'returned'}.`,
+    };
+  return { ok: true, to: rule.to };
+}
