@@ -1,0 +1,111 @@
+/**
+ * The review workflow on a real PostgreSQL: transitions through the queries the routes use, two
+ * reviewers approving at once (exactly one wins), a snapshot that stays byte-identical when the
+ * case is edited afterwards, and a case in review that cannot be saved.
+ */
+import { sql } from 'kysely';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { db } from '@/db';
+import { createCase, saveCase } from '@/db/queries/cases';
+import { createProject } from '@/db/queries/projects';
+import { decideCase, submitCase } from '@/db/queries/reviews';
+import { seedDemo } from '@/demo/seed';
+
+let kestrel = '';
+let analyst = '';
+let reviewer = '';
+
+const content = {
+  name: 'Review case',
+  cashFlows: { wacc: 0.08, rows: [{ year: 0, revenue: 10, operatingCost: 0, capex: 0, tax: 0, workingCapital: 0 }] },
+  settings: { volatility: 0.3, riskFreeRate: 0.03, steps: 10 },
+  options: [],
+};
+const frozen = { inputs: content, model: { steps: 10 }, result: { expandedNpv: 12.5, staticNpv: 10 }, engineVersion: 'test', inputHash: 'abc' };
+
+async function freshCase() {
+  const project = await createProject(db, { orgId: kestrel, ownerId: analyst, name: `Review plant ${Math.random()}`, currency: 'EUR' });
+  return (await createCase(db, { orgId: kestrel, projectId: project.id, createdBy: analyst, content }))!;
+}
+
+const submit = (caseId: string, caseVersion = 1) =>
+  db.transaction().execute((trx) => submitCase(trx, { orgId: kestrel, caseId, role: 'analyst', userId: analyst, caseVersion, frozen }));
+const approve = (caseId: string) =>
+  db.transaction().execute((trx) => decideCase(trx, { orgId: kestrel, caseId, role: 'reviewer', userId: reviewer, action: 'approve' }));
+
+beforeAll(async () => {
+  await seedDemo();
+  kestrel = (await db.selectFrom('organization').select('id').where('slug', '=', 'kestrel-bay-materials').executeTakeFirstOrThrow()).id;
+  analyst = (await db.selectFrom('user').select('id').where('email', '=', 'analyst@kestrelbay.example').executeTakeFirstOrThrow()).id;
+  reviewer = (await db.selectFrom('user').select('id').where('email', '=', 'reviewer@kestrelbay.example').executeTakeFirstOrThrow()).id;
+});
+
+describe('review workflow', () => {
+  it('goes draft → in review → returned → (saved: draft) → in review → approved', async () => {
+    const c = await freshCase();
+    expect((await submit(c.id)).ok).toBe(true);
+    const returned = await db
+      .transaction()
+      .execute((trx) =>
+        decideCase(trx, { orgId: kestrel, caseId: c.id, role: 'reviewer', userId: reviewer, action: 'return', reason: 'Justify the volatility.' }),
+      );
+    expect(returned).toMatchObject({ ok: true, value: { status: 'returned', decision_reason: 'Justify the volatility.' } });
+    const saved = await saveCase(db, { orgId: kestrel, caseId: c.id, expectedVersion: 1, content: { ...content, name: 'Review case, revised' } });
+    expect(saved).toMatchObject({ ok: true, row: { status: 'draft', version: 2 } });
+    expect((await submit(c.id, 2)).ok).toBe(true);
+    expect(await approve(c.id)).toMatchObject({ ok: true, value: { status: 'approved' } });
+    expect((await db.selectFrom('case').select('status').where('id', '=', c.id).executeTakeFirstOrThrow()).status).toBe('approved');
+    expect(await approve(c.id)).toMatchObject({ ok: false, code: 'conflict' });
+  });
+
+  it('refuses the wrong role, a stale version, and another organisation', async () => {
+    const c = await freshCase();
+    expect(
+      await db.transaction().execute((trx) => submitCase(trx, { orgId: kestrel, caseId: c.id, role: 'reviewer', userId: reviewer, caseVersion: 1, frozen })),
+    ).toMatchObject({ ok: false, code: 'forbidden' });
+    expect(await submit(c.id, 7)).toMatchObject({ ok: false, code: 'conflict' });
+    const harrow = (await db.selectFrom('organization').select('id').where('slug', '=', 'harrow-fen-logistics').executeTakeFirstOrThrow()).id;
+    expect(
+      await db.transaction().execute((trx) => submitCase(trx, { orgId: harrow, caseId: c.id, role: 'analyst', userId: analyst, caseVersion: 1, frozen })),
+    ).toMatchObject({
+      ok: false,
+      code: 'not_found',
+    });
+  });
+
+  it('lets exactly one of two simultaneous approvals win', async () => {
+    const c = await freshCase();
+    await submit(c.id);
+    const outcomes = await Promise.all([approve(c.id), approve(c.id)]);
+    expect(outcomes.map((o) => o.ok).sort()).toEqual([false, true]);
+    expect(outcomes.find((o) => !o.ok)).toMatchObject({ code: 'conflict' });
+    const decided = await db.selectFrom('case_snapshot').select('status').where('case_id', '=', c.id).execute();
+    expect(decided).toEqual([{ status: 'approved' }]);
+  });
+
+  it('keeps a snapshot byte-identical when the case is edited afterwards, and refuses saves while in review', async () => {
+    const c = await freshCase();
+    const submitted = await submit(c.id);
+    if (!submitted.ok) throw new Error('not submitted');
+    const bytes = () =>
+      sql<{
+        text: string;
+      }>`select inputs::text || model::text || result::text || engine_version || input_hash as text from case_snapshot where id = ${submitted.value.id}`
+        .execute(db)
+        .then((r) => r.rows[0]!.text);
+    const before = await bytes();
+    expect(await saveCase(db, { orgId: kestrel, caseId: c.id, expectedVersion: 1, content: { ...content, name: 'Edited in review' } })).toMatchObject({
+      ok: false,
+      reason: 'in_review',
+    });
+    await approve(c.id);
+    const edited = await saveCase(db, {
+      orgId: kestrel,
+      caseId: c.id,
+      expectedVersion: 1,
+      content: { ...content, settings: { ...content.settings, volatility: 0.6 } },
+    });
+    expect(edited).toMatchObject({ ok: true, row: { status: 'draft' } });
+    expect(await bytes()).toBe(before);
+  });
+});
