@@ -14,6 +14,8 @@ export interface DemoOrganisation {
   users: { email: string; name: string; role: RoleName }[];
   /** The member who builds and values the invented portfolio (demo/portfolio.ts), if the organisation has one. */
   portfolioBy?: string;
+  /** The reviewer who decides the portfolio's seeded reviews. */
+  reviewedBy?: string;
 }
 
 export const demoOrganisations: DemoOrganisation[] = [
@@ -28,6 +30,7 @@ export const demoOrganisations: DemoOrganisation[] = [
       { email: 'executive@kestrelbay.example', name: 'Helen Marsh', role: 'viewer' },
     ],
     portfolioBy: 'analyst@kestrelbay.example',
+    reviewedBy: 'reviewer@kestrelbay.example',
   },
   {
     name: 'Harrow Fen Logistics',

@@ -13,6 +13,8 @@ export interface DemoProject {
   name: string;
   description: string;
   cases: CaseInput[];
+  /** Where a case stands in the review workflow once seeded (the others stay drafts). */
+  reviews?: { caseIndex: number; outcome: 'approved' | 'in_review' }[];
 }
 
 /** A yearly schedule from parallel columns (year 0 first), so the figures read like a spreadsheet. */
@@ -117,12 +119,14 @@ export const demoPortfolio: DemoProject[] = [
     description:
       'Phase 1 of a bio-resin plant now, with the right to add phase 2 in years 2–4 and to sell the plant for a salvage value that falls after year 4. Invented demo figures, EUR millions.',
     cases: [plantBase, { ...plantBase, name: 'Volatile demand', settings: { ...plantBase.settings, volatility: 0.42 } }],
+    reviews: [{ caseIndex: 0, outcome: 'approved' }],
   },
   {
     name: 'Cold-storage hub',
     description:
       'A regional cold-storage hub that may be built now or at any time in the next three years, at a build cost rising 4 % a year. Invented demo figures, EUR millions.',
     cases: [hubBase, { ...hubBase, name: 'Calmer market', settings: { ...hubBase.settings, volatility: 0.2 } }],
+    reviews: [{ caseIndex: 0, outcome: 'in_review' }],
   },
   {
     name: 'Staged pilot line',

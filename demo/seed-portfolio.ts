@@ -1,7 +1,9 @@
 /**
  * Seeds Kestrel Bay's invented portfolio (demo/portfolio.ts): each project with its cases and
  * one stored valuation run per case, as if the demo analyst had built and valued them, with
- * the matching audit entries. Idempotent: a project that already exists by name is left alone.
+ * the matching audit entries; the cases marked for review are submitted (and approved, with
+ * their board pack) as the demo analyst and reviewer would. Idempotent: a project that already
+ * exists by name is left alone.
  */
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
@@ -11,9 +13,12 @@ import { recordValuationRun } from '@/db/queries/valuation-runs';
 import { valueProject } from '@/lattice';
 import { caseToModel } from '@/lib/case-model';
 import { hashModel } from '@/lib/model-hash';
+import { decideCase, submitCase, type FrozenValuation } from '@/db/queries/reviews';
+import { boardPackData, saveBoardPack } from '@/lib/board-pack/records';
+import { renderBoardPack } from '@/lib/board-pack/render';
 import { demoPortfolio } from './portfolio';
 
-export async function seedPortfolio(args: { orgId: string; analystId: string; currency: string }): Promise<string[]> {
+export async function seedPortfolio(args: { orgId: string; analystId: string; reviewerId?: string; currency: string }): Promise<string[]> {
   const created: string[] = [];
   const actor = { orgId: args.orgId, actorId: args.analystId };
   for (const demo of demoPortfolio) {
@@ -27,7 +32,7 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; cu
       currency: args.currency,
     });
     await recordAudit(db, { ...actor, action: 'project.create', subjectType: 'project', subjectId: project.id, detail: { name: demo.name } });
-    for (const input of demo.cases) {
+    for (const [index, input] of demo.cases.entries()) {
       const made = await createCase(db, { orgId: args.orgId, projectId: project.id, createdBy: args.analystId, content: { options: [], ...input } });
       if (!made) throw new Error(`seed: the project ${demo.name} vanished while seeding`);
       await recordAudit(db, { ...actor, action: 'case.create', subjectType: 'case', subjectId: made.id, detail: { name: input.name, projectId: project.id } });
@@ -57,8 +62,59 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; cu
           optionPremium: result.optionPremium,
         },
       });
+      const review = demo.reviews?.find((r) => r.caseIndex === index);
+      if (review && args.reviewerId)
+        await seedReview({
+          ...args,
+          reviewerId: args.reviewerId,
+          caseId: made.id,
+          caseName: input.name,
+          outcome: review.outcome,
+          frozen: { inputs: input, model, result, engineVersion: result.engineVersion, inputHash: hashModel(model) },
+        });
     }
     created.push(demo.name);
   }
   return created;
+}
+
+/** Submits a seeded case as the analyst and, for an approved one, approves it as the reviewer and stores its board pack. */
+async function seedReview(args: {
+  orgId: string;
+  analystId: string;
+  reviewerId: string;
+  caseId: string;
+  caseName: string;
+  outcome: 'approved' | 'in_review';
+  frozen: FrozenValuation;
+}) {
+  const submitted = await db
+    .transaction()
+    .execute((trx) =>
+      submitCase(trx, { orgId: args.orgId, caseId: args.caseId, role: 'analyst', userId: args.analystId, caseVersion: 1, frozen: args.frozen }),
+    );
+  if (!submitted.ok) throw new Error(`seed: could not submit ${args.caseName}: ${submitted.message}`);
+  await recordAudit(db, {
+    orgId: args.orgId,
+    actorId: args.analystId,
+    action: 'case.submit',
+    subjectType: 'case',
+    subjectId: args.caseId,
+    detail: { name: args.caseName, snapshot: submitted.value.id },
+  });
+  if (args.outcome !== 'approved') return;
+  const approved = await db
+    .transaction()
+    .execute((trx) => decideCase(trx, { orgId: args.orgId, caseId: args.caseId, role: 'reviewer', userId: args.reviewerId, action: 'approve' }));
+  if (!approved.ok) throw new Error(`seed: could not approve ${args.caseName}: ${approved.message}`);
+  await recordAudit(db, {
+    orgId: args.orgId,
+    actorId: args.reviewerId,
+    action: 'case.approve',
+    subjectType: 'case',
+    subjectId: args.caseId,
+    detail: { name: args.caseName, snapshot: approved.value.id },
+  });
+  const pdf = await renderBoardPack(await boardPackData(args.orgId, approved.value.id, 'A4'));
+  await saveBoardPack(args.orgId, approved.value.id, 'A4', pdf);
 }

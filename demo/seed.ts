@@ -54,8 +54,15 @@ export async function seedDemo(): Promise<{ created: string[] }> {
           .execute();
     }
     if (org.portfolioBy) {
-      const builder = await db.selectFrom('user').select('id').where('email', '=', org.portfolioBy).executeTakeFirstOrThrow();
-      created.push(...(await seedPortfolio({ orgId: orgRow.id, analystId: builder.id, currency: org.settings.currency })));
+      const idOf = async (email: string) => (await db.selectFrom('user').select('id').where('email', '=', email).executeTakeFirstOrThrow()).id;
+      created.push(
+        ...(await seedPortfolio({
+          orgId: orgRow.id,
+          analystId: await idOf(org.portfolioBy),
+          reviewerId: org.reviewedBy ? await idOf(org.reviewedBy) : undefined,
+          currency: org.settings.currency,
+        })),
+      );
     }
   }
   return { created };

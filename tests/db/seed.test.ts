@@ -50,4 +50,36 @@ describe('demo seed', () => {
       .execute();
     expect(cases.map((c) => Number(c.runs))).toEqual([1, 1, 1, 1, 1, 1, 1, 1]);
   });
+
+  it("approves the plant's base case with its board pack, and leaves the hub's base case waiting for review", async () => {
+    const reviews = await db
+      .selectFrom('case_snapshot')
+      .innerJoin('case', 'case.id', 'case_snapshot.case_id')
+      .innerJoin('project', 'project.id', 'case.project_id')
+      .leftJoin('board_pack', 'board_pack.snapshot_id', 'case_snapshot.id')
+      .leftJoin('user as submitter', 'submitter.id', 'case_snapshot.submitted_by')
+      .leftJoin('user as decider', 'decider.id', 'case_snapshot.decided_by')
+      .select([
+        'project.name as project',
+        'case.name as case',
+        'case.status',
+        'submitter.email as submitter',
+        'decider.email as decider',
+        'board_pack.page_size',
+      ])
+      .where('project.name', 'in', ['Phased bio-resin plant', 'Cold-storage hub'])
+      .orderBy('project.name')
+      .execute();
+    expect(reviews).toEqual([
+      { project: 'Cold-storage hub', case: 'Base case', status: 'in_review', submitter: 'analyst@kestrelbay.example', decider: null, page_size: null },
+      {
+        project: 'Phased bio-resin plant',
+        case: 'Base case',
+        status: 'approved',
+        submitter: 'analyst@kestrelbay.example',
+        decider: 'reviewer@kestrelbay.example',
+        page_size: 'A4',
+      },
+    ]);
+  });
 });

@@ -1,8 +1,9 @@
 import type { Metadata } from 'next';
-import { EmptyState } from '@/components/empty-state';
 import { Forbidden } from '@/components/forbidden';
 import { PageHeader } from '@/components/page-header';
+import { ValuationCaution } from '@/components/valuation-caution';
 import { guardPage } from '@/lib/page-guard';
+import { ReviewQueue } from './_components/review-queue';
 
 export const metadata: Metadata = { title: 'Review' };
 
@@ -11,8 +12,14 @@ export default async function ReviewPage() {
   if (member === 'forbidden') return <Forbidden />;
   return (
     <>
-      <PageHeader title="Review" lead="Cases submitted for the finance committee's decision." />
-      <EmptyState title="Nothing is waiting for review">Cases submitted by analysts appear here for reviewers to comment on, approve or return.</EmptyState>
+      <PageHeader
+        title="Review"
+        lead="Cases submitted for the finance committee's decision. Open one to read its frozen snapshot, comment, approve or return it."
+      />
+      <ReviewQueue />
+      <div className="mt-8">
+        <ValuationCaution />
+      </div>
     </>
   );
 }

@@ -23,6 +23,11 @@ export default async function CasePage({ params }: { params: Promise<{ projectId
       projectName={project.name}
       currency={project.currency}
       canEdit={roleAllows(member.role, { case: ['update'] })}
+      rights={{
+        canSubmit: roleAllows(member.role, { case: ['submit'] }),
+        canDecide: roleAllows(member.role, { review: ['decide'] }),
+        canComment: roleAllows(member.role, { review: ['comment'] }),
+      }}
     />
   );
 }

@@ -15,12 +15,14 @@ import { analyseCashFlows, type CashFlowAnalysis } from '@/lib/cash-flows';
 import { useValuation } from '@/lib/engine/use-engine';
 import { formatDateTime, formatMoney } from '@/lib/format';
 import type { CaseInput } from '@/lib/validations/case';
+import type { CaseStatus } from '@/db/types';
 import { CashFlowSection } from './cash-flow-section';
 import { CompiledView } from './compiled-view';
 import { LatticeSection } from './lattice-section';
 import { LatticeSettingsSection } from './lattice-settings-section';
 import { OptionCards } from './option-cards';
 import { ResultsSection } from './results-section';
+import { ReviewPanel, StatusBadge, type ReviewRights } from './review-panel';
 
 interface Props {
   caseId: string;
@@ -28,6 +30,7 @@ interface Props {
   projectName: string;
   currency: string;
   canEdit: boolean;
+  rights: ReviewRights;
 }
 
 interface RunSummary {
@@ -60,10 +63,11 @@ function Headline({ label, value, strong, busy }: { label: string; value: string
   );
 }
 
-function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, initial, reload }: Props & { initial: CaseJson; reload: () => void }) {
+function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, rights, initial, reload }: Props & { initial: CaseJson; reload: () => void }) {
   const toast = useToast();
   const [draft, setDraft] = useState<CaseInput>(() => toInput(initial));
   const [version, setVersion] = useState(initial.version);
+  const [status, setStatus] = useState<CaseStatus>(initial.status as CaseStatus);
   const [dirty, setDirty] = useState(false);
   const [invalidCells, setInvalidCells] = useState(0);
   const [optionProblems, setOptionProblems] = useState(0);
@@ -125,6 +129,7 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, initi
     try {
       const { case: saved } = await sendJson<{ case: CaseJson }>('PATCH', `/api/v1/cases/${caseId}`, { ...draft, version });
       setVersion(saved.version);
+      setStatus(saved.status as CaseStatus);
       setDirty(false);
       setConflict(null);
       toast(`Saved as version ${saved.version}.`, 'success');
@@ -136,6 +141,13 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, initi
     } finally {
       setSaving(false);
     }
+  };
+
+  /** Before a submission: unsaved edits are saved first, so the reviewers see what is on screen. */
+  const readyToSubmit = async (): Promise<boolean> => {
+    if (dirty) return save();
+    if (blocked) toast(blocked, 'error');
+    return !blocked;
   };
 
   const valueCase = async () => {
@@ -154,7 +166,8 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, initi
 
   const latestRun = runs.data?.runs[0];
   const busy = valuation.computing;
-  const readOnly = !canEdit;
+  // A case in review is frozen for everyone until a reviewer returns it.
+  const readOnly = !canEdit || status === 'in_review';
 
   return (
     <div className="flex flex-col gap-6">
@@ -184,7 +197,8 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, initi
                 />
               </label>
             )}
-            <p className="text-caption text-ink-muted">
+            <p className="flex flex-wrap items-center gap-2 text-caption text-ink-muted">
+              <StatusBadge status={status} />
               Version {version}
               {dirty ? ' · unsaved changes' : ' · saved'}
               {latestRun
@@ -193,7 +207,9 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, initi
             </p>
           </div>
           {readOnly ? (
-            <p className="rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">Read-only: your role can read this case but not change it.</p>
+            <p className="rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
+              {canEdit ? 'In review: the case is frozen until a reviewer returns it.' : 'Read-only: your role can read this case but not change it.'}
+            </p>
           ) : (
             <div className="flex gap-2">
               <Button variant="secondary" onClick={() => void save()} busy={saving} disabled={!dirty}>
@@ -297,6 +313,21 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, initi
               ) : (
                 <p className="text-ink-soft">The lattice appears once the case can be valued.</p>
               ),
+          },
+          {
+            id: 'review',
+            label: 'Review',
+            content: (
+              <ReviewPanel
+                caseId={caseId}
+                currency={currency}
+                status={status}
+                optionNames={((draft.options ?? []) as OptionTemplate[]).map((o, k) => o.id ?? `Option ${k + 1}`)}
+                rights={rights}
+                beforeSubmit={readyToSubmit}
+                onStatus={setStatus}
+              />
+            ),
           },
         ]}
       />

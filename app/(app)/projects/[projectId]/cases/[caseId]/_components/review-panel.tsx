@@ -1,0 +1,317 @@
+'use client';
+
+import { useState } from 'react';
+import useSWR from 'swr';
+import { FormProblem } from '@/components/form-problem';
+import { LoadError, LoadingBlock } from '@/components/load-state';
+import { Button } from '@/components/ui/button';
+import { Dialog } from '@/components/ui/dialog';
+import { Table, Td, Th, Tr } from '@/components/ui/table';
+import { useToast } from '@/components/ui/toast';
+import type { CaseStatus } from '@/db/types';
+import { getJson, sendJson } from '@/lib/api-client';
+import { formatDateTime, formatMoney } from '@/lib/format';
+import { statusLabels } from '@/lib/review/transitions';
+
+export interface ReviewRights {
+  canSubmit: boolean;
+  canDecide: boolean;
+  canComment: boolean;
+}
+
+interface Snapshot {
+  id: string;
+  caseVersion: number;
+  status: 'in_review' | 'approved' | 'returned';
+  submittedAt: string;
+  submittedBy: string | null;
+  decidedAt: string | null;
+  decidedBy: string | null;
+  decisionReason: string | null;
+  expandedNpv: number;
+}
+
+interface Comment {
+  id: string;
+  section: string;
+  body: string;
+  author: string | null;
+  createdAt: string;
+}
+
+const baseSections: [string, string][] = [
+  ['general', 'The case as a whole'],
+  ['cash-flows', 'Cash flows'],
+  ['uncertainty', 'Uncertainty'],
+  ['flexibility', 'Flexibility'],
+  ['results', 'Results'],
+  ['lattice', 'Lattice'],
+];
+
+export function StatusBadge({ status }: { status: CaseStatus }) {
+  const tone: Record<CaseStatus, string> = {
+    draft: 'bg-paper-sunk text-ink-soft',
+    in_review: 'bg-ember-100 text-ember-700',
+    approved: 'bg-moss-100 text-moss-700',
+    returned: 'bg-brick-100 text-brick-700',
+  };
+  return <span className={`rounded px-2 py-0.5 text-caption font-semibold uppercase tracking-wide ${tone[status]}`}>{statusLabels[status]}</span>;
+}
+
+interface Props {
+  caseId: string;
+  currency: string;
+  status: CaseStatus;
+  optionNames: string[];
+  rights: ReviewRights;
+  /** Saves pending edits first; false when saving did not work. */
+  beforeSubmit: () => Promise<boolean>;
+  onStatus: (status: CaseStatus) => void;
+}
+
+/**
+ * The case's review: its status and history of snapshots, the reviewers' discussion by section,
+ * and the actions the signed-in role may take (submit; approve or return with a reason), plus
+ * the board pack of the latest approved snapshot.
+ */
+export function ReviewPanel({ caseId, currency, status, optionNames, rights, beforeSubmit, onStatus }: Props) {
+  const toast = useToast();
+  const history = useSWR<{ status: CaseStatus; snapshots: Snapshot[] }>(`/api/v1/cases/${caseId}/snapshots`, getJson);
+  const comments = useSWR<{ comments: Comment[] }>(`/api/v1/cases/${caseId}/comments`, getJson);
+  const [busy, setBusy] = useState<null | 'submit' | 'approve' | 'return' | 'comment'>(null);
+  const [returning, setReturning] = useState(false);
+  const [reason, setReason] = useState('');
+  const [problem, setProblem] = useState<string | null>(null);
+  const [section, setSection] = useState('general');
+  const [body, setBody] = useState('');
+
+  const sections: [string, string][] = [...baseSections, ...optionNames.map((n): [string, string] => [`option:${n}`, `Option: ${n}`])];
+  const sectionLabel = (s: string) => sections.find(([k]) => k === s)?.[1] ?? s;
+
+  const act = async (kind: 'submit' | 'approve' | 'return') => {
+    setBusy(kind);
+    setProblem(null);
+    try {
+      if (kind === 'submit' && !(await beforeSubmit())) return;
+      await sendJson('POST', `/api/v1/cases/${caseId}/${kind}`, kind === 'return' ? { reason } : undefined);
+      const next: CaseStatus = kind === 'submit' ? 'in_review' : kind === 'approve' ? 'approved' : 'returned';
+      onStatus(next);
+      setReturning(false);
+      setReason('');
+      toast(
+        kind === 'submit'
+          ? 'Submitted for review; the reviewers have been told by e-mail.'
+          : kind === 'approve'
+            ? 'Approved. The board pack is ready.'
+            : 'Returned to the analyst with your reason.',
+        'success',
+      );
+      await history.mutate();
+    } catch (error) {
+      const message = error instanceof Error ? error.message : 'That did not work.';
+      if (kind === 'return') setProblem(message);
+      else toast(message, 'error');
+      await history.mutate();
+    } finally {
+      setBusy(null);
+    }
+  };
+
+  const comment = async () => {
+    setBusy('comment');
+    try {
+      await sendJson('POST', `/api/v1/cases/${caseId}/comments`, { section, body });
+      setBody('');
+      await comments.mutate();
+    } catch (error) {
+      toast(error instanceof Error ? error.message : 'The comment was not saved.', 'error');
+    } finally {
+      setBusy(null);
+    }
+  };
+
+  if (history.isLoading) return <LoadingBlock label="Loading the review" />;
+  if (history.error || !history.data) return <LoadError message={history.error?.message ?? 'No answer from the server.'} onRetry={() => history.mutate()} />;
+  const snapshots = history.data.snapshots;
+  const latest = snapshots[0];
+  const approved = snapshots.find((s) => s.status === 'approved');
+
+  return (
+    <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_26rem]">
+      <div className="flex flex-col gap-6">
+        <section className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
+          <div className="flex flex-wrap items-center gap-3">
+            <h3 className="text-body font-semibold">Status</h3>
+            <StatusBadge status={status} />
+          </div>
+          {status === 'returned' && latest?.decisionReason ? (
+            <p className="mt-3 rounded-md border-l-4 border-brick-500 bg-brick-100 px-3 py-2 text-brick-700">
+              Returned by {latest.decidedBy ?? 'a reviewer'} on {formatDateTime(latest.decidedAt!)}: “{latest.decisionReason}”
+            </p>
+          ) : null}
+          {status === 'in_review' ? <p className="mt-2 text-ink-soft">The case is frozen for review: nobody can edit it until a reviewer returns it.</p> : null}
+          <div className="mt-4 flex flex-wrap gap-2">
+            {rights.canSubmit && (status === 'draft' || status === 'returned') ? (
+              <Button onClick={() => void act('submit')} busy={busy === 'submit'}>
+                Submit for review
+              </Button>
+            ) : null}
+            {rights.canDecide && status === 'in_review' ? (
+              <>
+                <Button onClick={() => void act('approve')} busy={busy === 'approve'}>
+                  Approve
+                </Button>
+                <Button variant="secondary" onClick={() => setReturning(true)}>
+                  Return to the analyst…
+                </Button>
+              </>
+            ) : null}
+            {approved ? (
+              <>
+                <a
+                  className="inline-flex items-center rounded-md border border-line-strong px-4 py-2 font-medium hover:bg-paper-sunk"
+                  href={`/api/v1/cases/${caseId}/board-pack?size=A4`}
+                >
+                  Board pack (PDF, A4)
+                </a>
+                <a
+                  className="inline-flex items-center rounded-md border border-line-strong px-4 py-2 font-medium hover:bg-paper-sunk"
+                  href={`/api/v1/cases/${caseId}/board-pack?size=LETTER`}
+                >
+                  Board pack (PDF, US Letter)
+                </a>
+              </>
+            ) : null}
+          </div>
+          {approved ? (
+            <p className="mt-2 text-caption text-ink-muted">
+              The board pack shows the snapshot approved on {formatDateTime(approved.decidedAt!)}, whatever was edited since.
+            </p>
+          ) : null}
+        </section>
+        <section>
+          <h3 className="mb-2 text-body font-semibold">Review history</h3>
+          {snapshots.length === 0 ? (
+            <p className="text-ink-soft">Not submitted yet. Submitting freezes the inputs, the result and the engine version for the reviewers.</p>
+          ) : (
+            <Table caption="Snapshots submitted for review">
+              <thead>
+                <tr>
+                  <Th>Submitted</Th>
+                  <Th>Version</Th>
+                  <Th numeric>Expanded NPV</Th>
+                  <Th>Decision</Th>
+                </tr>
+              </thead>
+              <tbody>
+                {snapshots.map((s) => (
+                  <Tr key={s.id}>
+                    <Td>
+                      {formatDateTime(s.submittedAt)}
+                      <span className="block text-caption text-ink-muted">by {s.submittedBy ?? 'a former member'}</span>
+                    </Td>
+                    <Td className="figures">v{s.caseVersion}</Td>
+                    <Td numeric>{formatMoney(s.expandedNpv, currency)}</Td>
+                    <Td>
+                      <StatusBadge status={s.status} />
+                      {s.decidedAt ? (
+                        <span className="block text-caption text-ink-muted">
+                          {s.decidedBy ?? 'a former member'}, {formatDateTime(s.decidedAt)}
+                          {s.decisionReason ? `: “${s.decisionReason}”` : ''}
+                        </span>
+                      ) : null}
+                    </Td>
+                  </Tr>
+                ))}
+              </tbody>
+            </Table>
+          )}
+        </section>
+      </div>
+      <section aria-labelledby="comments-heading" className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
+        <h3 id="comments-heading" className="mb-3 text-body font-semibold">
+          Discussion
+        </h3>
+        {comments.data?.comments.length ? (
+          <ol className="mb-4 flex flex-col gap-3">
+            {comments.data.comments.map((c) => (
+              <li key={c.id} className="border-l-2 border-tide-300 pl-3">
+                <p className="text-caption text-ink-muted">
+                  <span className="font-medium text-ink">{c.author ?? 'A former member'}</span> on {sectionLabel(c.section)} · {formatDateTime(c.createdAt)}
+                </p>
+                <p className="whitespace-pre-wrap">{c.body}</p>
+              </li>
+            ))}
+          </ol>
+        ) : (
+          <p className="mb-4 text-ink-soft">No comments yet.</p>
+        )}
+        {rights.canComment ? (
+          <form
+            onSubmit={(e) => {
+              e.preventDefault();
+              void comment();
+            }}
+            className="flex flex-col gap-2"
+          >
+            <label className="flex flex-col gap-1">
+              <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">About</span>
+              <select value={section} onChange={(e) => setSection(e.target.value)} className="h-10 rounded-md border border-line-strong bg-paper-raised px-3">
+                {sections.map(([k, label]) => (
+                  <option key={k} value={k}>
+                    {label}
+                  </option>
+                ))}
+              </select>
+            </label>
+            <label className="flex flex-col gap-1">
+              <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">Comment</span>
+              <textarea
+                value={body}
+                onChange={(e) => setBody(e.target.value)}
+                rows={3}
+                maxLength={4000}
+                className="rounded-md border border-line-strong bg-paper-raised px-3 py-2"
+              />
+            </label>
+            <div>
+              <Button type="submit" variant="secondary" busy={busy === 'comment'} disabled={body.trim() === ''}>
+                Add comment
+              </Button>
+            </div>
+          </form>
+        ) : null}
+      </section>
+      <Dialog open={returning} title="Return the case to the analyst" onClose={() => setReturning(false)}>
+        <form
+          onSubmit={(e) => {
+            e.preventDefault();
+            void act('return');
+          }}
+          className="flex flex-col gap-3"
+        >
+          <label className="flex flex-col gap-1">
+            <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">Reason (sent to the analyst)</span>
+            <textarea
+              autoFocus
+              value={reason}
+              onChange={(e) => setReason(e.target.value)}
+              rows={4}
+              maxLength={2000}
+              className="rounded-md border border-line-strong bg-paper-raised px-3 py-2"
+            />
+          </label>
+          <FormProblem message={problem} />
+          <div className="flex justify-end gap-2">
+            <Button variant="secondary" onClick={() => setReturning(false)}>
+              Cancel
+            </Button>
+            <Button type="submit" variant="danger" busy={busy === 'return'} disabled={reason.trim().length < 3}>
+              Return the case
+            </Button>
+          </div>
+        </form>
+      </Dialog>
+    </div>
+  );
+}
