@@ -14,6 +14,8 @@ export interface StoredMail {
   subject: string;
   text: string;
   html: string | null;
+  /** What was attached (names, types and sizes; the sink does not keep the bytes). */
+  attachments?: { filename: string; contentType: string; size: number }[];
 }
 
 export function sinkDir(): string {

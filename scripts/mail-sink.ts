@@ -30,6 +30,7 @@ const server = new SMTPServer({
           subject: parsed.subject ?? '',
           text: parsed.text ?? '',
           html: typeof parsed.html === 'string' ? parsed.html : null,
+          attachments: parsed.attachments.map((a) => ({ filename: a.filename ?? '', contentType: a.contentType, size: a.size })),
         };
         await fs.mkdir(dir, { recursive: true });
         await fs.writeFile(path.join(dir, `${id}.json`), JSON.stringify(mail, null, 2));

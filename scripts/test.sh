@@ -11,7 +11,7 @@ step() { echo; echo "━━ $*"; }
 
 step "install"
 bash scripts/ensure-deps.sh
-bash scripts/ensure-chromium.sh
+bash scripts/ensure-debian-tools.sh
 bash scripts/db.sh start
 
 step "db.sh survives restarts and kills"

@@ -1,0 +1,197 @@
+/**
+ * From case to decision in Chromium: the analyst submits a case; the reviewer is e-mailed,
+ * comments and returns it with a reason; edits during review are refused; the analyst fixes the
+ * case and resubmits; the reviewer approves; the analyst's approval e-mail carries the board
+ * pack; the executive downloads the pack, whose text holds the snapshot's figures exactly as the
+ * app shows them. Another organisation gets 404 from every review route.
+ */
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { db } from '@/db';
+import { decisionRule } from '@/lib/decision-rules';
+import { formatMoney } from '@/lib/format';
+import { closeBrowser, signedInPage } from './support/browser';
+import { firstLink, waitForMail } from './support/mail';
+
+let caseId = '';
+let projectId = '';
+
+beforeAll(async () => {
+  const row = await db
+    .selectFrom('case')
+    .innerJoin('project', 'project.id', 'case.project_id')
+    .select(['case.id', 'case.project_id'])
+    .where('project.name', '=', 'Phased bio-resin plant')
+    .where('case.name', '=', 'Volatile demand')
+    .executeTakeFirstOrThrow();
+  caseId = row.id;
+  projectId = row.project_id;
+});
+
+afterAll(async () => {
+  await closeBrowser();
+  await db.destroy();
+});
+
+async function openReviewTab(page: Page) {
+  await page.goto(`/projects/${projectId}/cases/${caseId}`);
+  await page.getByRole('tab', { name: 'Review' }).click();
+  await expect.poll(() => page.getByRole('heading', { name: 'Review history' }).isVisible(), { timeout: 20_000 }).toBe(true);
+}
+
+/** The page's text, as pdftotext reads it, with line breaks as spaces. */
+function pdfText(pdf: Buffer): string {
+  const dir = mkdtempSync(path.join(tmpdir(), 'leeway-pack-'));
+  const file = path.join(dir, 'pack.pdf');
+  writeFileSync(file, pdf);
+  return execFileSync('pdftotext', ['-layout', file, '-']).toString().replace(/\s+/g, ' ');
+}
+
+describe('review workflow', () => {
+  it('goes from submission through a return and a resubmission to approval and the board pack', async () => {
+    const analyst = await signedInPage('analyst@kestrelbay.example');
+    await openReviewTab(analyst.page);
+    await analyst.page.getByRole('button', { name: 'Submit for review' }).click();
+    await expect
+      .poll(() => analyst.page.getByText('Submitted for review; the reviewers have been told by e-mail.').isVisible(), { timeout: 20_000 })
+      .toBe(true);
+
+    const submitted = await waitForMail('reviewer@kestrelbay.example', /^For review: Phased bio-resin plant — Volatile demand$/);
+    expect(firstLink(submitted)).toContain(`/cases/${caseId}`);
+
+    // Frozen while in review: the API refuses a save.
+    const current = (await (await analyst.page.request.get(`/api/v1/cases/${caseId}`)).json()).case;
+    const refused = await analyst.page.request.patch(`/api/v1/cases/${caseId}`, { data: { ...current, name: 'Edited in review', version: current.version } });
+    expect(refused.status()).toBe(409);
+    expect((await refused.json()).error.message).toContain('in review');
+
+    const reviewer = await signedInPage('reviewer@kestrelbay.example');
+    await reviewer.page.goto('/review');
+    await expect.poll(() => reviewer.page.getByRole('link', { name: 'Phased bio-resin plant — Volatile demand' }).isVisible(), { timeout: 20_000 }).toBe(true);
+    await reviewer.page.getByRole('link', { name: 'Phased bio-resin plant — Volatile demand' }).click();
+    await reviewer.page.waitForURL(/\/cases\//);
+    await reviewer.page.getByRole('tab', { name: 'Review' }).click();
+    await reviewer.page.getByLabel('About').selectOption('uncertainty');
+    await reviewer.page.getByLabel('Comment').fill('Where does 42 % come from? Show the comparables.');
+    await reviewer.page.getByRole('button', { name: 'Add comment' }).click();
+    await expect.poll(() => reviewer.page.getByText('Where does 42 % come from? Show the comparables.').isVisible()).toBe(true);
+    await reviewer.page.getByRole('button', { name: 'Return to the analyst…' }).click();
+    await reviewer.page.getByLabel('Reason (sent to the analyst)').fill('Justify the volatility before approval.');
+    await reviewer.page.getByRole('button', { name: 'Return the case' }).click();
+    await expect.poll(() => reviewer.page.getByText('Returned to the analyst with your reason.').isVisible(), { timeout: 20_000 }).toBe(true);
+
+    const returned = await waitForMail('analyst@kestrelbay.example', /^Returned: Phased bio-resin plant — Volatile demand$/);
+    expect(returned.text).toContain('Justify the volatility before approval.');
+
+    // The analyst fixes the case (a lower volatility), saves and submits again.
+    await analyst.page.goto(`/projects/${projectId}/cases/${caseId}`);
+    await analyst.page.getByRole('tab', { name: 'Uncertainty' }).click();
+    await analyst.page.getByLabel("Volatility of the project's value (%)").fill('38');
+    await analyst.page.getByRole('tab', { name: 'Review' }).click();
+    await expect
+      .poll(() => analyst.page.getByText('Justify the volatility before approval.', { exact: false }).first().isVisible(), { timeout: 20_000 })
+      .toBe(true);
+    await analyst.page.getByRole('button', { name: 'Submit for review' }).click();
+    await expect
+      .poll(() => analyst.page.getByText('Submitted for review; the reviewers have been told by e-mail.').isVisible(), { timeout: 20_000 })
+      .toBe(true);
+
+    await reviewer.page.goto(`/projects/${projectId}/cases/${caseId}`);
+    await reviewer.page.getByRole('tab', { name: 'Review' }).click();
+    await reviewer.page.getByRole('button', { name: 'Approve' }).click();
+    await expect.poll(() => reviewer.page.getByText('Approved. The board pack is ready.').isVisible(), { timeout: 30_000 }).toBe(true);
+
+    const approved = await waitForMail('analyst@kestrelbay.example', /^Approved: Phased bio-resin plant — Volatile demand$/, 30_000);
+    expect(approved.attachments?.map((a) => a.contentType)).toEqual(['application/pdf']);
+
+    // Two decisions on one snapshot: the second is refused.
+    expect((await reviewer.page.request.post(`/api/v1/cases/${caseId}/approve`)).status()).toBe(409);
+    await analyst.context.close();
+    await reviewer.context.close();
+  });
+
+  it('lets the executive download the board pack, whose text holds the figures the app shows', async () => {
+    const { context, page } = await signedInPage('executive@kestrelbay.example');
+    await openReviewTab(page);
+    const snapshots = (await (await page.request.get(`/api/v1/cases/${caseId}/snapshots`)).json()).snapshots;
+    expect(snapshots.map((s: { status: string }) => s.status)).toEqual(['approved', 'returned']);
+    const shown = formatMoney(snapshots[0].expandedNpv, 'EUR');
+    await expect.poll(() => page.getByRole('cell', { name: shown }).first().isVisible()).toBe(true);
+
+    const download = page.waitForEvent('download');
+    await page.getByRole('link', { name: 'Board pack (PDF, A4)' }).click();
+    const file = await (await download).path();
+    const { readFileSync } = await import('node:fs');
+    const pdf = readFileSync(file);
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    const text = pdfText(pdf);
+    const snapshot = await db.selectFrom('case_snapshot').select(['result', 'decided_at']).where('id', '=', snapshots[0].id).executeTakeFirstOrThrow();
+    const result = snapshot.result as { staticNpv: number; optionPremium: number; expandedNpv: number; switches: never[] };
+    for (const figure of [result.staticNpv, result.optionPremium, result.expandedNpv]) expect(text).toContain(formatMoney(figure, 'EUR'));
+    expect(text).toContain('Approval record');
+    expect(text).toContain('Tomasz Okafor');
+    expect(text).toContain(decisionRule(result.switches[0]!, 'EUR').text.slice(0, 40));
+
+    // The same snapshot always gives the same document, and Letter is there too.
+    const again = await page.request.get(`/api/v1/cases/${caseId}/board-pack?size=A4`);
+    expect(Buffer.from(await again.body()).equals(pdf)).toBe(true);
+    const letter = await page.request.get(`/api/v1/cases/${caseId}/board-pack?size=letter`);
+    expect(letter.status()).toBe(200);
+    expect(letter.headers()['content-type']).toBe('application/pdf');
+    expect((await page.request.get(`/api/v1/cases/${caseId}/board-pack?size=A3`)).status()).toBe(422);
+    await context.close();
+  });
+
+  it('answers another organisation 404 on every review route, whatever its role, and a viewer 403 on every action', async () => {
+    const outsider = await signedInPage('owner@harrowfen.example');
+    const viewer = await signedInPage('executive@kestrelbay.example');
+    const harrowMember = await db
+      .selectFrom('member')
+      .innerJoin('user', 'user.id', 'member.userId')
+      .select('member.id')
+      .where('user.email', '=', 'owner@harrowfen.example')
+      .executeTakeFirstOrThrow();
+    // The other organisation's member takes, in turn, the role each route needs, so only the organisation differs.
+    const actAs = (role: string) => db.updateTable('member').set({ role }).where('id', '=', harrowMember.id).execute();
+    const routes: ['get' | 'post', string, string, unknown?][] = [
+      ['post', 'analyst', `/api/v1/cases/${caseId}/submit`],
+      ['post', 'reviewer', `/api/v1/cases/${caseId}/approve`],
+      ['post', 'reviewer', `/api/v1/cases/${caseId}/return`, { reason: 'Not yours to return.' }],
+      ['get', 'viewer', `/api/v1/cases/${caseId}/comments`],
+      ['post', 'reviewer', `/api/v1/cases/${caseId}/comments`, { section: 'general', body: 'Hello' }],
+      ['get', 'viewer', `/api/v1/cases/${caseId}/snapshots`],
+      ['get', 'viewer', `/api/v1/cases/${caseId}/board-pack`],
+    ];
+    const got: Record<string, [number, number]> = {};
+    try {
+      for (const [method, role, url, data] of routes) {
+        await actAs(role);
+        const options = data === undefined ? {} : { data };
+        got[`${method} ${url.split('/').at(-1)}`] = [
+          (await outsider.page.request[method](url, options)).status(),
+          (await viewer.page.request[method](url, options)).status(),
+        ];
+      }
+      await actAs('reviewer');
+      expect((await (await outsider.page.request.get('/api/v1/reviews')).json()).cases).toEqual([]);
+    } finally {
+      await actAs('admin');
+    }
+    // [other organisation, Kestrel Bay's executive]: the executive may read, never act.
+    expect(got).toEqual({
+      'post submit': [404, 403],
+      'post approve': [404, 403],
+      'post return': [404, 403],
+      'get comments': [404, 200],
+      'post comments': [404, 403],
+      'get snapshots': [404, 200],
+      'get board-pack': [404, 200],
+    });
+    await outsider.context.close();
+    await viewer.context.close();
+  });
+});
