@@ -5,6 +5,7 @@ import { roleAllows, type Permission, type RoleName } from './permissions';
 const items: (NavItem & { needs: Permission })[] = [
   { href: '/portfolio', label: 'Portfolio', needs: { project: ['read'] } },
   { href: '/projects', label: 'Projects', needs: { project: ['read'] } },
+  { href: '/compare', label: 'Compare', needs: { case: ['read'] } },
   { href: '/review', label: 'Review', needs: { review: ['read'] } },
   { href: '/settings', label: 'Settings', needs: { settings: ['update'] } },
 ];

@@ -10,7 +10,9 @@ import { useWidth } from './use-width';
  */
 export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[]; currency?: string; title: string }) {
   const { ref, width } = useWidth<HTMLDivElement>();
-  const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(220, width * 0.3) });
+  const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(260, width * 0.32) });
+  // About 7 px a character at the body size: labels never run off the left edge.
+  const maxChars = Math.floor((layout.margin.left - 16) / 7);
   return (
     <figure ref={ref} className="w-full">
       <figcaption className="mb-2 flex flex-wrap items-center gap-x-6 gap-y-1 text-caption text-ink-soft">
@@ -46,7 +48,7 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
         {layout.rows.map((r) => (
           <g key={r.id}>
             <text x={layout.margin.left - 12} y={r.y} dy="0.35em" textAnchor="end" className="fill-ink text-body">
-              {r.label.length > 30 ? `${r.label.slice(0, 29)}…` : r.label}
+              {r.label.length > maxChars ? `${r.label.slice(0, maxChars - 1)}…` : r.label}
             </text>
             <line x1={r.staticX} x2={r.expandedX} y1={r.y} y2={r.y} stroke="#7fbcc0" strokeWidth="6" strokeLinecap="round" />
             <circle cx={r.staticX} cy={r.y} r="6" fill="white" stroke="#3c4b57" strokeWidth="2" />

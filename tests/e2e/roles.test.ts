@@ -9,10 +9,10 @@ afterAll(closeBrowser);
 
 describe('signing in by role', () => {
   it.each([
-    ['admin@kestrelbay.example', ['Portfolio', 'Projects', 'Review', 'Settings']],
-    ['analyst@kestrelbay.example', ['Portfolio', 'Projects', 'Review']],
-    ['reviewer@kestrelbay.example', ['Portfolio', 'Projects', 'Review']],
-    ['executive@kestrelbay.example', ['Portfolio', 'Projects']],
+    ['admin@kestrelbay.example', ['Portfolio', 'Projects', 'Compare', 'Review', 'Settings']],
+    ['analyst@kestrelbay.example', ['Portfolio', 'Projects', 'Compare', 'Review']],
+    ['reviewer@kestrelbay.example', ['Portfolio', 'Projects', 'Compare', 'Review']],
+    ['executive@kestrelbay.example', ['Portfolio', 'Projects', 'Compare']],
   ])('%s sees %j', async (email, expected) => {
     const { context, page } = await signedInPage(email);
     expect(await navLabels(page)).toEqual(expected);

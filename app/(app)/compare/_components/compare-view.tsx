@@ -1,0 +1,158 @@
+'use client';
+
+import { usePathname, useRouter, useSearchParams } from 'next/navigation';
+import useSWR from 'swr';
+import { NpvComparisonChart } from '@/components/charts/npv-comparison-chart';
+import { LoadError, LoadingBlock } from '@/components/load-state';
+import { ValuationCaution } from '@/components/valuation-caution';
+import { getJson } from '@/lib/api-client';
+
+interface CaseOption {
+  id: string;
+  name: string;
+  status: string;
+  projectId: string;
+  projectName: string;
+}
+
+interface ComparisonJson {
+  cases: {
+    id: string;
+    projectName: string;
+    caseName: string;
+    currency: string;
+    staticNpv: number | null;
+    expandedNpv: number | null;
+    valuedAt: string | null;
+  }[];
+  rows: { group: string; label: string; values: (string | null)[]; differs: boolean }[];
+}
+
+const MAX = 4;
+
+/**
+ * Two to four cases side by side. The selection lives in the URL (?cases=…), so a comparison can
+ * be shared by sending the link; rows where the cases differ are marked in words and by tone.
+ */
+export function CompareView() {
+  const router = useRouter();
+  const pathname = usePathname();
+  const params = useSearchParams();
+  const selected = (params.get('cases') ?? '').split(',').filter(Boolean).slice(0, MAX);
+  const all = useSWR<{ cases: CaseOption[] }>('/api/v1/cases', getJson);
+  const query = selected.length >= 2 ? `/api/v1/compare?cases=${selected.join(',')}` : null;
+  const comparison = useSWR<ComparisonJson>(query, getJson);
+
+  const toggle = (id: string) => {
+    const next = selected.includes(id) ? selected.filter((x) => x !== id) : [...selected, id].slice(0, MAX);
+    router.replace(next.length ? `${pathname}?cases=${next.join(',')}` : pathname, { scroll: false });
+  };
+
+  if (all.isLoading) return <LoadingBlock label="Loading cases" />;
+  if (all.error || !all.data) return <LoadError message={all.error?.message ?? 'No answer from the server.'} onRetry={() => all.mutate()} />;
+  const projects = [...new Map(all.data.cases.map((c) => [c.projectId, c.projectName])).entries()];
+
+  return (
+    <div className="grid gap-8 xl:grid-cols-[18rem_minmax(0,1fr)]">
+      <fieldset className="rounded-card border border-line bg-paper-raised p-4 shadow-card">
+        <legend className="px-1 text-caption font-medium uppercase tracking-wide text-ink-soft">
+          Cases to compare ({selected.length} of up to {MAX})
+        </legend>
+        {projects.map(([projectId, projectName]) => (
+          <div key={projectId} className="mb-3">
+            <p className="text-caption font-semibold text-ink">{projectName}</p>
+            {all
+              .data!.cases.filter((c) => c.projectId === projectId)
+              .map((c) => (
+                <label key={c.id} className="flex items-center gap-2 py-0.5 text-body">
+                  <input
+                    type="checkbox"
+                    checked={selected.includes(c.id)}
+                    disabled={!selected.includes(c.id) && selected.length >= MAX}
+                    onChange={() => toggle(c.id)}
+                  />
+                  {c.name}
+                </label>
+              ))}
+          </div>
+        ))}
+      </fieldset>
+      <div className="flex min-w-0 flex-col gap-6">
+        {selected.length < 2 ? (
+          <p className="rounded-card border border-dashed border-line-strong bg-paper-raised px-6 py-10 text-center text-ink-soft">
+            Choose two to four cases, from one project or several. The page address then names them, so you can send it to a colleague.
+          </p>
+        ) : comparison.isLoading ? (
+          <LoadingBlock label="Comparing" lines={8} />
+        ) : comparison.error || !comparison.data ? (
+          <LoadError message={comparison.error?.message ?? 'No answer from the server.'} onRetry={() => comparison.mutate()} />
+        ) : (
+          <>
+            <div className="flex flex-wrap items-center justify-between gap-3">
+              <p className="text-caption text-ink-muted">
+                Figures from each case&rsquo;s latest stored valuation. Rows marked “differs” are not the same in every case; cells unlike the first case are
+                tinted.
+              </p>
+              <a
+                href={`/api/v1/compare.xlsx?cases=${selected.join(',')}`}
+                className="inline-flex items-center rounded-md border border-line-strong bg-paper-raised px-4 py-2 font-medium hover:bg-paper-sunk"
+              >
+                Download as a workbook
+              </a>
+            </div>
+            <div className="overflow-x-auto rounded-card border border-line bg-paper-raised shadow-card">
+              <table className="w-full border-collapse text-left text-body">
+                <caption className="sr-only">Cases side by side</caption>
+                <thead>
+                  <tr>
+                    <th scope="col" className="border-b border-line bg-paper-sunk px-4 py-2 text-caption uppercase tracking-wide text-ink-soft">
+                      &nbsp;
+                    </th>
+                    {comparison.data.cases.map((c) => (
+                      <th key={c.id} scope="col" className="border-b border-line bg-paper-sunk px-4 py-2 align-bottom">
+                        <span className="block text-caption text-ink-muted">{c.projectName}</span>
+                        <span className="font-semibold">{c.caseName}</span>
+                      </th>
+                    ))}
+                  </tr>
+                </thead>
+                <tbody>
+                  {comparison.data.rows.map((row, k) => (
+                    <tr
+                      key={`${row.group}:${row.label}`}
+                      className={k > 0 && comparison.data!.rows[k - 1]!.group !== row.group ? 'border-t-2 border-line-strong' : ''}
+                    >
+                      <th scope="row" className="border-b border-line px-4 py-2 text-left font-normal">
+                        {k === 0 || comparison.data!.rows[k - 1]!.group !== row.group ? (
+                          <span className="block text-caption uppercase tracking-wide text-ink-muted">{row.group}</span>
+                        ) : null}
+                        {row.label}
+                        {row.differs ? <span className="ml-2 rounded bg-ember-100 px-1.5 text-caption font-medium text-ember-700">differs</span> : null}
+                      </th>
+                      {row.values.map((v, j) => (
+                        <td key={j} className={`figures border-b border-line px-4 py-2 ${j > 0 && v !== row.values[0] ? 'bg-tide-50 font-semibold' : ''}`}>
+                          {v ?? <span className="text-ink-muted">–</span>}
+                        </td>
+                      ))}
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+            <section className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
+              <h2 className="mb-3">NPV with and without flexibility</h2>
+              <NpvComparisonChart
+                title="Per case"
+                currency={new Set(comparison.data.cases.map((c) => c.currency)).size === 1 ? comparison.data.cases[0]!.currency : undefined}
+                items={comparison.data.cases
+                  .filter((c) => c.staticNpv !== null && c.expandedNpv !== null)
+                  .map((c) => ({ id: c.id, label: `${c.caseName} (${c.projectName})`, staticNpv: c.staticNpv!, expandedNpv: c.expandedNpv! }))}
+              />
+            </section>
+            <ValuationCaution />
+          </>
+        )}
+      </div>
+    </div>
+  );
+}
