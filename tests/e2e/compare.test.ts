@@ -1,0 +1,70 @@
+/**
+ * The comparison: the page reads its cases from the URL and marks differences; the API answers
+ * 2–4 cases of the organisation (404 for another organisation's, 422 for one or five); the
+ * workbook holds the same figures as numbers, and text that looks like a formula is neutralised.
+ */
+import ExcelJS from 'exceljs';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { db } from '@/db';
+import { formatMoney } from '@/lib/format';
+import { closeBrowser, signedInPage } from './support/browser';
+
+let plantCases: string[] = [];
+
+beforeAll(async () => {
+  plantCases = (
+    await db
+      .selectFrom('case')
+      .innerJoin('project', 'project.id', 'case.project_id')
+      .select('case.id')
+      .where('project.name', '=', 'Phased bio-resin plant')
+      .where('case.name', 'in', ['Base case', 'Volatile demand'])
+      .orderBy('case.created_at')
+      .execute()
+  ).map((c) => c.id);
+});
+
+afterAll(async () => {
+  await closeBrowser();
+  await db.destroy();
+});
+
+describe('comparing cases', () => {
+  it('shows two cases side by side from a shared link, with their differences marked', async () => {
+    const { context, page } = await signedInPage('executive@kestrelbay.example');
+    await page.goto(`/compare?cases=${plantCases.join(',')}`);
+    await expect.poll(() => page.getByRole('link', { name: 'Download as a workbook' }).isVisible(), { timeout: 20_000 }).toBe(true);
+    const api = await (await page.request.get(`/api/v1/compare?cases=${plantCases.join(',')}`)).json();
+    const volatility = api.rows.find((r: { label: string }) => r.label === 'Volatility');
+    expect(volatility.differs).toBe(true);
+    expect(
+      await page
+        .getByRole('row', { name: /Volatility/ })
+        .getByText('differs')
+        .isVisible(),
+    ).toBe(true);
+    const expanded = api.rows.find((r: { label: string }) => r.label === 'Expanded NPV');
+    for (const v of expanded.values) expect(await page.getByRole('cell', { name: v }).first().isVisible()).toBe(true);
+
+    const xlsx = await page.request.get(`/api/v1/compare.xlsx?cases=${plantCases.join(',')}`);
+    expect(xlsx.status()).toBe(200);
+    const book = new ExcelJS.Workbook();
+    await book.xlsx.load(Buffer.from(await xlsx.body()) as never);
+    const sheet = book.getWorksheet('Comparison')!;
+    const row = sheet.getRows(1, sheet.rowCount)!.find((r) => r.getCell(1).value === 'Expanded NPV')!;
+    expect([row.getCell(2).value, row.getCell(3).value]).toEqual(api.cases.map((c: { expandedNpv: number }) => c.expandedNpv));
+    expect(formatMoney(row.getCell(2).value as number, 'EUR')).toBe(expanded.values[0]);
+    expect(book.getWorksheet('Cautions')!.getCell('A1').value).toContain('model-based estimates');
+    await context.close();
+  });
+
+  it('refuses another organisation, and fewer than two or more than four cases', async () => {
+    const outsider = await signedInPage('owner@harrowfen.example');
+    expect((await outsider.page.request.get(`/api/v1/compare?cases=${plantCases.join(',')}`)).status()).toBe(404);
+    expect((await outsider.page.request.get(`/api/v1/compare.xlsx?cases=${plantCases.join(',')}`)).status()).toBe(404);
+    expect((await outsider.page.request.get(`/api/v1/compare?cases=${plantCases[0]}`)).status()).toBe(422);
+    expect((await outsider.page.request.get('/api/v1/compare?cases=a,b,c,d,e')).status()).toBe(422);
+    expect((await outsider.page.request.get('/api/v1/compare')).status()).toBe(422);
+    await outsider.context.close();
+  });
+});
