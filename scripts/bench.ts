@@ -5,6 +5,7 @@
  *    CoxRossRubinstein; median of several runs, with the ratio.
  * 2. A full valuation with expand + contract + abandon + defer at 500 steps, including the
  *    stand-alone and incremental breakdown, convergence and sensitivities.
+ * 3. Rendering the board pack of the demo plant's base case (A4), first and steady.
  * The script is bundled with esbuild and run by plain node, as the app ships the engine (tsx's
  * on-the-fly loader made the same loops about twice as slow when measured).
  */
@@ -12,6 +13,9 @@ import { valueProject, type ProjectModel } from '../lattice';
 import { prepareModel } from '../lattice/check-model';
 import { singlePass } from '../lattice/single-pass';
 import { quantlibAmerican } from '../tests/lattice/support/quantlib';
+import { demoPortfolio } from '../demo/portfolio';
+import { renderBoardPack } from '../lib/board-pack/render';
+import { caseToModel } from '../lib/case-model';
 
 function median(times: number[]): number {
   const sorted = [...times].sort((a, b) => a - b);
@@ -72,3 +76,40 @@ const full = time(() => valueProject(fourOptions), 11);
 console.log('\nFour options (defer, expand, contract, abandon), 500 steps, 6 modes');
 console.log(`  one lattice pass (extras: false)                          ${ms(single)}`);
 console.log(`  full valuation with breakdown, convergence, sensitivities ${ms(full)}`);
+
+// 3. The board pack of the demo plant's base case, as the approval renders it (in its worker).
+const plant = demoPortfolio[0]!;
+const plantCase = plant.cases[0]!;
+const { model: plantModel } = caseToModel(plantCase);
+const packData = () => ({
+  pageSize: 'A4' as const,
+  organisation: 'Kestrel Bay Materials',
+  isDemo: true,
+  project: { name: plant.name, description: plant.description, currency: 'EUR' },
+  snapshot: {
+    id: 'bench',
+    caseName: plantCase.name,
+    caseVersion: 1,
+    inputs: plantCase,
+    model: plantModel,
+    result: valueProject(plantModel),
+    engineVersion: 'bench',
+    inputHash: 'bench',
+    submittedBy: 'Priya Lindqvist',
+    submittedAt: '2026-11-30T09:00:00.000Z',
+    decidedBy: 'Tomasz Okafor',
+    decidedAt: '2026-12-01T15:30:00.000Z',
+  },
+});
+const firstStart = performance.now();
+await renderBoardPack(packData());
+const first = performance.now() - firstStart;
+const packTimes: number[] = [];
+for (let k = 0; k < 5; k++) {
+  const start = performance.now();
+  await renderBoardPack(packData());
+  packTimes.push(performance.now() - start);
+}
+console.log('\nBoard pack of the demo plant base case (A4, 5 pages, valuation included)');
+console.log(`  first render (fonts loaded)                               ${ms(first)}`);
+console.log(`  later renders (median of 5)                               ${ms(median(packTimes))}`);

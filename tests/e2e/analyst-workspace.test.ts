@@ -128,7 +128,7 @@ describe('the analyst workspace', () => {
     await page.getByLabel("Volatility of the project's value (%)").fill('45');
     await page.getByRole('button', { name: 'Save' }).click();
     // The first save's toast may still be up: read the copy's own version line instead.
-    await expect.poll(() => page.getByText(/^Version 2 · saved/).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText(/Version 2 · saved/).isVisible()).toBe(true);
 
     const copy = await caseJson(page, copyId);
     const base = await caseJson(page, caseId);

@@ -108,8 +108,10 @@ describe('review workflow', () => {
     const approved = await waitForMail('analyst@kestrelbay.example', /^Approved: Phased bio-resin plant — Volatile demand$/, 30_000);
     expect(approved.attachments?.map((a) => a.contentType)).toEqual(['application/pdf']);
 
-    // Two decisions on one snapshot: the second is refused.
+    // Two decisions on one snapshot: the second is refused; the reviewed record cannot be deleted.
     expect((await reviewer.page.request.post(`/api/v1/cases/${caseId}/approve`)).status()).toBe(409);
+    expect((await analyst.page.request.delete(`/api/v1/cases/${caseId}`)).status()).toBe(409);
+    expect((await analyst.page.request.delete(`/api/v1/projects/${projectId}`)).status()).toBe(409);
     await analyst.context.close();
     await reviewer.context.close();
   });

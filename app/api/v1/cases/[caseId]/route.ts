@@ -55,9 +55,18 @@ export const DELETE = withAuth<Params>(
       .deleteFrom('case')
       .where('organization_id', '=', member.orgId)
       .where('id', '=', params.caseId)
+      // A case that was ever submitted keeps its review record: it is never deleted.
+      .where((eb) => eb.not(eb.exists(eb.selectFrom('case_snapshot').select('case_snapshot.id').whereRef('case_snapshot.case_id', '=', 'case.id'))))
       .returning(['name', 'project_id'])
       .executeTakeFirst();
-    if (!gone) throw missing();
+    if (!gone) {
+      if (await findCase(db, { orgId: member.orgId, caseId: params.caseId }))
+        throw new AppError(
+          'conflict',
+          'This case has been submitted for review, so its record is kept: it cannot be deleted. Duplicate it to start a new version.',
+        );
+      throw missing();
+    }
     await recordAudit(db, {
       orgId: member.orgId,
       actorId: member.userId,

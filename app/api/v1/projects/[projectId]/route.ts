@@ -51,9 +51,28 @@ export const DELETE = withAuth<Params>(
       .deleteFrom('project')
       .where('organization_id', '=', member.orgId)
       .where('id', '=', params.projectId)
+      // Review records are kept: a project with a submitted case is archived, never deleted.
+      .where((eb) =>
+        eb.not(
+          eb.exists(
+            eb
+              .selectFrom('case_snapshot')
+              .innerJoin('case', 'case.id', 'case_snapshot.case_id')
+              .select('case_snapshot.id')
+              .whereRef('case.project_id', '=', 'project.id'),
+          ),
+        ),
+      )
       .returning('name')
       .executeTakeFirst();
-    if (!gone) throw missing();
+    if (!gone) {
+      if (await findProject(db, { orgId: member.orgId, projectId: params.projectId }))
+        throw new AppError(
+          'conflict',
+          'A case of this project has been submitted for review, so the project keeps its record: archive it instead of deleting it.',
+        );
+      throw missing();
+    }
     await recordAudit(db, {
       orgId: member.orgId,
       actorId: member.userId,
