@@ -9,18 +9,14 @@ import { db } from '@/db';
 import { createCase, saveCase } from '@/db/queries/cases';
 import { createProject } from '@/db/queries/projects';
 import { decideCase, submitCase } from '@/db/queries/reviews';
-import { seedDemo } from '@/demo/seed';
+import { minimalCase, seededDemo } from './support/demo';
 
 let kestrel = '';
+let harrow = '';
 let analyst = '';
 let reviewer = '';
 
-const content = {
-  name: 'Review case',
-  cashFlows: { wacc: 0.08, rows: [{ year: 0, revenue: 10, operatingCost: 0, capex: 0, tax: 0, workingCapital: 0 }] },
-  settings: { volatility: 0.3, riskFreeRate: 0.03, steps: 10 },
-  options: [],
-};
+const content = { ...minimalCase, name: 'Review case' };
 const frozen = { inputs: content, model: { steps: 10 }, result: { expandedNpv: 12.5, staticNpv: 10 }, engineVersion: 'test', inputHash: 'abc' };
 
 async function freshCase() {
@@ -34,10 +30,7 @@ const approve = (caseId: string) =>
   db.transaction().execute((trx) => decideCase(trx, { orgId: kestrel, caseId, role: 'reviewer', userId: reviewer, action: 'approve' }));
 
 beforeAll(async () => {
-  await seedDemo();
-  kestrel = (await db.selectFrom('organization').select('id').where('slug', '=', 'kestrel-bay-materials').executeTakeFirstOrThrow()).id;
-  analyst = (await db.selectFrom('user').select('id').where('email', '=', 'analyst@kestrelbay.example').executeTakeFirstOrThrow()).id;
-  reviewer = (await db.selectFrom('user').select('id').where('email', '=', 'reviewer@kestrelbay.example').executeTakeFirstOrThrow()).id;
+  ({ kestrel, harrow, analyst, reviewer } = await seededDemo());
 });
 
 describe('review workflow', () => {
@@ -64,7 +57,6 @@ describe('review workflow', () => {
       await db.transaction().execute((trx) => submitCase(trx, { orgId: kestrel, caseId: c.id, role: 'reviewer', userId: reviewer, caseVersion: 1, frozen })),
     ).toMatchObject({ ok: false, code: 'forbidden' });
     expect(await submit(c.id, 7)).toMatchObject({ ok: false, code: 'conflict' });
-    const harrow = (await db.selectFrom('organization').select('id').where('slug', '=', 'harrow-fen-logistics').executeTakeFirstOrThrow()).id;
     expect(
       await db.transaction().execute((trx) => submitCase(trx, { orgId: harrow, caseId: c.id, role: 'analyst', userId: analyst, caseVersion: 1, frozen })),
     ).toMatchObject({

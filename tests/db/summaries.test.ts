@@ -10,18 +10,11 @@ import { createCase } from '@/db/queries/cases';
 import { createProject } from '@/db/queries/projects';
 import { latestRunByCase, listProjectActivity, listProjectSummaries } from '@/db/queries/summaries';
 import { recordValuationRun } from '@/db/queries/valuation-runs';
-import { seedDemo } from '@/demo/seed';
+import { minimalCase as content, seededDemo } from './support/demo';
 
 let kestrel = '';
 let harrow = '';
 let analyst = '';
-
-const content = {
-  name: 'Base',
-  cashFlows: { wacc: 0.08, rows: [{ year: 0, revenue: 10, operatingCost: 0, capex: 0, tax: 0, workingCapital: 0 }] },
-  settings: { volatility: 0.3, riskFreeRate: 0.03, steps: 10 },
-  options: [],
-};
 
 function run(caseId: string, expandedNpv: number) {
   return recordValuationRun(db, {
@@ -37,10 +30,7 @@ function run(caseId: string, expandedNpv: number) {
 }
 
 beforeAll(async () => {
-  await seedDemo();
-  kestrel = (await db.selectFrom('organization').select('id').where('slug', '=', 'kestrel-bay-materials').executeTakeFirstOrThrow()).id;
-  harrow = (await db.selectFrom('organization').select('id').where('slug', '=', 'harrow-fen-logistics').executeTakeFirstOrThrow()).id;
-  analyst = (await db.selectFrom('user').select('id').where('email', '=', 'analyst@kestrelbay.example').executeTakeFirstOrThrow()).id;
+  ({ kestrel, harrow, analyst } = await seededDemo());
 });
 
 describe('project summaries', () => {
