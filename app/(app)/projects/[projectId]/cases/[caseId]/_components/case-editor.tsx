@@ -208,7 +208,11 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
           </div>
           {readOnly ? (
             <p className="rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
-              {canEdit ? 'In review: the case is frozen until a reviewer returns it.' : 'Read-only: your role can read this case but not change it.'}
+              {canEdit
+                ? 'In review: the case is frozen until a reviewer returns it.'
+                : rights.canDecide && status === 'in_review'
+                  ? 'In review: read the case, then decide in the Review tab.'
+                  : 'Read-only: your role can read this case but not change it.'}
             </p>
           ) : (
             <div className="flex gap-2">
