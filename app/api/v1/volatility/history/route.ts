@@ -1,0 +1,45 @@
+// POST /api/v1/volatility/history – annualised volatility of log returns from an uploaded CSV or XLSX, or JSON { series }
+import { NextResponse } from 'next/server';
+import { z } from 'zod';
+import { readJson, withAuth } from '@/lib/api';
+import { AppError } from '@/lib/errors';
+import { inspectUpload, MAX_UPLOAD_BYTES } from '@/lib/uploads/inspect';
+import { estimateFromHistory, HistoryError, historySeriesSchema, type HistoryPoint } from '@/lib/volatility/history';
+import { readCsvSeries, readXlsxSeries } from '@/lib/volatility/read-series';
+
+export const dynamic = 'force-dynamic';
+export const runtime = 'nodejs';
+
+const jsonSchema = z.object({ series: historySeriesSchema });
+
+async function seriesFrom(request: Request): Promise<{ series: HistoryPoint[]; source: string }> {
+  const type = request.headers.get('content-type') ?? '';
+  if (type.startsWith('multipart/form-data')) {
+    if (Number(request.headers.get('content-length') ?? '0') > MAX_UPLOAD_BYTES + 64 * 1024)
+      throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
+    const form = await request.formData().catch(() => {
+      throw new AppError('bad_request', 'The upload could not be read.');
+    });
+    const file = form.get('file');
+    if (!(file instanceof File)) throw new AppError('unprocessable', 'Attach the history as a file named “file”.', { file: ['Choose a CSV or XLSX file.'] });
+    const bytes = new Uint8Array(await file.arrayBuffer());
+    const kind = inspectUpload(file.name, bytes, ['csv', 'xlsx']);
+    const series = kind === 'csv' ? readCsvSeries(new TextDecoder().decode(bytes)) : await readXlsxSeries(bytes);
+    return { series, source: file.name };
+  }
+  return { series: jsonSchema.parse(await readJson(request)).series, source: 'series sent as JSON' };
+}
+
+export const POST = withAuth(
+  async ({ request }) => {
+    try {
+      const { series, source } = await seriesFrom(request);
+      const estimate = estimateFromHistory(series);
+      return NextResponse.json({ source, ...estimate });
+    } catch (error) {
+      if (error instanceof HistoryError) throw new AppError('unprocessable', error.message, { series: [error.message] });
+      throw error;
+    }
+  },
+  { permission: { case: ['update'] } },
+);
