@@ -10,6 +10,13 @@ export const caseSettingsSchema = z.object({
   riskFreeRate: z.number().gt(-0.05).lt(0.25),
   steps: z.number().int().min(1).max(MAX_STEPS),
   tree: treeKindSchema.default('crr'),
+  /** Where the volatility comes from, in words a reviewer can check (the method and its inputs). */
+  volatilitySource: z
+    .object({
+      method: z.enum(['direct', 'history', 'monte-carlo']),
+      note: z.string().trim().max(2000, 'Keep the justification under 2,000 characters.'),
+    })
+    .optional(),
 });
 
 export const caseInputSchema = z.object({

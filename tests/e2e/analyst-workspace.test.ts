@@ -125,7 +125,7 @@ describe('the analyst workspace', () => {
     copyId = new URL(page.url()).pathname.split('/').at(-1)!;
     expect(copyId).not.toBe(caseId);
     await page.getByRole('tab', { name: 'Uncertainty' }).click();
-    await page.getByLabel("Volatility of the project's value (%)").fill('45');
+    await page.getByLabel('Volatility (%)', { exact: true }).fill('45');
     await page.getByRole('button', { name: 'Save' }).click();
     // The first save's toast may still be up: read the copy's own version line instead.
     await expect.poll(() => page.getByText(/Version 2 · saved/).isVisible()).toBe(true);

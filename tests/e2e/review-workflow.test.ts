@@ -90,7 +90,7 @@ describe('review workflow', () => {
     // The analyst fixes the case (a lower volatility), saves and submits again.
     await analyst.page.goto(`/projects/${projectId}/cases/${caseId}`);
     await analyst.page.getByRole('tab', { name: 'Uncertainty' }).click();
-    await analyst.page.getByLabel("Volatility of the project's value (%)").fill('38');
+    await analyst.page.getByLabel('Volatility (%)', { exact: true }).fill('38');
     await analyst.page.getByRole('tab', { name: 'Review' }).click();
     await expect
       .poll(() => analyst.page.getByText('Justify the volatility before approval.', { exact: false }).first().isVisible(), { timeout: 20_000 })

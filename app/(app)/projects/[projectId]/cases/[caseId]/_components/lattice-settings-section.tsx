@@ -4,6 +4,7 @@ import { NumberField } from '@/components/number-field';
 import { Select } from '@/components/ui/select';
 import { MAX_STEPS } from '@/lattice';
 import type { CaseInput } from '@/lib/validations/case';
+import { HistoryEstimate } from './history-estimate';
 
 type CaseSettings = CaseInput['settings'];
 
@@ -14,7 +15,22 @@ const trees = [
   { value: 'trigeorgis', label: 'Trigeorgis (1991, log-transformed)' },
 ];
 
-/** Volatility, the risk-free rate and the lattice's shape: the inputs the valuation rests on beyond the cash flows. */
+const methodLabels = { direct: 'Entered directly', history: 'Estimated from history', 'monte-carlo': 'Estimated by Monte Carlo' } as const;
+
+function Panel({ title, lead, children }: { title: string; lead?: string; children: React.ReactNode }) {
+  return (
+    <section className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
+      <h3 className="text-body font-semibold">{title}</h3>
+      {lead ? <p className="mb-4 text-caption text-ink-muted">{lead}</p> : <div className="mb-4" />}
+      {children}
+    </section>
+  );
+}
+
+/**
+ * The inputs the valuation rests on beyond the cash flows: the volatility (entered with its
+ * justification, or estimated from a history file), the risk-free rate and the lattice's shape.
+ */
 export function LatticeSettingsSection({
   settings,
   horizon,
@@ -27,42 +43,73 @@ export function LatticeSettingsSection({
   onChange: (s: CaseSettings) => void;
 }) {
   const perYear = settings.steps / Math.max(horizon, 1);
+  const source = settings.volatilitySource;
   return (
-    <div className="grid max-w-3xl gap-6 sm:grid-cols-2">
-      <NumberField
-        label="Volatility of the project's value"
-        percent
-        value={settings.volatility}
-        readOnly={readOnly}
-        hint="Annualised σ of the value's returns: the input committees question most. State its source in the case."
-        check={(v) => (v <= 0 ? 'Volatility must be above 0 %.' : v > 3 ? 'Volatility must be at most 300 %.' : null)}
-        onChange={(volatility) => onChange({ ...settings, volatility })}
-      />
-      <NumberField
-        label="Risk-free rate"
-        percent
-        value={settings.riskFreeRate}
-        readOnly={readOnly}
-        hint="Continuously compounded, a year; e.g. a government bond yield of the project's currency and life."
-        check={(v) => (v <= -0.05 || v >= 0.25 ? 'Use a rate between −5 % and 25 %.' : null)}
-        onChange={(riskFreeRate) => onChange({ ...settings, riskFreeRate })}
-      />
-      <NumberField
-        label="Lattice steps"
-        integer
-        value={settings.steps}
-        readOnly={readOnly}
-        hint={`${perYear.toFixed(1)} steps a year over the ${horizon}-year horizon; more steps, smaller error (see Results → convergence).`}
-        check={(v) => (v < 1 || v > MAX_STEPS ? `Use 1 to ${MAX_STEPS.toLocaleString('en-GB')} steps.` : null)}
-        onChange={(steps) => onChange({ ...settings, steps })}
-      />
-      <Select
-        label="Tree"
-        value={settings.tree ?? 'crr'}
-        disabled={readOnly}
-        options={trees}
-        onChange={(e) => onChange({ ...settings, tree: e.target.value as CaseSettings['tree'] })}
-      />
+    <div className="flex max-w-5xl flex-col gap-6">
+      <Panel
+        title="Volatility of the project's value"
+        lead="The annualised σ of the value's returns: the input committees question most. Say where it comes from."
+      >
+        <div className="grid gap-6 md:grid-cols-[16rem_minmax(0,1fr)]">
+          <NumberField
+            label="Volatility"
+            percent
+            value={settings.volatility}
+            readOnly={readOnly}
+            check={(v) => (v <= 0 ? 'Volatility must be above 0 %.' : v > 3 ? 'Volatility must be at most 300 %.' : null)}
+            onChange={(volatility) => onChange({ ...settings, volatility, volatilitySource: { method: 'direct', note: source?.note ?? '' } })}
+          />
+          <label className="flex flex-col gap-1">
+            <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">Justification · {methodLabels[source?.method ?? 'direct']}</span>
+            <textarea
+              value={source?.note ?? ''}
+              readOnly={readOnly}
+              maxLength={2000}
+              rows={3}
+              placeholder="e.g. Implied volatility of listed resin producers, 2019–2024, adjusted for leverage."
+              onChange={(e) => onChange({ ...settings, volatilitySource: { method: source?.method ?? 'direct', note: e.target.value } })}
+              className="rounded-md border border-line-strong bg-paper-raised px-3 py-2"
+            />
+          </label>
+        </div>
+      </Panel>
+      {readOnly ? null : (
+        <Panel
+          title="Estimate from history"
+          lead="Upload a price or value history (a comparable's share price, a commodity, a past project's value); Leeway annualises the volatility of its log returns."
+        >
+          <HistoryEstimate onApply={(volatility, note) => onChange({ ...settings, volatility, volatilitySource: { method: 'history', note } })} />
+        </Panel>
+      )}
+      <Panel title="Rates and lattice">
+        <div className="grid gap-6 sm:grid-cols-3">
+          <NumberField
+            label="Risk-free rate"
+            percent
+            value={settings.riskFreeRate}
+            readOnly={readOnly}
+            hint="Continuously compounded, a year; e.g. a government bond yield of the project's currency and life."
+            check={(v) => (v <= -0.05 || v >= 0.25 ? 'Use a rate between −5 % and 25 %.' : null)}
+            onChange={(riskFreeRate) => onChange({ ...settings, riskFreeRate })}
+          />
+          <NumberField
+            label="Lattice steps"
+            integer
+            value={settings.steps}
+            readOnly={readOnly}
+            hint={`${perYear.toFixed(1)} steps a year over the ${horizon}-year horizon; more steps, smaller error (see Results → convergence).`}
+            check={(v) => (v < 1 || v > MAX_STEPS ? `Use 1 to ${MAX_STEPS.toLocaleString('en-GB')} steps.` : null)}
+            onChange={(steps) => onChange({ ...settings, steps })}
+          />
+          <Select
+            label="Tree"
+            value={settings.tree ?? 'crr'}
+            disabled={readOnly}
+            options={trees}
+            onChange={(e) => onChange({ ...settings, tree: e.target.value as CaseSettings['tree'] })}
+          />
+        </div>
+      </Panel>
     </div>
   );
 }
