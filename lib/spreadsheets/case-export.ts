@@ -1,0 +1,105 @@
+/**
+ * A case as a workbook: summary with the headline figures and the cautions, the cash flows in
+ * the import layout (so an export can be imported again as it is), the settings, the options,
+ * each right's value, and the first steps of the lattice with values and decisions. Text that a
+ * spreadsheet would read as a formula is neutralised (lib/spreadsheet-safe.ts).
+ */
+import ExcelJS from 'exceljs';
+import { VALUATION_CAUTION } from '@/components/valuation-caution';
+import type { ValuationResult } from '@/lattice';
+import { formatDateTime } from '../format';
+import { describeOption } from '../option-words';
+import { safeCell } from '../spreadsheet-safe';
+import type { CaseInput } from '../validations/case';
+import { addCashFlowSheets } from './cash-flow-workbook';
+
+export interface CaseExport {
+  projectName: string;
+  currency: string;
+  caseName: string;
+  version: number;
+  status: string;
+  inputs: CaseInput;
+  result: ValuationResult;
+  valuedAt: string;
+}
+
+function table(sheet: ExcelJS.Worksheet, header: string[], rows: (string | number | null)[][]) {
+  sheet.addRow(header).font = { bold: true };
+  for (const r of rows) sheet.addRow(r.map(safeCell));
+  sheet.columns.forEach((c) => (c.width = 22));
+}
+
+export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
+  const book = new ExcelJS.Workbook();
+  book.creator = 'Leeway';
+  const summary = book.addWorksheet('Summary');
+  table(
+    summary,
+    ['Item', 'Value'],
+    [
+      ['Project', c.projectName],
+      ['Case', c.caseName],
+      ['Version', c.version],
+      ['Status', c.status],
+      ['Currency', c.currency],
+      ['Valued', formatDateTime(c.valuedAt)],
+      ['Engine', c.result.engineVersion],
+      ['Static NPV', c.result.staticNpv],
+      ['Option premium', c.result.optionPremium],
+      ['Expanded NPV', c.result.expandedNpv],
+      ['Caution', VALUATION_CAUTION],
+    ],
+  );
+  summary.getColumn(2).width = 90;
+
+  addCashFlowSheets(book, { rows: c.inputs.cashFlows.rows, wacc: c.inputs.cashFlows.wacc });
+
+  const settings = book.addWorksheet('Settings');
+  const s = c.inputs.settings;
+  table(
+    settings,
+    ['Setting', 'Value'],
+    [
+      ['Volatility', s.volatility],
+      ['Volatility source', s.volatilitySource ? `${s.volatilitySource.method}: ${s.volatilitySource.note}` : 'not stated'],
+      ['Risk-free rate (continuous)', s.riskFreeRate],
+      ['Lattice steps', s.steps],
+      ['Tree', s.tree ?? 'crr'],
+      ['Cash-flow timing', c.inputs.cashFlows.timing ?? 'end-of-year'],
+    ],
+  );
+
+  const options = book.addWorksheet('Options');
+  table(
+    options,
+    ['Option', 'Kind', 'Terms'],
+    (c.inputs.options ?? []).map((o, k) => [o.id ?? `Option ${k + 1}`, o.type, describeOption(o, c.currency)]),
+  );
+  options.getColumn(3).width = 100;
+
+  const results = book.addWorksheet('Results');
+  table(
+    results,
+    ['Right', 'Kind', 'Stand-alone value', 'Incremental value', 'Probability ever exercised'],
+    c.result.switches.map((r) => [r.id, r.kind, r.standalone, r.incremental, r.exerciseProbability]),
+  );
+
+  const lattice = book.addWorksheet('Lattice');
+  if (c.result.grid) {
+    // The start mode is the one whose root value is the case's value.
+    const start = Object.keys(c.result.modes).find((m) => c.result.modes[m] === c.result.value) ?? Object.keys(c.result.modes)[0]!;
+    table(
+      lattice,
+      ['Step', 'Node (up-moves)', 'Year', 'Project value V', `Value with flexibility W (${start})`, 'Decision'],
+      c.result.grid.steps.flatMap((step, i) =>
+        step.underlying.map((v, j) => [i, j, step.t, v, step.modes[start]?.value[j] ?? null, step.modes[start]?.decision[j] ?? 'continue']),
+      ),
+    );
+  }
+
+  const cautions = book.addWorksheet('Cautions');
+  cautions.getColumn(1).width = 120;
+  cautions.addRow([VALUATION_CAUTION]).alignment = { wrapText: true };
+  return Buffer.from(await book.xlsx.writeBuffer());
+}

@@ -1,0 +1,9 @@
+/** A workbook as a download. */
+export function xlsxResponse(bytes: Buffer, filename: string): Response {
+  return new Response(new Uint8Array(bytes), {
+    headers: {
+      'content-type': 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+      'content-disposition': `attachment; filename="${filename.replace(/[^\w .()-]/g, '_')}"`,
+    },
+  });
+}
