@@ -7,13 +7,15 @@ export interface DialogProps {
   title: string;
   onClose: () => void;
   children: ReactNode;
+  /** 'wide' for dialogs that show a table. */
+  size?: 'normal' | 'wide';
 }
 
 /**
  * A modal built on the native <dialog>: focus is trapped and restored, Escape closes it, and
  * the page behind is inert, all by the browser.
  */
-export function Dialog({ open, title, onClose, children }: DialogProps) {
+export function Dialog({ open, title, onClose, children, size = 'normal' }: DialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const dialog = ref.current;
@@ -26,7 +28,7 @@ export function Dialog({ open, title, onClose, children }: DialogProps) {
       ref={ref}
       onClose={onClose}
       aria-labelledby="dialog-title"
-      className="m-auto w-full max-w-md rounded-card border border-line bg-paper-raised p-6 text-ink shadow-card backdrop:bg-ink/40"
+      className={`m-auto w-full ${size === 'wide' ? 'max-w-5xl' : 'max-w-md'} rounded-card border border-line bg-paper-raised p-6 text-ink shadow-card backdrop:bg-ink/40`}
     >
       <h2 id="dialog-title" className="mb-4">
         {title}

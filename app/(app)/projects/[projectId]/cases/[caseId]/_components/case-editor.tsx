@@ -16,6 +16,7 @@ import { useValuation } from '@/lib/engine/use-engine';
 import { formatDateTime, formatMoney } from '@/lib/format';
 import type { CaseInput } from '@/lib/validations/case';
 import type { CaseStatus } from '@/db/types';
+import { CashFlowImport } from './cash-flow-import';
 import { CashFlowSection } from './cash-flow-section';
 import { CompiledView } from './compiled-view';
 import { LatticeSection } from './lattice-section';
@@ -206,24 +207,33 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
                 : ' · never valued on the server'}
             </p>
           </div>
-          {readOnly ? (
-            <p className="rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
-              {canEdit
-                ? 'In review: the case is frozen until a reviewer returns it.'
-                : rights.canDecide && status === 'in_review'
-                  ? 'In review: read the case, then decide in the Review tab.'
-                  : 'Read-only: your role can read this case but not change it.'}
-            </p>
-          ) : (
-            <div className="flex gap-2">
-              <Button variant="secondary" onClick={() => void save()} busy={saving} disabled={!dirty}>
-                Save
-              </Button>
-              <Button onClick={() => void valueCase()} busy={valuing} disabled={!model}>
-                Value case
-              </Button>
-            </div>
-          )}
+          <div className="flex flex-wrap items-center gap-3">
+            <a
+              href={`/api/v1/cases/${caseId}/export.xlsx`}
+              className="text-tide-600 underline"
+              title="Inputs, cash flows, settings, options, results and the first lattice steps of the saved case"
+            >
+              Export workbook
+            </a>
+            {readOnly ? (
+              <p className="rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
+                {canEdit
+                  ? 'In review: the case is frozen until a reviewer returns it.'
+                  : rights.canDecide && status === 'in_review'
+                    ? 'In review: read the case, then decide in the Review tab.'
+                    : 'Read-only: your role can read this case but not change it.'}
+              </p>
+            ) : (
+              <div className="flex gap-2">
+                <Button variant="secondary" onClick={() => void save()} busy={saving} disabled={!dirty}>
+                  Save
+                </Button>
+                <Button onClick={() => void valueCase()} busy={valuing} disabled={!model}>
+                  Value case
+                </Button>
+              </div>
+            )}
+          </div>
         </div>
       </div>
 
@@ -270,6 +280,17 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
                 readOnly={readOnly}
                 onChange={(cashFlows) => update({ cashFlows })}
                 onInvalidCount={setInvalidCells}
+                importer={
+                  readOnly ? null : (
+                    <CashFlowImport
+                      caseId={caseId}
+                      version={version}
+                      currency={currency}
+                      disabledReason={dirty ? 'Save or discard your changes first: an import replaces the cash flows and saves.' : null}
+                      onImported={reload}
+                    />
+                  )
+                }
               />
             ),
           },

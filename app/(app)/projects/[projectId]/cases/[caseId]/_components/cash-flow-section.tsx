@@ -13,6 +13,8 @@ interface Props {
   readOnly: boolean;
   onChange: (cashFlows: CashFlowSchedule) => void;
   onInvalidCount: (count: number) => void;
+  /** Workbook template and import controls, shown above the grid. */
+  importer?: React.ReactNode;
 }
 
 function Derived({ label, value, note }: { label: string; value: string; note: string }) {
@@ -26,7 +28,7 @@ function Derived({ label, value, note }: { label: string; value: string; note: s
 }
 
 /** The case's cash flows: the grid, the discounting conventions, and what the lattice takes from them, all live. */
-export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onChange, onInvalidCount }: Props) {
+export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onChange, onInvalidCount, importer }: Props) {
   const wacc = (value: number) => (value <= -0.5 || value >= 1 ? 'WACC must lie between −50 % and 100 %.' : null);
   return (
     <div className="flex flex-col gap-6">
@@ -55,6 +57,7 @@ export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onCha
           Amounts in {currency}, as entered (the demo uses millions). Year 0 is today and is never discounted.
         </p>
       </div>
+      {importer}
       <CashFlowGrid
         rows={cashFlows.rows}
         analysis={analysis}
