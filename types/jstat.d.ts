@@ -2,6 +2,6 @@
 declare module 'jstat' {
   export const jStat: {
     chisquare: { inv(p: number, dof: number): number; cdf(x: number, dof: number): number };
-    normal: { inv(p: number, mean: number, sd: number): number };
+    normal: { inv(p: number, mean: number, sd: number): number; cdf(x: number, mean: number, sd: number): number };
   };
 }
