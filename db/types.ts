@@ -106,6 +106,8 @@ export interface ValuationRunTable {
   engine_version: string;
   created_by: string | null;
   created_at: Timestamp;
+  /** How the case's volatility was obtained when it was valued (null before this was recorded). */
+  volatility_source: ColumnType<{ method: string; note: string } | null, string | null | undefined, string | null>;
 }
 
 export type CaseStatus = 'draft' | 'in_review' | 'approved' | 'returned';
@@ -150,6 +152,20 @@ export interface BoardPackTable {
   created_at: Timestamp;
 }
 
+export interface VolatilitySimulationTable {
+  id: Generated<string>;
+  organization_id: string;
+  case_id: string;
+  spec: Json<unknown>;
+  status: Generated<'running' | 'done' | 'cancelled' | 'failed'>;
+  progress: Generated<number>;
+  result: ColumnType<Record<string, unknown> | null, string | null | undefined, string | null>;
+  error: string | null;
+  created_by: string | null;
+  created_at: Timestamp;
+  finished_at: Date | null;
+}
+
 export interface DB {
   user: UserTable;
   organization: OrganizationTable;
@@ -163,6 +179,7 @@ export interface DB {
   case_snapshot: CaseSnapshotTable;
   review_comment: ReviewCommentTable;
   board_pack: BoardPackTable;
+  volatility_simulation: VolatilitySimulationTable;
 }
 
 export type OrganizationSettings = Selectable<OrganizationSettingsTable>;

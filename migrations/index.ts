@@ -7,10 +7,12 @@ import * as m0001 from './0001_auth_tables';
 import * as m0002 from './0002_organisation_settings_and_audit_log';
 import * as m0003 from './0003_projects_cases_and_runs';
 import * as m0004 from './0004_reviews_and_board_packs';
+import * as m0005 from './0005_volatility_simulations';
 
 export const migrations: Record<string, Migration> = {
   '0001_auth_tables': m0001,
   '0002_organisation_settings_and_audit_log': m0002,
   '0003_projects_cases_and_runs': m0003,
   '0004_reviews_and_board_packs': m0004,
+  '0005_volatility_simulations': m0005,
 };

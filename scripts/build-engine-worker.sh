@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Bundles the worker-thread entries: the engine (.data/engine-worker.mjs, loaded by
-# lib/engine/pool.ts) and the board pack renderer (.data/board-pack-worker.mjs, loaded by
-# lib/board-pack/store.ts), so CPU-bound work never runs on a request's event loop.
+# lib/engine/pool.ts), the board pack renderer (.data/board-pack-worker.mjs, loaded by
+# lib/board-pack/store.ts) and the Monte Carlo volatility estimate (.data/simulation-worker.mjs,
+# loaded by lib/volatility/simulation-jobs.ts), so CPU-bound work never runs on a request's event loop.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 mkdir -p .data
@@ -10,3 +11,5 @@ npx esbuild lattice/worker-entry.ts --bundle --platform=node --format=esm --targ
 # worker imports them from node_modules like the app does.
 npx esbuild lib/board-pack/worker-entry.ts --bundle --platform=node --format=esm --target=node20 --jsx=automatic --alias:@=. \
   --external:@react-pdf/renderer --external:react --outfile=.data/board-pack-worker.mjs --log-level=warning
+npx esbuild lib/volatility/simulation-worker-entry.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. \
+  --outfile=.data/simulation-worker.mjs --log-level=warning

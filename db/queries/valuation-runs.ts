@@ -4,7 +4,18 @@ import type { ValuationRun } from '../types';
 
 export async function recordValuationRun(
   db: Database,
-  args: { orgId: string; caseId: string; caseVersion: number; input: unknown; inputHash: string; result: unknown; engineVersion: string; createdBy: string },
+  args: {
+    orgId: string;
+    caseId: string;
+    caseVersion: number;
+    input: unknown;
+    inputHash: string;
+    result: unknown;
+    engineVersion: string;
+    createdBy: string;
+    /** How the case's volatility was obtained (method and the note that states its inputs). */
+    volatilitySource?: { method: string; note: string } | null;
+  },
 ): Promise<ValuationRun> {
   return db
     .insertInto('valuation_run')
@@ -17,6 +28,7 @@ export async function recordValuationRun(
       result: JSON.stringify(args.result),
       engine_version: args.engineVersion,
       created_by: args.createdBy,
+      volatility_source: args.volatilitySource ? JSON.stringify(args.volatilitySource) : null,
     })
     .returningAll()
     .executeTakeFirstOrThrow();
@@ -33,6 +45,7 @@ export async function listValuationRuns(db: Database, { orgId, caseId }: { orgId
       'valuation_run.engine_version',
       'valuation_run.created_at',
       'valuation_run.result',
+      'valuation_run.volatility_source',
       'user.name as created_by_name',
     ])
     .where('valuation_run.organization_id', '=', orgId)

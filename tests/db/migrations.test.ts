@@ -37,6 +37,7 @@ describe('migrations', () => {
       'user',
       'valuation_run',
       'verification',
+      'volatility_simulation',
     ]);
     const all = await m.getMigrations();
     for (let k = 0; k < all.length; k++) assertMigrated(await m.migrateDown());

@@ -118,6 +118,20 @@ const declared = {
     engine_version: 'not null',
     created_by: 'nullable',
     created_at: 'not null',
+    volatility_source: 'nullable',
+  },
+  volatility_simulation: {
+    id: 'not null',
+    organization_id: 'not null',
+    case_id: 'not null',
+    spec: 'not null',
+    status: 'not null',
+    progress: 'not null',
+    result: 'nullable',
+    error: 'nullable',
+    created_by: 'nullable',
+    created_at: 'not null',
+    finished_at: 'nullable',
   },
 } satisfies Schema;
 

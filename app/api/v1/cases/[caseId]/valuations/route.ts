@@ -6,6 +6,7 @@ import { findCase } from '@/db/queries/cases';
 import { listValuationRuns, recordValuationRun } from '@/db/queries/valuation-runs';
 import { withAuth } from '@/lib/api';
 import { AppError } from '@/lib/errors';
+import type { CaseInput } from '@/lib/validations/case';
 import { valueStoredCase } from '@/lib/value-case';
 
 export const dynamic = 'force-dynamic';
@@ -32,6 +33,7 @@ export const POST = withAuth<Params>(
       result,
       engineVersion: result.engineVersion,
       createdBy: member.userId,
+      volatilitySource: (stored.settings as CaseInput['settings']).volatilitySource ?? null,
     });
     await recordAudit(db, {
       orgId: member.orgId,
@@ -72,6 +74,7 @@ export const GET = withAuth<Params>(
         engineVersion: r.engine_version,
         createdAt: r.created_at,
         createdBy: r.created_by_name,
+        volatilitySource: r.volatility_source,
         ...summary(r.result as never),
       })),
     });

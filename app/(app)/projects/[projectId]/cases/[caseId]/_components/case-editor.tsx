@@ -297,7 +297,16 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
           {
             id: 'uncertainty',
             label: 'Uncertainty',
-            content: <LatticeSettingsSection settings={draft.settings} horizon={horizon} readOnly={readOnly} onChange={(settings) => update({ settings })} />,
+            content: (
+              <LatticeSettingsSection
+                caseId={caseId}
+                unsaved={dirty}
+                settings={draft.settings}
+                horizon={horizon}
+                readOnly={readOnly}
+                onChange={(settings) => update({ settings })}
+              />
+            ),
           },
           {
             id: 'flexibility',

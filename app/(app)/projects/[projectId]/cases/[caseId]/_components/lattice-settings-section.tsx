@@ -5,6 +5,7 @@ import { Select } from '@/components/ui/select';
 import { MAX_STEPS } from '@/lattice';
 import type { CaseInput } from '@/lib/validations/case';
 import { HistoryEstimate } from './history-estimate';
+import { MonteCarloEstimate } from './monte-carlo-estimate';
 
 type CaseSettings = CaseInput['settings'];
 
@@ -32,11 +33,15 @@ function Panel({ title, lead, children }: { title: string; lead?: string; childr
  * justification, or estimated from a history file), the risk-free rate and the lattice's shape.
  */
 export function LatticeSettingsSection({
+  caseId,
+  unsaved,
   settings,
   horizon,
   readOnly,
   onChange,
 }: {
+  caseId: string;
+  unsaved: boolean;
   settings: CaseSettings;
   horizon: number;
   readOnly: boolean;
@@ -79,6 +84,18 @@ export function LatticeSettingsSection({
           lead="Upload a price or value history (a comparable's share price, a commodity, a past project's value); Leeway annualises the volatility of its log returns."
         >
           <HistoryEstimate onApply={(volatility, note) => onChange({ ...settings, volatility, volatilitySource: { method: 'history', note } })} />
+        </Panel>
+      )}
+      {readOnly ? null : (
+        <Panel
+          title="Estimate by Monte Carlo from the cash flows"
+          lead="Mark the lines of the cash flows that are uncertain; Leeway simulates them and measures the spread of the project value's first-year return (the consolidated-uncertainty approach)."
+        >
+          <MonteCarloEstimate
+            caseId={caseId}
+            unsaved={unsaved}
+            onApply={(volatility, note) => onChange({ ...settings, volatility, volatilitySource: { method: 'monte-carlo', note } })}
+          />
         </Panel>
       )}
       <Panel title="Rates and lattice">

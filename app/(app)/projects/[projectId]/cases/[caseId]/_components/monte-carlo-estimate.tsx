@@ -1,0 +1,259 @@
+'use client';
+
+import { useState } from 'react';
+import useSWR from 'swr';
+import { HistogramChart } from '@/components/charts/histogram-chart';
+import { FormProblem } from '@/components/form-problem';
+import { Button } from '@/components/ui/button';
+import { getJson, sendJson } from '@/lib/api-client';
+import { formatPercent } from '@/lib/format';
+import type { Distribution, SimulationResult, UncertainLine } from '@/lib/volatility/monte-carlo';
+
+const lineLabels: Record<UncertainLine, string> = { revenue: 'Revenue', operatingCost: 'Operating cost', tax: 'Tax', workingCapital: 'Working capital' };
+const distributionLabels: Record<Distribution, string> = { normal: 'Normal', lognormal: 'Lognormal', triangular: 'Triangular', uniform: 'Uniform' };
+
+interface DriverForm {
+  on: boolean;
+  distribution: Distribution;
+  spread: string;
+  growth: string;
+}
+
+interface Job {
+  id: string;
+  status: 'running' | 'done' | 'cancelled' | 'failed';
+  progress: number;
+  result: SimulationResult | null;
+  error: string | null;
+}
+
+const field = 'h-9 rounded-md border border-line-strong bg-paper-raised px-2';
+
+/**
+ * Volatility by Monte Carlo from uncertain lines of the saved cash flows: Copeland & Antikarov's
+ * full-path estimate and Brandão, Dyer & Hahn's conditional one, side by side, with a progress bar
+ * while the paths run (off the request thread) and a way to cancel.
+ */
+export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: string; unsaved: boolean; onApply: (volatility: number, note: string) => void }) {
+  const [drivers, setDrivers] = useState<Record<UncertainLine, DriverForm>>({
+    revenue: { on: true, distribution: 'lognormal', spread: '20', growth: '0' },
+    operatingCost: { on: true, distribution: 'triangular', spread: '10', growth: '0' },
+    tax: { on: false, distribution: 'normal', spread: '10', growth: '0' },
+    workingCapital: { on: false, distribution: 'uniform', spread: '10', growth: '0' },
+  });
+  const [correlation, setCorrelation] = useState<Record<string, string>>({});
+  const [paths, setPaths] = useState('100000');
+  const [seed, setSeed] = useState(() => String(Math.floor(Math.random() * 1_000_000)));
+  const [jobId, setJobId] = useState<string | null>(null);
+  const [problem, setProblem] = useState<string | null>(null);
+  const job = useSWR<Job>(jobId ? `/api/v1/volatility/simulations/${jobId}` : null, getJson, {
+    refreshInterval: (latest) => (latest && latest.status !== 'running' ? 0 : 400),
+  });
+
+  const chosen = (Object.keys(drivers) as UncertainLine[]).filter((l) => drivers[l].on);
+  const pairs = chosen.flatMap((a, i) => chosen.slice(i + 1).map((b) => `${a}|${b}`));
+
+  const start = async () => {
+    setProblem(null);
+    try {
+      const spec = {
+        drivers: chosen.map((line) => ({
+          line,
+          distribution: drivers[line].distribution,
+          spread: Number(drivers[line].spread) / 100,
+          growth: Number(drivers[line].growth) / 100,
+        })),
+        correlations: pairs.map((p) => Number(correlation[p] ?? '0')),
+        paths: Number(paths),
+        seed: Number(seed),
+      };
+      const { id } = await sendJson<{ id: string }>('POST', '/api/v1/volatility/simulations', { caseId, spec });
+      setJobId(id);
+    } catch (error) {
+      setProblem(error instanceof Error ? error.message : 'The simulation did not start.');
+    }
+  };
+
+  const cancel = async () => {
+    if (!jobId) return;
+    try {
+      await sendJson('DELETE', `/api/v1/volatility/simulations/${jobId}`);
+    } catch (error) {
+      setProblem(error instanceof Error ? error.message : 'Cancelling did not work.');
+    }
+    await job.mutate();
+  };
+
+  const state = job.data;
+  const result = state?.status === 'done' ? state.result : null;
+  const describe = () => chosen.map((l) => `${lineLabels[l].toLowerCase()} ${drivers[l].distribution} ${drivers[l].spread} % a year`).join(', ');
+
+  return (
+    <div className="flex flex-col gap-4">
+      <table className="w-full border-collapse text-left text-body">
+        <caption className="sr-only">Uncertain lines of the cash flows</caption>
+        <thead>
+          <tr className="text-caption uppercase tracking-wide text-ink-soft">
+            <th className="py-1">Uncertain line</th>
+            <th className="py-1">Distribution of the annual factor</th>
+            <th className="py-1">Spread (% a year)</th>
+            <th className="py-1">Extra growth (% a year)</th>
+          </tr>
+        </thead>
+        <tbody>
+          {(Object.keys(drivers) as UncertainLine[]).map((line) => {
+            const d = drivers[line];
+            const set = (patch: Partial<DriverForm>) => setDrivers((all) => ({ ...all, [line]: { ...all[line], ...patch } }));
+            return (
+              <tr key={line}>
+                <td className="py-1">
+                  <label className="inline-flex items-center gap-2">
+                    <input type="checkbox" checked={d.on} onChange={(e) => set({ on: e.target.checked })} />
+                    {lineLabels[line]}
+                  </label>
+                </td>
+                <td className="py-1">
+                  <select
+                    aria-label={`${lineLabels[line]}: distribution`}
+                    value={d.distribution}
+                    disabled={!d.on}
+                    onChange={(e) => set({ distribution: e.target.value as Distribution })}
+                    className={field}
+                  >
+                    {Object.entries(distributionLabels).map(([k, v]) => (
+                      <option key={k} value={k}>
+                        {v}
+                      </option>
+                    ))}
+                  </select>
+                </td>
+                <td className="py-1">
+                  <input
+                    aria-label={`${lineLabels[line]}: spread`}
+                    inputMode="decimal"
+                    value={d.spread}
+                    disabled={!d.on}
+                    onChange={(e) => set({ spread: e.target.value })}
+                    className={`${field} w-24 text-right`}
+                  />
+                </td>
+                <td className="py-1">
+                  <input
+                    aria-label={`${lineLabels[line]}: extra growth`}
+                    inputMode="decimal"
+                    value={d.growth}
+                    disabled={!d.on}
+                    onChange={(e) => set({ growth: e.target.value })}
+                    className={`${field} w-24 text-right`}
+                  />
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+      {pairs.length > 0 ? (
+        <div className="flex flex-wrap gap-4">
+          {pairs.map((p) => {
+            const [a, b] = p.split('|') as [UncertainLine, UncertainLine];
+            return (
+              <label key={p} className="flex flex-col gap-1">
+                <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">
+                  Correlation, {lineLabels[a].toLowerCase()} and {lineLabels[b].toLowerCase()}
+                </span>
+                <input
+                  inputMode="decimal"
+                  value={correlation[p] ?? '0'}
+                  onChange={(e) => setCorrelation((c) => ({ ...c, [p]: e.target.value }))}
+                  className={`${field} w-28 text-right`}
+                />
+              </label>
+            );
+          })}
+        </div>
+      ) : null}
+      <div className="flex flex-wrap items-end gap-4">
+        <label className="flex flex-col gap-1">
+          <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">Paths</span>
+          <input inputMode="numeric" value={paths} onChange={(e) => setPaths(e.target.value)} className={`${field} w-32 text-right`} />
+        </label>
+        <label className="flex flex-col gap-1">
+          <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">Seed (same seed, same result)</span>
+          <input inputMode="numeric" value={seed} onChange={(e) => setSeed(e.target.value)} className={`${field} w-32 text-right`} />
+        </label>
+        <Button variant="secondary" onClick={() => void start()} disabled={state?.status === 'running' || chosen.length === 0}>
+          Run the simulation
+        </Button>
+        {unsaved ? <span className="text-caption text-ember-700">Uses the saved cash flows: save first to include your changes.</span> : null}
+      </div>
+      <FormProblem message={problem} />
+      {state ? (
+        <div className="flex flex-col gap-2" aria-live="polite">
+          <div className="flex items-center gap-3">
+            <div
+              role="progressbar"
+              aria-label="Simulation progress"
+              aria-valuemin={0}
+              aria-valuemax={100}
+              aria-valuenow={Math.round(state.progress * 100)}
+              className="h-3 w-72 overflow-hidden rounded-full bg-paper-sunk"
+            >
+              <div className="h-full bg-tide-500 transition-[width]" style={{ width: `${state.progress * 100}%` }} />
+            </div>
+            <span className="figures text-caption text-ink-soft">
+              {state.status === 'running'
+                ? `${Math.round(state.progress * 100)} %`
+                : state.status === 'done'
+                  ? 'Done'
+                  : state.status === 'cancelled'
+                    ? 'Cancelled'
+                    : `Failed: ${state.error}`}
+            </span>
+            {state.status === 'running' ? (
+              <Button variant="quiet" onClick={() => void cancel()}>
+                Cancel
+              </Button>
+            ) : null}
+          </div>
+        </div>
+      ) : null}
+      {result ? (
+        <div className="flex flex-col gap-3 rounded-md border border-line bg-paper p-4">
+          <div className="grid gap-4 md:grid-cols-2">
+            <div>
+              <p className="text-caption uppercase tracking-wide text-ink-muted">Conditional (Brandão, Dyer &amp; Hahn 2005)</p>
+              <p className="figures text-title">{formatPercent(result.conditional.volatility)}</p>
+              <HistogramChart
+                bins={result.conditional.histogram}
+                label={`Returns by the conditional method: σ ${formatPercent(result.conditional.volatility)}`}
+              />
+            </div>
+            <div>
+              <p className="text-caption uppercase tracking-wide text-ink-muted">Full path (Copeland &amp; Antikarov 2001)</p>
+              <p className="figures text-title">{formatPercent(result.fullPath.volatility)}</p>
+              <HistogramChart bins={result.fullPath.histogram} label={`Returns by the full-path method: σ ${formatPercent(result.fullPath.volatility)}`} />
+            </div>
+          </div>
+          <p className="text-caption text-ink-soft">
+            Both measure the spread of the first year&rsquo;s return on the project&rsquo;s value over {result.paths.toLocaleString('en-GB')} paths (seed{' '}
+            {result.seed}). The full-path method values year 1 from the simulated cash flows of later years, so it counts their uncertainty as if it were
+            resolved in the first year and overstates σ; the conditional method values year 1 from the cash flows expected given what is known then. Use the
+            conditional figure unless you have a reason not to.
+          </p>
+          <div>
+            <Button
+              onClick={() =>
+                onApply(
+                  Number(result.conditional.volatility.toFixed(4)),
+                  `Monte Carlo, conditional method (Brandão, Dyer & Hahn 2005): ${result.paths.toLocaleString('en-GB')} paths, seed ${result.seed}; uncertain ${describe()}. Full-path estimate (Copeland & Antikarov) ${formatPercent(result.fullPath.volatility)}. Simulation ${jobId}.`,
+                )
+              }
+            >
+              Use {formatPercent(result.conditional.volatility)} for this case
+            </Button>
+          </div>
+        </div>
+      ) : null}
+    </div>
+  );
+}
