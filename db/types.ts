@@ -166,6 +166,19 @@ export interface VolatilitySimulationTable {
   finished_at: Date | null;
 }
 
+export interface AttachmentTable {
+  id: Generated<string>;
+  organization_id: string;
+  case_id: string;
+  filename: string;
+  kind: 'pdf' | 'xlsx' | 'csv' | 'png';
+  size: number;
+  sha256: string;
+  data: Buffer;
+  uploaded_by: string | null;
+  created_at: Timestamp;
+}
+
 export interface DB {
   user: UserTable;
   organization: OrganizationTable;
@@ -180,6 +193,7 @@ export interface DB {
   review_comment: ReviewCommentTable;
   board_pack: BoardPackTable;
   volatility_simulation: VolatilitySimulationTable;
+  attachment: AttachmentTable;
 }
 
 export type OrganizationSettings = Selectable<OrganizationSettingsTable>;

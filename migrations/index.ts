@@ -8,6 +8,7 @@ import * as m0002 from './0002_organisation_settings_and_audit_log';
 import * as m0003 from './0003_projects_cases_and_runs';
 import * as m0004 from './0004_reviews_and_board_packs';
 import * as m0005 from './0005_volatility_simulations';
+import * as m0006 from './0006_attachments';
 
 export const migrations: Record<string, Migration> = {
   '0001_auth_tables': m0001,
@@ -15,4 +16,5 @@ export const migrations: Record<string, Migration> = {
   '0003_projects_cases_and_runs': m0003,
   '0004_reviews_and_board_packs': m0004,
   '0005_volatility_simulations': m0005,
+  '0006_attachments': m0006,
 };

@@ -133,6 +133,18 @@ const declared = {
     created_at: 'not null',
     finished_at: 'nullable',
   },
+  attachment: {
+    id: 'not null',
+    organization_id: 'not null',
+    case_id: 'not null',
+    filename: 'not null',
+    kind: 'not null',
+    size: 'not null',
+    sha256: 'not null',
+    data: 'not null',
+    uploaded_by: 'nullable',
+    created_at: 'not null',
+  },
 } satisfies Schema;
 
 describe('db/types.ts', () => {

@@ -16,6 +16,7 @@ import { useValuation } from '@/lib/engine/use-engine';
 import { formatDateTime, formatMoney } from '@/lib/format';
 import type { CaseInput } from '@/lib/validations/case';
 import type { CaseStatus } from '@/db/types';
+import { AttachmentsPanel } from './attachments-panel';
 import { CashFlowImport } from './cash-flow-import';
 import { CashFlowSection } from './cash-flow-section';
 import { CompiledView } from './compiled-view';
@@ -347,6 +348,11 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
               ) : (
                 <p className="text-ink-soft">The lattice appears once the case can be valued.</p>
               ),
+          },
+          {
+            id: 'documents',
+            label: 'Documents',
+            content: <AttachmentsPanel caseId={caseId} canEdit={canEdit} />,
           },
           {
             id: 'review',
