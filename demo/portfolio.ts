@@ -40,7 +40,16 @@ const plantRows = schedule({
 const plantBase: CaseInput = {
   name: 'Base case',
   cashFlows: { rows: plantRows, wacc: 0.085, timing: 'end-of-year' },
-  settings: { volatility: 0.3, riskFreeRate: 0.03, steps: 96, tree: 'crr' },
+  settings: {
+    volatility: 0.3,
+    riskFreeRate: 0.03,
+    steps: 96,
+    tree: 'crr',
+    volatilitySource: {
+      method: 'direct',
+      note: 'Invented for the demo: the volatility of listed specialty-resin producers’ value over five years, unlevered.',
+    },
+  },
   options: [
     { type: 'expand', id: 'Phase 2', factor: 0.5, cost: 95, window: { kind: 'american', from: 2, to: 4 } },
     {
@@ -66,7 +75,13 @@ const hubRows = schedule({
 const hubBase: CaseInput = {
   name: 'Base case',
   cashFlows: { rows: hubRows, wacc: 0.08, timing: 'end-of-year' },
-  settings: { volatility: 0.28, riskFreeRate: 0.03, steps: 100, tree: 'crr' },
+  settings: {
+    volatility: 0.28,
+    riskFreeRate: 0.03,
+    steps: 100,
+    tree: 'crr',
+    volatilitySource: { method: 'direct', note: 'Invented for the demo: regional cold-chain rents and volumes, five years of history.' },
+  },
   options: [{ type: 'defer', id: 'Build the hub', cost: { amount: 92, growth: 0.04 }, window: { kind: 'american', from: 0, to: 3 } }],
 };
 
@@ -81,7 +96,13 @@ const pilotRows = schedule({
 const pilotBase: CaseInput = {
   name: 'Base case',
   cashFlows: { rows: pilotRows, wacc: 0.095, timing: 'end-of-year' },
-  settings: { volatility: 0.4, riskFreeRate: 0.03, steps: 84, tree: 'crr' },
+  settings: {
+    volatility: 0.4,
+    riskFreeRate: 0.03,
+    steps: 84,
+    tree: 'crr',
+    volatilitySource: { method: 'direct', note: 'Invented for the demo: a new compound with no market yet; set high on purpose.' },
+  },
   options: [
     {
       type: 'stage',
@@ -106,7 +127,13 @@ const lineRows = schedule({
 const lineBase: CaseInput = {
   name: 'Base case',
   cashFlows: { rows: lineRows, wacc: 0.09, timing: 'end-of-year' },
-  settings: { volatility: 0.35, riskFreeRate: 0.03, steps: 72, tree: 'crr' },
+  settings: {
+    volatility: 0.35,
+    riskFreeRate: 0.03,
+    steps: 72,
+    tree: 'crr',
+    volatilitySource: { method: 'direct', note: 'Invented for the demo: the line’s own margins over the last eight years.' },
+  },
   options: [
     { type: 'switch', id: 'Mothball', toScale: 0, cost: 1.5, backCost: 3, flowPerYear: 2, window: { kind: 'american', from: 0, to: 6 } },
     { type: 'abandon', id: 'Close the line', salvage: 6, window: { kind: 'american', from: 0, to: 6 } },

@@ -47,6 +47,7 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; re
         result,
         engineVersion: result.engineVersion,
         createdBy: args.analystId,
+        volatilitySource: input.settings.volatilitySource ?? null,
       });
       await recordAudit(db, {
         ...actor,

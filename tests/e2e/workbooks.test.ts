@@ -59,6 +59,30 @@ describe('workbooks', () => {
 
     const before = (await (await page.request.get(`/api/v1/cases/${ids.line.caseId}`)).json()).case;
     await page.goto(`/projects/${ids.line.projectId}/cases/${ids.line.caseId}`);
+
+    // The blank template reads back as six years, shown before anything is saved; cancelling keeps the case.
+    await page.getByLabel('Import from a workbook:').setInputFiles({
+      name: 'template.xlsx',
+      mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+      buffer: Buffer.from(await template.body()),
+    });
+    await expect
+      .poll(
+        () =>
+          page
+            .getByRole('dialog')
+            .getByText(/^Read 6 years at a WACC of 8\.5 %/)
+            .isVisible(),
+        { timeout: 20_000 },
+      )
+      .toBe(true);
+    await page.getByRole('dialog').getByRole('button', { name: 'Cancel' }).click();
+
+    // The export link of the case editor downloads the workbook.
+    const download = page.waitForEvent('download');
+    await page.getByRole('link', { name: 'Export workbook' }).click();
+    expect((await download).suggestedFilename()).toBe('Older extrusion line - Without mothballing.xlsx');
+
     await page.getByLabel('Import from a workbook:').setInputFiles({
       name: 'plant-export.xlsx',
       mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
