@@ -6,6 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { closeBrowser, signedInPage } from './support/browser';
+import { demoCase } from './support/demo';
 
 let caseId = '';
 let caseUrl = '';
@@ -16,15 +17,7 @@ const png = Buffer.from(
 );
 
 beforeAll(async () => {
-  const row = await db
-    .selectFrom('case')
-    .innerJoin('project', 'project.id', 'case.project_id')
-    .select(['case.id', 'case.project_id'])
-    .where('project.name', '=', 'Cold-storage hub')
-    .where('case.name', '=', 'Calmer market')
-    .executeTakeFirstOrThrow();
-  caseId = row.id;
-  caseUrl = `/projects/${row.project_id}/cases/${row.id}`;
+  ({ caseId, url: caseUrl } = await demoCase('Cold-storage hub', 'Calmer market'));
 });
 
 afterAll(async () => {

@@ -7,20 +7,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { closeBrowser, signedInPage } from './support/browser';
+import { demoCase } from './support/demo';
 
 let caseId = '';
 let caseUrl = '';
 
 beforeAll(async () => {
-  const row = await db
-    .selectFrom('case')
-    .innerJoin('project', 'project.id', 'case.project_id')
-    .select(['case.id', 'case.project_id'])
-    .where('project.name', '=', 'Staged pilot line')
-    .where('case.name', '=', 'Higher hurdle rate')
-    .executeTakeFirstOrThrow();
-  caseId = row.id;
-  caseUrl = `/projects/${row.project_id}/cases/${row.id}`;
+  ({ caseId, url: caseUrl } = await demoCase('Staged pilot line', 'Higher hurdle rate'));
 });
 
 afterAll(async () => {

@@ -15,21 +15,14 @@ import { db } from '@/db';
 import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney } from '@/lib/format';
 import { closeBrowser, signedInPage } from './support/browser';
+import { demoCase } from './support/demo';
 import { firstLink, waitForMail } from './support/mail';
 
 let caseId = '';
 let projectId = '';
 
 beforeAll(async () => {
-  const row = await db
-    .selectFrom('case')
-    .innerJoin('project', 'project.id', 'case.project_id')
-    .select(['case.id', 'case.project_id'])
-    .where('project.name', '=', 'Phased bio-resin plant')
-    .where('case.name', '=', 'Volatile demand')
-    .executeTakeFirstOrThrow();
-  caseId = row.id;
-  projectId = row.project_id;
+  ({ caseId, projectId } = await demoCase('Phased bio-resin plant', 'Volatile demand'));
 });
 
 afterAll(async () => {

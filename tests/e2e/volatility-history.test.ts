@@ -10,6 +10,7 @@ import { formatPercent } from '@/lib/format';
 import { estimateFromHistory } from '@/lib/volatility/history';
 import { normalDraws } from '@/lib/volatility/normal-draws';
 import { closeBrowser, signedInPage } from './support/browser';
+import { demoCase } from './support/demo';
 
 let caseUrl = '';
 let caseId = '';
@@ -26,15 +27,7 @@ function monthlyCsv(): { csv: string; series: { date: string; value: number }[] 
 }
 
 beforeAll(async () => {
-  const row = await db
-    .selectFrom('case')
-    .innerJoin('project', 'project.id', 'case.project_id')
-    .select(['case.id', 'case.project_id'])
-    .where('project.name', '=', 'Older extrusion line')
-    .where('case.name', '=', 'Base case')
-    .executeTakeFirstOrThrow();
-  caseId = row.id;
-  caseUrl = `/projects/${row.project_id}/cases/${row.id}`;
+  ({ caseId, url: caseUrl } = await demoCase('Older extrusion line', 'Base case'));
 });
 
 afterAll(async () => {

@@ -9,23 +9,13 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { CASH_FLOW_SHEET } from '@/lib/spreadsheets/cash-flow-workbook';
 import { closeBrowser, signedInPage } from './support/browser';
+import { demoCase } from './support/demo';
 
 const ids: Record<'plant' | 'line', { caseId: string; projectId: string }> = {} as never;
 
-async function caseOf(project: string, name: string) {
-  const row = await db
-    .selectFrom('case')
-    .innerJoin('project', 'project.id', 'case.project_id')
-    .select(['case.id', 'case.project_id'])
-    .where('project.name', '=', project)
-    .where('case.name', '=', name)
-    .executeTakeFirstOrThrow();
-  return { caseId: row.id, projectId: row.project_id };
-}
-
 beforeAll(async () => {
-  ids.plant = await caseOf('Phased bio-resin plant', 'Base case');
-  ids.line = await caseOf('Older extrusion line', 'Without mothballing');
+  ids.plant = await demoCase('Phased bio-resin plant', 'Base case');
+  ids.line = await demoCase('Older extrusion line', 'Without mothballing');
 });
 
 afterAll(async () => {

@@ -1,5 +1,6 @@
 'use client';
 
+import { Panel } from '@/components/panel';
 import { NumberField } from '@/components/number-field';
 import { Select } from '@/components/ui/select';
 import { MAX_STEPS } from '@/lattice';
@@ -17,16 +18,6 @@ const trees = [
 ];
 
 const methodLabels = { direct: 'Entered directly', history: 'Estimated from history', 'monte-carlo': 'Estimated by Monte Carlo' } as const;
-
-function Panel({ title, lead, children }: { title: string; lead?: string; children: React.ReactNode }) {
-  return (
-    <section className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
-      <h3 className="text-body font-semibold">{title}</h3>
-      {lead ? <p className="mb-4 text-caption text-ink-muted">{lead}</p> : <div className="mb-4" />}
-      {children}
-    </section>
-  );
-}
 
 /**
  * The inputs the valuation rests on beyond the cash flows: the volatility (entered with its
@@ -53,7 +44,7 @@ export function LatticeSettingsSection({
     <div className="flex max-w-5xl flex-col gap-6">
       <Panel
         title="Volatility of the project's value"
-        lead="The annualised σ of the value's returns: the input committees question most. Say where it comes from."
+        note="The annualised σ of the value's returns: the input committees question most. Say where it comes from."
       >
         <div className="grid gap-6 md:grid-cols-[16rem_minmax(0,1fr)]">
           <NumberField
@@ -81,7 +72,7 @@ export function LatticeSettingsSection({
       {readOnly ? null : (
         <Panel
           title="Estimate from history"
-          lead="Upload a price or value history (a comparable's share price, a commodity, a past project's value); Leeway annualises the volatility of its log returns."
+          note="Upload a price or value history (a comparable's share price, a commodity, a past project's value); Leeway annualises the volatility of its log returns."
         >
           <HistoryEstimate onApply={(volatility, note) => onChange({ ...settings, volatility, volatilitySource: { method: 'history', note } })} />
         </Panel>
@@ -89,7 +80,7 @@ export function LatticeSettingsSection({
       {readOnly ? null : (
         <Panel
           title="Estimate by Monte Carlo from the cash flows"
-          lead="Mark the lines of the cash flows that are uncertain; Leeway simulates them and measures the spread of the project value's first-year return (the consolidated-uncertainty approach)."
+          note="Mark the lines of the cash flows that are uncertain; Leeway simulates them and measures the spread of the project value's first-year return (the consolidated-uncertainty approach)."
         >
           <MonteCarloEstimate
             caseId={caseId}

@@ -1,5 +1,6 @@
 'use client';
 
+import { Panel } from '@/components/panel';
 import { ConvergenceChart } from '@/components/charts/convergence-chart';
 import { TornadoChart } from '@/components/charts/tornado-chart';
 import { WaterfallChart } from '@/components/charts/waterfall-chart';
@@ -34,16 +35,6 @@ function TimingBars({ s }: { s: SwitchResult }) {
         most likely year {peak[0]}–{peak[0] + 1} ({formatPercent(peak[1])})
       </span>
     </span>
-  );
-}
-
-function Panel({ title, note, children }: { title: string; note?: string; children: React.ReactNode }) {
-  return (
-    <section className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
-      <h3 className="text-body font-semibold">{title}</h3>
-      {note ? <p className="mb-3 text-caption text-ink-muted">{note}</p> : <div className="mb-3" />}
-      {children}
-    </section>
   );
 }
 
