@@ -1,5 +1,6 @@
 /** Numbers formatted for people: thousands separators, percentages, dates in the reader's locale. */
 export function formatPercent(fraction: number, digits = 1): string {
+  if (!Number.isFinite(fraction)) return '–';
   return `${(fraction * 100).toFixed(digits)} %`;
 }
 

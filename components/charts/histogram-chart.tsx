@@ -7,6 +7,7 @@ import { useWidth } from './use-width';
 /** A histogram of simulated returns (bins of z = ln of the year-1 value over today's), in counts of paths. */
 export function HistogramChart({ bins, label }: { bins: { from: number; to: number; count: number }[]; label: string }) {
   const { ref, width } = useWidth<HTMLDivElement>(360);
+  if (bins.length === 0) return <p className="text-caption text-ink-muted">No path had a positive value at year 1.</p>;
   const height = 150;
   const margin = { top: 8, right: 8, bottom: 24, left: 8 };
   const x = scaleLinear()

@@ -72,6 +72,11 @@ export type SimulationSpec = z.input<typeof simulationSpecSchema>;
 export interface MethodEstimate {
   volatility: number;
   mean: number;
+  /**
+   * Paths whose year-1 value (OCF_1 + PV_1) was zero or negative: a log return does not exist
+   * for them, so they are left out of σ and reported (many of them strain the lognormal model).
+   */
+  excluded: number;
   /** Histogram of z = ln((OCF_1 + PV_1)/PV_0). */
   histogram: { from: number; to: number; count: number }[];
 }
@@ -130,8 +135,11 @@ export function factorFrom(distribution: Distribution, s: number): (z: number) =
   }
 }
 
-function summarise(values: Float64Array): MethodEstimate {
+function summarise(all: Float64Array): MethodEstimate {
+  const values = all.filter((v) => Number.isFinite(v));
+  const excluded = all.length - values.length;
   const n = values.length;
+  if (n < 2) return { volatility: NaN, mean: NaN, excluded, histogram: [] };
   let mean = 0;
   for (let k = 0; k < n; k++) mean += values[k]!;
   mean /= n;
@@ -148,7 +156,12 @@ function summarise(values: Float64Array): MethodEstimate {
   const width = (hi - lo) / bins || 1;
   const counts = new Array<number>(bins).fill(0);
   for (let k = 0; k < n; k++) counts[Math.min(bins - 1, Math.floor((values[k]! - lo) / width))]! += 1;
-  return { volatility: Math.sqrt(sq / (n - 1)), mean, histogram: counts.map((count, b) => ({ from: lo + b * width, to: lo + (b + 1) * width, count })) };
+  return {
+    volatility: Math.sqrt(sq / (n - 1)),
+    mean,
+    excluded,
+    histogram: counts.map((count, b) => ({ from: lo + b * width, to: lo + (b + 1) * width, count })),
+  };
 }
 
 /**
@@ -223,10 +236,11 @@ export function simulateVolatility(schedule: CashFlowSchedule, specInput: Simula
         ocf1 = ocf;
         let pv1 = certainPv1;
         for (let k = 0; k < n; k++) pv1 += conditionalWeight[k]! * level[k]!;
-        conditional[p] = Math.log(Math.max(1e-12, ocf1 + pv1) / pv0);
+        // A year-1 value at or below zero has no log return: marked NaN, left out and counted.
+        conditional[p] = ocf1 + pv1 > 0 ? Math.log((ocf1 + pv1) / pv0) : NaN;
       } else pathPv1 += ocf * df1(t);
     }
-    fullPath[p] = Math.log(Math.max(1e-12, ocf1 + pathPv1) / pv0);
+    fullPath[p] = ocf1 + pathPv1 > 0 ? Math.log((ocf1 + pathPv1) / pv0) : NaN;
     if (onProgress && (p + 1) % tick === 0) onProgress((p + 1) / spec.paths);
   }
   return { paths: spec.paths, seed: spec.seed, pv0, fullPath: summarise(fullPath), conditional: summarise(conditional) };

@@ -20,5 +20,6 @@ describe('formatting', () => {
   });
   it('writes percentages with a space before the sign', () => {
     expect(formatPercent(0.305)).toBe('30.5 %');
+    expect(formatPercent(Number.NaN)).toBe('–');
   });
 });

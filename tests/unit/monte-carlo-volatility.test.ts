@@ -35,6 +35,14 @@ describe('Monte Carlo volatility', () => {
     expect(result.fullPath.volatility).toBeGreaterThan(1.5 * result.conditional.volatility);
   });
 
+  it('leaves out, and counts, paths whose year-1 value is not positive', () => {
+    const thin: CashFlowSchedule = { ...flat, rows: flat.rows.map((r) => (r.year ? { ...r, operatingCost: 90 } : r)) };
+    const result = simulateVolatility(thin, { drivers: [{ line: 'revenue', distribution: 'normal', spread: 0.3 }], paths: 5_000, seed: 9 });
+    expect(result.fullPath.excluded).toBeGreaterThan(0);
+    expect(Number.isFinite(result.fullPath.volatility)).toBe(true);
+    expect(result.fullPath.histogram.reduce((n, b) => n + b.count, 0)).toBe(5_000 - result.fullPath.excluded);
+  });
+
   it('gives the same numbers for the same seed, and reports progress to the end', () => {
     const spec = { drivers: [{ line: 'revenue' as const, distribution: 'triangular' as const, spread: 0.15 }], paths: 2_000, seed: 5 };
     const seen: number[] = [];

@@ -41,7 +41,8 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
     tax: { on: false, distribution: 'normal', spread: '10', growth: '0' },
     workingCapital: { on: false, distribution: 'uniform', spread: '10', growth: '0' },
   });
-  const [correlation, setCorrelation] = useState<Record<string, string>>({});
+  // Operating costs usually move with revenue (volume drives both): a positive starting correlation.
+  const [correlation, setCorrelation] = useState<Record<string, string>>({ 'revenue|operatingCost': '0.6' });
   const [paths, setPaths] = useState('100000');
   const [seed, setSeed] = useState(() => String(Math.floor(Math.random() * 1_000_000)));
   const [jobId, setJobId] = useState<string | null>(null);
@@ -234,6 +235,13 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
               <HistogramChart bins={result.fullPath.histogram} label={`Returns by the full-path method: σ ${formatPercent(result.fullPath.volatility)}`} />
             </div>
           </div>
+          {result.conditional.excluded + result.fullPath.excluded > 0 ? (
+            <p className="rounded-md border border-ember-500 bg-ember-100 px-3 py-2 text-caption text-ember-700">
+              {result.conditional.excluded.toLocaleString('en-GB')} paths (conditional) and {result.fullPath.excluded.toLocaleString('en-GB')} (full path) ended
+              year 1 with a project value at or below zero, which has no log return; they are left out. Many such paths mean the lognormal lattice fits this
+              project poorly: consider smaller spreads or fewer uncertain cost lines.
+            </p>
+          ) : null}
           <p className="text-caption text-ink-soft">
             Both measure the spread of the first year&rsquo;s return on the project&rsquo;s value over {result.paths.toLocaleString('en-GB')} paths (seed{' '}
             {result.seed}). The full-path method values year 1 from the simulated cash flows of later years, so it counts their uncertainty as if it were
@@ -242,6 +250,7 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
           </p>
           <div>
             <Button
+              disabled={!Number.isFinite(result.conditional.volatility)}
               onClick={() =>
                 onApply(
                   Number(result.conditional.volatility.toFixed(4)),
