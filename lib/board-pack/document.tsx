@@ -377,6 +377,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
             ['WACC', formatPercent(snapshot.inputs.cashFlows.wacc)],
             ['Cash-flow timing', snapshot.inputs.cashFlows.timing === 'mid-year' ? 'mid-year' : 'end of year'],
             ['Volatility of the project value', formatPercent(snapshot.inputs.settings.volatility)],
+            ['Where the volatility comes from', snapshot.inputs.settings.volatilitySource?.note || 'Not stated'],
             ['Risk-free rate (continuous)', formatPercent(snapshot.inputs.settings.riskFreeRate, 2)],
             ['Lattice', `${snapshot.inputs.settings.tree ?? 'crr'}, ${snapshot.inputs.settings.steps} steps`],
             ['Horizon', `${snapshot.model.horizon} years`],
