@@ -10,7 +10,9 @@ import { LoadError, LoadingBlock } from '@/components/load-state';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
 import { Input } from '@/components/ui/input';
+import { StatusBadge } from '@/components/status-badge';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
+import type { CaseStatus } from '@/db/types';
 import { useToast } from '@/components/ui/toast';
 import { getJson, sendJson } from '@/lib/api-client';
 import type { CaseJson } from '@/lib/case-json';
@@ -84,6 +86,7 @@ export function CaseTable(props: { projectId: string; currency: string; canEdit:
           <thead>
             <tr>
               <Th>Case</Th>
+              <Th>Status</Th>
               <Th numeric>Static NPV</Th>
               <Th numeric>Option premium</Th>
               <Th numeric>Expanded NPV</Th>
@@ -99,6 +102,9 @@ export function CaseTable(props: { projectId: string; currency: string; canEdit:
                   <Link href={`/projects/${projectId}/cases/${c.id}`} className="font-medium text-tide-600 hover:underline">
                     {c.name}
                   </Link>
+                </Td>
+                <Td>
+                  <StatusBadge status={c.status as CaseStatus} />
                 </Td>
                 <Td numeric>{formatMoney(c.latest?.staticNpv, currency)}</Td>
                 <Td numeric>{formatMoney(c.latest?.optionPremium, currency)}</Td>

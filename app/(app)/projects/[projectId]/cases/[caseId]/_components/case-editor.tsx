@@ -4,6 +4,7 @@ import Link from 'next/link';
 import { useEffect, useMemo, useState } from 'react';
 import useSWR from 'swr';
 import { LoadError, LoadingBlock } from '@/components/load-state';
+import { StatusBadge } from '@/components/status-badge';
 import { Button } from '@/components/ui/button';
 import { Tabs } from '@/components/ui/tabs';
 import { useToast } from '@/components/ui/toast';
@@ -24,7 +25,7 @@ import { LatticeSection } from './lattice-section';
 import { LatticeSettingsSection } from './lattice-settings-section';
 import { OptionCards } from './option-cards';
 import { ResultsSection } from './results-section';
-import { ReviewPanel, StatusBadge, type ReviewRights } from './review-panel';
+import { ReviewPanel, type ReviewRights } from './review-panel';
 
 interface Props {
   caseId: string;

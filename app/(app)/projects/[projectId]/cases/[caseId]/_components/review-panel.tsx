@@ -6,12 +6,12 @@ import { FormProblem } from '@/components/form-problem';
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
+import { StatusBadge } from '@/components/status-badge';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { useToast } from '@/components/ui/toast';
 import type { CaseStatus } from '@/db/types';
 import { getJson, sendJson } from '@/lib/api-client';
 import { formatDateTime, formatMoney } from '@/lib/format';
-import { statusLabels } from '@/lib/review/transitions';
 
 export interface ReviewRights {
   canSubmit: boolean;
@@ -47,16 +47,6 @@ const baseSections: [string, string][] = [
   ['results', 'Results'],
   ['lattice', 'Lattice'],
 ];
-
-export function StatusBadge({ status }: { status: CaseStatus }) {
-  const tone: Record<CaseStatus, string> = {
-    draft: 'bg-paper-sunk text-ink-soft',
-    in_review: 'bg-ember-100 text-ember-700',
-    approved: 'bg-moss-100 text-moss-700',
-    returned: 'bg-brick-100 text-brick-700',
-  };
-  return <span className={`rounded px-2 py-0.5 text-caption font-semibold uppercase tracking-wide ${tone[status]}`}>{statusLabels[status]}</span>;
-}
 
 interface Props {
   caseId: string;
