@@ -40,3 +40,8 @@ export async function sendJson<T>(method: 'POST' | 'PATCH' | 'DELETE', url: stri
     }),
   );
 }
+
+/** POST a multipart form (file uploads); errors arrive as ApiError with the server's field messages. */
+export async function sendForm<T>(url: string, form: FormData): Promise<T> {
+  return parse<T>(await fetch(url, { method: 'POST', body: form, headers: { accept: 'application/json' } }));
+}

@@ -7,7 +7,7 @@ import { LoadError, LoadingBlock } from '@/components/load-state';
 import { Button } from '@/components/ui/button';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { useToast } from '@/components/ui/toast';
-import { getJson, sendJson } from '@/lib/api-client';
+import { getJson, sendForm, sendJson } from '@/lib/api-client';
 import { formatDateTime } from '@/lib/format';
 
 interface Attachment {
@@ -35,8 +35,7 @@ export function AttachmentsPanel({ caseId, canEdit }: { caseId: string; canEdit:
     try {
       const form = new FormData();
       form.append('file', file);
-      const res = await fetch(`/api/v1/cases/${caseId}/attachments`, { method: 'POST', body: form });
-      if (!res.ok) throw new Error((await res.json().catch(() => null))?.error?.message ?? `The server answered ${res.status}.`);
+      await sendForm(`/api/v1/cases/${caseId}/attachments`, form);
       toast(`Attached “${file.name}”.`, 'success');
       await list.mutate();
     } catch (error) {

@@ -6,6 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
 import { useToast } from '@/components/ui/toast';
 import type { CashFlowAnalysis, CashFlowSchedule } from '@/lib/cash-flows';
+import { ApiError, sendForm } from '@/lib/api-client';
 import { formatMoney, formatNumber, formatPercent } from '@/lib/format';
 
 interface Preview {
@@ -21,14 +22,10 @@ const lines = [
   ['capex', 'Capex'],
 ] as const;
 
-async function post(caseId: string, form: FormData) {
-  const res = await fetch(`/api/v1/cases/${caseId}/cash-flows/import`, { method: 'POST', body: form });
-  const body = await res.json().catch(() => null);
-  if (!res.ok) {
-    const problems: string[] = body?.error?.fields?.file ?? [];
-    throw Object.assign(new Error(body?.error?.message ?? `The server answered ${res.status}.`), { problems });
-  }
-  return body;
+/** The message and the per-cell problems of a refused import. */
+function problemOf(error: unknown): { message: string; problems: string[] } {
+  if (error instanceof ApiError) return { message: error.message, problems: error.fields?.file ?? [] };
+  return { message: error instanceof Error ? error.message : 'The import did not work.', problems: [] };
 }
 
 /**
@@ -54,6 +51,7 @@ export function CashFlowImport({
   const [preview, setPreview] = useState<Preview | null>(null);
   const [problem, setProblem] = useState<{ message: string; problems: string[] } | null>(null);
   const [busy, setBusy] = useState(false);
+  const importUrl = `/api/v1/cases/${caseId}/cash-flows/import`;
 
   const read = async (chosen: File) => {
     setFile(chosen);
@@ -63,9 +61,9 @@ export function CashFlowImport({
     try {
       const form = new FormData();
       form.append('file', chosen);
-      setPreview((await post(caseId, form)).preview as Preview);
+      setPreview((await sendForm<{ preview: Preview }>(importUrl, form)).preview);
     } catch (error) {
-      setProblem({ message: (error as Error).message, problems: (error as { problems?: string[] }).problems ?? [] });
+      setProblem(problemOf(error));
     } finally {
       setBusy(false);
       if (input.current) input.current.value = '';
@@ -80,12 +78,12 @@ export function CashFlowImport({
       form.append('file', file);
       form.append('confirm', 'true');
       form.append('version', String(version));
-      await post(caseId, form);
+      await sendForm(importUrl, form);
       setPreview(null);
       toast(`Imported the cash flows from “${file.name}” and saved the case.`, 'success');
       onImported();
     } catch (error) {
-      setProblem({ message: (error as Error).message, problems: (error as { problems?: string[] }).problems ?? [] });
+      setProblem(problemOf(error));
       setPreview(null);
     } finally {
       setBusy(false);

@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { HistoryCharts } from '@/components/charts/history-charts';
 import { FormProblem } from '@/components/form-problem';
 import { Button } from '@/components/ui/button';
-import { ApiError } from '@/lib/api-client';
+import { sendForm } from '@/lib/api-client';
 import { formatPercent } from '@/lib/format';
 
 interface Estimate {
@@ -39,10 +39,7 @@ export function HistoryEstimate({ onApply }: { onApply: (volatility: number, not
     try {
       const form = new FormData();
       form.append('file', file);
-      const res = await fetch('/api/v1/volatility/history', { method: 'POST', body: form });
-      const body = await res.json().catch(() => null);
-      if (!res.ok) throw new ApiError(res.status, body?.error?.code ?? 'unknown', body?.error?.message ?? `The server answered ${res.status}.`);
-      setEstimate(body as Estimate);
+      setEstimate(await sendForm<Estimate>('/api/v1/volatility/history', form));
     } catch (error) {
       setProblem(error instanceof Error ? error.message : 'The estimate did not work.');
     } finally {
