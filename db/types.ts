@@ -129,6 +129,21 @@ export interface CaseSnapshotTable {
   decided_by: string | null;
   decided_at: Date | null;
   decision_reason: string | null;
+  /** Names as they were at submission (and the decider's at the decision): what the board pack prints. */
+  project_name: string | null;
+  project_description: string | null;
+  currency: string | null;
+  organization_name: string | null;
+  organization_is_demo: boolean | null;
+  submitted_by_name: string | null;
+  decided_by_name: string | null;
+}
+
+/** Consecutive failed sign-ins per e-mail address (lib/sign-in-backoff.ts). */
+export interface SignInFailureTable {
+  email: string;
+  failures: number;
+  last_failure_at: Timestamp;
 }
 
 export interface ReviewCommentTable {
@@ -194,6 +209,7 @@ export interface DB {
   board_pack: BoardPackTable;
   volatility_simulation: VolatilitySimulationTable;
   attachment: AttachmentTable;
+  sign_in_failure: SignInFailureTable;
 }
 
 export type OrganizationSettings = Selectable<OrganizationSettingsTable>;

@@ -14,6 +14,7 @@ import { valueProject } from '@/lattice';
 import { caseToModel } from '@/lib/case-model';
 import { hashModel } from '@/lib/model-hash';
 import { decideCase, submitCase, type FrozenValuation } from '@/db/queries/reviews';
+import { pageSizes } from '@/lib/board-pack/data';
 import { boardPackData, saveBoardPack } from '@/lib/board-pack/records';
 import { renderBoardPack } from '@/lib/board-pack/render';
 import { demoPortfolio } from './portfolio';
@@ -89,33 +90,39 @@ async function seedReview(args: {
   outcome: 'approved' | 'in_review';
   frozen: FrozenValuation;
 }) {
-  const submitted = await db
-    .transaction()
-    .execute((trx) =>
-      submitCase(trx, { orgId: args.orgId, caseId: args.caseId, role: 'analyst', userId: args.analystId, caseVersion: 1, frozen: args.frozen }),
-    );
-  if (!submitted.ok) throw new Error(`seed: could not submit ${args.caseName}: ${submitted.message}`);
-  await recordAudit(db, {
-    orgId: args.orgId,
-    actorId: args.analystId,
-    action: 'case.submit',
-    subjectType: 'case',
-    subjectId: args.caseId,
-    detail: { name: args.caseName, snapshot: submitted.value.id },
+  await db.transaction().execute(async (trx) => {
+    const outcome = await submitCase(trx, {
+      orgId: args.orgId,
+      caseId: args.caseId,
+      role: 'analyst',
+      userId: args.analystId,
+      caseVersion: 1,
+      frozen: args.frozen,
+    });
+    if (!outcome.ok) throw new Error(`seed: could not submit ${args.caseName}: ${outcome.message}`);
+    await recordAudit(trx, {
+      orgId: args.orgId,
+      actorId: args.analystId,
+      action: 'case.submit',
+      subjectType: 'case',
+      subjectId: args.caseId,
+      detail: { name: args.caseName, snapshot: outcome.value.id },
+    });
   });
   if (args.outcome !== 'approved') return;
-  const approved = await db
-    .transaction()
-    .execute((trx) => decideCase(trx, { orgId: args.orgId, caseId: args.caseId, role: 'reviewer', userId: args.reviewerId, action: 'approve' }));
-  if (!approved.ok) throw new Error(`seed: could not approve ${args.caseName}: ${approved.message}`);
-  await recordAudit(db, {
-    orgId: args.orgId,
-    actorId: args.reviewerId,
-    action: 'case.approve',
-    subjectType: 'case',
-    subjectId: args.caseId,
-    detail: { name: args.caseName, snapshot: approved.value.id },
+  const approved = await db.transaction().execute(async (trx) => {
+    const outcome = await decideCase(trx, { orgId: args.orgId, caseId: args.caseId, role: 'reviewer', userId: args.reviewerId, action: 'approve' });
+    if (!outcome.ok) throw new Error(`seed: could not approve ${args.caseName}: ${outcome.message}`);
+    await recordAudit(trx, {
+      orgId: args.orgId,
+      actorId: args.reviewerId,
+      action: 'case.approve',
+      subjectType: 'case',
+      subjectId: args.caseId,
+      detail: { name: args.caseName, snapshot: outcome.value.id },
+    });
+    return outcome.value;
   });
-  const pdf = await renderBoardPack(await boardPackData(args.orgId, approved.value.id, 'A4'));
-  await saveBoardPack(args.orgId, approved.value.id, 'A4', pdf);
+  // Both page sizes at approval, as the app does (lib/review/decide.ts).
+  for (const size of pageSizes) await saveBoardPack(args.orgId, approved.id, size, await renderBoardPack(await boardPackData(args.orgId, approved.id, size)));
 }

@@ -2,21 +2,39 @@
  * The better-auth server instance: e-mail and password with verification and reset, the
  * organization plugin with Leeway's four roles, database-backed rate limits (so several app
  * servers share them), and `nextCookies()` last so server actions can set cookies.
+ *
+ * Hardening (issue "safe by default"): limits key on the address scripts/serve.ts vouches for,
+ * never on a client's X-Forwarded-For; a per-account backoff after repeated wrong passwords;
+ * common passwords refused; every other session ends when a password is reset or changed; the
+ * reset mail is sent after the answer, so the answer takes as long whether or not the account
+ * exists; and only a user who belongs to no organisation may create one, through any door.
  */
 import { betterAuth } from 'better-auth';
+import { APIError, createAuthMiddleware, isAPIError } from 'better-auth/api';
 import { nextCookies } from 'better-auth/next-js';
 import { organization } from 'better-auth/plugins';
-import { pool } from '@/db';
-import { env } from './env';
+import { db, pool } from '@/db';
+import { CLIENT_ADDRESS_HEADER } from './client-address';
+import { COMMON_PASSWORD_MESSAGE, isCommonPassword } from './common-passwords';
+import { authSecret, env } from './env';
 import { linkMail, sendMail } from './mail';
 import { ac, roles } from './permissions';
+import { clearFailures, recordFailure, secondsUntilAllowed } from './sign-in-backoff';
 
 const DAY = 24 * 60 * 60;
+
+/** The body field holding a new password, per auth endpoint. */
+const passwordFields: Record<string, string> = {
+  '/sign-up/email': 'password',
+  '/reset-password': 'newPassword',
+  '/change-password': 'newPassword',
+  '/set-password': 'newPassword',
+};
 
 export const auth = betterAuth({
   appName: 'Leeway',
   baseURL: env.APP_URL,
-  secret: env.BETTER_AUTH_SECRET,
+  secret: authSecret(),
   database: pool,
   trustedOrigins: [env.APP_URL, 'http://127.0.0.1:3000', 'http://localhost:3000'],
   emailAndPassword: {
@@ -24,10 +42,12 @@ export const auth = betterAuth({
     requireEmailVerification: true,
     minPasswordLength: 10,
     maxPasswordLength: 128,
+    revokeSessionsOnPasswordReset: true,
     sendResetPassword: async ({ user, url }) => {
-      await sendMail(
+      // Not awaited: waiting for the mail server would tell an observer that the account exists.
+      sendMail(
         linkMail(user.email, 'Reset your Leeway password', 'Someone asked to reset the password of your Leeway account.', 'Choose a new password', url),
-      );
+      ).catch((error) => console.error('[leeway] reset-password mail', error));
     },
   },
   emailVerification: {
@@ -50,6 +70,35 @@ export const auth = betterAuth({
       '/request-password-reset': { window: 60, max: 5 },
     },
   },
+  advanced: {
+    ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] },
+  },
+  hooks: {
+    before: createAuthMiddleware(async (ctx) => {
+      const field = passwordFields[ctx.path];
+      const password = field ? (ctx.body as Record<string, unknown> | undefined)?.[field] : undefined;
+      if (typeof password === 'string' && isCommonPassword(password))
+        throw new APIError('BAD_REQUEST', { message: COMMON_PASSWORD_MESSAGE, code: 'COMMON_PASSWORD' });
+      if (ctx.path === '/sign-in/email' && typeof ctx.body?.email === 'string') {
+        const wait = await secondsUntilAllowed(db, ctx.body.email);
+        if (wait > 0)
+          throw new APIError('TOO_MANY_REQUESTS', {
+            message: `Too many wrong passwords for this account. Try again in ${wait < 90 ? `${wait} seconds` : `${Math.ceil(wait / 60)} minutes`}, or reset the password.`,
+            code: 'ACCOUNT_BACKOFF',
+          });
+      }
+      // A changed password ends every other session, whatever the client asked for.
+      if (ctx.path === '/change-password') return { context: { body: { ...ctx.body, revokeOtherSessions: true } } };
+    }),
+    after: createAuthMiddleware(async (ctx) => {
+      if (ctx.path !== '/sign-in/email' || typeof ctx.body?.email !== 'string') return;
+      const returned = ctx.context.returned;
+      if (isAPIError(returned)) {
+        // Only a wrong password counts; refusals for other reasons (unverified e-mail, our own backoff) do not.
+        if (returned.status === 'UNAUTHORIZED') await recordFailure(db, ctx.body.email);
+      } else await clearFailures(db, ctx.body.email);
+    }),
+  },
   databaseHooks: {
     session: {
       create: {
@@ -69,6 +118,8 @@ export const auth = betterAuth({
       ac,
       roles,
       creatorRole: 'admin',
+      // The app's rule: one organisation per user, created from the welcome page by someone without one.
+      allowUserToCreateOrganization: async (user) => !(await db.selectFrom('member').select('id').where('userId', '=', user.id).executeTakeFirst()),
       invitationExpiresIn: 7 * DAY,
       cancelPendingInvitationsOnReInvite: true,
       sendInvitationEmail: async ({ id, email, organization: org, inviter, role }) => {

@@ -12,6 +12,7 @@ export const errorStatus = {
   not_found: 404,
   conflict: 409,
   too_large: 413,
+  unsupported_media_type: 415,
   unprocessable: 422,
   rate_limited: 429,
 } as const;

@@ -9,6 +9,7 @@ import * as m0003 from './0003_projects_cases_and_runs';
 import * as m0004 from './0004_reviews_and_board_packs';
 import * as m0005 from './0005_volatility_simulations';
 import * as m0006 from './0006_attachments';
+import * as m0007 from './0007_safe_by_default';
 
 export const migrations: Record<string, Migration> = {
   '0001_auth_tables': m0001,
@@ -17,4 +18,5 @@ export const migrations: Record<string, Migration> = {
   '0004_reviews_and_board_packs': m0004,
   '0005_volatility_simulations': m0005,
   '0006_attachments': m0006,
+  '0007_safe_by_default': m0007,
 };

@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# Bundles the worker-thread entries: the engine (.data/engine-worker.mjs, loaded by
+# Bundles the production server (.data/serve.mjs) and the worker-thread entries: the engine (.data/engine-worker.mjs, loaded by
 # lib/engine/pool.ts), the board pack renderer (.data/board-pack-worker.mjs, loaded by
 # lib/board-pack/store.ts) and the Monte Carlo volatility estimate (.data/simulation-worker.mjs,
 # loaded by lib/volatility/simulation-jobs.ts), so CPU-bound work never runs on a request's event loop.
@@ -11,5 +11,8 @@ npx esbuild lattice/worker-entry.ts --bundle --platform=node --format=esm --targ
 # worker imports them from node_modules like the app does.
 npx esbuild lib/board-pack/worker-entry.ts --bundle --platform=node --format=esm --target=node20 --jsx=automatic --alias:@=. \
   --external:@react-pdf/renderer --external:react --outfile=.data/board-pack-worker.mjs --log-level=warning
+# The production server (scripts/serve.ts): Next.js itself stays outside the bundle.
+npx esbuild scripts/serve.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. --external:next \
+  --outfile=.data/serve.mjs --log-level=warning
 npx esbuild lib/volatility/simulation-worker-entry.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. \
   --outfile=.data/simulation-worker.mjs --log-level=warning

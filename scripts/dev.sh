@@ -10,4 +10,5 @@ trap '[ -n "$sink_pid" ] && kill "$sink_pid" 2>/dev/null || true' EXIT INT TERM
 npx tsx scripts/migrate.ts up
 npx tsx scripts/seed.ts
 bash scripts/build-engine-worker.sh
-npx next dev -H 127.0.0.1 -p "${PORT:-3000}"
+# next dev listens on loopback only (-H), so the local inbox may be shown.
+LEEWAY_LISTEN_HOST=127.0.0.1 npx next dev -H 127.0.0.1 -p "${PORT:-3000}"

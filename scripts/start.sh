@@ -28,9 +28,9 @@ cat <<TXT
     reviewer@kestrelbay.example   reviewer
     executive@kestrelbay.example  executive (read-only)
     owner@harrowfen.example       admin of a second, unrelated organisation
-  E-mail goes to the local inbox: $APP_URL/inbox
+  E-mail goes to the local inbox, open only from this machine: $APP_URL/inbox
 
 TXT
-node node_modules/next/dist/bin/next start -H "$HOST" -p "$PORT" &
+HOST=$HOST PORT=$PORT node .data/serve.mjs &
 next_pid=$!
 wait "$next_pid"

@@ -4,7 +4,6 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 export NEXT_TELEMETRY_DISABLED=1
-export BETTER_AUTH_SECRET=${BETTER_AUTH_SECRET:-leeway-test-secret-not-for-production}
 mkdir -p .data
 
 step() { echo; echo "━━ $*"; }

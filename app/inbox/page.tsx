@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { Wordmark } from '@/components/wordmark';
-import { usesMailSink } from '@/lib/env';
+import { canSeeInbox } from '@/lib/inbox-access';
 import { formatDateTime } from '@/lib/format';
 import { listMail } from '@/lib/mail-sink-store';
 
@@ -11,7 +11,7 @@ export const dynamic = 'force-dynamic';
 
 /** Every message the local sink caught, so a person trying the demo can follow e-mailed links. */
 export default async function InboxPage() {
-  if (!usesMailSink()) notFound();
+  if (!(await canSeeInbox())) notFound();
   const messages = await listMail();
   return (
     <main className="mx-auto max-w-4xl px-6 py-10">

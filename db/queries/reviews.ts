@@ -38,6 +38,14 @@ export async function submitCase(
   if (!check.ok) return check;
   if (row.version !== args.caseVersion)
     return { ok: false, code: 'conflict', message: 'The case was saved again while it was being valued; submit it once more.' };
+  // The names the record will print, as they are now: renaming anything later changes no approved pack.
+  const names = await trx
+    .selectFrom('project')
+    .innerJoin('organization', 'organization.id', 'project.organization_id')
+    .select(['project.name as project_name', 'project.description', 'project.currency', 'organization.name as organization_name', 'organization.metadata'])
+    .where('project.id', '=', row.project_id)
+    .executeTakeFirstOrThrow();
+  const submitter = await trx.selectFrom('user').select('name').where('id', '=', args.userId).executeTakeFirst();
   const snapshot = await trx
     .insertInto('case_snapshot')
     .values({
@@ -51,6 +59,12 @@ export async function submitCase(
       engine_version: args.frozen.engineVersion,
       input_hash: args.frozen.inputHash,
       submitted_by: args.userId,
+      project_name: names.project_name,
+      project_description: names.description,
+      currency: names.currency,
+      organization_name: names.organization_name,
+      organization_is_demo: names.metadata?.includes('"demo":true') ?? false,
+      submitted_by_name: submitter?.name ?? null,
     })
     .returningAll()
     .executeTakeFirstOrThrow();
@@ -67,15 +81,30 @@ export async function decideCase(
   if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
   const check = checkTransition(args.role, args.action, row.status);
   if (!check.ok) return check;
-  const snapshot = await trx
-    .updateTable('case_snapshot')
-    .set({ status: check.to as 'approved' | 'returned', decided_by: args.userId, decided_at: new Date(), decision_reason: args.reason ?? null })
+  const waiting = await trx
+    .selectFrom('case_snapshot')
+    .select(['id', 'submitted_by'])
     .where('organization_id', '=', args.orgId)
     .where('case_id', '=', row.id)
     .where('status', '=', 'in_review')
-    .returningAll()
     .executeTakeFirst();
-  if (!snapshot) return { ok: false, code: 'conflict', message: 'There is no snapshot waiting for a decision.' };
+  if (!waiting) return { ok: false, code: 'conflict', message: 'There is no snapshot waiting for a decision.' };
+  // Four eyes: whoever submitted a version never approves or returns it, whatever their role now.
+  if (waiting.submitted_by === args.userId)
+    return { ok: false, code: 'forbidden', message: 'You submitted this version, so another reviewer must decide on it.' };
+  const decider = await trx.selectFrom('user').select('name').where('id', '=', args.userId).executeTakeFirst();
+  const snapshot = await trx
+    .updateTable('case_snapshot')
+    .set({
+      status: check.to as 'approved' | 'returned',
+      decided_by: args.userId,
+      decided_by_name: decider?.name ?? null,
+      decided_at: new Date(),
+      decision_reason: args.reason ?? null,
+    })
+    .where('id', '=', waiting.id)
+    .returningAll()
+    .executeTakeFirstOrThrow();
   await trx.updateTable('case').set({ status: check.to }).where('id', '=', row.id).execute();
   return { ok: true, value: snapshot };
 }

@@ -4,6 +4,9 @@ import type { CaseInput } from '../validations/case';
 
 export type PageSize = 'A4' | 'LETTER';
 
+/** Every page size a pack is rendered in, all of them at approval. */
+export const pageSizes: PageSize[] = ['A4', 'LETTER'];
+
 export interface BoardPackData {
   pageSize: PageSize;
   organisation: string;

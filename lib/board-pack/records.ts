@@ -7,34 +7,18 @@ import { db } from '@/db';
 import { AppError } from '../errors';
 import type { BoardPackData, PageSize } from './data';
 
-/** Everything the pack shows, from the approved snapshot (and the names of the people in its record). */
+/**
+ * Everything the pack shows, from the approved snapshot alone: its frozen inputs and results and
+ * the names captured at submission and decision, never today's names (migration 0007).
+ */
 export async function boardPackData(orgId: string, snapshotId: string, pageSize: PageSize): Promise<BoardPackData> {
-  const row = await db
-    .selectFrom('case_snapshot')
-    .innerJoin('case', 'case.id', 'case_snapshot.case_id')
-    .innerJoin('project', 'project.id', 'case.project_id')
-    .innerJoin('organization', 'organization.id', 'case_snapshot.organization_id')
-    .leftJoin('user as submitter', 'submitter.id', 'case_snapshot.submitted_by')
-    .leftJoin('user as decider', 'decider.id', 'case_snapshot.decided_by')
-    .selectAll('case_snapshot')
-    .select([
-      'project.name as project_name',
-      'project.description as project_description',
-      'project.currency',
-      'organization.name as organization_name',
-      'organization.metadata',
-      'submitter.name as submitter_name',
-      'decider.name as decider_name',
-    ])
-    .where('case_snapshot.organization_id', '=', orgId)
-    .where('case_snapshot.id', '=', snapshotId)
-    .executeTakeFirst();
+  const row = await db.selectFrom('case_snapshot').selectAll().where('organization_id', '=', orgId).where('id', '=', snapshotId).executeTakeFirst();
   if (!row || row.status !== 'approved' || !row.decided_at) throw new AppError('not_found', 'No approved snapshot to make a board pack from.');
   return {
     pageSize,
-    organisation: row.organization_name,
-    isDemo: row.metadata?.includes('"demo":true') ?? false,
-    project: { name: row.project_name, description: row.project_description, currency: row.currency },
+    organisation: row.organization_name ?? '',
+    isDemo: row.organization_is_demo ?? false,
+    project: { name: row.project_name ?? row.case_name, description: row.project_description ?? '', currency: row.currency ?? '' },
     snapshot: {
       id: row.id,
       caseName: row.case_name,
@@ -44,9 +28,9 @@ export async function boardPackData(orgId: string, snapshotId: string, pageSize:
       result: row.result as BoardPackData['snapshot']['result'],
       engineVersion: row.engine_version,
       inputHash: row.input_hash,
-      submittedBy: row.submitter_name ?? 'a former member',
+      submittedBy: row.submitted_by_name ?? 'a former member',
       submittedAt: new Date(row.submitted_at).toISOString(),
-      decidedBy: row.decider_name ?? 'a former member',
+      decidedBy: row.decided_by_name ?? 'a former member',
       decidedAt: new Date(row.decided_at).toISOString(),
     },
   };

@@ -4,6 +4,8 @@ export function xlsxResponse(bytes: Buffer, filename: string): Response {
     headers: {
       'content-type': 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
       'content-disposition': `attachment; filename="${filename.replace(/[^\w .()-]/g, '_')}"`,
+      // Case data: never kept in a shared or browser cache.
+      'cache-control': 'no-store',
     },
   });
 }

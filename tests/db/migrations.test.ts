@@ -35,6 +35,7 @@ describe('migrations', () => {
       'rateLimit',
       'review_comment',
       'session',
+      'sign_in_failure',
       'user',
       'valuation_run',
       'verification',

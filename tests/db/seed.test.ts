@@ -69,7 +69,9 @@ describe('demo seed', () => {
       ])
       .where('project.name', 'in', ['Phased bio-resin plant', 'Cold-storage hub'])
       .orderBy('project.name')
+      .orderBy('board_pack.page_size')
       .execute();
+    // Both page sizes are rendered at approval, so the record never changes afterwards.
     expect(reviews).toEqual([
       { project: 'Cold-storage hub', case: 'Base case', status: 'in_review', submitter: 'analyst@kestrelbay.example', decider: null, page_size: null },
       {
@@ -79,6 +81,14 @@ describe('demo seed', () => {
         submitter: 'analyst@kestrelbay.example',
         decider: 'reviewer@kestrelbay.example',
         page_size: 'A4',
+      },
+      {
+        project: 'Phased bio-resin plant',
+        case: 'Base case',
+        status: 'approved',
+        submitter: 'analyst@kestrelbay.example',
+        decider: 'reviewer@kestrelbay.example',
+        page_size: 'LETTER',
       },
     ]);
   });

@@ -1,7 +1,9 @@
 /**
  * Starts what the end-to-end tests drive: a fresh, migrated and seeded test database, the mail
- * sink on its own port and folder, and the built app (`next start`) on 127.0.0.1:3100 — the
- * same production server `npm start` runs. Stops them afterwards.
+ * sink on its own port and folder, and the built app (scripts/serve.ts) on 127.0.0.1:3100 — the
+ * same production server `npm start` runs. Stops them afterwards. The tests stand in for a
+ * reverse proxy on loopback (TRUSTED_PROXIES), so each browser context's X-Forwarded-For is its
+ * own client address for the sign-in limits.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { rmSync } from 'node:fs';
@@ -55,7 +57,7 @@ export default async function setup() {
   await run(process.execPath, ['--import', 'tsx', 'scripts/seed.ts'], env);
   rmSync(E2E_MAIL_DIR, { recursive: true, force: true });
   start(process.execPath, ['--import', 'tsx', 'scripts/mail-sink.ts'], env, 'mail sink');
-  const log = start(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(E2E_PORT)], env, 'app');
+  const log = start(process.execPath, ['.data/serve.mjs'], { ...env, HOST: '127.0.0.1', PORT: String(E2E_PORT), TRUSTED_PROXIES: '127.0.0.1' }, 'app');
   await waitFor(`${BASE_URL}/api/health`, log);
   return async () => {
     for (const child of children) child.kill('SIGTERM');

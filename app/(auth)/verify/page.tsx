@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { usesMailSink } from '@/lib/env';
+import { canSeeInbox } from '@/lib/inbox-access';
 
 export const metadata: Metadata = { title: 'Confirm your e-mail' };
 
@@ -24,7 +24,7 @@ export default async function VerifyPage({ searchParams }: { searchParams: Promi
         We sent a confirmation link to {email ? <strong className="text-ink">{email}</strong> : 'your e-mail address'}. Follow it to finish creating your
         account.
       </p>
-      {usesMailSink() ? (
+      {(await canSeeInbox()) ? (
         <p className="mt-4 rounded-md bg-tide-50 px-3 py-2 text-tide-700">
           This is a local installation: messages are kept in the{' '}
           <Link href="/inbox" className="underline">

@@ -1,13 +1,13 @@
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { usesMailSink } from '@/lib/env';
+import { canSeeInbox } from '@/lib/inbox-access';
 import { formatDateTime } from '@/lib/format';
 import { findMail } from '@/lib/mail-sink-store';
 
 export const dynamic = 'force-dynamic';
 
 export default async function MessagePage({ params }: { params: Promise<{ messageId: string }> }) {
-  if (!usesMailSink()) notFound();
+  if (!(await canSeeInbox())) notFound();
   const { messageId } = await params;
   const mail = await findMail(messageId);
   if (!mail) notFound();

@@ -18,14 +18,18 @@ export const GET = withAuth(async ({ member }) => NextResponse.json({ projects: 
 export const POST = withAuth(
   async ({ member, body }) => {
     const currency = body.currency ?? (await findSettings(db, { orgId: member.orgId })).currency;
-    const project = await createProject(db, { orgId: member.orgId, ownerId: member.userId, name: body.name, description: body.description, currency });
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'project.create',
-      subjectType: 'project',
-      subjectId: project.id,
-      detail: { name: body.name },
+    // The change and its audit entry commit together or not at all.
+    const project = await db.transaction().execute(async (trx) => {
+      const project = await createProject(trx, { orgId: member.orgId, ownerId: member.userId, name: body.name, description: body.description, currency });
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'project.create',
+        subjectType: 'project',
+        subjectId: project.id,
+        detail: { name: body.name },
+      });
+      return project;
     });
     return NextResponse.json({ project: presentProject(project) }, { status: 201 });
   },

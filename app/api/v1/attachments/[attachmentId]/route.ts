@@ -28,6 +28,7 @@ export const GET = withAuth<Params>(
         // Always a download, never rendered in the app's origin; the browser must not guess another type.
         'content-disposition': `attachment; filename="${found.filename.replace(/[^\w .()-]/g, '_')}"`,
         'x-content-type-options': 'nosniff',
+        'cache-control': 'no-store',
       },
     });
   },
@@ -36,20 +37,23 @@ export const GET = withAuth<Params>(
 
 export const DELETE = withAuth<Params>(
   async ({ member, params }) => {
-    const gone = await db
-      .deleteFrom('attachment')
-      .where('organization_id', '=', member.orgId)
-      .where('id', '=', params.attachmentId)
-      .returning(['case_id', 'filename'])
-      .executeTakeFirst();
-    if (!gone) throw missing();
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.detach',
-      subjectType: 'case',
-      subjectId: gone.case_id,
-      detail: { file: gone.filename },
+    // The change and its audit entry commit together or not at all.
+    await db.transaction().execute(async (trx) => {
+      const gone = await trx
+        .deleteFrom('attachment')
+        .where('organization_id', '=', member.orgId)
+        .where('id', '=', params.attachmentId)
+        .returning(['case_id', 'filename'])
+        .executeTakeFirst();
+      if (!gone) throw missing();
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'case.detach',
+        subjectType: 'case',
+        subjectId: gone.case_id,
+        detail: { file: gone.filename },
+      });
     });
     return new NextResponse(null, { status: 204 });
   },

@@ -27,22 +27,26 @@ export const GET = withAuth<Params>(
 export const PATCH = withAuth<Params, typeof caseSaveSchema>(
   async ({ member, params, body }) => {
     const { version, ...content } = body;
-    const saved = await saveCase(db, { orgId: member.orgId, caseId: params.caseId, expectedVersion: version, content });
-    if (!saved.ok && saved.reason === 'not_found') throw missing();
-    if (!saved.ok && saved.reason === 'in_review')
-      throw new AppError('conflict', 'This case is in review and cannot be edited until a reviewer returns it. Nothing was changed.');
-    if (!saved.ok)
-      throw new AppError(
-        'conflict',
-        `This case was saved by someone else meanwhile (now version ${saved.currentVersion}); reload it and apply your change again. Nothing was overwritten.`,
-      );
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.update',
-      subjectType: 'case',
-      subjectId: saved.row.id,
-      detail: { version: saved.row.version, name: saved.row.name },
+    // The change and its audit entry commit together or not at all.
+    const saved = await db.transaction().execute(async (trx) => {
+      const saved = await saveCase(trx, { orgId: member.orgId, caseId: params.caseId, expectedVersion: version, content });
+      if (!saved.ok && saved.reason === 'not_found') throw missing();
+      if (!saved.ok && saved.reason === 'in_review')
+        throw new AppError('conflict', 'This case is in review and cannot be edited until a reviewer returns it. Nothing was changed.');
+      if (!saved.ok)
+        throw new AppError(
+          'conflict',
+          `This case was saved by someone else meanwhile (now version ${saved.currentVersion}); reload it and apply your change again. Nothing was overwritten.`,
+        );
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'case.update',
+        subjectType: 'case',
+        subjectId: saved.row.id,
+        detail: { version: saved.row.version, name: saved.row.name },
+      });
+      return saved;
     });
     return NextResponse.json({ case: presentCase(saved.row) });
   },
@@ -51,29 +55,32 @@ export const PATCH = withAuth<Params, typeof caseSaveSchema>(
 
 export const DELETE = withAuth<Params>(
   async ({ member, params }) => {
-    const gone = await db
-      .deleteFrom('case')
-      .where('organization_id', '=', member.orgId)
-      .where('id', '=', params.caseId)
-      // A case that was ever submitted keeps its review record: it is never deleted.
-      .where((eb) => eb.not(eb.exists(eb.selectFrom('case_snapshot').select('case_snapshot.id').whereRef('case_snapshot.case_id', '=', 'case.id'))))
-      .returning(['name', 'project_id'])
-      .executeTakeFirst();
-    if (!gone) {
-      if (await findCase(db, { orgId: member.orgId, caseId: params.caseId }))
-        throw new AppError(
-          'conflict',
-          'This case has been submitted for review, so its record is kept: it cannot be deleted. Duplicate it to start a new version.',
-        );
-      throw missing();
-    }
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.delete',
-      subjectType: 'case',
-      subjectId: params.caseId,
-      detail: { name: gone.name, projectId: gone.project_id },
+    // The change and its audit entry commit together or not at all.
+    await db.transaction().execute(async (trx) => {
+      const gone = await trx
+        .deleteFrom('case')
+        .where('organization_id', '=', member.orgId)
+        .where('id', '=', params.caseId)
+        // A case that was ever submitted keeps its review record: it is never deleted.
+        .where((eb) => eb.not(eb.exists(eb.selectFrom('case_snapshot').select('case_snapshot.id').whereRef('case_snapshot.case_id', '=', 'case.id'))))
+        .returning(['name', 'project_id'])
+        .executeTakeFirst();
+      if (!gone) {
+        if (await findCase(trx, { orgId: member.orgId, caseId: params.caseId }))
+          throw new AppError(
+            'conflict',
+            'This case has been submitted for review, so its record is kept: it cannot be deleted. Duplicate it to start a new version.',
+          );
+        throw missing();
+      }
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'case.delete',
+        subjectType: 'case',
+        subjectId: params.caseId,
+        detail: { name: gone.name, projectId: gone.project_id },
+      });
     });
     return new NextResponse(null, { status: 204 });
   },

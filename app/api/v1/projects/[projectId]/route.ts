@@ -24,21 +24,25 @@ export const GET = withAuth<Params>(
 
 export const PATCH = withAuth<Params, typeof projectUpdateSchema>(
   async ({ member, params, body }) => {
-    const project = await db
-      .updateTable('project')
-      .set({ ...body, updated_at: new Date() })
-      .where('organization_id', '=', member.orgId)
-      .where('id', '=', params.projectId)
-      .returningAll()
-      .executeTakeFirst();
-    if (!project) throw missing();
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'project.update',
-      subjectType: 'project',
-      subjectId: project.id,
-      detail: body,
+    // The change and its audit entry commit together or not at all.
+    const project = await db.transaction().execute(async (trx) => {
+      const project = await trx
+        .updateTable('project')
+        .set({ ...body, updated_at: new Date() })
+        .where('organization_id', '=', member.orgId)
+        .where('id', '=', params.projectId)
+        .returningAll()
+        .executeTakeFirst();
+      if (!project) throw missing();
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'project.update',
+        subjectType: 'project',
+        subjectId: project.id,
+        detail: body,
+      });
+      return project;
     });
     return NextResponse.json({ project: presentProject(project) });
   },
@@ -47,39 +51,42 @@ export const PATCH = withAuth<Params, typeof projectUpdateSchema>(
 
 export const DELETE = withAuth<Params>(
   async ({ member, params }) => {
-    const gone = await db
-      .deleteFrom('project')
-      .where('organization_id', '=', member.orgId)
-      .where('id', '=', params.projectId)
-      // Review records are kept: a project with a submitted case is archived, never deleted.
-      .where((eb) =>
-        eb.not(
-          eb.exists(
-            eb
-              .selectFrom('case_snapshot')
-              .innerJoin('case', 'case.id', 'case_snapshot.case_id')
-              .select('case_snapshot.id')
-              .whereRef('case.project_id', '=', 'project.id'),
+    // The change and its audit entry commit together or not at all.
+    await db.transaction().execute(async (trx) => {
+      const gone = await trx
+        .deleteFrom('project')
+        .where('organization_id', '=', member.orgId)
+        .where('id', '=', params.projectId)
+        // Review records are kept: a project with a submitted case is archived, never deleted.
+        .where((eb) =>
+          eb.not(
+            eb.exists(
+              eb
+                .selectFrom('case_snapshot')
+                .innerJoin('case', 'case.id', 'case_snapshot.case_id')
+                .select('case_snapshot.id')
+                .whereRef('case.project_id', '=', 'project.id'),
+            ),
           ),
-        ),
-      )
-      .returning('name')
-      .executeTakeFirst();
-    if (!gone) {
-      if (await findProject(db, { orgId: member.orgId, projectId: params.projectId }))
-        throw new AppError(
-          'conflict',
-          'A case of this project has been submitted for review, so the project keeps its record: archive it instead of deleting it.',
-        );
-      throw missing();
-    }
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'project.delete',
-      subjectType: 'project',
-      subjectId: params.projectId,
-      detail: { name: gone.name },
+        )
+        .returning('name')
+        .executeTakeFirst();
+      if (!gone) {
+        if (await findProject(trx, { orgId: member.orgId, projectId: params.projectId }))
+          throw new AppError(
+            'conflict',
+            'A case of this project has been submitted for review, so the project keeps its record: archive it instead of deleting it.',
+          );
+        throw missing();
+      }
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'project.delete',
+        subjectType: 'project',
+        subjectId: params.projectId,
+        detail: { name: gone.name },
+      });
     });
     return new NextResponse(null, { status: 204 });
   },

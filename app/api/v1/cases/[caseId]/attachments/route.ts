@@ -5,7 +5,7 @@ import { db } from '@/db';
 import { addAttachment, listAttachments } from '@/db/queries/attachments';
 import { recordAudit } from '@/db/queries/audit';
 import { findCase } from '@/db/queries/cases';
-import { withAuth } from '@/lib/api';
+import { requireMediaType, withAuth } from '@/lib/api';
 import { AppError } from '@/lib/errors';
 import { inspectUpload, MAX_UPLOAD_BYTES } from '@/lib/uploads/inspect';
 
@@ -30,8 +30,7 @@ export const POST = withAuth<Params>(
   async ({ member, params, request }) => {
     const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
     if (!found) throw missing();
-    if (!(request.headers.get('content-type') ?? '').startsWith('multipart/form-data'))
-      throw new AppError('unprocessable', 'Send the document as a file upload (multipart/form-data, field “file”).');
+    requireMediaType(request, ['multipart/form-data']);
     if (Number(request.headers.get('content-length') ?? '0') > MAX_UPLOAD_BYTES + 64 * 1024)
       throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
     const form = await request.formData().catch(() => {
@@ -42,22 +41,26 @@ export const POST = withAuth<Params>(
     const data = Buffer.from(await file.arrayBuffer());
     const kind = inspectUpload(file.name, data, ['pdf', 'xlsx', 'csv', 'png']);
     const filename = file.name.replace(/[\\/\u0000-\u001f]/g, '_').slice(0, 200);
-    const made = await addAttachment(db, {
-      orgId: member.orgId,
-      caseId: found.id,
-      filename,
-      kind,
-      data,
-      sha256: createHash('sha256').update(data).digest('hex'),
-      uploadedBy: member.userId,
-    });
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.attach',
-      subjectType: 'case',
-      subjectId: found.id,
-      detail: { name: found.name, file: filename, size: data.length },
+    // The change and its audit entry commit together or not at all.
+    const made = await db.transaction().execute(async (trx) => {
+      const made = await addAttachment(trx, {
+        orgId: member.orgId,
+        caseId: found.id,
+        filename,
+        kind,
+        data,
+        sha256: createHash('sha256').update(data).digest('hex'),
+        uploadedBy: member.userId,
+      });
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'case.attach',
+        subjectType: 'case',
+        subjectId: found.id,
+        detail: { name: found.name, file: filename, size: data.length },
+      });
+      return made;
     });
     return NextResponse.json(
       { attachment: { id: made.id, filename: made.filename, kind: made.kind, size: made.size, uploadedBy: member.name, uploadedAt: made.created_at } },

@@ -26,7 +26,7 @@ export const GET = withAuth<{ caseId: string }>(
         'content-type': 'application/pdf',
         'content-disposition': `attachment; filename="${filename}"`,
         etag: `"${sha256}"`,
-        'cache-control': 'private, max-age=0, must-revalidate',
+        'cache-control': 'no-store',
       },
     });
   },

@@ -29,15 +29,19 @@ export const GET = withAuth<{ caseId: string }>(
 
 export const POST = withAuth<{ caseId: string }, typeof commentSchema>(
   async ({ member, params, body }) => {
-    const made = await addComment(db, { orgId: member.orgId, caseId: params.caseId, authorId: member.userId, section: body.section, body: body.body });
-    if (!made) throw missing();
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.comment',
-      subjectType: 'case',
-      subjectId: params.caseId,
-      detail: { section: body.section },
+    // The change and its audit entry commit together or not at all.
+    const made = await db.transaction().execute(async (trx) => {
+      const made = await addComment(trx, { orgId: member.orgId, caseId: params.caseId, authorId: member.userId, section: body.section, body: body.body });
+      if (!made) throw missing();
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'case.comment',
+        subjectType: 'case',
+        subjectId: params.caseId,
+        detail: { section: body.section },
+      });
+      return made;
     });
     return NextResponse.json(
       { comment: { id: made.id, section: made.section, body: made.body, author: member.name, createdAt: made.created_at } },

@@ -14,15 +14,19 @@ const duplicateSchema = z.object({ name: z.string().trim().min(1, 'Give the copy
 
 export const POST = withAuth<{ caseId: string }, typeof duplicateSchema>(
   async ({ member, params, body }) => {
-    const copy = await duplicateCase(db, { orgId: member.orgId, caseId: params.caseId, name: body.name, createdBy: member.userId });
-    if (!copy) throw new AppError('not_found', 'No such case in your organisation.');
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.duplicate',
-      subjectType: 'case',
-      subjectId: copy.id,
-      detail: { from: params.caseId, name: copy.name, projectId: copy.project_id },
+    // The change and its audit entry commit together or not at all.
+    const copy = await db.transaction().execute(async (trx) => {
+      const copy = await duplicateCase(trx, { orgId: member.orgId, caseId: params.caseId, name: body.name, createdBy: member.userId });
+      if (!copy) throw new AppError('not_found', 'No such case in your organisation.');
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'case.duplicate',
+        subjectType: 'case',
+        subjectId: copy.id,
+        detail: { from: params.caseId, name: copy.name, projectId: copy.project_id },
+      });
+      return copy;
     });
     return NextResponse.json({ case: presentCase(copy) }, { status: 201 });
   },

@@ -21,8 +21,8 @@ export const POST = withAuth<{ caseId: string }>(
     const early = checkTransition(member.role, 'submit', stored.status);
     if (!early.ok) throw new AppError(early.code, early.message);
     const valuation = await valueStoredCase(stored);
-    const outcome = await db.transaction().execute((trx) =>
-      submitCase(trx, {
+    const snapshot = await db.transaction().execute(async (trx) => {
+      const outcome = await submitCase(trx, {
         orgId: member.orgId,
         caseId: stored.id,
         role: member.role,
@@ -35,19 +35,20 @@ export const POST = withAuth<{ caseId: string }>(
           engineVersion: valuation.result.engineVersion,
           inputHash: valuation.inputHash,
         },
-      }),
-    );
-    if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.submit',
-      subjectType: 'case',
-      subjectId: stored.id,
-      detail: { name: stored.name, snapshot: outcome.value.id, expandedNpv: valuation.result.expandedNpv },
+      });
+      if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'case.submit',
+        subjectType: 'case',
+        subjectId: stored.id,
+        detail: { name: stored.name, snapshot: outcome.value.id, expandedNpv: valuation.result.expandedNpv },
+      });
+      return outcome.value;
     });
     await notifySubmitted(refOf(stored, valuation.result.expandedNpv), member.name);
-    return NextResponse.json({ snapshot: presentSnapshot(outcome.value) }, { status: 201 });
+    return NextResponse.json({ snapshot: presentSnapshot(snapshot) }, { status: 201 });
   },
   { permission: { case: ['submit'] } },
 );

@@ -24,24 +24,28 @@ export const POST = withAuth<Params>(
     const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
     if (!stored) throw missing();
     const { model, warnings, result, inputHash } = await valueStoredCase(stored);
-    const run = await recordValuationRun(db, {
-      orgId: member.orgId,
-      caseId: stored.id,
-      caseVersion: stored.version,
-      input: model,
-      inputHash,
-      result,
-      engineVersion: result.engineVersion,
-      createdBy: member.userId,
-      volatilitySource: (stored.settings as CaseInput['settings']).volatilitySource ?? null,
-    });
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.value',
-      subjectType: 'case',
-      subjectId: stored.id,
-      detail: { run: run.id, name: stored.name, ...summary(result) },
+    // The change and its audit entry commit together or not at all.
+    const run = await db.transaction().execute(async (trx) => {
+      const run = await recordValuationRun(trx, {
+        orgId: member.orgId,
+        caseId: stored.id,
+        caseVersion: stored.version,
+        input: model,
+        inputHash,
+        result,
+        engineVersion: result.engineVersion,
+        createdBy: member.userId,
+        volatilitySource: (stored.settings as CaseInput['settings']).volatilitySource ?? null,
+      });
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'case.value',
+        subjectType: 'case',
+        subjectId: stored.id,
+        detail: { run: run.id, name: stored.name, ...summary(result) },
+      });
+      return run;
     });
     return NextResponse.json(
       {

@@ -27,15 +27,19 @@ export const GET = withAuth<Params>(
 
 export const POST = withAuth<Params, typeof caseInputSchema>(
   async ({ member, params, body }) => {
-    const made = await createCase(db, { orgId: member.orgId, projectId: params.projectId, createdBy: member.userId, content: body });
-    if (!made) throw new AppError('not_found', 'No such project in your organisation.');
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.create',
-      subjectType: 'case',
-      subjectId: made.id,
-      detail: { name: body.name, projectId: params.projectId },
+    // The change and its audit entry commit together or not at all.
+    const made = await db.transaction().execute(async (trx) => {
+      const made = await createCase(trx, { orgId: member.orgId, projectId: params.projectId, createdBy: member.userId, content: body });
+      if (!made) throw new AppError('not_found', 'No such project in your organisation.');
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'case.create',
+        subjectType: 'case',
+        subjectId: made.id,
+        detail: { name: body.name, projectId: params.projectId },
+      });
+      return made;
     });
     return NextResponse.json({ case: presentCase(made) }, { status: 201 });
   },

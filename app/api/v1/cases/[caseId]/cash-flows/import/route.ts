@@ -3,7 +3,7 @@ import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { findCase, saveCase } from '@/db/queries/cases';
-import { withAuth } from '@/lib/api';
+import { requireMediaType, withAuth } from '@/lib/api';
 import { presentCase } from '@/lib/case-response';
 import { analyseCashFlows, type CashFlowSchedule } from '@/lib/cash-flows';
 import { AppError } from '@/lib/errors';
@@ -17,8 +17,7 @@ export const POST = withAuth<{ caseId: string }>(
   async ({ member, params, request }) => {
     const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
     if (!stored) throw new AppError('not_found', 'No such case in your organisation.');
-    if (!(request.headers.get('content-type') ?? '').startsWith('multipart/form-data'))
-      throw new AppError('unprocessable', 'Send the workbook as a file upload (multipart/form-data, field “file”).');
+    requireMediaType(request, ['multipart/form-data']);
     if (Number(request.headers.get('content-length') ?? '0') > MAX_UPLOAD_BYTES + 64 * 1024)
       throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
     const form = await request.formData().catch(() => {
@@ -41,22 +40,26 @@ export const POST = withAuth<{ caseId: string }>(
     const version = Number(form.get('version'));
     if (!Number.isInteger(version) || version < 1)
       throw new AppError('unprocessable', 'Send the version the import was previewed on.', { version: ['Required to confirm.'] });
-    const saved = await saveCase(db, {
-      orgId: member.orgId,
-      caseId: stored.id,
-      expectedVersion: version,
-      content: { name: stored.name, cashFlows, settings: stored.settings, options: stored.options },
-    });
-    if (!saved.ok && saved.reason === 'in_review')
-      throw new AppError('conflict', 'This case is in review and cannot be edited until a reviewer returns it. Nothing was imported.');
-    if (!saved.ok) throw new AppError('conflict', 'This case was saved by someone else meanwhile; reload it and import again. Nothing was imported.');
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.import',
-      subjectType: 'case',
-      subjectId: stored.id,
-      detail: { name: stored.name, file: file.name, years: read.input.rows.length, version: saved.row.version },
+    // The change and its audit entry commit together or not at all.
+    const saved = await db.transaction().execute(async (trx) => {
+      const saved = await saveCase(trx, {
+        orgId: member.orgId,
+        caseId: stored.id,
+        expectedVersion: version,
+        content: { name: stored.name, cashFlows, settings: stored.settings, options: stored.options },
+      });
+      if (!saved.ok && saved.reason === 'in_review')
+        throw new AppError('conflict', 'This case is in review and cannot be edited until a reviewer returns it. Nothing was imported.');
+      if (!saved.ok) throw new AppError('conflict', 'This case was saved by someone else meanwhile; reload it and import again. Nothing was imported.');
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'case.import',
+        subjectType: 'case',
+        subjectId: stored.id,
+        detail: { name: stored.name, file: file.name, years: read.input.rows.length, version: saved.row.version },
+      });
+      return saved;
     });
     return NextResponse.json({ case: presentCase(saved.row) });
   },

@@ -1,3 +1,8 @@
+/**
+ * The skeleton shown while a workspace page loads. Each segment that may show it re-exports it as
+ * its loading.tsx; the project and case pages do not, because a loading boundary above a page
+ * starts the answer (status 200) before the page can say "not found" (404).
+ */
 export default function Loading() {
   return (
     <div role="status" aria-live="polite" className="animate-pulse">

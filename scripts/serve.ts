@@ -1,0 +1,37 @@
+/**
+ * The production server: Next.js behind a few lines of node:http, so the app knows the address a
+ * request really came from (lib/client-address.ts) and where it listens. `next start` cannot
+ * tell either: it copies a client-supplied X-Forwarded-For through unchanged.
+ *
+ * Bundled to .data/serve.mjs by scripts/build-engine-worker.sh; run as
+ *   HOST=127.0.0.1 PORT=3000 node .data/serve.mjs
+ */
+import { createServer } from 'node:http';
+import next from 'next';
+import { CLIENT_ADDRESS_HEADER, clientAddress, parseTrustedProxies } from '@/lib/client-address';
+import { LISTEN_HOST_VARIABLE } from '@/lib/listen-host';
+
+const host = process.env.HOST || '127.0.0.1';
+const port = Number(process.env.PORT || 3000);
+const proxies = parseTrustedProxies(process.env.TRUSTED_PROXIES);
+// The app reads where it listens from here (the inbox and the secret check depend on it).
+process.env[LISTEN_HOST_VARIABLE] = host;
+
+const app = next({ dev: false, dir: process.cwd(), hostname: host, port });
+await app.prepare();
+const handle = app.getRequestHandler();
+
+const server = createServer((request, response) => {
+  request.headers[CLIENT_ADDRESS_HEADER] = clientAddress(request.socket.remoteAddress, request.headers['x-forwarded-for'], proxies);
+  void handle(request, response);
+});
+server.listen(port, host, () => console.log(`› Leeway is listening on http://${host.includes(':') ? `[${host}]` : host}:${port}`));
+
+// SIGTERM and Ctrl-C: stop taking connections, let the ones in flight finish, and never hang.
+function stop() {
+  server.close(() => process.exit(0));
+  server.closeIdleConnections();
+  setTimeout(() => process.exit(0), 8_000).unref();
+}
+process.once('SIGTERM', stop);
+process.once('SIGINT', stop);
