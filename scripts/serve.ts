@@ -21,7 +21,22 @@ const app = next({ dev: false, dir: process.cwd(), hostname: host, port });
 await app.prepare();
 const handle = app.getRequestHandler();
 
+/** False for a path whose percent-encoding is malformed or not UTF-8, which Next.js would answer with a 500. */
+function decodablePath(url: string | undefined): boolean {
+  try {
+    decodeURIComponent((url ?? '/').split('?')[0]!);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
 const server = createServer((request, response) => {
+  if (!decodablePath(request.url)) {
+    response.writeHead(400, { 'content-type': 'application/json', 'cache-control': 'no-store' });
+    response.end(JSON.stringify({ error: { code: 'bad_request', message: 'The address is not valid percent-encoded UTF-8.' } }));
+    return;
+  }
   request.headers[CLIENT_ADDRESS_HEADER] = clientAddress(request.socket.remoteAddress, request.headers['x-forwarded-for'], proxies);
   void handle(request, response);
 });
