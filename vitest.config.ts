@@ -35,6 +35,8 @@ export default defineConfig({
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 180_000,
+          // expect.poll's 1 s default failed once on a loaded two-core CI machine.
+          expect: { poll: { timeout: 15_000, interval: 100 } },
           globalSetup: ['tests/e2e/global-setup.ts'],
           env: { PG_DATABASE: process.env.PG_TEST_DATABASE ?? 'leeway_test' },
         },
