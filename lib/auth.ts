@@ -14,9 +14,11 @@ import { APIError, createAuthMiddleware, isAPIError } from 'better-auth/api';
 import { nextCookies } from 'better-auth/next-js';
 import { organization } from 'better-auth/plugins';
 import { db, pool } from '@/db';
+import { INVITATION_LIFETIME_MS } from '@/db/queries/members';
 import { CLIENT_ADDRESS_HEADER } from './client-address';
 import { COMMON_PASSWORD_MESSAGE, isCommonPassword } from './common-passwords';
 import { authSecret, env } from './env';
+import { sendInvitationMail } from './invitation-mail';
 import { linkMail, sendMail } from './mail';
 import { ac, roles } from './permissions';
 import { clearFailures, recordFailure, secondsUntilAllowed } from './sign-in-backoff';
@@ -120,20 +122,10 @@ export const auth = betterAuth({
       creatorRole: 'admin',
       // The app's rule: one organisation per user, created from the welcome page by someone without one.
       allowUserToCreateOrganization: async (user) => !(await db.selectFrom('member').select('id').where('userId', '=', user.id).executeTakeFirst()),
-      invitationExpiresIn: 7 * DAY,
+      invitationExpiresIn: INVITATION_LIFETIME_MS / 1000,
       cancelPendingInvitationsOnReInvite: true,
-      sendInvitationEmail: async ({ id, email, organization: org, inviter, role }) => {
-        const url = `${env.APP_URL}/accept-invitation/${id}`;
-        await sendMail(
-          linkMail(
-            email,
-            `Join ${org.name} on Leeway`,
-            `${inviter.user.name} invited you to join ${org.name} on Leeway as ${role}.`,
-            'Accept the invitation',
-            url,
-          ),
-        );
-      },
+      sendInvitationEmail: async ({ id, email, organization: org, inviter, role }) =>
+        sendInvitationMail({ invitationId: id, email, organisationName: org.name, inviterName: inviter.user.name, role }),
     }),
     nextCookies(),
   ],

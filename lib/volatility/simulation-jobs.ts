@@ -9,6 +9,7 @@ import 'server-only';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import { db } from '@/db';
+import { recordAudit, type AuditEvent } from '@/db/queries/audit';
 import type { CashFlowSchedule } from '../cash-flows';
 import type { SimulationResult, SimulationSpec } from './monte-carlo';
 
@@ -37,12 +38,18 @@ export async function startSimulation(args: {
   userId: string;
   schedule: CashFlowSchedule;
   spec: SimulationSpec;
+  /** The audit entry for the new run, written in the transaction that stores it. */
+  audit: (simulationId: string) => AuditEvent;
 }): Promise<string> {
-  const row = await db
-    .insertInto('volatility_simulation')
-    .values({ organization_id: args.orgId, case_id: args.caseId, spec: JSON.stringify(args.spec), created_by: args.userId })
-    .returning('id')
-    .executeTakeFirstOrThrow();
+  const row = await db.transaction().execute(async (trx) => {
+    const row = await trx
+      .insertInto('volatility_simulation')
+      .values({ organization_id: args.orgId, case_id: args.caseId, spec: JSON.stringify(args.spec), created_by: args.userId })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    await recordAudit(trx, args.audit(row.id));
+    return row;
+  });
   const worker = new Worker(workerFile(), { workerData: { schedule: args.schedule, spec: args.spec } });
   running.set(row.id, worker);
   worker.on('message', async (message: { progress?: number; done?: SimulationResult; failed?: string }) => {

@@ -3,8 +3,10 @@
 import { headers } from 'next/headers';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
+import { addOrganisation, findFirstMembership } from '@/db/queries/members';
 import { auth } from '@/lib/auth';
 import { currentViewer } from '@/lib/dal';
+import { AppError } from '@/lib/errors';
 import { organisationCreateSchema } from '@/lib/validations/auth';
 import type { ActionResult } from '../settings/actions';
 
@@ -26,25 +28,24 @@ export async function createOrganisationAction(input: unknown): Promise<ActionRe
   const parsed = organisationCreateSchema.safeParse(input);
   if (!parsed.success) return { ok: false, message: 'Some fields are not valid.', fields: parsed.error.flatten().fieldErrors as Record<string, string[]> };
   try {
-    const h = await headers();
-    const org = await auth.api.createOrganization({ headers: h, body: { name: parsed.data.name, slug: slugFor(parsed.data.name) } });
-    if (!org) return { ok: false, message: 'The organisation could not be created.' };
-    await db
-      .insertInto('organization_settings')
-      .values({ organization_id: org.id })
-      .onConflict((c) => c.doNothing())
-      .execute();
-    await auth.api.setActiveOrganization({ headers: h, body: { organizationId: org.id } });
-    await recordAudit(db, {
-      orgId: org.id,
-      actorId: viewer.userId,
-      action: 'organization.create',
-      subjectType: 'organization',
-      subjectId: org.id,
-      detail: { name: parsed.data.name },
+    // The organisation, its first admin, its settings and the audit entry commit together.
+    const org = await db.transaction().execute(async (trx) => {
+      if (await findFirstMembership(trx, { userId: viewer.userId })) throw new AppError('conflict', 'You already belong to an organisation.');
+      const made = await addOrganisation(trx, { name: parsed.data.name, slug: slugFor(parsed.data.name), creatorId: viewer.userId });
+      await recordAudit(trx, {
+        orgId: made.id,
+        actorId: viewer.userId,
+        action: 'organization.create',
+        subjectType: 'organization',
+        subjectId: made.id,
+        detail: { name: parsed.data.name },
+      });
+      return made;
     });
+    await auth.api.setActiveOrganization({ headers: await headers(), body: { organizationId: org.id } });
     return { ok: true, message: 'Organisation created.' };
   } catch (error) {
+    if (error instanceof AppError) return { ok: false, message: error.message };
     console.error('[leeway] createOrganisationAction', error);
     return { ok: false, message: 'The organisation could not be created. Please try again.' };
   }

@@ -1,12 +1,12 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
-import { headers } from 'next/headers';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
-import { auth } from '@/lib/auth';
+import { addInvitation, cancelPendingInvitation, deleteMember, findMemberInOrganisation, isMemberByEmail, setMemberRole } from '@/db/queries/members';
 import { requirePermission } from '@/lib/dal';
 import { AppError } from '@/lib/errors';
+import { sendInvitationMail } from '@/lib/invitation-mail';
 import { changeRoleSchema, inviteSchema } from '@/lib/validations/auth';
 import type { ActionResult } from '../actions';
 
@@ -24,16 +24,27 @@ export async function inviteMemberAction(input: unknown): Promise<ActionResult> 
     const parsed = inviteSchema.safeParse(input);
     if (!parsed.success) return { ok: false, message: 'Some fields are not valid.', fields: parsed.error.flatten().fieldErrors as Record<string, string[]> };
     const { email, role } = parsed.data;
-    await auth.api.createInvitation({ headers: await headers(), body: { email, role: role as 'viewer', organizationId: member.orgId, resend: true } });
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'member.invite',
-      subjectType: 'invitation',
-      subjectId: email,
-      detail: { email, role },
+    if (await isMemberByEmail(db, { orgId: member.orgId, email })) throw new AppError('conflict', `${email} is already a member of this organisation.`);
+    // The invitation and its audit entry commit together; the e-mail goes once both are stored.
+    const invitation = await db.transaction().execute(async (trx) => {
+      const made = await addInvitation(trx, { orgId: member.orgId, email, role, inviterId: member.userId });
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'member.invite',
+        subjectType: 'invitation',
+        subjectId: made.id,
+        detail: { email, role },
+      });
+      return made;
     });
     revalidatePath('/settings/members');
+    try {
+      await sendInvitationMail({ invitationId: invitation.id, email: invitation.email, organisationName: member.orgName, inviterName: member.name, role });
+    } catch (error) {
+      console.error('[leeway] invitation mail', error);
+      return { ok: false, message: `The invitation to ${email} is saved, but its e-mail could not be sent. Send it again in a moment.` };
+    }
     return { ok: true, message: `Invitation sent to ${email}.` };
   } catch (error) {
     return failure(error, 'The invitation could not be sent. Please try again.');
@@ -45,25 +56,19 @@ export async function changeRoleAction(input: unknown): Promise<ActionResult> {
     const member = await requirePermission({ member: ['update'] });
     const parsed = changeRoleSchema.safeParse(input);
     if (!parsed.success) return { ok: false, message: 'Choose a valid role.' };
-    const target = await db
-      .selectFrom('member')
-      .select(['id', 'userId', 'role'])
-      .where('id', '=', parsed.data.memberId)
-      .where('organizationId', '=', member.orgId)
-      .executeTakeFirst();
-    if (!target) throw new AppError('not_found', 'That member is not in your organisation.');
-    if (target.userId === member.userId) throw new AppError('forbidden', 'You cannot change your own role; ask another admin.');
-    await auth.api.updateMemberRole({
-      headers: await headers(),
-      body: { memberId: target.id, role: parsed.data.role as 'viewer', organizationId: member.orgId },
-    });
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'member.role_change',
-      subjectType: 'member',
-      subjectId: target.id,
-      detail: { from: target.role, to: parsed.data.role },
+    await db.transaction().execute(async (trx) => {
+      const target = await findMemberInOrganisation(trx, { orgId: member.orgId, memberId: parsed.data.memberId });
+      if (!target) throw new AppError('not_found', 'That member is not in your organisation.');
+      if (target.userId === member.userId) throw new AppError('forbidden', 'You cannot change your own role; ask another admin.');
+      await setMemberRole(trx, { orgId: member.orgId, memberId: target.id, role: parsed.data.role });
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'member.role_change',
+        subjectType: 'member',
+        subjectId: target.id,
+        detail: { from: target.role, to: parsed.data.role },
+      });
     });
     revalidatePath('/settings/members');
     return { ok: true, message: 'Role changed.' };
@@ -75,16 +80,13 @@ export async function changeRoleAction(input: unknown): Promise<ActionResult> {
 export async function removeMemberAction(memberId: string): Promise<ActionResult> {
   try {
     const member = await requirePermission({ member: ['delete'] });
-    const target = await db
-      .selectFrom('member')
-      .select(['id', 'userId'])
-      .where('id', '=', String(memberId))
-      .where('organizationId', '=', member.orgId)
-      .executeTakeFirst();
-    if (!target) throw new AppError('not_found', 'That member is not in your organisation.');
-    if (target.userId === member.userId) throw new AppError('forbidden', 'You cannot remove yourself; ask another admin.');
-    await auth.api.removeMember({ headers: await headers(), body: { memberIdOrEmail: target.id, organizationId: member.orgId } });
-    await recordAudit(db, { orgId: member.orgId, actorId: member.userId, action: 'member.remove', subjectType: 'member', subjectId: target.id });
+    await db.transaction().execute(async (trx) => {
+      const target = await findMemberInOrganisation(trx, { orgId: member.orgId, memberId: String(memberId) });
+      if (!target) throw new AppError('not_found', 'That member is not in your organisation.');
+      if (target.userId === member.userId) throw new AppError('forbidden', 'You cannot remove yourself; ask another admin.');
+      await deleteMember(trx, { orgId: member.orgId, memberId: target.id });
+      await recordAudit(trx, { orgId: member.orgId, actorId: member.userId, action: 'member.remove', subjectType: 'member', subjectId: target.id });
+    });
     revalidatePath('/settings/members');
     return { ok: true, message: 'Member removed.' };
   } catch (error) {
@@ -95,20 +97,16 @@ export async function removeMemberAction(memberId: string): Promise<ActionResult
 export async function cancelInvitationAction(invitationId: string): Promise<ActionResult> {
   try {
     const member = await requirePermission({ invitation: ['cancel'] });
-    const invitation = await db
-      .selectFrom('invitation')
-      .select('id')
-      .where('id', '=', String(invitationId))
-      .where('organizationId', '=', member.orgId)
-      .executeTakeFirst();
-    if (!invitation) throw new AppError('not_found', 'That invitation is not in your organisation.');
-    await auth.api.cancelInvitation({ headers: await headers(), body: { invitationId: invitation.id } });
-    await recordAudit(db, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'member.invitation_cancel',
-      subjectType: 'invitation',
-      subjectId: invitation.id,
+    await db.transaction().execute(async (trx) => {
+      const cancelled = await cancelPendingInvitation(trx, { orgId: member.orgId, invitationId: String(invitationId) });
+      if (!cancelled) throw new AppError('not_found', 'That invitation is not pending in your organisation.');
+      await recordAudit(trx, {
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'member.invitation_cancel',
+        subjectType: 'invitation',
+        subjectId: cancelled.id,
+      });
     });
     revalidatePath('/settings/members');
     return { ok: true, message: 'Invitation cancelled.' };

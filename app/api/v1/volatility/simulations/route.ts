@@ -2,7 +2,6 @@
 import { NextResponse } from 'next/server';
 import { z } from 'zod';
 import { db } from '@/db';
-import { recordAudit } from '@/db/queries/audit';
 import { findCase } from '@/db/queries/cases';
 import { withAuth } from '@/lib/api';
 import type { CashFlowSchedule } from '@/lib/cash-flows';
@@ -24,14 +23,20 @@ export const POST = withAuth(
       throw new AppError('unprocessable', 'The cash flows need year 0 and at least two more years for a Monte Carlo estimate.', {
         caseId: ['Add years to the cash flows.'],
       });
-    const id = await startSimulation({ orgId: member.orgId, caseId: found.id, userId: member.userId, schedule, spec: body.spec });
-    await recordAudit(db, {
+    const id = await startSimulation({
       orgId: member.orgId,
-      actorId: member.userId,
-      action: 'volatility.simulate',
-      subjectType: 'case',
-      subjectId: found.id,
-      detail: { name: found.name, simulation: id, paths: body.spec.paths, seed: body.spec.seed },
+      caseId: found.id,
+      userId: member.userId,
+      schedule,
+      spec: body.spec,
+      audit: (simulation) => ({
+        orgId: member.orgId,
+        actorId: member.userId,
+        action: 'volatility.simulate',
+        subjectType: 'case',
+        subjectId: found.id,
+        detail: { name: found.name, simulation, paths: body.spec.paths, seed: body.spec.seed },
+      }),
     });
     return NextResponse.json({ id, status: 'running' }, { status: 202 });
   },

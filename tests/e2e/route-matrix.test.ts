@@ -1,0 +1,258 @@
+/**
+ * Every API route × every role × another organisation × no session × a foreign Origin, over
+ * HTTP. The table below is the specification, written from PRODUCT.md's roles (analysts build
+ * and submit, reviewers comment and decide, executives read, admins run the organisation), not
+ * read from lib/permissions.ts; a first test fails when a route file exists that the table
+ * does not name, so a new route cannot skip this matrix.
+ *
+ * Nothing is changed: the wrong role is refused before any work (403); an allowed role on a
+ * write is sent a body that fails validation (a 4xx that proves the role got past the check);
+ * the other organisation's member takes, in turn, a role the route allows, so only the
+ * organisation differs (404).
+ */
+import { randomUUID } from 'node:crypto';
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { join, relative, sep } from 'node:path';
+import type { APIRequestContext, BrowserContext } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { db } from '@/db';
+import { closeBrowser, newContext, signedInPage } from './support/browser';
+import { demoCase } from './support/demo';
+
+// A valid case (invented figures), sent only where the server must refuse it before reading it.
+const caseBody = {
+  name: 'Not yours',
+  cashFlows: { wacc: 0.085, rows: [0, 1, 2].map((year) => ({ year, revenue: 90, operatingCost: 40, capex: year === 0 ? 150 : 0, tax: 6, workingCapital: 0 })) },
+  settings: { volatility: 0.35, riskFreeRate: 0.03, steps: 30 },
+  options: [],
+};
+
+type Role = 'admin' | 'analyst' | 'reviewer' | 'viewer';
+type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
+const ALL: Role[] = ['admin', 'analyst', 'reviewer', 'viewer'];
+const BUILDERS: Role[] = ['admin', 'analyst'];
+
+/**
+ * [method, path with :placeholders, roles allowed, probe]. The probe is what an allowed role
+ * sends to a write: a body that fails validation, and the status expected for it; `valid` is a
+ * body that passes validation, sent only by the other organisation (JSON bodies are validated
+ * before the record is looked up, so only a valid one reaches the lookup). Writes with
+ * no probe (a delete, a submission, an approval, a valuation that is stored) are exercised by
+ * the allowed role in their own tests (workspace-api, review-workflow, attachments, monte-carlo).
+ */
+type Probe = { json?: unknown; text?: string; status: number; valid?: unknown };
+const matrix: [Method, string, Role[], Probe?][] = [
+  ['GET', '/api/v1/projects', ALL],
+  ['POST', '/api/v1/projects', BUILDERS, { json: { name: 5 }, status: 422 }],
+  ['GET', '/api/v1/projects/:project', ALL],
+  ['PATCH', '/api/v1/projects/:project', BUILDERS, { json: { name: 5 }, status: 422, valid: { name: 'Taken' } }],
+  ['DELETE', '/api/v1/projects/:project', BUILDERS],
+  ['GET', '/api/v1/projects/:project/activity', ALL],
+  ['GET', '/api/v1/projects/:project/cases', ALL],
+  ['POST', '/api/v1/projects/:project/cases', BUILDERS, { json: { name: 5 }, status: 422, valid: caseBody }],
+  ['GET', '/api/v1/cases', ALL],
+  ['GET', '/api/v1/cases/:case', ALL],
+  ['PATCH', '/api/v1/cases/:case', BUILDERS, { json: { name: 5 }, status: 422, valid: { ...caseBody, version: 1 } }],
+  ['DELETE', '/api/v1/cases/:case', BUILDERS],
+  ['GET', '/api/v1/cases/:case/export.xlsx', ALL],
+  ['GET', '/api/v1/cases/:case/snapshots', ALL],
+  ['POST', '/api/v1/cases/:case/cash-flows/import', BUILDERS, { text: 'not a workbook', status: 415 }],
+  ['POST', '/api/v1/cases/:case/submit', ['analyst']],
+  ['POST', '/api/v1/cases/:case/duplicate', BUILDERS, { json: { name: 5 }, status: 422, valid: { name: 'Copy' } }],
+  ['POST', '/api/v1/cases/:case/approve', ['reviewer']],
+  ['POST', '/api/v1/cases/:case/return', ['reviewer'], { json: { reason: 5 }, status: 422, valid: { reason: 'Not yours to return.' } }],
+  ['GET', '/api/v1/cases/:case/board-pack', ALL],
+  ['POST', '/api/v1/cases/:case/valuations', BUILDERS],
+  ['GET', '/api/v1/cases/:case/valuations', ALL],
+  ['GET', '/api/v1/cases/:case/attachments', ALL],
+  ['POST', '/api/v1/cases/:case/attachments', BUILDERS, { text: 'not multipart', status: 415 }],
+  ['GET', '/api/v1/cases/:case/comments', ALL],
+  ['POST', '/api/v1/cases/:case/comments', ['admin', 'analyst', 'reviewer'], { json: { body: 5 }, status: 422, valid: { section: 'general', body: 'Hello' } }],
+  ['GET', '/api/v1/reviews', ['admin', 'analyst', 'reviewer']],
+  ['GET', '/api/v1/templates/cash-flows.xlsx', ALL],
+  ['GET', '/api/v1/settings', ALL],
+  ['PATCH', '/api/v1/settings', ['admin'], { json: { currency: 5 }, status: 422 }],
+  ['GET', '/api/v1/compare?cases=:case,:secondCase', ALL],
+  ['GET', '/api/v1/compare.xlsx?cases=:case,:secondCase', ALL],
+  ['POST', '/api/v1/valuations', ALL, { json: { project: 5 }, status: 422 }],
+  ['GET', '/api/v1/attachments/:attachment', ALL],
+  ['DELETE', '/api/v1/attachments/:attachment', BUILDERS],
+  ['POST', '/api/v1/volatility/history', BUILDERS, { text: 'not multipart', status: 415 }],
+  ['POST', '/api/v1/volatility/simulations', BUILDERS, { json: { caseId: 5 }, status: 422 }],
+  ['GET', '/api/v1/volatility/simulations/:simulation', ALL],
+  ['DELETE', '/api/v1/volatility/simulations/:simulation', BUILDERS],
+  ['GET', '/api/v1/organisations/:organisation/settings', ALL],
+];
+
+const emails: Record<Role, string> = {
+  admin: 'admin@kestrelbay.example',
+  analyst: 'analyst@kestrelbay.example',
+  reviewer: 'reviewer@kestrelbay.example',
+  viewer: 'executive@kestrelbay.example',
+};
+
+const contexts: BrowserContext[] = [];
+const as = {} as Record<Role | 'outsider' | 'anonymous', APIRequestContext>;
+const ids: Record<string, string> = {};
+let outsiderMemberId = '';
+
+/** The route files on disk, as "METHOD /api/v1/…" with each [param] written :param. */
+function routesOnDisk(): string[] {
+  const root = join(process.cwd(), 'app', 'api', 'v1');
+  const found: string[] = [];
+  const walk = (dir: string) => {
+    for (const name of readdirSync(dir)) {
+      const path = join(dir, name);
+      if (statSync(path).isDirectory()) walk(path);
+      else if (name === 'route.ts') {
+        const url = '/api/v1/' + relative(root, dir).split(sep).join('/');
+        for (const [, method] of readFileSync(path, 'utf8').matchAll(/export const (GET|POST|PATCH|PUT|DELETE)\b/g))
+          found.push(`${method} ${url.replace(/\/$/, '').replace(/\[(\w+)\]/g, ':$1')}`);
+      }
+    }
+  };
+  walk(root);
+  return found.sort();
+}
+
+/** The matrix's path written the way the route files name their parameters. */
+const filePlaceholders: Record<string, string> = {
+  project: 'projectId',
+  case: 'caseId',
+  attachment: 'attachmentId',
+  simulation: 'simulationId',
+  organisation: 'orgId',
+};
+
+const fill = (path: string) => path.replace(/:(\w+)/g, (_, key: string) => ids[key]!);
+
+async function send(who: APIRequestContext, method: Method, path: string, probe?: Probe, headers: Record<string, string> = {}) {
+  const body =
+    probe?.json !== undefined
+      ? { data: probe.json }
+      : probe?.text !== undefined
+        ? { data: probe.text, headers: { 'content-type': 'text/plain', ...headers } }
+        : {};
+  return who.fetch(fill(path), { method, headers, ...body, timeout: 60_000 });
+}
+
+beforeAll(async () => {
+  for (const role of ALL) {
+    const signed = await signedInPage(emails[role]);
+    contexts.push(signed.context);
+    as[role] = signed.page.request;
+  }
+  const outsider = await signedInPage('owner@harrowfen.example');
+  contexts.push(outsider.context);
+  as.outsider = outsider.page.request;
+  const anonymous = await newContext();
+  contexts.push(anonymous);
+  as.anonymous = anonymous.request;
+
+  // The approved demo case, so its board pack exists; an attachment and a finished simulation on it.
+  const approved = await demoCase('Phased bio-resin plant', 'Base case');
+  ids.case = approved.caseId;
+  ids.project = approved.projectId;
+  ids.secondCase = (await demoCase('Phased bio-resin plant', 'Volatile demand')).caseId;
+  const org = await db.selectFrom('organization').select('id').where('slug', '=', 'kestrel-bay-materials').executeTakeFirstOrThrow();
+  ids.organisation = org.id;
+  const data = Buffer.from('date,value\n2026-01-01,1\n');
+  ids.attachment = (
+    await db
+      .insertInto('attachment')
+      .values({
+        id: randomUUID(),
+        organization_id: org.id,
+        case_id: ids.case,
+        filename: 'matrix.csv',
+        kind: 'csv',
+        size: data.length,
+        sha256: 'matrix',
+        data,
+        uploaded_by: null,
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow()
+  ).id;
+  ids.simulation = (
+    await db
+      .insertInto('volatility_simulation')
+      .values({
+        organization_id: org.id,
+        case_id: ids.case,
+        spec: JSON.stringify({}),
+        status: 'cancelled',
+        created_at: new Date(),
+        finished_at: new Date(),
+        error: null,
+        created_by: null,
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow()
+  ).id;
+  outsiderMemberId = (
+    await db
+      .selectFrom('member')
+      .innerJoin('user', 'user.id', 'member.userId')
+      .select('member.id')
+      .where('user.email', '=', 'owner@harrowfen.example')
+      .executeTakeFirstOrThrow()
+  ).id;
+});
+
+afterAll(async () => {
+  await db.deleteFrom('attachment').where('id', '=', ids.attachment!).execute();
+  await db.deleteFrom('volatility_simulation').where('id', '=', ids.simulation!).execute();
+  await db.updateTable('member').set({ role: 'admin' }).where('id', '=', outsiderMemberId).execute();
+  for (const c of contexts) await c.close();
+  await closeBrowser();
+  await db.destroy();
+});
+
+describe('the route × role × organisation matrix', () => {
+  it('names every route file under app/api/v1', () => {
+    const named = matrix.map(([method, path]) => `${method} ${path.split('?')[0]!.replace(/:(\w+)/g, (_, key: string) => `:${filePlaceholders[key]}`)}`).sort();
+    expect(named).toEqual(routesOnDisk());
+  });
+
+  it('answers 401 to every route without a session', async () => {
+    const got: Record<string, number> = {};
+    for (const [method, path, , probe] of matrix) got[`${method} ${path}`] = (await send(as.anonymous, method, path, probe)).status();
+    expect(Object.entries(got).filter(([, status]) => status !== 401)).toEqual([]);
+  });
+
+  it('answers 403 to every write from a foreign Origin, even for an allowed role', async () => {
+    const got: Record<string, number> = {};
+    for (const [method, path, allowed, probe] of matrix) {
+      if (method === 'GET') continue;
+      got[`${method} ${path}`] = (await send(as[allowed[0]!], method, path, probe, { origin: 'http://127.0.0.1:9' })).status();
+    }
+    expect(Object.entries(got).filter(([, status]) => status !== 403)).toEqual([]);
+  });
+
+  it('refuses every role the route does not allow with 403, and lets every allowed role past the check', async () => {
+    const wrong: string[] = [];
+    for (const [method, path, allowed, probe] of matrix) {
+      for (const role of ALL) {
+        const isAllowed = allowed.includes(role);
+        if (isAllowed && method !== 'GET' && !probe) continue;
+        const status = (await send(as[role], method, path, probe)).status();
+        const expected = !isAllowed ? 403 : method === 'GET' ? 200 : probe!.status;
+        if (status !== expected) wrong.push(`${role} ${method} ${path}: ${status}, expected ${expected}`);
+      }
+    }
+    expect(wrong).toEqual([]);
+  });
+
+  it("answers 404 to another organisation's member holding a role the route allows, on every route that names a record", async () => {
+    const wrong: string[] = [];
+    for (const [method, path, allowed, probe] of matrix) {
+      if (!path.includes(':')) continue;
+      await db.updateTable('member').set({ role: allowed[0]! }).where('id', '=', outsiderMemberId).execute();
+      const body = probe?.valid !== undefined ? { ...probe, json: probe.valid } : probe;
+      const status = (await send(as.outsider, method, path, body)).status();
+      if (status !== 404) wrong.push(`${allowed[0]} ${method} ${path}: ${status}`);
+    }
+    expect(wrong).toEqual([]);
+  });
+});
