@@ -42,6 +42,10 @@ function checkFieldsInTime(model: ProjectModel) {
   (model.underlying.payouts ?? []).forEach((p, k) => {
     if (p.at > h) refuse(`underlying.payouts[${k}].at`, `must be ≤ horizon (${h}), got ${p.at}`);
   });
+  (model.underlying.payoutPeriods ?? []).forEach((p, k) => {
+    if (!(p.to > p.from)) refuse(`underlying.payoutPeriods[${k}].to`, `must be later than its from (${p.from}), got ${p.to}`);
+    if (p.to > h) refuse(`underlying.payoutPeriods[${k}].to`, `must be ≤ horizon (${h}), got ${p.to}`);
+  });
   (model.switches ?? []).forEach((sw, k) => {
     checkWindow(sw.window, h, `switches[${k}].window`);
     checkCost(sw.cost, `switches[${k}].cost`);

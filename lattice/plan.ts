@@ -33,9 +33,9 @@ export interface LatticePlan {
   /** (u/d)^j for j = 0..N, so V(i, j) = lowest[i]·rise[j] without Math.pow. */
   rise: Float64Array;
   /**
-   * Fraction of V left in the project after the payouts at each step: e^{−δΔt}·(1 − f_i). The
-   * continuous yield only tilts p (the tree grows at r − δ); a discrete payout f_i also moves
-   * the next step's nodes down by (1 − f_i).
+   * Fraction of V left in the project after the payouts of step i (from t_i to t_{i+1}):
+   * e^{−δΔt} times the step's share of period payouts and lumps. The continuous yield only tilts
+   * p (the tree grows at r − δ); the rest moves the next step's nodes down by that share.
    */
   kept: Float64Array;
   modeCount: number;
@@ -66,10 +66,23 @@ export function buildPlan(model: ProjectModel, compiled: CompiledModel, steps = 
   const width = steps + 1;
 
   const retained = new Float64Array(width).fill(1);
+  // A lump paid on a date belongs to the step that ends there (docs/engine.md §4): the mode
+  // held during that step receives it and a decision on the date sees the value after it. A
+  // lump at t = 0 is paid in the first step.
   (model.underlying.payouts ?? []).forEach((payout, k) => {
     const mask = openSteps({ kind: 'european', at: payout.at }, dt, steps, `underlying.payouts[${k}]`, snaps);
-    const i = mask.indexOf(1);
+    const i = Math.max(0, mask.indexOf(1) - 1);
     if (i < steps) retained[i] = retained[i]! * (1 - payout.fraction);
+  });
+  // A payout earned over a period is paid as a constant yield over it, δ = −ln(1 − f)/length,
+  // so the value left after the period is the same as after a lump of f at its end, and no
+  // date inside or at the end of the period collects the period's cash at a new scale.
+  (model.underlying.payoutPeriods ?? []).forEach((period) => {
+    const yieldRate = -Math.log(1 - period.fraction) / (period.to - period.from);
+    for (let i = Math.floor(period.from / dt); i < steps && i * dt < period.to; i++) {
+      const overlap = Math.min(period.to, (i + 1) * dt) - Math.max(period.from, i * dt);
+      if (overlap > 0) retained[i] = retained[i]! * Math.exp(-yieldRate * overlap);
+    }
   });
   const kept = retained.map((x) => x * Math.exp(-delta * dt));
   kept[steps] = 1;

@@ -102,6 +102,11 @@ export const projectModelSchema = z.strictObject({
       .array(z.strictObject({ at: years, fraction: z.number().min(0).lt(1) }))
       .max(MAX_STEPS)
       .optional(),
+    /** Payouts earned over a period, paid evenly as a yield (a DCF schedule's years). */
+    payoutPeriods: z
+      .array(z.strictObject({ from: years, to: years, fraction: z.number().min(0).lt(1) }))
+      .max(MAX_STEPS)
+      .optional(),
   }),
   riskFreeRate: z.number().gt(-1).lt(1),
   horizon: z.number().gt(0).max(100),

@@ -19,7 +19,12 @@ export function caseToModel(input: CaseInput): { model: ProjectModel; warnings: 
   const horizon = Math.max(1, parsed.cashFlows.rows.at(-1)!.year);
   const carriesOutlay = parsed.options.some((o) => o.type === 'defer' || o.type === 'stage');
   const model: ProjectModel = {
-    underlying: { value: analysis.underlyingValue, volatility: parsed.settings.volatility, payouts: analysis.payouts.filter((p) => p.at < horizon) },
+    underlying: {
+      value: analysis.underlyingValue,
+      volatility: parsed.settings.volatility,
+      // Each year's cash is earned during the year: a yield over (t − 1, t], never a lump on the date.
+      payoutPeriods: analysis.payouts.map((p) => ({ from: p.at - 1, to: p.at, fraction: p.fraction })),
+    },
     riskFreeRate: parsed.settings.riskFreeRate,
     horizon,
     steps: parsed.settings.steps,

@@ -53,6 +53,7 @@ export interface CashFlowAnalysis {
   underlyingValue: number;
   investment: number;
   staticNpv: number;
+  /** Per year t ≥ 1, the share of the value still to come that the year (t − 1, t] pays out. */
   payouts: { at: number; fraction: number }[];
   warnings: string[];
 }
@@ -72,7 +73,10 @@ export function analyseCashFlows(input: CashFlowSchedule): CashFlowAnalysis {
   const staticNpv = analysed.reduce((sum, r) => sum + r.presentValue, 0);
 
   const payouts: CashFlowAnalysis['payouts'] = [];
-  for (let k = 0; k < analysed.length - 1; k++) {
+  // Year t's operating cash is the share f_t of the value still to come that the year pays
+  // out; the lattice spreads it over the year (t − 1, t] as a yield (docs/engine.md §4). The
+  // last year pays out (almost) everything left: the schedule carries no value beyond it.
+  for (let k = 0; k < analysed.length; k++) {
     const r = analysed[k]!;
     if (r.year === 0) continue;
     // Value at year t of the operating cash from t on, in year-t money.

@@ -89,14 +89,22 @@ describe('interacting rights worked by hand', () => {
   });
 
   it('mothball and restart around a discrete payout, two steps', () => {
-    // The project pays 25 % of its value at t = 1 (so t = 2 nodes are 117.1875, 75, 48).
-    // Mothballing costs 2, earns savings of 8 a year and forgoes the project's payouts;
-    // restarting costs 4. Operating for good is worth exactly V0 = 100.
-    // t = 1, mothballed: restarting gives the operating continuation (which includes the 25 %
-    //        payout at t = 1) minus 4: 125 − 4 = 121 and 80 − 4 = 76, better than staying
-    //        mothballed (97.94 and 64.19), so restart at both nodes.
-    // t = 0, operating: mothballing gives 8 + (5/9·121 + 4/9·76)/1.05 − 2 = 8 + 100 − 4/1.05 − 2
-    //        = 102.190476 > 100, so mothball for one year.
+    // The project pays 25 % of its value at t = 1. The payout belongs to the year that ends
+    // there (docs/engine.md §4): the mode held during that year receives it, and a decision at
+    // t = 1 sees the value after it: 93.75 and 60 at t = 1, so 117.1875, 75, 48 at t = 2.
+    // Mothballing costs 2, earns savings of 8 a year (received at the start of the year, as
+    // the mode's flows are) and forgoes the project's payouts; restarting costs 4. Operating
+    // for good is worth exactly V0 = 100.
+    // t = 2, mothballed: restart if V − 4 > 0 (at every node).
+    // t = 1, mothballed: staying gives 8 + (p·(1.25·V − 4) + q·(0.8·V − 4))/1.05 = 8 + V − 4/1.05
+    //        = 97.94 and 64.19 (V = 93.75, 60), better than restarting now (89.75, 56): stay.
+    // t = 1, operating: mothballing gives those less 2 = 95.94, 62.19, better than continuing
+    //        (93.75, 60): mothball, and the node also receives the payout (31.25, 20).
+    //        So W = V_before_payout + 8 − 2 − 4/1.05 at both nodes.
+    // t = 0, operating: continuing gives 100 + (8 − 2 − 4/1.05)/1.05 = 102.086168; mothballing
+    //        now forgoes the year's payout: 8 + (p·97.94 + q·64.19)/1.05 − 2 = 84.99. So wait a
+    //        year, then mothball (with the old lump-on-the-date rule it paid to mothball at
+    //        t = 0 and collect the payout anyway: 102.190476).
     const model: ProjectModel = {
       underlying: { ...base.underlying, payouts: [{ at: 1, fraction: 0.25 }] },
       riskFreeRate: base.riskFreeRate,
@@ -106,9 +114,9 @@ describe('interacting rights worked by hand', () => {
       options: [{ type: 'switch', toScale: 0, cost: 2, backCost: 4, flowPerYear: 8 }],
     };
     const r = valueProject(model, { extras: false });
-    expectClose(r.value, 100 + 8 - 2 - 4 / 1.05, { abs: 1e-9 }, { case: 'mothball + restart' });
+    expectClose(r.value, 100 + (8 - 2 - 4 / 1.05) / 1.05, { abs: 1e-9 }, { case: 'mothball + restart' });
     expectClose(r.switches[0]!.exerciseProbability, 1, { abs: 1e-12 }, {});
-    expect(r.switches[0]!.exerciseTiming).toEqual([{ t: 0, probability: 1 }]);
+    expect(r.switches[0]!.exerciseTiming).toEqual([{ t: 1, probability: expect.closeTo(1, 12) }]);
   });
 });
 

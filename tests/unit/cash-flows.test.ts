@@ -24,14 +24,16 @@ describe('cash-flow arithmetic', () => {
     // V0 = 40/1.1 + 40/1.21 + 40/1.331 = 36.3636364 + 33.0578512 + 30.0525920 = 99.4740796
     // static NPV = 99.4740796 − 100 = −0.5259204
     // Payouts: V_1 = 40 + 40/1.1 + 40/1.21 = 109.421488, f_1 = 40/109.421488 = 0.365559;
-    //          V_2 = 40 + 40/1.1 = 76.363636, f_2 = 40/76.363636 = 0.523810; year 3 is the rest.
+    //          V_2 = 40 + 40/1.1 = 76.363636, f_2 = 40/76.363636 = 0.523810; year 3 pays out the
+    //          rest (f_3 = 1, held just below 1 so the lattice keeps a positive value).
     const a = analyseCashFlows({ wacc: 0.1, rows: [year(0, 0, 0, 0, 100), year(1, 80, 30, 10), year(2, 80, 30, 10), year(3, 80, 30, 10)] });
     expect(a.underlyingValue).toBeCloseTo(99.4740796, 6);
     expect(a.investment).toBeCloseTo(100, 12);
     expect(a.staticNpv).toBeCloseTo(-0.5259204, 6);
-    expect(a.payouts.map((p) => p.at)).toEqual([1, 2]);
+    expect(a.payouts.map((p) => p.at)).toEqual([1, 2, 3]);
     expect(a.payouts[0]!.fraction).toBeCloseTo(0.365559, 6);
     expect(a.payouts[1]!.fraction).toBeCloseTo(0.52381, 6);
+    expect(a.payouts[2]!.fraction).toBe(0.999999);
     expect(a.totals.freeCashFlow).toBe(20);
   });
 
@@ -67,7 +69,7 @@ describe('cash-flow arithmetic', () => {
 
   it('reports a negative operating year instead of taking a negative payout, and refuses gaps in years', () => {
     const a = analyseCashFlows({ wacc: 0.1, rows: [year(1, 10, 30, 0), year(2, 80, 30, 0), year(3, 80, 30, 0)] });
-    expect(a.payouts.map((p) => p.at)).toEqual([2]);
+    expect(a.payouts.map((p) => p.at)).toEqual([2, 3]);
     expect(a.warnings[0]).toContain('Year 1: the operating cash flow is negative');
     expect(() => analyseCashFlows({ wacc: 0.1, rows: [year(1, 1, 0, 0), year(3, 1, 0, 0)] })).toThrow('Years must follow one another: expected 2, got 3.');
   });

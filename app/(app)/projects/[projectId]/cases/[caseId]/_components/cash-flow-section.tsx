@@ -81,11 +81,11 @@ export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onCha
               Payout schedule for the lattice
             </h3>
             <p className="mb-2 text-caption text-ink-muted">
-              Each year the project pays out its operating cash flow, a share of the value still to come; the lattice lowers V by that share (the value&rsquo;s
-              leakage).
+              Each year the project pays out its operating cash flow, a share of the value still to come. The lattice spreads that share over the year, so a
+              decision on any date sees the value net of the cash already earned.
             </p>
             {analysis.payouts.length === 0 ? (
-              <p className="text-ink-soft">No payouts: the cash arrives only in the last year, or none is positive.</p>
+              <p className="text-ink-soft">No payouts: no year after year 0 has a positive operating cash flow.</p>
             ) : (
               <ul className="figures flex flex-wrap gap-2">
                 {analysis.payouts.map((p) => (
