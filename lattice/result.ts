@@ -70,6 +70,8 @@ export interface ValuationResult {
   staticNpv: Money;
   expandedNpv: Money;
   optionPremium: Money;
+  /** The mode the project is in today; `value` is its root value. */
+  startMode: string;
   modes: Record<string, Money>;
   switches: SwitchResult[];
   tree: TreeSummary;

@@ -144,6 +144,7 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
     staticNpv: pass.staticNpv,
     expandedNpv: pass.expandedNpv,
     optionPremium: pass.expandedNpv - pass.staticNpv,
+    startMode: compiled.modes[compiled.start]!.id,
     modes: pass.modes,
     switches: pass.switches,
     tree: { kind: plan.kind, steps: plan.steps, u: plan.u, d: plan.d, p: plan.p, dt: plan.dt, discount: plan.discount },

@@ -53,6 +53,8 @@ export interface CashFlowAnalysis {
   underlyingValue: number;
   investment: number;
   staticNpv: number;
+  /** The capex of each year that has some, and its discount factor at the WACC. */
+  outlays: { year: number; amount: number; discountFactor: number }[];
   /** Per year t ≥ 1, the share of the value still to come that the year (t − 1, t] pays out. */
   payouts: { at: number; fraction: number }[];
   warnings: string[];
@@ -107,6 +109,7 @@ export function analyseCashFlows(input: CashFlowSchedule): CashFlowAnalysis {
     underlyingValue,
     investment,
     staticNpv,
+    outlays: analysed.filter((r) => r.capex !== 0).map((r) => ({ year: r.year, amount: r.capex, discountFactor: r.discountFactor })),
     payouts,
     warnings,
   };

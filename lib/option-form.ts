@@ -5,6 +5,7 @@
  * (`options.1.cost.amount`), so each message appears beside its input. Percentages on the cards
  * (growth, expansion factor, fraction kept) are fractions in the templates.
  */
+import type { CashFlowAnalysis } from './cash-flows';
 import { optionTemplateSchema, type Cost, type ExerciseWindow, type OptionTemplate } from '@/lattice';
 
 export type OptionType = OptionTemplate['type'];
@@ -101,22 +102,48 @@ export function templateToForm(t: OptionTemplate, horizon: number): OptionForm {
   }
 }
 
-/** A fresh card of a kind, with figures that make sense for a project worth `v0` over `horizon` years. */
-export function newOptionForm(type: OptionType, horizon: number, v0: number): OptionForm {
+/** What a fresh card is sized against: the project's value and the static plan's outlays. */
+export interface CardBasis {
+  horizon: number;
+  /** V0, the value of the operating cash flows. */
+  v0: number;
+  /** The static plan's capex in present value (at the WACC), as the NPV without flexibility uses it. */
+  investment: number;
+  /**
+   * The capex as stage payments: each year's amount restated so that its value today at the
+   * risk-free rate (how the engine discounts a stage payment) equals its value at the WACC.
+   */
+  stagePayments: { at: number; amount: number }[];
+}
+
+/** The basis for fresh cards from a case's cash-flow analysis and risk-free rate. */
+export function cardBasis(analysis: CashFlowAnalysis | null, horizon: number, riskFreeRate: number): CardBasis {
+  const v0 = analysis && analysis.underlyingValue > 0 ? analysis.underlyingValue : 100;
+  const outlays = (analysis?.outlays ?? []).filter((o) => o.amount > 0 && o.year <= horizon);
+  return {
+    horizon,
+    v0,
+    investment: analysis?.investment ?? 0,
+    stagePayments: outlays.map((o) => ({ at: o.year, amount: Math.round(o.amount * o.discountFactor * Math.exp(riskFreeRate * o.year) * 100) / 100 })),
+  };
+}
+
+/**
+ * A fresh card of a kind, sized against the project. A right that carries the outlay (defer,
+ * stage) starts from the static plan's own outlay, so adding it never moves the NPV without
+ * flexibility (docs/engine.md §5); the others start from shares of V0.
+ */
+export function newOptionForm(type: OptionType, basis: CardBasis): OptionForm {
+  const { horizon, v0 } = basis;
   const round = (x: number) => Math.max(1, Math.round(x));
+  const outlay = Math.round(Math.max(0, basis.investment) * 100) / 100;
+  const payments = basis.stagePayments.length > 0 ? basis.stagePayments : [{ at: 0, amount: outlay }];
   const templates: Record<OptionType, OptionTemplate> = {
     expand: { type: 'expand', id: 'Expand', factor: 0.3, cost: round(v0 * 0.25), window: { kind: 'american', from: 1, to: horizon } },
     contract: { type: 'contract', id: 'Contract', fraction: 0.3, savings: round(v0 * 0.2), window: { kind: 'american', from: 1, to: horizon } },
     abandon: { type: 'abandon', id: 'Abandon', salvage: round(v0 * 0.5), window: { kind: 'american', from: 0, to: horizon } },
-    defer: { type: 'defer', id: 'Defer', cost: round(v0 * 0.9), window: { kind: 'american', from: 0, to: Math.min(2, horizon) } },
-    stage: {
-      type: 'stage',
-      id: 'Stages',
-      payments: [
-        { at: 0, amount: round(v0 * 0.2) },
-        { at: Math.min(1, horizon), amount: round(v0 * 0.5) },
-      ],
-    },
+    defer: { type: 'defer', id: 'Defer', cost: outlay, window: { kind: 'american', from: 0, to: Math.min(2, horizon) } },
+    stage: { type: 'stage', id: 'Stages', payments },
     switch: {
       type: 'switch',
       id: 'Mothball',

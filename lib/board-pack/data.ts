@@ -26,6 +26,6 @@ export interface BoardPackData {
     decidedBy: string;
     decidedAt: string;
   };
-  /** The first steps of the lattice, for the diagram; computed from the snapshot's model. */
-  grid?: NodeGrid;
+  /** The first steps of the lattice and the mode it starts in, for the diagram; computed from the snapshot's model. */
+  excerpt?: { grid: NodeGrid; startMode: string };
 }

@@ -234,10 +234,10 @@ function TornadoPdf({ data, width }: { data: BoardPackData; width: number }) {
 }
 
 function LatticePdf({ data, width }: { data: BoardPackData; width: number }) {
-  if (!data.grid) return null;
-  const mode = Object.keys(data.grid.steps[0]!.modes)[0]!;
-  const start = data.snapshot.result.modes ? (Object.keys(data.snapshot.result.modes).find((m) => m in data.grid!.steps[0]!.modes) ?? mode) : mode;
-  const layout = layoutLatticeTree(data.grid, start, Math.min(4, data.grid.steps.length - 1));
+  if (!data.excerpt) return null;
+  // The excerpt follows the mode the project starts in, as the app's lattice view does.
+  const { grid, startMode } = data.excerpt;
+  const layout = layoutLatticeTree(grid, startMode, Math.min(4, grid.steps.length - 1));
   const scale = Math.min(1, width / layout.width);
   const fills = ['#cfe7e8', '#f7e3d6', '#dcebdc', '#f5dcd6'];
   return (

@@ -23,6 +23,7 @@ function registerFonts() {
 
 export async function renderBoardPack(data: BoardPackData): Promise<Buffer> {
   registerFonts();
-  const grid = data.grid ?? valueProject(data.snapshot.model, { extras: false, grid: { steps: 4 } }).grid;
-  return renderToBuffer(<BoardPackDocument data={{ ...data, grid }} />);
+  const run = data.excerpt ? null : valueProject(data.snapshot.model, { extras: false, grid: { steps: 4 } });
+  const excerpt = data.excerpt ?? (run?.grid ? { grid: run.grid, startMode: run.startMode } : undefined);
+  return renderToBuffer(<BoardPackDocument data={{ ...data, excerpt }} />);
 }

@@ -87,8 +87,8 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
 
   const lattice = book.addWorksheet('Lattice');
   if (c.result.grid) {
-    // The start mode is the one whose root value is the case's value.
-    const start = Object.keys(c.result.modes).find((m) => c.result.modes[m] === c.result.value) ?? Object.keys(c.result.modes)[0]!;
+    // The engine names the start mode; results stored before it did are found by their root value.
+    const start = c.result.startMode ?? Object.keys(c.result.modes).find((m) => c.result.modes[m] === c.result.value) ?? Object.keys(c.result.modes)[0]!;
     table(
       lattice,
       ['Step', 'Node (up-moves)', 'Year', 'Project value V', `Value with flexibility W (${start})`, 'Decision'],

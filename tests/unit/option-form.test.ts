@@ -4,7 +4,12 @@
  */
 import { describe, expect, it } from 'vitest';
 import { demoPortfolio } from '@/demo/portfolio';
-import { newOptionForm, templateToForm, toTemplates, type OptionType } from '@/lib/option-form';
+import { valueProject } from '@/lattice';
+import { caseToModel } from '@/lib/case-model';
+import { analyseCashFlows } from '@/lib/cash-flows';
+import { cardBasis, newOptionForm, templateToForm, toTemplates, type CardBasis, type OptionType } from '@/lib/option-form';
+
+const basis = (v0: number, horizon = 5): CardBasis => ({ horizon, v0, investment: 0.8 * v0, stagePayments: [{ at: 0, amount: 0.8 * v0 }] });
 
 describe('option cards', () => {
   it('turn every demo option into a form and back into the same template', () => {
@@ -22,14 +27,14 @@ describe('option cards', () => {
 
   it('start every kind of card from figures the engine accepts', () => {
     for (const type of ['expand', 'contract', 'abandon', 'defer', 'stage', 'switch'] as OptionType[]) {
-      const { problems } = toTemplates([newOptionForm(type, 5, 120)], 5);
+      const { problems } = toTemplates([newOptionForm(type, basis(120))], 5);
       expect({ type, problems }).toEqual({ type, problems: {} });
     }
   });
 
   it('name the field of each problem', () => {
-    const expand = newOptionForm('expand', 5, 100);
-    const abandon = newOptionForm('abandon', 5, 100);
+    const expand = newOptionForm('expand', basis(100));
+    const abandon = newOptionForm('abandon', basis(100));
     const { problems } = toTemplates(
       [
         { ...expand, share: 'lots', window: { ...expand.window, from: '4', to: '2' } },
@@ -58,5 +63,25 @@ describe('option cards', () => {
       'options.1.cost.schedule.1.from': 'Must come after year 0.',
       'options.1.window.to': 'Must lie between year 0 and the horizon, year 5.',
     });
+  });
+
+  it('start a Defer or a Stage card from the static plan, so adding one leaves the NPV without flexibility where it was', () => {
+    // The demo plant (capex at year 0) and pilot line (capex over years 0–2), invented figures.
+    // The tolerance is the rounding of each amount to cents: 0.005 per payment.
+    for (const [project, tolerance] of [
+      ['Phased bio-resin plant', 0.005],
+      ['Staged pilot line', 0.015],
+    ] as const) {
+      const input = { ...demoPortfolio.find((p) => p.name === project)!.cases[0]!, options: [] };
+      const without = valueProject(caseToModel(input).model, { extras: false }).staticNpv;
+      const analysis = analyseCashFlows(input.cashFlows);
+      const horizon = input.cashFlows.rows.at(-1)!.year;
+      for (const type of ['defer', 'stage'] as const) {
+        const { templates, problems } = toTemplates([newOptionForm(type, cardBasis(analysis, horizon, input.settings.riskFreeRate))], horizon);
+        expect(problems).toEqual({});
+        const withCard = valueProject(caseToModel({ ...input, options: templates }).model, { extras: false }).staticNpv;
+        expect({ project, type, moved: Math.abs(withCard - without) <= tolerance ? 'no' : withCard - without }).toEqual({ project, type, moved: 'no' });
+      }
+    }
   });
 });

@@ -15,6 +15,7 @@ import { caseToModel } from '@/lib/case-model';
 import { analyseCashFlows, type CashFlowAnalysis } from '@/lib/cash-flows';
 import { useValuation } from '@/lib/engine/use-engine';
 import { formatDateTime, formatMoney } from '@/lib/format';
+import { cardBasis } from '@/lib/option-form';
 import type { CaseInput } from '@/lib/validations/case';
 import type { CaseStatus } from '@/db/types';
 import { AttachmentsPanel } from './attachments-panel';
@@ -318,7 +319,7 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
                 <OptionCards
                   options={(draft.options ?? []) as OptionTemplate[]}
                   horizon={horizon}
-                  v0={analysis?.underlyingValue && analysis.underlyingValue > 0 ? analysis.underlyingValue : 100}
+                  basis={cardBasis(analysis, horizon, draft.settings.riskFreeRate)}
                   readOnly={readOnly}
                   onChange={(options, problems) => {
                     setOptionProblems(problems);

@@ -5,7 +5,7 @@ import { get, useFieldArray, useForm, useWatch, type Control, type FieldErrors, 
 import { toNestErrors } from '@hookform/resolvers';
 import { Button } from '@/components/ui/button';
 import type { OptionTemplate } from '@/lattice';
-import { newOptionForm, optionTypeLabels, templateToForm, toTemplates, type OptionForm, type OptionType } from '@/lib/option-form';
+import { newOptionForm, type CardBasis, optionTypeLabels, templateToForm, toTemplates, type OptionForm, type OptionType } from '@/lib/option-form';
 
 type Fields = { options: OptionForm[] };
 
@@ -232,7 +232,8 @@ function StagePayments({ at, register, control, errors, readOnly }: PartProps) {
 interface Props {
   options: OptionTemplate[];
   horizon: number;
-  v0: number;
+  /** What a fresh card is sized against (the project's value and the static plan's outlays). */
+  basis: CardBasis;
   readOnly: boolean;
   /** Called with the templates whenever every card reads; `problems` counts the fields that do not. */
   onChange: (templates: OptionTemplate[] | null, problems: number) => void;
@@ -244,7 +245,7 @@ interface Props {
  * while a field does not read, its message shows beside it and the valuation keeps the last
  * good set of options.
  */
-export function OptionCards({ options, horizon, v0, readOnly, onChange }: Props) {
+export function OptionCards({ options, horizon, basis, readOnly, onChange }: Props) {
   const horizonRef = useRef(horizon);
   const resolver: Resolver<Fields> = async (values, _context, resolverOptions) => {
     const { problems } = toTemplates(values.options, horizonRef.current);
@@ -280,7 +281,7 @@ export function OptionCards({ options, horizon, v0, readOnly, onChange }: Props)
   }, [horizon, form]);
 
   const add = (type: OptionType) => {
-    list.append(newOptionForm(type, horizon, v0));
+    list.append(newOptionForm(type, basis));
     void form.trigger();
   };
   const remove = (k: number) => {
