@@ -8,13 +8,18 @@
  *   maintenance cost); while switched only switching back and abandoning are possible;
  * - one-shot rights (expand, contract, abandon, defer, each stage payment) can be exercised
  *   once; abandon closes the project from any operating mode, switched or not;
+ * - money attaches to the scale it sells (docs/engine.md §4): abandonment receives the salvage
+ *   times the operating scale left (after contracting by c, (1 − c) of it; after expanding by
+ *   e, (1 + e) of it; a mothballed plant sells at its operating scale), unless the card asks
+ *   for a fixed amount; contraction savings are already per fraction sold. So selling
+ *   piecemeal never beats selling whole by construction;
  * - defer starts the project in a `waiting` mode (scale 0) that is left by paying the defer
  *   cost inside the window; when the window has passed the right lapses and waiting is worth 0;
  * - stage makes continuation require each payment on its date (a compound option, Geske 1979):
  *   the project earns nothing until the last payment is made, and skipping a payment ends it.
  */
 import type { CompiledMode, CompiledModel, CompiledSwitch, Right, RightKind } from './compiled';
-import { costAt, negateCost } from './cost';
+import { costAt, negateCost, scaleCost } from './cost';
 import { refuse } from './errors';
 import { MAX_MODES } from './limits';
 import type { Cost, ExerciseWindow, OptionTemplate, ProjectModel } from './schema';
@@ -70,19 +75,26 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
   const whole: ExerciseWindow = { kind: 'american', from: 0, to: model.horizon };
   const stage = stageAt >= 0 ? (options[stageAt] as Extract<OptionTemplate, { type: 'stage' }>) : undefined;
 
-  function modeOf(s: State): CompiledMode {
-    if (s.phase === 'waiting') return { id: 'waiting', scale: 0, flowPerYear: 0, terminal: 0 };
-    if (s.phase === 'closed') return { id: 'closed', scale: 0, flowPerYear: 0, terminal: 0 };
-    if (s.phase === 'staging') return { id: `${ids[stageAt]} payment ${s.paid + 1} due`, scale: 0, flowPerYear: 0, terminal: 0 };
+  /** The scale of the plant held, before any switch (mothballing) multiplies it. */
+  function operatingScale(s: State): number {
     let scale = 1;
-    let id = 'operating';
     options.forEach((o, k) => {
       if (!(s.exercised & (1 << k))) return;
       if (o.type === 'expand') scale += o.factor;
       if (o.type === 'contract') scale -= o.fraction;
-      id += `+${ids[k]}`;
     });
-    scale = Math.max(0, scale);
+    return Math.max(0, scale);
+  }
+
+  function modeOf(s: State): CompiledMode {
+    if (s.phase === 'waiting') return { id: 'waiting', scale: 0, flowPerYear: 0, terminal: 0 };
+    if (s.phase === 'closed') return { id: 'closed', scale: 0, flowPerYear: 0, terminal: 0 };
+    if (s.phase === 'staging') return { id: `${ids[stageAt]} payment ${s.paid + 1} due`, scale: 0, flowPerYear: 0, terminal: 0 };
+    let scale = operatingScale(s);
+    let id = 'operating';
+    options.forEach((o, k) => {
+      if (s.exercised & (1 << k)) id += `+${ids[k]}`;
+    });
     let flowPerYear = 0;
     if (s.switched >= 0) {
       const sw = options[s.switched] as Extract<OptionTemplate, { type: 'switch' }>;
@@ -113,8 +125,10 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
     }
     if (s.phase !== 'operating') return moves;
     options.forEach((o, k) => {
-      if (o.type === 'abandon')
-        moves.push({ template: k, to: { ...s, phase: 'closed', exercised: 0, switched: -1 }, cost: negateCost(o.salvage), window: o.window, field: field(k) });
+      if (o.type === 'abandon') {
+        const salvage = o.fixedSalvage ? o.salvage : scaleCost(o.salvage, operatingScale(s));
+        moves.push({ template: k, to: { ...s, phase: 'closed', exercised: 0, switched: -1 }, cost: negateCost(salvage), window: o.window, field: field(k) });
+      }
       if (s.switched >= 0) {
         if (k === s.switched && o.type === 'switch')
           moves.push({ template: k, to: { ...s, switched: -1 }, cost: o.backCost, window: o.window ?? whole, field: `${field(k)}.backCost` });

@@ -62,7 +62,10 @@ const contractSchema = z.strictObject({
 const abandonSchema = z.strictObject({
   type: z.literal('abandon'),
   id: id.optional(),
+  /** Proceeds for the project at its base scale; they follow the scale sold unless `fixedSalvage`. */
   salvage: costSchema,
+  /** The same proceeds whatever scale is left (an explicit choice, e.g. a fixed buy-back price). */
+  fixedSalvage: z.boolean().optional(),
   window: windowSchema,
 });
 const deferSchema = z.strictObject({

@@ -34,6 +34,23 @@ function expandedNpvOf(model: ProjectModel): number | null {
   }
 }
 
+/**
+ * Expanded NPV with only the rights `keep` passes. On the static plan (no defer or stage right
+ * left) it is the static NPV plus what the rights add to that plan: the variant's expanded NPV
+ * over its own static NPV (docs/engine.md §4, one baseline).
+ */
+function expandedNpvWith(model: ProjectModel, compiled: CompiledModel, keep: (right: number) => boolean, staticNpv: number): number | null {
+  const variant = withRights(model, compiled, keep);
+  try {
+    const { model: checked, compiled: variantCompiled } = prepareModel(variant.model);
+    const pass = singlePass(checked, variantCompiled, { valueOnly: true });
+    return variant.onStaticPlan ? staticNpv + (pass.expandedNpv - pass.staticNpv) : pass.expandedNpv;
+  } catch (error) {
+    if (error instanceof ModelError) return null;
+    throw error;
+  }
+}
+
 function convergenceOf(model: ProjectModel, value: number, warnings: string[]): Convergence | null {
   const n = model.steps;
   const counts = [...new Set([Math.round(n / 4), Math.round(n / 2)])].filter((k) => k >= 1 && k < n);
@@ -128,8 +145,8 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
         sw.standalone = sw.incremental = pass.expandedNpv - pass.staticNpv;
         return;
       }
-      const alone = expandedNpvOf(withRights(model, compiled, (k) => k === r));
-      const others = expandedNpvOf(withRights(model, compiled, (k) => k !== r));
+      const alone = expandedNpvWith(model, compiled, (k) => k === r, pass.staticNpv);
+      const others = expandedNpvWith(model, compiled, (k) => k !== r, pass.staticNpv);
       sw.standalone = alone === null ? null : alone - pass.staticNpv;
       sw.incremental = others === null ? null : pass.expandedNpv - others;
     });

@@ -7,20 +7,47 @@ import type { CompiledModel } from './compiled';
 import { templateIds } from './compile-templates';
 import { scaleCost } from './cost';
 import type { OptionTemplate, ProjectModel } from './schema';
+import type { Years } from './units';
 
-/** The model with only the rights whose index passes `keep`; ids and the static plan are kept. */
-export function withRights(model: ProjectModel, compiled: CompiledModel, keep: (right: number) => boolean): ProjectModel {
+/**
+ * The model with only the rights whose index passes `keep` (ids are kept), and whether it
+ * stands on the static plan. One baseline (docs/engine.md §4): without a defer or stage right,
+ * the project follows the static plan, built when that plan builds it (the defer window's first
+ * date, or the last stage payment), so no right can be used before then. The variant is that
+ * project's rights valued from today with their windows clipped to the build date and no
+ * outlay; the caller adds their value to the static NPV (`onStaticPlan`).
+ */
+export function withRights(model: ProjectModel, compiled: CompiledModel, keep: (right: number) => boolean): { model: ProjectModel; onStaticPlan: boolean } {
   if (model.options && model.options.length > 0) {
     const ids = templateIds(model.options);
     const kept = model.options.flatMap((o, k) => (keep(k) ? [{ ...o, id: ids[k]! }] : []));
     const carriesOutlay = (o: OptionTemplate) => o.type === 'defer' || o.type === 'stage';
     const outlayRemoved = model.options.some(carriesOutlay) && !kept.some(carriesOutlay);
-    const variant: ProjectModel = { ...model, options: kept };
-    // Without its defer or stage right the project is built now, for the static plan's outlay.
-    if (outlayRemoved) variant.investment = compiled.staticInvestment;
-    return variant;
+    if (!outlayRemoved) return { model: { ...model, options: kept }, onStaticPlan: false };
+    const dt = model.horizon / model.steps;
+    const firstUse = (Math.round(compiled.staticPlan.enterAt / dt) + 1) * dt;
+    const options = firstUse > model.horizon ? [] : kept.flatMap((o) => clipped(o, firstUse, dt, model.horizon));
+    return { model: { ...model, options, investment: 0 }, onStaticPlan: true };
   }
-  return { ...model, switches: (model.switches ?? []).filter((_, k) => keep(k)) };
+  return { model: { ...model, switches: (model.switches ?? []).filter((_, k) => keep(k)) }, onStaticPlan: false };
+}
+
+/** A right whose window opens no earlier than step time `from` (none when it closes before); dates snap to steps of `dt`. */
+function clipped(option: OptionTemplate, from: Years, dt: Years, horizon: Years): OptionTemplate[] {
+  const onOrAfter = (t: Years) => Math.round(t / dt) >= Math.round(from / dt);
+  if (option.type === 'defer' || option.type === 'stage') return [option];
+  if (option.type === 'switch' && !option.window) return [{ ...option, window: { kind: 'american', from, to: horizon } }];
+  const window = option.window!;
+  switch (window.kind) {
+    case 'american':
+      return !onOrAfter(window.to) ? [] : [{ ...option, window: { ...window, from: onOrAfter(window.from) ? window.from : from } }];
+    case 'bermudan': {
+      const dates = window.dates.filter(onOrAfter);
+      return dates.length === 0 ? [] : [{ ...option, window: { ...window, dates } }];
+    }
+    case 'european':
+      return onOrAfter(window.at) ? [option] : [];
+  }
 }
 
 export interface Bump {

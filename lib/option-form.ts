@@ -38,6 +38,8 @@ export interface OptionForm {
   flowPerYear: string;
   window: WindowForm;
   payments: { at: string; amount: string }[];
+  /** Abandon: the salvage is one amount whatever scale is left (otherwise it follows the scale sold). */
+  fixedSalvage: boolean;
 }
 
 export const optionTypeLabels: Record<OptionType, string> = {
@@ -78,6 +80,7 @@ export function templateToForm(t: OptionTemplate, horizon: number): OptionForm {
     flowPerYear: '0',
     window: windowToForm(undefined, horizon),
     payments: [],
+    fixedSalvage: false,
   };
   switch (t.type) {
     case 'expand':
@@ -85,7 +88,7 @@ export function templateToForm(t: OptionTemplate, horizon: number): OptionForm {
     case 'contract':
       return { ...form, share: pct(t.fraction), cost: costToForm(t.savings), window: windowToForm(t.window, horizon) };
     case 'abandon':
-      return { ...form, cost: costToForm(t.salvage), window: windowToForm(t.window, horizon) };
+      return { ...form, cost: costToForm(t.salvage), fixedSalvage: t.fixedSalvage ?? false, window: windowToForm(t.window, horizon) };
     case 'defer':
       return { ...form, cost: costToForm(t.cost), window: windowToForm(t.window, horizon) };
     case 'stage':
@@ -231,7 +234,7 @@ export function toTemplates(forms: OptionForm[], horizon: number): { templates: 
           window: window(),
         };
       case 'abandon':
-        return { type: 'abandon', id, salvage: readCost(f.cost, `${at}.cost`, problems), window: window() };
+        return { type: 'abandon', id, salvage: readCost(f.cost, `${at}.cost`, problems), ...(f.fixedSalvage ? { fixedSalvage: true } : {}), window: window() };
       case 'defer':
         return { type: 'defer', id, cost: readCost(f.cost, `${at}.cost`, problems), window: window() };
       case 'stage':

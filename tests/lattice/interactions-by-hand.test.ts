@@ -25,7 +25,9 @@ describe('interacting rights worked by hand', () => {
     expectClose(r.tree.p, p, { abs: 1e-12 }, {});
   });
 
-  it('expand (+50 % for 30) and abandon (for 70) on one project, two steps', () => {
+  it('expand (+50 % for 30) and abandon (for a fixed 70) on one project, two steps', () => {
+    // The salvage is a fixed amount here (fixedSalvage: a buyer's price for the site whatever
+    // was built), so an expanded plant sells for 70 too.
     // t = 2, operating: max(V, 1.5V − 30, 70) → 204.375 (expand), 120 (expand), 70 (abandon).
     //        expanded:  max(1.5V, 70)       → 234.375, 150, 96.
     // t = 1, operating at 125: C = (5/9·204.375 + 4/9·120)/1.05 = 166.875/1.05 = 158.928571;
@@ -39,7 +41,7 @@ describe('interacting rights worked by hand', () => {
       steps: 2,
       options: [
         { type: 'expand', factor: 0.5, cost: 30, window: { kind: 'american', from: 0, to: 2 } },
-        { type: 'abandon', salvage: 70, window: { kind: 'american', from: 0, to: 2 } },
+        { type: 'abandon', salvage: 70, fixedSalvage: true, window: { kind: 'american', from: 0, to: 2 } },
       ],
     };
     const r = valueProject(model, { extras: false });
@@ -88,6 +90,25 @@ describe('interacting rights worked by hand', () => {
     expectClose(expand!.exerciseProbability, 1, { abs: 1e-12 }, {});
   });
 
+  it('salvage follows the scale sold: contracting by half then selling never beats selling whole', () => {
+    // One step (V = 125 or 80 at t = 1). Contract by 50 % for savings of 48 at t = 0; sell for
+    // 90 at t = 1. The salvage is for the whole plant, so after contracting it is 0.5·90 = 45.
+    // Operating at t = 1: max(V, 90) = 125, 90, worth (5/9·125 + 4/9·90)/1.05 = 104.232804.
+    // Contracted at t = 1: max(0.5·V, 45) = 62.5, 45, worth 52.116402; contracting now gives
+    // 48 + 52.116402 = 100.116402 < 104.232804, so the plant is kept whole.
+    // With a fixed salvage the half plant would still fetch 90: 48 + 90/1.05 = 133.714286, a
+    // plant sold twice (the old rule's contract + abandon interaction was positive for this reason).
+    const options = (fixedSalvage: boolean): ProjectModel['options'] => [
+      { type: 'contract', fraction: 0.5, savings: 48, window: { kind: 'european', at: 0 } },
+      { type: 'abandon', salvage: 90, fixedSalvage, window: { kind: 'european', at: 1 } },
+    ];
+    const scaled = valueProject({ ...base, horizon: 1, steps: 1, options: options(false) }, { extras: false });
+    expectClose(scaled.value, (p * 125 + q * 90) / 1.05, { abs: 1e-9 }, { case: 'salvage per scale' });
+    expectClose(scaled.switches[0]!.exerciseProbability, 0, { abs: 1e-12 }, {});
+    const fixed = valueProject({ ...base, horizon: 1, steps: 1, options: options(true) }, { extras: false });
+    expectClose(fixed.value, 48 + 90 / 1.05, { abs: 1e-9 }, { case: 'fixed salvage' });
+  });
+
   it('mothball and restart around a discrete payout, two steps', () => {
     // The project pays 25 % of its value at t = 1. The payout belongs to the year that ends
     // there (docs/engine.md §4): the mode held during that year receives it, and a decision at
@@ -127,7 +148,7 @@ describe('the node grid on request', () => {
     steps: 2,
     options: [
       { type: 'expand', factor: 0.5, cost: 30, window: { kind: 'american', from: 0, to: 2 } },
-      { type: 'abandon', salvage: 70, window: { kind: 'american', from: 0, to: 2 } },
+      { type: 'abandon', salvage: 70, fixedSalvage: true, window: { kind: 'american', from: 0, to: 2 } },
     ],
   };
 

@@ -349,6 +349,15 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange }: Pro
                   {...parts}
                 />
               )}
+              {type === 'abandon' ? (
+                <label className="flex items-start gap-2 text-caption text-ink-soft">
+                  <input type="checkbox" disabled={readOnly} className="mt-0.5" {...form.register(`options.${k}.fixedSalvage`)} />
+                  <span>
+                    The same amount whatever scale is left (for example a fixed offer for the site). Otherwise the salvage is for the plant as planned and
+                    follows the scale sold: after contracting by 40 %, 60 % of it; after expanding by 50 %, 150 %.
+                  </span>
+                </label>
+              ) : null}
               {type === 'switch' ? (
                 <>
                   <CostEditor at={`${at}.backCost`} label="Cost to switch back" {...parts} />
