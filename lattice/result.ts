@@ -5,9 +5,17 @@ import type { TreeKind } from './schema';
 import type { Money, Probability, Years } from './units';
 import type { Snap } from './window';
 
-/** Project values at one step between which a switch is taken (null when it is not taken). */
+/**
+ * Where a right is used at one step where it is used at all: the project values between which
+ * it is taken, located between nodes (`low` null: down to the bottom of the tree; `high` null:
+ * up to its top). `critical` and `side` say it in one figure: taken above (or below) the
+ * critical value; `between` for a band, whose critical value is its low edge; `anywhere` when
+ * every node of the step takes it.
+ */
 export interface BoundaryPoint {
   t: Years;
+  critical: Money | null;
+  side: 'above' | 'below' | 'between' | 'anywhere';
   low: Money | null;
   high: Money | null;
 }
@@ -29,7 +37,7 @@ export interface SwitchResult {
   exerciseProbability: Probability;
   /** Risk-neutral probability of the first exercise at each step time, where it is above 0. */
   exerciseTiming: { t: Years; probability: Probability }[];
-  /** Exercise region per open step, from the mode where the right is first available. */
+  /** Exercise region per step where it is used, from the mode where the right is first available. */
   boundary: BoundaryPoint[];
   /** Every compiled path of the right (from mode → to mode) with its own boundary. */
   paths: SwitchPath[];

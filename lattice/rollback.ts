@@ -1,21 +1,25 @@
 /**
- * The backward induction (ENGINE.md §4), written once. Time runs backwards from the horizon;
- * at every node and for every mode the order is:
+ * The backward induction (docs/engine.md §4), written once. Time runs backwards from the
+ * horizon; at every node and for every mode the order is:
  *   1. continuation: the discounted risk-neutral expectation of the mode's value one step on
  *      (at the horizon there is no step on, so the continuation is the mode's own value);
  *   2. exercise: the best of continuing and of each switch open from the mode at this step,
  *      each switch worth the *continuation* of the mode it leads to minus its cost (so at most
  *      one switch per mode per node, and a switch never chains into another at the same node);
  *      a switch wins only if strictly better, so ties continue;
- *   3. record the decision (run-length encoded, see decision-runs.ts) and the boundaries.
+ *   3. record the decision (run-length encoded, see decision-runs.ts) and, where the choice
+ *      changes between two nodes, the project value at which it changes, located between them.
  * Values are rolled back as O = W − A (see plan.ts), so step 1 is a plain discounted average of
  * O and step 2 adds the closed-form difference A_to − A_from = Δscale·V + offset. A mode with no
  * switch out of it has O ≡ 0 and is not rolled at all.
  *
- * Two schedules give the same numbers. When no switch path leads back to a mode (one-shot
- * rights) modes are rolled targets first and each does steps 1–3 in one loop, reading its
- * targets' continuations of this step; otherwise (reversible rights, or when a caller wants
- * snapshots) every continuation is computed first and the exercise rule runs after.
+ * The reference schedule computes every continuation first and runs the exercise rule after
+ * (`exerciseRow`). The fast paths are optimisations of it, never second definitions: when no
+ * switch path leads back to a mode (one-shot rights), modes are rolled targets first and each
+ * does steps 1–3 in one loop (`onePassRow`, `fusedSingle`); without decisions, a single-switch
+ * row also skips its pure-exercise and zero regions (`trimmedSingle`). tests/lattice/one-rule
+ * proves them equal to the reference over random models: values, decisions at every node,
+ * boundaries and probabilities.
  *
  * The hot loops allocate nothing, call no closure per node and never call Math.pow: V at node
  * (i, j + 1) is V at (i, j) times u/d. The work lives in methods of one class (stable call
@@ -31,6 +35,9 @@ export interface RollbackOptions {
   gridSteps: number;
   /** Copy the continuation and values at this step and the values one step on (explainNode). */
   captureStep: number;
+  /** Run the reference schedule only (every continuation first, then the exercise rule): the
+   * rule the fast paths are proven against. */
+  reference: boolean;
 }
 
 export interface RollbackResult {
@@ -45,7 +52,7 @@ export interface RollbackResult {
   capture: { continuation: Float64Array[]; value: Float64Array[]; next: Float64Array[] | null } | null;
 }
 
-const none: RollbackOptions = { decisions: false, gridSteps: -1, captureStep: -1 };
+const none: RollbackOptions = { decisions: false, gridSteps: -1, captureStep: -1, reference: false };
 
 export function rollback(plan: LatticePlan, options: Partial<RollbackOptions> = {}): RollbackResult {
   return new Rollback(plan, { ...none, ...options }).run();
@@ -105,13 +112,14 @@ class Rollback {
     for (const m of this.rolled) {
       if (this.needed[m] === 0 && byMode[m]!.every((s) => byMode[to[s]!]!.length === 0)) this.fused[m] = 1;
     }
-    this.order = snapshots ? null : targetsFirst(this.rolled, byMode, to);
+    this.order = snapshots || opts.reference ? null : targetsFirst(this.rolled, byMode, to);
     this.trims = new Uint8Array(modeCount);
     this.edge = new Int32Array(modeCount);
     this.live = new Int32Array(modeCount);
     for (const m of this.rolled) {
       const list = byMode[m]!;
-      if (this.fused[m] === 1 && list.length === 1 && plan.deltaScale[list[0]!] !== 0) this.trims[m] = 1;
+      // Trimming skips nodes, so it never runs when decisions are recorded.
+      if (!opts.decisions && this.fused[m] === 1 && list.length === 1 && plan.deltaScale[list[0]!] !== 0) this.trims[m] = 1;
       this.resetTrim(m, steps);
     }
     let money = 0;
@@ -148,7 +156,11 @@ class Rollback {
             this.resetTrim(m, i);
           }
           if (this.fused[m] === 1 && n === 1) this.fusedSingle(m, i, this.openList[0]!);
-          else this.onePassRow(m, i);
+          else if (this.decisions && n > 0) {
+            // Recording decisions: the reference rule for this mode (its targets are done).
+            this.continuationRow(m, i);
+            this.exerciseRow(m, i, n);
+          } else this.onePassRow(m, i);
         }
         continue;
       }
@@ -211,13 +223,18 @@ class Rollback {
     for (let j = 0; j <= i; j++) c[j] = up * w[j + 1]! + down * w[j]!;
   }
 
-  /** Steps 1–3 for a fused mode with one open switch, in place (j ascending reads w[j+1] unchanged). */
+  /**
+   * Steps 1–3 for a fused mode with one open switch, in place (j ascending reads w[j+1]
+   * unchanged). With decisions it records the runs and locates each change of choice between
+   * nodes exactly as exerciseRow does, from the two choices' values at both nodes.
+   */
   private fusedSingle(m: number, i: number, k: number) {
     const plan = this.plan;
+    const width = this.width;
     const w = this.value[m]!;
     const s = plan.byMode[m]![k]!;
     const ds = plan.deltaScale[s]!;
-    const off = plan.offset[s * this.width + i]!;
+    const off = plan.offset[s * width + i]!;
     const up = this.pu;
     const down = this.pd;
     const step = this.ratio;
@@ -232,9 +249,10 @@ class Rollback {
       }
       return;
     }
-    const row = m * this.width + i;
+    const row = m * width + i;
     decisions.rowFirst[row] = decisions.length;
     let previous = -1;
+    let gapBelow = 0;
     for (let j = 0; j <= i; j++) {
       const hold = up * w[j + 1]! + down * w[j]!;
       const x = ds * v + off;
@@ -242,12 +260,16 @@ class Rollback {
       w[j] = x > hold ? x : hold;
       if (choice !== previous) {
         decisions.push(j, choice);
+        // g = value(new choice) − value(old choice), at node j − 1 and here.
+        if (previous >= 0) this.placeEdge(m, i, previous, choice, v / step, v, choice === 0 ? -gapBelow : gapBelow, choice === 0 ? hold - x : x - hold);
+        else if (choice !== 0) this.boundaryLow![s * width + i] = -Infinity;
         previous = choice;
       }
+      gapBelow = x - hold;
       v *= step;
     }
+    if (previous > 0) this.boundaryHigh![s * width + i] = Infinity;
     decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
-    this.recordBoundaries(m, i);
   }
 
   /** Trim state meaning "every node of step t is stored explicitly". */
@@ -306,18 +328,6 @@ class Rollback {
     const G = (plan.lowest[i + 1]! / base) * (up * step + down);
     const D = up + down;
     const staysExercised = (j: number) => ds * vAt(j) + off > ds * G * vAt(j) + D * offNext;
-    const decisions = this.decisions;
-    const row = m * width + i;
-    if (decisions) decisions.rowFirst[row] = decisions.length;
-    let previous = -1;
-    // Decisions are recorded as runs: a new run starts where the choice changes.
-    const push = (j: number, choice: number) => {
-      if (decisions && choice !== previous) {
-        decisions.push(j, choice);
-        previous = choice;
-      }
-    };
-    const record = decisions !== null;
 
     if (ds < 0) {
       // Exercised at the bottom, zero at the top.
@@ -328,7 +338,6 @@ class Rollback {
       if (pure === 0 && edgeNext > 0) this.materialize(m, i + 1);
       // The first computed node reads one child inside the pure region: write that child out.
       else if (edgeNext > 0) w[edgeNext - 1] = ds * plan.lowest[i + 1]! * rise[edgeNext - 1]! + offNext;
-      if (pure > 0) push(0, 1);
       let edge = pure;
       let streak = true;
       let last = pure - 1;
@@ -341,18 +350,10 @@ class Rollback {
         const x = ds * v + off;
         if (x > hold) {
           w[j] = x;
-          if (record && previous !== 1) {
-            decisions.push(j, 1);
-            previous = 1;
-          }
           if (streak) edge = j + 1;
           last = j;
         } else {
           w[j] = hold;
-          if (record && previous !== 0) {
-            decisions.push(j, 0);
-            previous = 0;
-          }
           streak = false;
           if (hold !== 0) last = j;
         }
@@ -363,12 +364,10 @@ class Rollback {
         const x = ds * v + off;
         if (!(x > 0)) break;
         w[j] = x;
-        push(j, 1);
         if (streak) edge = j + 1;
         last = j;
         v *= step;
       }
-      if (j <= i) push(j, 0);
       this.edge[m] = edge;
       this.live[m] = Math.max(last, edge - 1);
     } else {
@@ -391,8 +390,6 @@ class Rollback {
         first = jj;
         v /= step;
       }
-      if (first > 0) push(0, 0);
-      if (first < start) push(first, 1);
       let firstNonZero = first < start ? first : -1;
       let streakStart = first < start ? first : -1;
       v = vAt(start);
@@ -402,30 +399,17 @@ class Rollback {
         const x = ds * v + off;
         if (x > hold) {
           w[j] = x;
-          if (record && previous !== 1) {
-            decisions.push(j, 1);
-            previous = 1;
-          }
           if (streakStart < 0) streakStart = j;
           if (firstNonZero < 0) firstNonZero = j;
         } else {
           w[j] = hold;
-          if (record && previous !== 0) {
-            decisions.push(j, 0);
-            previous = 0;
-          }
           streakStart = -1;
           if (firstNonZero < 0 && hold !== 0) firstNonZero = j;
         }
         v *= step;
       }
-      if (pure <= i) push(pure, 1);
       this.edge[m] = streakStart >= 0 ? streakStart : pure;
       this.live[m] = firstNonZero >= 0 ? firstNonZero : Math.min(pure, i + 1);
-    }
-    if (decisions) {
-      decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
-      this.recordBoundaries(m, i);
     }
   }
 
@@ -439,31 +423,24 @@ class Rollback {
     const keep = this.needed[m] === 1;
     const up = this.pu;
     const down = this.pd;
-    const decisions = this.decisions;
-    const row = m * width + i;
     if (n === 0) {
       for (let j = 0; j <= i; j++) {
         const hold = up * w[j + 1]! + down * w[j]!;
         w[j] = hold;
         if (keep) c[j] = hold;
       }
-      if (decisions) decisions.rowCount[row] = 0;
       return;
     }
     const list = plan.byMode[m]!;
     const openList = this.openList;
     const cont = this.cont;
-    if (decisions) decisions.rowFirst[row] = decisions.length;
-    let previous = -1;
     let v = plan.lowest[i]!;
     const step = this.ratio;
-    const k1 = openList[0]!;
-    const s1 = list[k1]!;
+    const s1 = list[openList[0]!]!;
     const ds1 = plan.deltaScale[s1]!;
     const off1 = plan.offset[s1 * width + i]!;
     const c1 = cont[plan.to[s1]!]!;
-    const k2 = n >= 2 ? openList[1]! : k1;
-    const s2 = list[k2]!;
+    const s2 = list[openList[n >= 2 ? 1 : 0]!]!;
     const ds2 = plan.deltaScale[s2]!;
     const off2 = plan.offset[s2 * width + i]!;
     const c2 = cont[plan.to[s2]!]!;
@@ -471,42 +448,38 @@ class Rollback {
       const hold = up * w[j + 1]! + down * w[j]!;
       if (keep) c[j] = hold;
       let best = hold;
-      let choice = 0;
       const x1 = ds1 * v + off1 + c1[j]!;
-      if (x1 > best) {
-        best = x1;
-        choice = k1 + 1;
-      }
+      if (x1 > best) best = x1;
       if (n >= 2) {
         const x2 = ds2 * v + off2 + c2[j]!;
-        if (x2 > best) {
-          best = x2;
-          choice = k2 + 1;
-        }
+        if (x2 > best) best = x2;
         for (let q = 2; q < n; q++) {
-          const k = openList[q]!;
-          const s = list[k]!;
+          const s = list[openList[q]!]!;
           const x = plan.deltaScale[s]! * v + plan.offset[s * width + i]! + cont[plan.to[s]!]![j]!;
-          if (x > best) {
-            best = x;
-            choice = k + 1;
-          }
+          if (x > best) best = x;
         }
       }
       w[j] = best;
-      if (decisions && choice !== previous) {
-        decisions.push(j, choice);
-        previous = choice;
-      }
       v *= step;
-    }
-    if (decisions) {
-      decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
-      this.recordBoundaries(m, i);
     }
   }
 
-  /** Steps 2–3 for mode m at step i with n switches open (in openList), continuations computed. */
+  /** The value at node j of choice k (0: continue; k: the mode's k-th switch), continuations computed. */
+  private choiceValue(m: number, i: number, j: number, k: number, v: number): number {
+    if (k === 0) return this.cont[m]![j]!;
+    const plan = this.plan;
+    const s = plan.byMode[m]![k - 1]!;
+    return plan.deltaScale[s]! * v + plan.offset[s * this.width + i]! + this.cont[plan.to[s]!]![j]!;
+  }
+
+  /**
+   * Steps 2–3 for mode m at step i with n switches open (in openList), continuations computed:
+   * the reference rule. Records the decision runs and, where the choice changes between nodes
+   * j − 1 and j, locates the project value at which it changes: the two choices' values differ
+   * by g = value(new) − value(old), g ≤ 0 at j − 1 and g > 0 at j, and g is interpolated
+   * linearly in V between the nodes. So an exercise region's edges lie between nodes, inside the
+   * tree, and converge as steps grow (the nearest exercised node is off by up to a node spacing).
+   */
   private exerciseRow(m: number, i: number, n: number) {
     const plan = this.plan;
     const width = this.width;
@@ -519,8 +492,35 @@ class Rollback {
     const row = m * width + i;
     if (decisions) decisions.rowFirst[row] = decisions.length;
     let previous = -1;
-    let v = plan.lowest[i]!;
+    const base = plan.lowest[i]!;
+    let v = base;
     const step = this.ratio;
+    if (n === 1) {
+      // One switch open (the common case): the same rule with its terms read once.
+      const k = openList[0]!;
+      const s = list[k]!;
+      const ds = plan.deltaScale[s]!;
+      const off = plan.offset[s * width + i]!;
+      const ct = cont[plan.to[s]!]!;
+      for (let j = 0; j <= i; j++) {
+        const hold = c[j]!;
+        const x = ds * v + off + ct[j]!;
+        const choice = x > hold ? k + 1 : 0;
+        w[j] = x > hold ? x : hold;
+        if (decisions && choice !== previous) {
+          decisions.push(j, choice);
+          if (previous >= 0) this.recordEdge(m, i, j, previous, choice, v);
+          else if (choice !== 0) this.boundaryLow![s * width + i] = -Infinity;
+          previous = choice;
+        }
+        v *= step;
+      }
+      if (decisions) {
+        if (previous > 0) this.boundaryHigh![s * width + i] = Infinity;
+        decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
+      }
+      return;
+    }
     for (let j = 0; j <= i; j++) {
       let best = c[j]!;
       let choice = 0;
@@ -536,35 +536,46 @@ class Rollback {
       w[j] = best;
       if (decisions && choice !== previous) {
         decisions.push(j, choice);
+        if (previous >= 0) this.recordEdge(m, i, j, previous, choice, v);
+        else if (choice !== 0) this.boundaryLow![list[choice - 1]! * width + i] = -Infinity;
         previous = choice;
       }
       v *= step;
     }
     if (decisions) {
+      if (previous > 0) this.boundaryHigh![list[previous - 1]! * width + i] = Infinity;
       decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
-      this.recordBoundaries(m, i);
     }
   }
 
-  /** Boundaries of one finished row, read from its runs. */
-  private recordBoundaries(m: number, i: number) {
-    const { decisions, boundaryLow, boundaryHigh } = this;
-    if (!decisions || !boundaryLow || !boundaryHigh) return;
-    const row = m * this.width + i;
-    const first = decisions.rowFirst[row]!;
-    const count = decisions.rowCount[row]!;
+  /** The choice changes from `before` (up to node j − 1) to `after` (from node j, value v) at step i. */
+  private recordEdge(m: number, i: number, j: number, before: number, after: number, v: number) {
+    const vBelow = v / this.ratio;
+    const gBelow = this.choiceValue(m, i, j - 1, after, vBelow) - this.choiceValue(m, i, j - 1, before, vBelow);
+    const gHere = this.choiceValue(m, i, j, after, v) - this.choiceValue(m, i, j, before, v);
+    this.placeEdge(m, i, before, after, vBelow, v, gBelow, gHere);
+  }
+
+  /**
+   * Locates a change of choice between two adjacent nodes (project values vBelow < v) where
+   * g = value(after) − value(before) is gBelow ≤ 0 and gHere ≥ 0, by linear interpolation of g:
+   * the located value closes `before`'s exercise region from above and opens `after`'s from
+   * below. The lowest opening and the highest closing of each switch's row are kept.
+   */
+  private placeEdge(m: number, i: number, before: number, after: number, vBelow: number, v: number, gBelow: number, gHere: number) {
+    const share = gHere > gBelow ? -gBelow / (gHere - gBelow) : 0.5;
+    const edge = vBelow + Math.min(1, Math.max(0, share)) * (v - vBelow);
     const list = this.plan.byMode[m]!;
-    const base = this.plan.lowest[i]!;
-    for (let k = first; k < first + count; k++) {
-      const choice = decisions.choices[k]!;
-      if (choice === 0) continue;
-      const startJ = decisions.starts[k]!;
-      const endJ = k + 1 < first + count ? decisions.starts[k + 1]! - 1 : i;
-      const cell = list[choice - 1]! * this.width + i;
-      const low = base * this.plan.rise[startJ]!;
-      const high = base * this.plan.rise[endJ]!;
-      if (!(low >= boundaryLow[cell]!)) boundaryLow[cell] = low;
-      if (!(high <= boundaryHigh[cell]!)) boundaryHigh[cell] = high;
+    const width = this.width;
+    const low = this.boundaryLow!;
+    const high = this.boundaryHigh!;
+    if (after > 0) {
+      const cell = list[after - 1]! * width + i;
+      if (!(edge >= low[cell]!)) low[cell] = edge;
+    }
+    if (before > 0) {
+      const cell = list[before - 1]! * width + i;
+      if (!(edge <= high[cell]!)) high[cell] = edge;
     }
   }
 }

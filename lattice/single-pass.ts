@@ -64,11 +64,15 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
         : compiled.rights.map(() => ({ probability: 0, byStep: new Float64Array(width) }));
     const boundaryOf = (s: number): BoundaryPoint[] => {
       const points: BoundaryPoint[] = [];
+      if (!result.boundaryLow || !result.boundaryHigh) return points;
       for (let i = 0; i < width; i++) {
-        if (plan.open[s * width + i] !== 1) continue;
-        const low = result.boundaryLow ? result.boundaryLow[s * width + i]! : NaN;
-        const high = result.boundaryHigh ? result.boundaryHigh[s * width + i]! : NaN;
-        points.push({ t: i * plan.dt, low: Number.isNaN(low) ? null : low, high: Number.isNaN(high) ? null : high });
+        const lowEdge = result.boundaryLow[s * width + i]!;
+        const highEdge = result.boundaryHigh[s * width + i]!;
+        if (Number.isNaN(lowEdge) || Number.isNaN(highEdge)) continue;
+        const low = Number.isFinite(lowEdge) ? lowEdge : null;
+        const high = Number.isFinite(highEdge) ? highEdge : null;
+        const side = low === null ? (high === null ? 'anywhere' : 'below') : high === null ? 'above' : 'between';
+        points.push({ t: i * plan.dt, critical: side === 'below' ? high : low, side, low, high });
       }
       return points;
     };

@@ -1,41 +1,58 @@
 /**
- * Decision rules in words, from a right's exercise boundary: "Expand Phase 2 between years 2.0
- * and 4.0 when the project is worth more than 240 (year 2.0) to 265 (year 4.0)". Rights that
- * add scale or start the project (expand, defer, stage, restart) are used when the value is
- * high, the others (abandon, contract, mothball) when it is low; the threshold is the boundary's
- * edge on that side. Shared by the results page and the board pack.
+ * Decision rules in words, from a right's exercise boundary as the engine returns it: "Expand
+ * (Phase 2) between years 2 and 4 when the project is worth more than 240.0 (year 2) to 265.5
+ * (year 4)". The engine says on which side of its critical value each step's region lies; this
+ * module only words and formats it. Shared by the results page, the workbook and the board pack,
+ * so all three print the same rule for the same run.
+ *
+ * Results stored by engine 1.x carry only the exercised nodes' range (`low`, `high`), not the
+ * side: for those the side follows the right's kind (rights that add scale or start the project
+ * are used when the value is high), as it did then.
  */
 import type { BoundaryPoint, SwitchResult } from '@/lattice';
 import { formatMoney } from './format';
 
-const usedWhenHigh = new Set(['expand', 'defer', 'stage']);
+type Side = 'above' | 'below' | 'between';
 
 export interface DecisionRule {
   right: string;
   kind: string;
-  /** 'above': exercised when the value is at least the threshold; 'below': at most. */
-  side: 'above' | 'below';
+  /** 'above': used when the value is at least the threshold; 'below': at most; 'between': inside a band from it. */
+  side: Side;
+  /** The critical value at each step where the right is used on that side. */
+  points: { t: number; threshold: number }[];
   first: { t: number; threshold: number } | null;
   last: { t: number; threshold: number } | null;
   text: string;
 }
 
+const usedWhenHigh = new Set(['expand', 'defer', 'stage']);
 const years = (t: number) => (Math.abs(t - Math.round(t)) < 1e-9 ? String(Math.round(t)) : t.toFixed(1));
 
+/** The engine's side and critical value, or the engine 1.x reading of the same point. */
+function located(point: BoundaryPoint, kind: string): { side: Side | 'anywhere'; critical: number | null } {
+  if (point.side) return { side: point.side, critical: point.critical };
+  const side = usedWhenHigh.has(kind) ? 'above' : 'below';
+  return { side, critical: side === 'above' ? point.low : point.high };
+}
+
 export function decisionRule(s: Pick<SwitchResult, 'id' | 'kind' | 'boundary' | 'exerciseProbability'>, currency?: string): DecisionRule {
-  const side: DecisionRule['side'] = usedWhenHigh.has(s.kind) ? 'above' : 'below';
-  const edge = (b: BoundaryPoint) => (side === 'above' ? b.low : b.high);
-  const points = s.boundary.filter((b) => edge(b) !== null).map((b) => ({ t: b.t, threshold: edge(b)! }));
+  const read = s.boundary.map((b) => ({ t: b.t, ...located(b, s.kind) }));
+  const verb = { expand: 'Expand', contract: 'Contract', abandon: 'Abandon', defer: 'Invest', stage: 'Pay the stage', switch: 'Switch' }[s.kind] ?? 'Exercise';
+  const sides = read.filter((p) => p.side !== 'anywhere' && p.critical !== null);
+  const side: Side = (sides[0]?.side as Side | undefined) ?? (usedWhenHigh.has(s.kind) ? 'above' : 'below');
+  const points = sides.filter((p) => p.side === side).map((p) => ({ t: p.t, threshold: p.critical! }));
   const first = points[0] ?? null;
   const last = points.at(-1) ?? null;
-  const verb = { expand: 'Expand', contract: 'Contract', abandon: 'Abandon', defer: 'Invest', stage: 'Pay the stage', switch: 'Switch' }[s.kind] ?? 'Exercise';
-  if (!first || !last || s.exerciseProbability === 0)
-    return { right: s.id, kind: s.kind, side, first: null, last: null, text: `${s.id}: never exercised on this lattice; it adds no value as specified.` };
-  const comparison = side === 'above' ? 'is worth more than' : 'is worth less than';
-  const span = first.t === last.t ? `in year ${years(first.t)}` : `between years ${years(first.t)} and ${years(last.t)}`;
+  const base = { right: s.id, kind: s.kind, side, points, first, last };
+  if (s.exerciseProbability === 0 || read.length === 0) return { ...base, text: `${s.id}: never exercised on this lattice; it adds no value as specified.` };
+  const span = (a: number, b: number) => (a === b ? `in year ${years(a)}` : `between years ${years(a)} and ${years(b)}`);
+  if (!first || !last) return { ...base, text: `${verb} (${s.id}) ${span(read[0]!.t, read.at(-1)!.t)} whatever the project is worth.` };
+  const comparison = { above: 'is worth more than', below: 'is worth less than', between: 'is worth more than' }[side];
   const level =
     Math.abs(first.threshold - last.threshold) < 0.005 * Math.max(1, Math.abs(first.threshold))
       ? formatMoney(first.threshold, currency)
       : `${formatMoney(first.threshold, currency)} (year ${years(first.t)}) to ${formatMoney(last.threshold, currency)} (year ${years(last.t)})`;
-  return { right: s.id, kind: s.kind, side, first, last, text: `${verb} (${s.id}) ${span} when the project ${comparison} ${level}.` };
+  const band = side === 'between' ? ', up to a ceiling above which it waits' : '';
+  return { ...base, text: `${verb} (${s.id}) ${span(first.t, last.t)} when the project ${comparison} ${level}${band}.` };
 }

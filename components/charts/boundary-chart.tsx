@@ -11,8 +11,8 @@ const dashes = ['', '6 3', '2 3', '8 3 2 3', '1 2', '10 4'];
 
 /**
  * The exercise boundary over time: for each right, the critical project value at each step
- * where it is used (above the line for expand, defer and stages; below it for abandon, contract
- * and mothballing). Lines differ by dash as well as colour, and are named in the legend.
+ * where it is used, on the side the engine reports (lib/decision-rules.ts). Lines differ by
+ * dash as well as colour, and are named in the legend.
  */
 export function BoundaryChart({ switches, v0, horizon, currency }: { switches: SwitchResult[]; v0: number; horizon: number; currency: string }) {
   const { ref, width } = useWidth<HTMLDivElement>();
@@ -20,8 +20,7 @@ export function BoundaryChart({ switches, v0, horizon, currency }: { switches: S
   const margin = { top: 16, right: 24, bottom: 36, left: 64 };
   const series = switches.map((s, k) => {
     const rule = decisionRule(s, currency);
-    const edge = (b: SwitchResult['boundary'][number]) => (rule.side === 'above' ? b.low : b.high);
-    return { s, k, rule, points: s.boundary.filter((b) => edge(b) !== null).map((b) => ({ t: b.t, v: edge(b)! })) };
+    return { s, k, rule, points: rule.points.map((p) => ({ t: p.t, v: p.threshold })) };
   });
   const values = series.flatMap((x) => x.points.map((p) => p.v)).concat(v0);
   const x = scaleLinear()

@@ -7,6 +7,7 @@
 import ExcelJS from 'exceljs';
 import { VALUATION_CAUTION } from '@/components/valuation-caution';
 import type { ValuationResult } from '@/lattice';
+import { decisionRule } from '../decision-rules';
 import { formatDateTime } from '../format';
 import { describeOption } from '../option-words';
 import { safeCell } from '../spreadsheet-safe';
@@ -81,9 +82,10 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
   const results = book.addWorksheet('Results');
   table(
     results,
-    ['Right', 'Kind', 'Stand-alone value', 'Incremental value', 'Probability ever exercised'],
-    c.result.switches.map((r) => [r.id, r.kind, r.standalone, r.incremental, r.exerciseProbability]),
+    ['Right', 'Kind', 'Stand-alone value', 'Incremental value', 'Probability ever exercised', 'Decision rule'],
+    c.result.switches.map((r) => [r.id, r.kind, r.standalone, r.incremental, r.exerciseProbability, decisionRule(r, c.currency).text]),
   );
+  results.getColumn(6).width = 100;
 
   const lattice = book.addWorksheet('Lattice');
   if (c.result.grid) {

@@ -56,10 +56,15 @@ describe('interacting rights worked by hand', () => {
     const [expand, abandon] = r.switches;
     expectClose(expand!.exerciseProbability, 65 / 81, { abs: 1e-12 }, {});
     expectClose(abandon!.exerciseProbability, 16 / 81, { abs: 1e-12 }, {});
+    // At t = 2 the plant is sold at the bottom node (64) and expanded at the next (100): the
+    // choice changes where 1.5·V − 30 = 70, V = 66.67, which is exact because both choices are
+    // linear in V there. Sold below it, from the bottom of the tree.
     const last = abandon!.boundary.at(-1)!;
-    expect(last.t).toBe(2);
-    expectClose(last.low!, 64, { abs: 1e-9 }, { boundary: 'abandon at t = 2' });
-    expectClose(last.high!, 64, { abs: 1e-9 }, { boundary: 'abandon at t = 2' });
+    expect([last.t, last.side, last.low]).toEqual([2, 'below', null]);
+    expectClose(last.critical!, 200 / 3, { abs: 1e-9 }, { boundary: 'abandon at t = 2' });
+    expectClose(last.high!, 200 / 3, { abs: 1e-9 }, { boundary: 'abandon at t = 2' });
+    // Before t = 2 the plant is never sold: no boundary point there.
+    expect(abandon!.boundary.map((b) => b.t)).toEqual([2]);
   });
 
   it('defer (for 90, until year 1) and expand (+50 % for 30, in year 2 only), two steps', () => {

@@ -1,34 +1,51 @@
 /** Decision rules in words, from exercise boundaries (wording: common practice, no source). */
 import { describe, expect, it } from 'vitest';
+import type { BoundaryPoint } from '@/lattice';
 import { decisionRule } from '@/lib/decision-rules';
 
+const above = (t: number, critical: number): BoundaryPoint => ({ t, critical, side: 'above', low: critical, high: null });
+const below = (t: number, critical: number): BoundaryPoint => ({ t, critical, side: 'below', low: null, high: critical });
+
 describe('decision rules', () => {
-  it('reads an expansion from the low edge of its region, first and last open step', () => {
-    const rule = decisionRule({
-      id: 'Phase 2',
-      kind: 'expand',
-      exerciseProbability: 0.2,
-      boundary: [
-        { t: 1, low: null, high: null },
-        { t: 2, low: 240.04, high: 900 },
-        { t: 3, low: 250, high: 1000 },
-        { t: 4, low: 265.5, high: 1100 },
-      ],
-    });
+  it('reads an expansion from the critical values the engine located, first and last step used', () => {
+    const rule = decisionRule({ id: 'Phase 2', kind: 'expand', exerciseProbability: 0.2, boundary: [above(2, 240.04), above(3, 250), above(4, 265.5)] });
     expect(rule.text).toBe('Expand (Phase 2) between years 2 and 4 when the project is worth more than 240.0 (year 2) to 265.5 (year 4).');
+    expect(rule.points).toEqual([
+      { t: 2, threshold: 240.04 },
+      { t: 3, threshold: 250 },
+      { t: 4, threshold: 265.5 },
+    ]);
   });
 
-  it('reads an abandonment from the high edge, and a flat threshold once', () => {
-    const rule = decisionRule({
-      id: 'Sell',
-      kind: 'abandon',
-      exerciseProbability: 0.4,
-      boundary: [
-        { t: 0.5, low: 1, high: 80 },
-        { t: 1, low: 1, high: 80.1 },
-      ],
-    });
+  it('reads an abandonment below its critical value, and a flat threshold once', () => {
+    const rule = decisionRule({ id: 'Sell', kind: 'abandon', exerciseProbability: 0.4, boundary: [below(0.5, 80), below(1, 80.1)] });
     expect(rule.text).toBe('Abandon (Sell) between years 0.5 and 1 when the project is worth less than 80.0.');
+  });
+
+  it('takes the side from the engine, not from the kind of right', () => {
+    const rule = decisionRule({ id: 'Odd', kind: 'expand', exerciseProbability: 0.1, boundary: [below(1, 50)] });
+    expect(rule.side).toBe('below');
+    expect(rule.text).toBe('Expand (Odd) in year 1 when the project is worth less than 50.0.');
+  });
+
+  it('says when a right is used at every node of its steps', () => {
+    const rule = decisionRule({
+      id: 'Sure',
+      kind: 'abandon',
+      exerciseProbability: 1,
+      boundary: [{ t: 8, critical: null, side: 'anywhere', low: null, high: null }],
+    });
+    expect(rule.text).toBe('Abandon (Sure) in year 8 whatever the project is worth.');
+  });
+
+  it('reads results stored by engine 1.x (node ranges, no side) as it did then', () => {
+    const stored = [
+      { t: 1, low: null, high: null },
+      { t: 2, low: 240.04, high: 900 },
+    ] as unknown as BoundaryPoint[];
+    expect(decisionRule({ id: 'Phase 2', kind: 'expand', exerciseProbability: 0.2, boundary: stored }).text).toBe(
+      'Expand (Phase 2) in year 2 when the project is worth more than 240.0.',
+    );
   });
 
   it('says when a right is never used', () => {
