@@ -14,7 +14,16 @@ export interface CaseJson {
   options: OptionTemplate[];
   createdAt: string;
   updatedAt: string;
-  latest?: { runId: string; staticNpv: number; optionPremium: number; expandedNpv: number; valuedAt: string } | null;
+  /** The latest run: its figures and the case version they are of (lower than `version` when edited since). */
+  latest?: {
+    runId: string;
+    caseVersion: number;
+    engineVersion: string;
+    staticNpv: number;
+    optionPremium: number;
+    expandedNpv: number;
+    valuedAt: string;
+  } | null;
 }
 
 export interface ProjectJson {

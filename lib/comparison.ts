@@ -22,6 +22,9 @@ export interface ComparedCase {
   currency: string;
   status: CaseStatus;
   valuedAt: string | null;
+  /** The case version the figures are of, and the case's version now. */
+  figuresVersion: number | null;
+  version: number;
   staticNpv: number | null;
   optionPremium: number | null;
   expandedNpv: number | null;
@@ -55,7 +58,7 @@ export async function compareCases(orgId: string, caseIds: string[]): Promise<Co
   if (missing.length > 0) throw new AppError('not_found', `No such case in your organisation: ${missing.join(', ')}.`);
   const runs = await db
     .selectFrom('valuation_run')
-    .select(['case_id', 'result', 'created_at'])
+    .select(['case_id', 'result', 'created_at', 'case_version'])
     .distinctOn('case_id')
     .where('organization_id', '=', orgId)
     .where('case_id', 'in', caseIds)
@@ -75,6 +78,8 @@ export async function compareCases(orgId: string, caseIds: string[]): Promise<Co
     currency: c.currency,
     status: c.status,
     valuedAt: runOf.get(c.id) ? new Date(runOf.get(c.id)!.created_at).toISOString() : null,
+    figuresVersion: runOf.get(c.id)?.case_version ?? null,
+    version: c.version,
     staticNpv: results[k]?.staticNpv ?? null,
     optionPremium: results[k]?.optionPremium ?? null,
     expandedNpv: results[k]?.expandedNpv ?? null,

@@ -1,6 +1,7 @@
 /**
  * Read models for the portfolio and project pages: each project or case with the headline
- * figures of its latest stored valuation run. The figures are read out of the stored result
+ * figures of its latest stored valuation run, and the case version those figures are of (a
+ * submission stores its run, so a case in review or approved shows its submitted figures). The figures are read out of the stored result
  * in SQL (`result->>'…'`), so a listing never ships whole lattice results to the app.
  */
 import { sql } from 'kysely';
@@ -10,6 +11,11 @@ export interface Headline {
   runId: string;
   caseId: string;
   caseName: string;
+  /** The case version these figures are of, and the case's version now (later when edited since). */
+  caseVersion: number;
+  currentVersion: number;
+  /** The engine that computed them (an older one than today's is flagged, with a re-value). */
+  engineVersion: string;
   staticNpv: number;
   optionPremium: number;
   expandedNpv: number;
@@ -28,6 +34,9 @@ function latestRuns(db: Database, orgId: string, projectId?: string) {
       'valuation_run.id as runId',
       'valuation_run.case_id as caseId',
       'case.name as caseName',
+      'valuation_run.case_version as caseVersion',
+      'valuation_run.engine_version as engineVersion',
+      'case.version as currentVersion',
       'case.project_id as projectId',
       'case.created_at as caseCreatedAt',
       'valuation_run.created_at as valuedAt',
@@ -100,6 +109,9 @@ function toHeadline(r: Awaited<ReturnType<typeof latestRuns>>[number]): Headline
     runId: r.runId,
     caseId: r.caseId,
     caseName: r.caseName,
+    caseVersion: r.caseVersion,
+    currentVersion: r.currentVersion,
+    engineVersion: r.engineVersion,
     staticNpv: r.staticNpv,
     optionPremium: r.optionPremium,
     expandedNpv: r.expandedNpv,

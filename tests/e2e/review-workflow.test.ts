@@ -20,9 +20,11 @@ import { firstLink, waitForMail } from './support/mail';
 
 let caseId = '';
 let projectId = '';
+let baseCaseId = '';
 
 beforeAll(async () => {
   ({ caseId, projectId } = await demoCase('Phased bio-resin plant', 'Volatile demand'));
+  baseCaseId = (await demoCase('Phased bio-resin plant', 'Base case')).caseId;
 });
 
 afterAll(async () => {
@@ -100,6 +102,17 @@ describe('review workflow', () => {
 
     const approved = await waitForMail('analyst@kestrelbay.example', /^Approved: Phased bio-resin plant — Volatile demand$/, 30_000);
     expect(approved.attachments?.map((a) => a.contentType)).toEqual(['application/pdf']);
+
+    // Every list shows the approved version's figures beside its status: the submission stored them as the case's latest run.
+    const [approvedSnapshot] = (await (await reviewer.page.request.get(`/api/v1/cases/${caseId}/snapshots`)).json()).snapshots;
+    const frozen = await db.selectFrom('case_snapshot').select('result').where('id', '=', approvedSnapshot.id).executeTakeFirstOrThrow();
+    const listed = (await (await reviewer.page.request.get(`/api/v1/projects/${projectId}/cases`)).json()).cases.find((c: { id: string }) => c.id === caseId);
+    expect([listed.latest.caseVersion, listed.latest.expandedNpv]).toEqual([
+      approvedSnapshot.caseVersion,
+      (frozen.result as { expandedNpv: number }).expandedNpv,
+    ]);
+    const compared = (await (await reviewer.page.request.get(`/api/v1/compare?cases=${caseId},${baseCaseId}`)).json()).cases[0];
+    expect([compared.figuresVersion, compared.expandedNpv]).toEqual([approvedSnapshot.caseVersion, (frozen.result as { expandedNpv: number }).expandedNpv]);
 
     // Two decisions on one snapshot: the second is refused; the reviewed record cannot be deleted.
     expect((await reviewer.page.request.post(`/api/v1/cases/${caseId}/approve`)).status()).toBe(409);

@@ -24,6 +24,8 @@ interface ComparisonJson {
     staticNpv: number | null;
     expandedNpv: number | null;
     valuedAt: string | null;
+    figuresVersion: number | null;
+    version: number;
   }[];
   rows: { group: string; label: string; values: (string | null)[]; differs: boolean }[];
 }
@@ -112,6 +114,11 @@ export function CompareView() {
                       <th key={c.id} scope="col" className="border-b border-line bg-paper-sunk px-4 py-2 align-bottom">
                         <span className="block text-caption text-ink-muted">{c.projectName}</span>
                         <span className="font-semibold">{c.caseName}</span>
+                        <span className="block text-caption font-normal text-ink-muted">
+                          {c.figuresVersion === null
+                            ? 'not valued yet'
+                            : `figures of v${c.figuresVersion}${c.figuresVersion < c.version ? ` (now v${c.version}, not yet valued)` : ''}`}
+                        </span>
                       </th>
                     ))}
                   </tr>

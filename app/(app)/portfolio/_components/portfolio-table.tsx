@@ -80,7 +80,12 @@ const columns = helper.columns([
     id: 'valuedAt',
     header: 'Last valued',
     enableGlobalFilter: false,
-    cell: (info) => (info.row.original.latest ? `${formatDate(info.row.original.latest.valuedAt)} · ${info.row.original.latest.caseName}` : 'Not yet valued'),
+    cell: (info) => {
+      const latest = info.row.original.latest;
+      return latest
+        ? `${formatDate(latest.valuedAt)} · ${latest.caseName} v${latest.caseVersion}${latest.caseVersion < latest.currentVersion ? ' (edited since)' : ''}`
+        : 'Not yet valued';
+    },
   }),
 ]);
 

@@ -48,7 +48,9 @@ export function ProjectList({ canCreate }: { canCreate: boolean }) {
             </dl>
             <p className="mt-3 text-caption text-ink-muted">
               {p.caseCount} {p.caseCount === 1 ? 'case' : 'cases'} · {p.ownerName ?? 'no owner'} ·{' '}
-              {p.latest ? `base case valued ${formatDate(p.latest.valuedAt)}` : 'not valued yet'}
+              {p.latest
+                ? `base case v${p.latest.caseVersion} valued ${formatDate(p.latest.valuedAt)}${p.latest.caseVersion < p.latest.currentVersion ? ' (edited since)' : ''}`
+                : 'not valued yet'}
             </p>
           </Link>
         </li>

@@ -13,6 +13,7 @@ import { Input } from '@/components/ui/input';
 import { StatusBadge } from '@/components/status-badge';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import type { CaseStatus } from '@/db/types';
+import { ENGINE_VERSION } from '@/lattice';
 import { useToast } from '@/components/ui/toast';
 import { getJson, sendJson } from '@/lib/api-client';
 import type { CaseJson } from '@/lib/case-json';
@@ -32,6 +33,20 @@ export function CaseTable(props: { projectId: string; currency: string; canEdit:
   const [busy, setBusy] = useState(false);
   const router = useRouter();
   const toast = useToast();
+
+  // Stored figures from an older engine version are flagged; a re-value stores a run of today's.
+  const revalue = async (c: CaseJson) => {
+    setBusy(true);
+    try {
+      await sendJson('POST', `/api/v1/cases/${c.id}/valuations`);
+      toast(`“${c.name}” was valued again with ${ENGINE_VERSION}.`, 'success');
+      await mutate();
+    } catch (e) {
+      toast(e instanceof Error ? e.message : 'The case could not be valued.', 'error');
+    } finally {
+      setBusy(false);
+    }
+  };
 
   const open = (next: Pending, initialName = '') => {
     setPending(next);
@@ -90,7 +105,7 @@ export function CaseTable(props: { projectId: string; currency: string; canEdit:
               <Th numeric>Static NPV</Th>
               <Th numeric>Option premium</Th>
               <Th numeric>Expanded NPV</Th>
-              <Th>Last valued</Th>
+              <Th>Figures of</Th>
               <Th>Version</Th>
               {canEdit ? <Th className="text-right">Actions</Th> : null}
             </tr>
@@ -111,7 +126,29 @@ export function CaseTable(props: { projectId: string; currency: string; canEdit:
                 <Td numeric className="font-semibold">
                   {formatMoney(c.latest?.expandedNpv, currency)}
                 </Td>
-                <Td>{c.latest ? formatDate(c.latest.valuedAt) : <span className="text-ink-muted">Not yet</span>}</Td>
+                <Td>
+                  {c.latest ? (
+                    <>
+                      <span className="figures">v{c.latest.caseVersion}</span> · {formatDate(c.latest.valuedAt)}
+                      {c.latest.caseVersion < c.version ? <span className="block text-caption text-ember-700">edited since: not yet valued</span> : null}
+                      {c.latest.engineVersion !== ENGINE_VERSION ? (
+                        <span className="block text-caption text-ember-700">
+                          computed by {c.latest.engineVersion}, before today&rsquo;s engine
+                          {canEdit && c.status !== 'in_review' ? (
+                            <>
+                              {' '}
+                              <Button variant="quiet" busy={busy} onClick={() => revalue(c)} aria-label={`Re-value ${c.name} with today's engine`}>
+                                Re-value
+                              </Button>
+                            </>
+                          ) : null}
+                        </span>
+                      ) : null}
+                    </>
+                  ) : (
+                    <span className="text-ink-muted">Not yet</span>
+                  )}
+                </Td>
                 <Td className="figures">v{c.version}</Td>
                 {canEdit ? (
                   <Td className="whitespace-nowrap text-right">

@@ -3,6 +3,7 @@ import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { submitCase } from '@/db/queries/reviews';
+import { recordValuationRun } from '@/db/queries/valuation-runs';
 import { withAuth } from '@/lib/api';
 import { AppError } from '@/lib/errors';
 import { loadCaseRef, refOf } from '@/lib/review/case-ref';
@@ -37,6 +38,19 @@ export const POST = withAuth<{ caseId: string }>(
         },
       });
       if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
+      // The submitted figures are also the case's latest run, so every list shows them beside
+      // its status, not an older version's.
+      await recordValuationRun(trx, {
+        orgId: member.orgId,
+        caseId: stored.id,
+        caseVersion: stored.version,
+        input: valuation.model,
+        inputHash: valuation.inputHash,
+        result: valuation.result,
+        engineVersion: valuation.result.engineVersion,
+        createdBy: member.userId,
+        volatilitySource: valuation.inputs.settings.volatilitySource ?? null,
+      });
       await recordAudit(trx, {
         orgId: member.orgId,
         actorId: member.userId,
