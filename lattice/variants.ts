@@ -62,6 +62,17 @@ export interface Bump {
 const RELATIVE = 0.1;
 const RATE_STEP = 0.01;
 
+/** Every payout of the project times a factor; a fraction stays below 1. */
+function scalePayouts(u: ProjectModel['underlying'], factor: number): ProjectModel['underlying'] {
+  const fraction = (f: number) => Math.min(f * factor, 0.999999);
+  return {
+    ...u,
+    ...(u.payoutYield !== undefined ? { payoutYield: u.payoutYield * factor } : {}),
+    ...(u.payoutPeriods ? { payoutPeriods: u.payoutPeriods.map((p) => ({ ...p, fraction: fraction(p.fraction) })) } : {}),
+    ...(u.payouts ? { payouts: u.payouts.map((p) => ({ ...p, fraction: fraction(p.fraction) })) } : {}),
+  };
+}
+
 function costBump(model: ProjectModel, k: number, factor: number): ProjectModel {
   const clone = structuredClone(model);
   if (clone.options && clone.options.length > 0) {
@@ -108,12 +119,12 @@ const costField: Record<string, [field: string, label: string]> = {
 };
 
 /**
- * The inputs a tornado shows: V0 and σ ±10 % relative, r and δ ±1 percentage point (a relative
- * move of a small rate means little), and each right's cost, proceeds or payments ±10 %.
+ * The inputs a tornado shows, each moved both ways from the case (central): V0 and σ ±10 %
+ * relative, r ±1 percentage point (a relative move of a small rate means little), the payout
+ * schedule scaled by 0.9 and 1.1, and each right's cost, proceeds or payments ±10 %.
  */
 export function sensitivityBumps(model: ProjectModel, compiled: CompiledModel): Bump[] {
   const { value, volatility } = model.underlying;
-  const delta = model.underlying.payoutYield ?? 0;
   const bumps: Bump[] = [
     {
       parameter: 'underlying.value',
@@ -139,15 +150,20 @@ export function sensitivityBumps(model: ProjectModel, compiled: CompiledModel): 
       high: model.riskFreeRate + RATE_STEP,
       apply: (m, x) => ({ ...m, riskFreeRate: x }),
     },
-    {
-      parameter: 'underlying.payoutYield',
-      label: 'Payout yield δ',
-      base: delta,
-      low: Math.max(0, delta - RATE_STEP),
-      high: delta + RATE_STEP,
-      apply: (m, x) => ({ ...m, underlying: { ...m.underlying, payoutYield: x } }),
-    },
   ];
+  // The payout schedule is scaled as a whole (its yield, yearly fractions and lumps), not
+  // topped up with a yield of its own: the row reads "what if the project paid out 10 % more".
+  const u = model.underlying;
+  const hasPayouts = (u.payoutYield ?? 0) > 0 || (u.payoutPeriods ?? []).some((p) => p.fraction > 0) || (u.payouts ?? []).some((p) => p.fraction > 0);
+  if (hasPayouts)
+    bumps.push({
+      parameter: 'underlying.payouts',
+      label: 'Payout schedule',
+      base: 1,
+      low: 1 - RELATIVE,
+      high: 1 + RELATIVE,
+      apply: (m, factor) => ({ ...m, underlying: scalePayouts(m.underlying, factor) }),
+    });
   compiled.rights.forEach((right, k) => {
     bumps.push({
       parameter: `${right.field}.${costField[right.kind]![0]}`,
