@@ -53,12 +53,22 @@ export interface TreeSummary {
   discount: number;
 }
 
+/**
+ * How far the expanded NPV is from its many-step limit. `points` are expanded NPVs at step
+ * counts that keep every decision date on the grid (nothing snaps differently), ending with the
+ * case's own count N. With error ∝ 1/N, `extrapolated` is the Richardson extrapolation from N
+ * and the largest such count ≤ N/2, and `errorEstimate` the larger of the two last changes
+ * scaled to N's resolution; `band` is the expanded NPV ± twice that, and the test table of
+ * tests/lattice/convergence.test.ts measures how often the 5000-step value falls inside it.
+ */
 export interface Convergence {
-  points: { steps: number; value: Money }[];
-  /** Richardson extrapolation assuming an error proportional to 1/steps: 2·V(N) − V(N/2). */
+  points: { steps: number; expandedNpv: Money }[];
   extrapolated: Money;
-  /** |V(N) − V(N/2)|, the size of the last halving's change. */
+  /** NaN when no coarser count keeps every date on the grid. */
   errorEstimate: Money;
+  band: { low: Money; high: Money } | null;
+  /** False when the dates do not all fall on N's grid either; then the counts are N/4 and N/2. */
+  datesOnGrid: boolean;
 }
 
 export interface Sensitivity {

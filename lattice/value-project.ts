@@ -8,7 +8,8 @@ import { prepareModel } from './check-model';
 import { ModelError } from './errors';
 import { NODE_BUDGET } from './limits';
 import type { Convergence, Sensitivity, ValuationResult } from './result';
-import type { ProjectModel } from './schema';
+import type { Cost, ExerciseWindow, ProjectModel } from './schema';
+import type { Years } from './units';
 import { singlePass } from './single-pass';
 import { sensitivityBumps, withRights } from './variants';
 import { ENGINE_VERSION } from './version';
@@ -51,26 +52,83 @@ function expandedNpvWith(model: ProjectModel, compiled: CompiledModel, keep: (ri
   }
 }
 
-function convergenceOf(model: ProjectModel, value: number, warnings: string[]): Convergence | null {
+/** Every date of the model at which something can happen: windows, payments, payouts, cost steps. */
+function modelDates(model: ProjectModel): Years[] {
+  const dates: Years[] = [];
+  const window = (w: ExerciseWindow | undefined) => {
+    if (!w) return;
+    if (w.kind === 'american') dates.push(w.from, w.to);
+    else if (w.kind === 'bermudan') dates.push(...w.dates);
+    else dates.push(w.at);
+  };
+  const cost = (c: Cost) => {
+    if (Array.isArray(c)) dates.push(...c.map((e) => e.from));
+  };
+  for (const o of model.options ?? []) {
+    if (o.type === 'stage') dates.push(...o.payments.map((p) => p.at));
+    else window(o.window);
+    if (o.type === 'expand' || o.type === 'defer' || o.type === 'switch') cost(o.cost);
+    if (o.type === 'switch') cost(o.backCost);
+    if (o.type === 'contract') cost(o.savings);
+    if (o.type === 'abandon') cost(o.salvage);
+  }
+  for (const sw of model.switches ?? []) {
+    window(sw.window);
+    cost(sw.cost);
+  }
+  for (const p of model.underlying.payouts ?? []) dates.push(p.at);
+  for (const p of model.underlying.payoutPeriods ?? []) dates.push(p.from, p.to);
+  return dates;
+}
+
+/** The smallest step count that puts every date on the grid and divides N, or null. */
+function gridBase(model: ProjectModel): number | null {
+  const dates = modelDates(model);
   const n = model.steps;
-  const counts = [...new Set([Math.round(n / 4), Math.round(n / 2)])].filter((k) => k >= 1 && k < n);
+  for (let b = 1; b <= n; b++) {
+    if (n % b !== 0) continue;
+    const dt = model.horizon / b;
+    if (dates.every((t) => Math.abs(t / dt - Math.round(t / dt)) < 1e-9 * Math.max(1, t / dt))) return b;
+  }
+  return null;
+}
+
+const BAND_FACTOR = 2;
+const WARN_SHARE = 0.01;
+
+function convergenceOf(model: ProjectModel, expandedNpv: number, warnings: string[]): Convergence | null {
+  const n = model.steps;
+  const base = gridBase(model);
+  const below = (target: number) => (base ? Math.floor(target / base) * base : Math.round(target));
+  const counts = [...new Set([below(n / 4), below(n / 2)])].filter((k) => k >= 1 && k < n);
   const points: Convergence['points'] = [];
   for (const steps of counts) {
     try {
       const { model: m, compiled } = prepareModel({ ...model, steps });
-      points.push({ steps, value: singlePass(m, compiled, { valueOnly: true }).value });
+      points.push({ steps, expandedNpv: singlePass(m, compiled, { valueOnly: true }).expandedNpv });
     } catch (error) {
       if (!(error instanceof ModelError)) throw error;
       warnings.push(`convergence: ${steps} steps were skipped (${error.message})`);
     }
   }
-  points.push({ steps: n, value });
-  const half = points.find((p) => p.steps === Math.round(n / 2) && p.steps < n);
-  if (!half) return { points, extrapolated: value, errorEstimate: NaN };
-  const errorEstimate = Math.abs(value - half.value);
-  if (errorEstimate > 0.005 * Math.max(Math.abs(value), 1e-12))
-    warnings.push(`the value moved by ${errorEstimate.toPrecision(3)} between ${half.steps} and ${n} steps (over 0.5 %); use more steps`);
-  return { points, extrapolated: 2 * value - half.value, errorEstimate };
+  points.push({ steps: n, expandedNpv });
+  const datesOnGrid = base !== null;
+  const [first, second] = points.length >= 3 ? points : [undefined, points.length === 2 ? points[0] : undefined];
+  if (!second) {
+    warnings.push('convergence: no coarser step count keeps every decision date on the grid, so the lattice error is not estimated');
+    return { points, extrapolated: expandedNpv, errorEstimate: NaN, band: null, datesOnGrid };
+  }
+  // Error ∝ 1/N: V_N − V_∞ ≈ (V_N − V_M)·M/(N − M) for a coarser count M.
+  const lastChange = (Math.abs(expandedNpv - second.expandedNpv) * second.steps) / (n - second.steps);
+  const earlierChange = first ? (Math.abs(second.expandedNpv - first.expandedNpv) * first.steps) / (n - first.steps) : 0;
+  const errorEstimate = Math.max(lastChange, earlierChange);
+  const extrapolated = (n * expandedNpv - second.steps * second.expandedNpv) / (n - second.steps);
+  const half = BAND_FACTOR * errorEstimate;
+  if (half > WARN_SHARE * Math.abs(expandedNpv))
+    warnings.push(
+      `the lattice error band (± ${half.toPrecision(3)}) is over ${WARN_SHARE * 100} % of the expanded NPV (${expandedNpv.toPrecision(4)}); use more steps`,
+    );
+  return { points, extrapolated, errorEstimate, band: { low: expandedNpv - half, high: expandedNpv + half }, datesOnGrid };
 }
 
 function sensitivitiesOf(model: ProjectModel, compiled: CompiledModel): Sensitivity[] {
@@ -137,7 +195,7 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
   let sensitivities: Sensitivity[] | null = null;
 
   if (options.extras !== false) {
-    convergence = convergenceOf(model, pass.value, warnings);
+    convergence = convergenceOf(model, pass.expandedNpv, warnings);
     sensitivities = sensitivitiesOf(model, compiled);
     const count = compiled.rights.length;
     pass.switches.forEach((sw, r) => {

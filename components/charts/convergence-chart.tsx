@@ -5,14 +5,16 @@ import type { Convergence } from '@/lattice';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 
-/** The lattice value as steps grow, with the extrapolated value and a band of ± the error estimate. */
+/** The expanded NPV as steps grow, with the engine's error band around the case's own value and the extrapolated value. */
 export function ConvergenceChart({ convergence, currency }: { convergence: Convergence; currency: string }) {
   const { ref, width } = useWidth<HTMLDivElement>(480);
   const height = 200;
   const margin = { top: 16, right: 24, bottom: 36, left: 64 };
-  const { points, extrapolated, errorEstimate } = convergence;
-  const band = Number.isFinite(errorEstimate) ? errorEstimate : 0;
-  const values = points.map((p) => p.value).concat(extrapolated - band, extrapolated + band);
+  const { extrapolated } = convergence;
+  const points = convergence.points.map((p) => ({ steps: p.steps, value: p.expandedNpv }));
+  const own = points.at(-1)!.value;
+  const band = convergence.band ?? { low: own, high: own };
+  const values = points.map((p) => p.value).concat(band.low, band.high, extrapolated);
   const x = scaleLinear()
     .domain([0, Math.max(...points.map((p) => p.steps))])
     .range([margin.left, width - margin.right]);
@@ -30,15 +32,9 @@ export function ConvergenceChart({ convergence, currency }: { convergence: Conve
         width={width}
         height={height}
         role="img"
-        aria-label={`Value at ${points.map((p) => `${p.steps} steps ${formatMoney(p.value, currency)}`).join(', ')}; extrapolated ${formatMoney(extrapolated, currency)}`}
+        aria-label={`Expanded NPV at ${points.map((p) => `${p.steps} steps ${formatMoney(p.value, currency)}`).join(', ')}; extrapolated ${formatMoney(extrapolated, currency)}`}
       >
-        <rect
-          x={margin.left}
-          width={width - margin.left - margin.right}
-          y={y(extrapolated + band)}
-          height={Math.max(1, y(extrapolated - band) - y(extrapolated + band))}
-          fill="#e9f4f4"
-        />
+        <rect x={margin.left} width={width - margin.left - margin.right} y={y(band.high)} height={Math.max(1, y(band.low) - y(band.high))} fill="#e9f4f4" />
         <line x1={margin.left} x2={width - margin.right} y1={y(extrapolated)} y2={y(extrapolated)} stroke="#23727a" strokeDasharray="4 3" />
         <text x={width - margin.right} y={y(extrapolated) - 6} textAnchor="end" className="fill-tide-700 text-caption">
           extrapolated {formatMoney(extrapolated, currency, 2)}

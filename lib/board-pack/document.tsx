@@ -8,6 +8,7 @@
  */
 import { Circle, Document, G, Line, Page, Rect, StyleSheet, Svg, Text, View } from '@react-pdf/renderer';
 import type { ReactNode } from 'react';
+import type { ValuationResult } from '@/lattice';
 import { VALUATION_CAUTION } from '@/components/valuation-caution';
 import { analyseCashFlows } from '../cash-flows';
 import { layoutLatticeTree } from '../charts/lattice-tree';
@@ -233,6 +234,11 @@ function TornadoPdf({ data, width }: { data: BoardPackData; width: number }) {
   );
 }
 
+/** A convergence point's expanded NPV; results stored by engine 1.x kept the lattice value instead. */
+function convergedNpv(p: { steps: number; expandedNpv?: number; value?: number }, r: ValuationResult): number {
+  return p.expandedNpv ?? p.value! - (r.value - r.expandedNpv);
+}
+
 function LatticePdf({ data, width }: { data: BoardPackData; width: number }) {
   if (!data.excerpt) return null;
   // The excerpt follows the mode the project starts in, as the app's lattice view does.
@@ -361,7 +367,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
         {r.convergence ? (
           <Text style={{ fontSize: 10, lineHeight: 1.4, marginTop: 10, color: soft }}>
             {pdfText(
-              `Convergence: at ${r.convergence.points.map((p) => `${p.steps} steps ${money(p.value - (r.value - r.expandedNpv), currency, 2)}`).join(', ')} (expanded NPV); the last halving of steps moved it by ${money(r.convergence.errorEstimate, currency, 2)}.`,
+              `Convergence: expanded NPV ${r.convergence.points.map((p) => `${money(convergedNpv(p, r), currency, 2)} at ${p.steps} steps`).join(', ')}${r.convergence.band ? `; lattice error band ${money(r.convergence.band.low, currency, 2)} to ${money(r.convergence.band.high, currency, 2)}` : ''}.`,
             )}
           </Text>
         ) : null}

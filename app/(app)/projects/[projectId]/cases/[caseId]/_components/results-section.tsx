@@ -40,14 +40,7 @@ function TimingBars({ s }: { s: SwitchResult }) {
 
 /** What the valuation says: the bridge, each right's value and use, sensitivities, convergence, and the cautions. */
 export function ResultsSection({ result, currency }: { result: ValuationResult; currency: string }) {
-  // The engine reports convergence of the lattice value; the page speaks in expanded NPV, which
-  // differs from it by the fixed outlay.
-  const outlay = result.value - result.expandedNpv;
-  const convergence = result.convergence && {
-    points: result.convergence.points.map((p) => ({ steps: p.steps, value: p.value - outlay })),
-    extrapolated: result.convergence.extrapolated - outlay,
-    errorEstimate: result.convergence.errorEstimate,
-  };
+  const convergence = result.convergence;
   return (
     <div className="flex flex-col gap-6">
       <Panel
@@ -106,9 +99,9 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
           <Panel
             title="Convergence as steps grow"
             note={
-              Number.isFinite(convergence.errorEstimate)
-                ? `Expanded NPV at fewer steps. Change over the last halving: ${formatMoney(convergence.errorEstimate, currency, 2)}; extrapolated expanded NPV ${formatMoney(convergence.extrapolated, currency, 2)}.`
-                : 'Too few steps to estimate the error.'
+              convergence.band
+                ? `Expanded NPV at step counts that keep every decision date on the grid. Lattice error band ${formatMoney(convergence.band.low, currency, 2)} to ${formatMoney(convergence.band.high, currency, 2)}; extrapolated ${formatMoney(convergence.extrapolated, currency, 2)}.${convergence.datesOnGrid ? '' : ' Some dates fall between steps at this count, so the coarser counts are halvings.'}`
+                : 'No coarser step count keeps every decision date on the grid, so the lattice error is not estimated.'
             }
           >
             <ConvergenceChart convergence={convergence} currency={currency} />
