@@ -32,7 +32,7 @@ function schedule(columns: { revenue: number[]; operatingCost: number[]; capex: 
 const plantRows = schedule({
   revenue: [0, 58, 74, 86, 94, 98, 100, 101, 102],
   operatingCost: [0, 36, 44, 50, 54, 56, 57, 58, 58],
-  capex: [185, 0, 0, 0, 0, 0, 0, 0, 0],
+  capex: [165, 0, 0, 0, 0, 0, 0, 0, 0],
   tax: [0, 3.5, 6.5, 8, 9.5, 10, 10.5, 10.5, 11],
   workingCapital: [0, 6, 2, 1.5, 1, 0.5, 0, 0, -11],
 });
@@ -58,8 +58,11 @@ const plantBase: CaseInput = {
       salvage: [
         { from: 0, amount: 95 },
         { from: 4, amount: 70 },
+        { from: 6, amount: 35 },
       ],
-      window: { kind: 'american', from: 1, to: 8 },
+      // Until year 7: selling at the end of the schedule, after its last cash flow, would be a
+      // certain gain (a plan, not an option) the cash flows should hold instead.
+      window: { kind: 'american', from: 1, to: 7 },
     },
   ],
 };
@@ -136,7 +139,7 @@ const lineBase: CaseInput = {
   },
   options: [
     { type: 'switch', id: 'Mothball', toScale: 0, cost: 1.5, backCost: 3, flowPerYear: 2, window: { kind: 'american', from: 0, to: 6 } },
-    { type: 'abandon', id: 'Close the line', salvage: 6, window: { kind: 'american', from: 0, to: 6 } },
+    { type: 'abandon', id: 'Close the line', salvage: 6, window: { kind: 'american', from: 0, to: 5 } },
   ],
 };
 

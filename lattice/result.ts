@@ -93,6 +93,12 @@ export interface ValuationResult {
   modes: Record<string, Money>;
   switches: SwitchResult[];
   tree: TreeSummary;
+  /**
+   * The premium split in two (null without extras): `betterPlan`, what the same rights add when
+   * nothing is uncertain (volatility → 0: the premium of using them on a known path), and
+   * `uncertainty`, the rest: what they add because the future is not known.
+   */
+  premiumSplit: { betterPlan: Money; uncertainty: Money } | null;
   convergence: Convergence | null;
   sensitivities: Sensitivity[] | null;
   snaps: Snap[];

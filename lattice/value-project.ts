@@ -96,6 +96,27 @@ function gridBase(model: ProjectModel): number | null {
 const BAND_FACTOR = 2;
 const WARN_SHARE = 0.01;
 
+/** Volatility of the deterministic limit: the Jarrow–Rudd tree keeps p = ½ at any σ, so 1e-6 is a path. */
+const NO_UNCERTAINTY = 1e-6;
+
+/**
+ * What the rights add with (almost) no uncertainty: the expanded NPV on a Jarrow–Rudd lattice
+ * with σ = 1e-6 minus the static NPV (which does not depend on σ). Null when that is refused.
+ */
+function deterministicPremium(model: ProjectModel, staticNpv: number): number | null {
+  const certain: ProjectModel = { ...model, tree: 'jarrow-rudd', underlying: { ...model.underlying, volatility: NO_UNCERTAINTY } };
+  try {
+    const { model: checked, compiled } = prepareModel(certain);
+    return singlePass(checked, compiled, { valueOnly: true }).expandedNpv - staticNpv;
+  } catch (error) {
+    if (error instanceof ModelError) return null;
+    throw error;
+  }
+}
+
+/** Above this risk-neutral probability of use, a right reads as part of the plan. */
+const PLAN_LIKE = 0.95;
+
 function convergenceOf(model: ProjectModel, expandedNpv: number, warnings: string[]): Convergence | null {
   const n = model.steps;
   const base = gridBase(model);
@@ -193,9 +214,12 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
   const warnings: string[] = [];
   let convergence: Convergence | null = null;
   let sensitivities: Sensitivity[] | null = null;
+  let premiumSplit: ValuationResult['premiumSplit'] = null;
 
   if (options.extras !== false) {
     convergence = convergenceOf(model, pass.expandedNpv, warnings);
+    const betterPlan = deterministicPremium(model, pass.staticNpv);
+    if (betterPlan !== null) premiumSplit = { betterPlan, uncertainty: pass.expandedNpv - pass.staticNpv - betterPlan };
     sensitivities = sensitivitiesOf(model, compiled);
     const count = compiled.rights.length;
     pass.switches.forEach((sw, r) => {
@@ -211,6 +235,12 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
   }
   for (const sw of pass.switches) {
     if (sw.exerciseProbability === 0) warnings.push(`${sw.id} is never exercised on this lattice, so it adds no value as specified`);
+    // A right first used today is a decision of the plan by definition; only later use is flagged.
+    const usedToday = sw.exerciseTiming[0]?.t === 0 ? sw.exerciseTiming[0].probability : 0;
+    if (sw.exerciseProbability > PLAN_LIKE && usedToday < PLAN_LIKE)
+      warnings.push(
+        `${sw.id} is used with probability ${(sw.exerciseProbability * 100).toFixed(1)} % (over ${PLAN_LIKE * 100} %): it works as part of the plan more than as an option; consider putting it in the cash flows`,
+      );
   }
 
   const { plan } = pass;
@@ -223,6 +253,7 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
     modes: pass.modes,
     switches: pass.switches,
     tree: { kind: plan.kind, steps: plan.steps, u: plan.u, d: plan.d, p: plan.p, dt: plan.dt, discount: plan.discount },
+    premiumSplit,
     convergence,
     sensitivities,
     snaps: plan.snaps,

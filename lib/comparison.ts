@@ -98,6 +98,8 @@ export async function compareCases(orgId: string, caseIds: string[]): Promise<Co
   );
   add('Valuation', 'Static NPV', ...money((r) => r.staticNpv));
   add('Valuation', 'Option premium', ...money((r) => r.optionPremium));
+  add('Valuation', 'of which a better plan', ...money((r) => r.premiumSplit?.betterPlan ?? null));
+  add('Valuation', 'of which flexibility under uncertainty', ...money((r) => r.premiumSplit?.uncertainty ?? null));
   add('Valuation', 'Expanded NPV', ...money((r) => r.expandedNpv));
 
   const optionIds = [...new Set(results.flatMap((r) => r?.switches.map((s) => s.id) ?? []))];

@@ -18,6 +18,7 @@ import { layoutWaterfall, waterfallSteps } from '../charts/waterfall';
 import { decisionRule } from '../decision-rules';
 import { formatChange, formatDateTime, formatMoney, formatPercent } from '../format';
 import { optionTypeLabels, type OptionType } from '../option-form';
+import { premiumSplitText } from '../premium-split';
 import { describeOption } from '../option-words';
 import type { BoardPackData } from './data';
 import { recommendation } from './recommendation';
@@ -314,6 +315,9 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
             <Text style={styles.tileValue}>{money(r.expandedNpv, currency)}</Text>
           </View>
         </View>
+        {premiumSplitText(r, currency) ? (
+          <Text style={{ fontSize: 10, lineHeight: 1.4, marginBottom: 6 }}>{pdfText(premiumSplitText(r, currency)!)}</Text>
+        ) : null}
         <Text style={styles.h3}>Recommendation</Text>
         <Text style={{ fontSize: 10, lineHeight: 1.4, fontWeight: 600 }}>{rec.headline}</Text>
         <Text style={{ fontSize: 10, lineHeight: 1.4, marginTop: 4 }}>{pdfText(rec.body)}</Text>

@@ -9,6 +9,7 @@ import { ValuationCaution } from '@/components/valuation-caution';
 import type { SwitchResult, ValuationResult } from '@/lattice';
 import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney, formatPercent } from '@/lib/format';
+import { premiumSplitText } from '@/lib/premium-split';
 import { optionTypeLabels, type OptionType } from '@/lib/option-form';
 
 /** Probability of first exercise per year (summed over the steps of each year), as small bars with the numbers in a tooltip. */
@@ -49,6 +50,11 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
       >
         <WaterfallChart result={result} currency={currency} />
       </Panel>
+      {premiumSplitText(result, currency) ? (
+        <p className="rounded-card border border-line bg-paper-raised px-5 py-3 text-body" data-testid="premium-split">
+          {premiumSplitText(result, currency)}
+        </p>
+      ) : null}
       <Panel
         title="The rights, one by one"
         note="Stand-alone: the right alone on the project. Incremental: what it adds to the others. Probabilities are risk-neutral."
