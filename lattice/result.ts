@@ -99,6 +99,12 @@ export interface ValuationResult {
    * `uncertainty`, the rest: what they add because the future is not known.
    */
   premiumSplit: { betterPlan: Money; uncertainty: Money } | null;
+  /**
+   * What the rights are worth together beyond the sum of their stand-alone values (Trigeorgis
+   * 1993): negative when they substitute (two puts on one plant), positive when they
+   * complement. Null without extras or with fewer than two rights.
+   */
+  interaction: Money | null;
   convergence: Convergence | null;
   sensitivities: Sensitivity[] | null;
   snaps: Snap[];

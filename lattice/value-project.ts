@@ -243,6 +243,9 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
       );
   }
 
+  const standalones = pass.switches.map((sw) => sw.standalone);
+  const interaction =
+    pass.switches.length >= 2 && standalones.every((x) => x !== null) ? pass.expandedNpv - pass.staticNpv - standalones.reduce((sum, x) => sum + x!, 0) : null;
   const { plan } = pass;
   const result: ValuationResult = {
     value: pass.value,
@@ -254,6 +257,7 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
     switches: pass.switches,
     tree: { kind: plan.kind, steps: plan.steps, u: plan.u, d: plan.d, p: plan.p, dt: plan.dt, discount: plan.discount },
     premiumSplit,
+    interaction,
     convergence,
     sensitivities,
     snaps: plan.snaps,

@@ -5,7 +5,7 @@ import { formatChange, formatMoney } from '@/lib/format';
 import type { ValuationResult } from '@/lattice';
 import { useWidth } from './use-width';
 
-/** From static to expanded NPV: each right's incremental value and their interaction, signed in text as well as colour. */
+/** From static to expanded NPV: each right's stand-alone value and the engine's interaction, signed in text as well as colour. */
 export function WaterfallChart({ result, currency }: { result: ValuationResult; currency: string }) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const steps = waterfallSteps(result);

@@ -337,24 +337,28 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
       <Section data={data} title="Option values and their interactions">
         <Text style={{ fontSize: 10, lineHeight: 1.4, color: soft, marginBottom: 6 }}>
           Stand-alone: the option alone on the project. Incremental: what it adds to all the others. The interaction is what the options are worth together
-          beyond the sum of their increments. Probabilities are risk-neutral.
+          beyond the sum of their stand-alone values (negative when they substitute). Probabilities are risk-neutral.
         </Text>
         <Table
           columns={['Option', 'Stand-alone', 'Incremental', 'Ever exercised']}
           widths={[46, 18, 18, 18]}
-          rows={r.switches.map((s) => [
-            `${s.id} (${optionTypeLabels[s.kind as OptionType] ?? s.kind})`,
-            money(s.standalone, currency),
-            money(s.incremental, currency),
-            formatPercent(s.exerciseProbability),
-          ])}
+          rows={[
+            ...r.switches.map((s) => [
+              `${s.id} (${optionTypeLabels[s.kind as OptionType] ?? s.kind})`,
+              money(s.standalone, currency),
+              money(s.incremental, currency),
+              formatPercent(s.exerciseProbability),
+            ]),
+            ...(r.interaction !== null && r.interaction !== undefined ? [['Interaction (together vs. alone)', money(r.interaction, currency), '', '']] : []),
+          ]}
         />
         <Text style={styles.h3}>From static to expanded NPV ({currency})</Text>
         <WaterfallPdf data={data} width={contentWidth} />
         <Text style={styles.h3}>Sensitivity of the expanded NPV ({currency})</Text>
         <Text style={{ lineHeight: 1.4, color: soft, fontSize: 8.5 }}>
-          Each input moved on its own: V0 and volatility by 10 % down (grey) and up (teal), rates by one point, each option&apos;s money by 10 %. Figures:
-          expanded NPV when moved down / up; the vertical line is the valued expanded NPV, {money(r.expandedNpv, currency)}.
+          Each input moved on its own, both ways: V0 and volatility by 10 % down (grey) and up (teal), the risk-free rate by one point, the payout schedule and
+          each option&apos;s money by 10 %. Figures: expanded NPV when moved down / up; the vertical line is the valued expanded NPV,{' '}
+          {money(r.expandedNpv, currency)}.
         </Text>
         <TornadoPdf data={data} width={contentWidth} />
       </Section>

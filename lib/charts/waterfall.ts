@@ -1,7 +1,7 @@
 /**
- * Geometry of the bridge from static to expanded NPV: the static NPV, each right's incremental
- * value, the interaction (what the rights are worth together beyond the sum of their
- * increments) and the expanded NPV. Pure (d3-scale only), shared by the web and PDF charts.
+ * Geometry of the bridge from static to expanded NPV: the static NPV, each right's stand-alone
+ * value, the engine's interaction (what the rights are worth together beyond the sum of their
+ * stand-alone values; negative when they substitute) and the expanded NPV. Pure (d3-scale only), shared by the web and PDF charts.
  */
 import { scaleBand, scaleLinear } from 'd3';
 import type { ValuationResult } from '@/lattice';
@@ -16,20 +16,18 @@ export interface WaterfallStep {
   to: number;
 }
 
-export function waterfallSteps(result: Pick<ValuationResult, 'staticNpv' | 'expandedNpv' | 'optionPremium' | 'switches'>): WaterfallStep[] {
+export function waterfallSteps(result: Pick<ValuationResult, 'staticNpv' | 'expandedNpv' | 'optionPremium' | 'switches' | 'interaction'>): WaterfallStep[] {
   const steps: WaterfallStep[] = [{ key: 'static', label: 'Static NPV', kind: 'total', value: result.staticNpv, from: 0, to: result.staticNpv }];
   let running = result.staticNpv;
-  let increments = 0;
   for (const s of result.switches) {
-    if (s.incremental === null) continue;
-    steps.push({ key: `right:${s.id}`, label: s.id, kind: 'change', value: s.incremental, from: running, to: running + s.incremental });
-    running += s.incremental;
-    increments += s.incremental;
+    if (s.standalone === null) continue;
+    steps.push({ key: `right:${s.id}`, label: s.id, kind: 'change', value: s.standalone, from: running, to: running + s.standalone });
+    running += s.standalone;
   }
-  const interaction = result.optionPremium - increments;
-  // One right has no interaction by definition; several almost always do, and it is shown even when small.
-  if (result.switches.filter((s) => s.incremental !== null).length > 1)
-    steps.push({ key: 'interaction', label: 'Interaction', kind: 'change', value: interaction, from: running, to: running + interaction });
+  // The engine's interaction closes the bridge (results stored before it reported one: the remainder).
+  const interaction = result.interaction ?? (result.switches.length > 1 ? result.expandedNpv - running : null);
+  if (interaction !== null && result.switches.length > 1)
+    steps.push({ key: 'interaction', label: 'Together vs. alone', kind: 'change', value: interaction, from: running, to: running + interaction });
   steps.push({ key: 'expanded', label: 'Expanded NPV', kind: 'total', value: result.expandedNpv, from: 0, to: result.expandedNpv });
   return steps;
 }

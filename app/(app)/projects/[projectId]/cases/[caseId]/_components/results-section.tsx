@@ -46,7 +46,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
     <div className="flex flex-col gap-6">
       <Panel
         title="From static to expanded NPV"
-        note="Each right's incremental value (all rights less all but this one), then what they add together beyond their increments."
+        note="Each right's stand-alone value (the right alone on the project), then what they are worth together beyond that: negative when they substitute, positive when they complement."
       >
         <WaterfallChart result={result} currency={currency} />
       </Panel>
@@ -95,7 +95,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
       {result.sensitivities ? (
         <Panel
           title="Sensitivity of the expanded NPV"
-          note="Each input moved on its own, all else as valued: V0 and σ by ±10 %, rates by ±1 point, each right's money by ±10 %."
+          note="Each input moved both ways on its own, all else as valued: V0 and σ by ±10 %, the risk-free rate by ±1 point, the payout schedule and each right's money by ±10 %."
         >
           <TornadoChart sensitivities={result.sensitivities} base={result.expandedNpv} currency={currency} />
         </Panel>
