@@ -1,5 +1,5 @@
 /**
- * Parses and checks a model before any work (ENGINE.md §8), and compiles it. Shape rules come
+ * Parses and checks a model before any work (docs/engine.md §8), and compiles it. Shape rules come
  * from the zod schema; the rules here relate fields to each other. Every refusal is a
  * `ModelError` naming the field and the rule; nothing is ever valued from a model that failed.
  */

@@ -1,5 +1,5 @@
 /**
- * Explains one node's value three equivalent ways (ENGINE.md §6): the risk-neutral
+ * Explains one node's value three equivalent ways (docs/engine.md §6): the risk-neutral
  * expectation, and the replicating position (Δ units of the project's value plus B in
  * risk-free debt) that pays the same one step on. On CRR and Tian the three agree to rounding;
  * on Jarrow–Rudd and Trigeorgis the tree's p is not the exact risk-neutral probability of its

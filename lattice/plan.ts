@@ -7,7 +7,7 @@
  * Each mode's value is split as W = A + O, where A is the value of staying in the mode for
  * good (scale·V + PV of its flows and terminal value, known in closed form) and O is the value
  * of the rights still open from it. The lattice rolls back O only. On trees that match the
- * first moment exactly (CRR, Tian) this is the textbook rollback of ENGINE.md §4 to rounding;
+ * first moment exactly (CRR, Tian) this is the textbook rollback of docs/engine.md §4 to rounding;
  * on Jarrow–Rudd and Trigeorgis it removes the tree's small drift error from V itself (a
  * control variate), so a project with no rights is worth exactly its closed form on every tree
  * and an abandon-only project is V0 plus the same tree's American put.

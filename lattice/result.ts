@@ -1,5 +1,5 @@
 /**
- * What `valueProject` returns (ENGINE.md §5). Money is in the model's currency, times in years.
+ * What `valueProject` returns (docs/engine.md §5). Money is in the model's currency, times in years.
  */
 import type { TreeKind } from './schema';
 import type { Money, Probability, Years } from './units';

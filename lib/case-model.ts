@@ -2,7 +2,7 @@
  * Builds the engine's model from a stored case: V0, the payout schedule and the investment
  * come from the cash-flow schedule (lib/cash-flows.ts); volatility, rate, steps and tree from
  * the case's settings; the rights from its option templates. The horizon is the schedule's
- * last year (the value beyond it is carried by V, ENGINE.md §2).
+ * last year (the value beyond it is carried by V, docs/engine.md §2).
  */
 import type { ProjectModel } from '@/lattice';
 import { analyseCashFlows } from './cash-flows';

@@ -1,5 +1,5 @@
 /**
- * Bad input (ENGINE.md §8): every invalid model is refused before any work, with a message that
+ * Bad input (docs/engine.md §8): every invalid model is refused before any work, with a message that
  * names the field and the rule, through `valueProject` and through the CLI (exit status 2, one
  * line on standard error). Each case has its own message.
  */

@@ -1,5 +1,5 @@
 /**
- * explainNode (ENGINE.md §6): at every node the value is the risk-neutral expectation and the
+ * explainNode (docs/engine.md §6): at every node the value is the risk-neutral expectation and the
  * cost of the replicating position Δ·(V − payout) + B, which must agree to rounding on trees
  * that match the first moment (CRR, Tian). The one-period replication argument is common
  * practice, no source beyond Cox, Ross & Rubinstein (1979). Tolerance 1e-9 relative.

@@ -1,5 +1,5 @@
 /**
- * Published values beyond Hull (ENGINE.md §7).
+ * Published values beyond Hull (docs/engine.md §7).
  * - Longstaff & Schwartz (2001), *Review of Financial Studies* 14(1), Table 1 (all twenty rows,
  *   `tests/lattice/reference/longstaff-schwartz-2001-table1.csv`, a copy of the shared reference table): their finite-difference American put
  *   values. Their exercise is effectively discrete, so the engine uses a Bermudan window of 50

@@ -2,11 +2,11 @@
  * Same-tree comparison with quantlib.js (`@quantlib/ql` 0.3.6, a port of QuantLib's
  * BinomialVanillaEngine). An abandon-only project is V0 plus an American put with strike =
  * salvage and dividend yield δ; a defer-only project is an American call with strike = cost
- * (ENGINE.md §7). On Jarrow–Rudd, Tian and Trigeorgis both sides run the same recursion on the
+ * (docs/engine.md §7). On Jarrow–Rudd, Tian and Trigeorgis both sides run the same recursion on the
  * same nodes, so the tolerance is 1e-9 relative (measured: about 1e-12).
  *
  * CRR: quantlib.js uses the first-order probability p = ½ + ½·(r − δ − σ²/2)·√Δt/σ instead of
- * the exact (e^{(r−δ)Δt} − d)/(u − d); ENGINE.md §7 notes the prices then differ by O(Δt). The
+ * the exact (e^{(r−δ)Δt} − d)/(u − d); docs/engine.md §7 notes the prices then differ by O(Δt). The
  * tolerance is 0.02·K·Δt (K the strike, Δt in years): on this grid the largest measured
  * |difference|/(K·Δt) was 0.0072 (σ = 0.6, 120 steps over 2 years), so the bound has a margin of
  * about 3 and shrinks in proportion to Δt as steps grow.

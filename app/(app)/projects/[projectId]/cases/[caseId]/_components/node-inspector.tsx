@@ -6,7 +6,7 @@ import { formatNumber } from '@/lib/format';
 const n4 = (x: number) => formatNumber(x, 4);
 
 /**
- * Why a node is worth what it is, three equivalent ways (ENGINE.md §6): the risk-neutral
+ * Why a node is worth what it is, three equivalent ways (docs/engine.md §6): the risk-neutral
  * expectation of the next step, the replicating position (Δ units of the project's value and B
  * in risk-free debt) that pays the same, and the exercise rule applied to the result.
  */
