@@ -114,6 +114,62 @@ describe('interacting rights worked by hand', () => {
     expectClose(fixed.value, 48 + 90 / 1.05, { abs: 1e-9 }, { case: 'fixed salvage' });
   });
 
+  it('a salvage on a step schedule: 90 until year 2, then 60', () => {
+    // t = 2: max(V, 60) → 156.25, 100, 64 (64 > 60: keep).
+    // t = 1 (salvage 90): at 125, continuing (5/9·156.25 + 4/9·100)/1.05 = 125 beats 90;
+    //        at 80, continuing (5/9·100 + 4/9·64)/1.05 = 80 loses to 90: sell.
+    // t = 0: continuing (5/9·125 + 4/9·90)/1.05 = 104.232804 beats 90.
+    const t1down = Math.max((p * 100 + q * 64) / 1.05, 90);
+    const t1up = Math.max((p * 156.25 + q * 100) / 1.05, 90);
+    const root = (p * t1up + q * t1down) / 1.05;
+    expectClose(root, 104.232804, { abs: 1e-6 }, { step: 'hand arithmetic' });
+    const r = valueProject(
+      {
+        ...base,
+        horizon: 2,
+        steps: 2,
+        options: [
+          {
+            type: 'abandon',
+            salvage: [
+              { from: 0, amount: 90 },
+              { from: 2, amount: 60 },
+            ],
+            window: { kind: 'american', from: 0, to: 2 },
+          },
+        ],
+      },
+      { extras: false },
+    );
+    expectClose(r.value, root, { abs: 1e-9 }, { case: 'step schedule' });
+    expect(r.switches[0]!.exerciseTiming).toEqual([{ t: 1, probability: expect.closeTo(q, 12) }]);
+  });
+
+  it('an expansion whose cost grows 10 % a year (30·1.1^t)', () => {
+    // Costs 30, 33, 36.3 at t = 0, 1, 2. Expanded, the plant is worth 1.5·V for good.
+    // t = 2: max(V, 1.5V − 36.3) → 198.075, 113.7, 64.
+    // t = 1: at 125, continuing (5/9·198.075 + 4/9·113.7)/1.05 = 152.928571 < 1.5·125 − 33 = 154.5: expand;
+    //        at 80, continuing (5/9·113.7 + 4/9·64)/1.05 = 87.248677 > 120 − 33 = 87: wait.
+    // t = 0: continuing (5/9·154.5 + 4/9·87.248677)/1.05 = 118.676... < 150 − 30 = 120: expand now.
+    const cost = (t: number) => 30 * 1.1 ** t;
+    const t2 = [156.25, 100, 64].map((v) => Math.max(v, 1.5 * v - cost(2)));
+    const t1up = Math.max((p * t2[0]! + q * t2[1]!) / 1.05, 1.5 * 125 - cost(1));
+    const t1down = Math.max((p * t2[1]! + q * t2[2]!) / 1.05, 1.5 * 80 - cost(1));
+    const root = Math.max((p * t1up + q * t1down) / 1.05, 150 - cost(0));
+    expectClose(root, 120, { abs: 1e-9 }, { step: 'hand arithmetic' });
+    const r = valueProject(
+      {
+        ...base,
+        horizon: 2,
+        steps: 2,
+        options: [{ type: 'expand', factor: 0.5, cost: { amount: 30, growth: Math.log(1.1) }, window: { kind: 'american', from: 0, to: 2 } }],
+      },
+      { extras: false },
+    );
+    expectClose(r.value, root, { abs: 1e-9 }, { case: 'growing cost' });
+    expect(r.switches[0]!.exerciseTiming).toEqual([{ t: 0, probability: 1 }]);
+  });
+
   it('mothball and restart around a discrete payout, two steps', () => {
     // The project pays 25 % of its value at t = 1. The payout belongs to the year that ends
     // there (docs/engine.md §4): the mode held during that year receives it, and a decision at
