@@ -4,7 +4,8 @@
  *    steps: the engine (CRR, one pass) and quantlib.js's BinomialVanillaEngine with
  *    CoxRossRubinstein; median of several runs, with the ratio.
  * 2. A full valuation with expand + contract + abandon + defer at 500 steps, including the
- *    stand-alone and incremental breakdown, convergence and sensitivities.
+ *    stand-alone and incremental breakdown, convergence and sensitivities, and the cost of the
+ *    convergence re-runs and of the premium split's σ → 0 run.
  * 3. Rendering the board pack of the demo plant's base case (A4), first and steady.
  * 4. Monte Carlo volatility: paths a second for a ten-year model with three correlated drivers.
  * The script is bundled with esbuild and run by plain node, as the app ships the engine (tsx's
@@ -78,6 +79,18 @@ const full = time(() => valueProject(fourOptions), 11);
 console.log('\nFour options (defer, expand, contract, abandon), 500 steps, 6 modes');
 console.log(`  one lattice pass (extras: false)                          ${ms(single)}`);
 console.log(`  full valuation with breakdown, convergence, sensitivities ${ms(full)}`);
+// The extras' parts, as valueProject runs them: convergence re-values at two coarser counts that
+// keep every date on the grid (here 125 and 250), the premium split once on a σ → 0 Jarrow–Rudd path.
+const passAt = (model: ProjectModel) => {
+  const prepared = prepareModel(model);
+  return () => singlePass(prepared.model, prepared.compiled, { valueOnly: true });
+};
+const coarse = [passAt({ ...fourOptions, steps: 125 }), passAt({ ...fourOptions, steps: 250 })];
+const convergenceCost = time(() => coarse.forEach((run) => run()), 21);
+const certain = passAt({ ...fourOptions, tree: 'jarrow-rudd', underlying: { ...fourOptions.underlying, volatility: 1e-6 } });
+const splitCost = time(certain, 21);
+console.log(`  of which convergence (two coarser lattices)               ${ms(convergenceCost)}`);
+console.log(`  of which the premium split (one σ → 0 lattice)            ${ms(splitCost)}`);
 
 // 3. The board pack of the demo plant's base case, as the approval renders it (in its worker).
 const plant = demoPortfolio[0]!;
