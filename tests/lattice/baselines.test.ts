@@ -15,28 +15,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { valueProject, type OptionTemplate, type ProjectModel } from '@/lattice';
-
-const market = fc
-  .record({
-    value: fc.double({ min: 40, max: 300, noNaN: true }),
-    volatility: fc.double({ min: 0.1, max: 0.6, noNaN: true }),
-    payoutYield: fc.double({ min: 0, max: 0.08, noNaN: true }),
-    riskFreeRate: fc.double({ min: 0, max: 0.06, noNaN: true }),
-    horizon: fc.integer({ min: 2, max: 6 }),
-    perYear: fc.integer({ min: 4, max: 12 }),
-    leak: fc.double({ min: 0, max: 0.25, noNaN: true }),
-  })
-  .filter((m) => m.volatility * Math.sqrt(1 / m.perYear) > (2 * Math.abs(m.riskFreeRate - m.payoutYield)) / m.perYear);
-
-/** Windows anywhere inside the horizon, as American, Bermudan or European. */
-function windowIn(horizon: number) {
-  const t = fc.double({ min: 0, max: 1, noNaN: true }).map((x) => Math.round(x * horizon * 4) / 4);
-  return fc.oneof(
-    fc.tuple(t, t).map(([a, b]) => ({ kind: 'american' as const, from: Math.min(a, b), to: Math.max(a, b) })),
-    fc.uniqueArray(t, { minLength: 1, maxLength: 3 }).map((dates) => ({ kind: 'bermudan' as const, dates: dates.sort((a, b) => a - b) })),
-    t.map((at) => ({ kind: 'european' as const, at })),
-  );
-}
+import { market, underlyingOf, windowIn } from './support/random-markets';
 
 function modelFrom(m: typeof market) {
   return m.chain((mk) => {
@@ -75,12 +54,7 @@ function modelFrom(m: typeof market) {
       .map(([o, ...rest]) => {
         const options = [o, ...rest].filter((x) => x !== null) as OptionTemplate[];
         const model: ProjectModel = {
-          underlying: {
-            value: mk.value,
-            volatility: mk.volatility,
-            payoutYield: mk.payoutYield,
-            payoutPeriods: Array.from({ length: mk.horizon }, (_, y) => ({ from: y, to: y + 1, fraction: mk.leak })),
-          },
+          underlying: underlyingOf(mk),
           riskFreeRate: mk.riskFreeRate,
           horizon: mk.horizon,
           steps: mk.horizon * mk.perYear,

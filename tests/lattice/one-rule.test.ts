@@ -15,27 +15,7 @@ import { prepareModel } from '@/lattice/check-model';
 import { exerciseProfiles } from '@/lattice/forward';
 import { buildPlan } from '@/lattice/plan';
 import { rollback } from '@/lattice/rollback';
-
-const market = fc
-  .record({
-    value: fc.double({ min: 20, max: 300, noNaN: true }),
-    volatility: fc.double({ min: 0.1, max: 0.7, noNaN: true }),
-    payoutYield: fc.double({ min: 0, max: 0.06, noNaN: true }),
-    riskFreeRate: fc.double({ min: 0, max: 0.06, noNaN: true }),
-    horizon: fc.integer({ min: 1, max: 5 }),
-    perYear: fc.integer({ min: 2, max: 12 }),
-    leak: fc.double({ min: 0, max: 0.3, noNaN: true }),
-  })
-  .filter((m) => m.volatility * Math.sqrt(1 / m.perYear) > (2 * Math.abs(m.riskFreeRate - m.payoutYield)) / m.perYear);
-
-function windowIn(horizon: number) {
-  const t = fc.integer({ min: 0, max: horizon * 4 }).map((q) => q / 4);
-  return fc.oneof(
-    fc.tuple(t, t).map(([a, b]) => ({ kind: 'american' as const, from: Math.min(a, b), to: Math.max(a, b) })),
-    fc.uniqueArray(t, { minLength: 1, maxLength: 4 }).map((dates) => ({ kind: 'bermudan' as const, dates: dates.sort((a, b) => a - b) })),
-    t.map((at) => ({ kind: 'european' as const, at })),
-  );
-}
+import { market, underlyingOf, windowIn } from './support/random-markets';
 
 const models = market.chain((mk) => {
   const money = fc.double({ min: 0.05 * mk.value, max: 1.3 * mk.value, noNaN: true });
@@ -56,12 +36,7 @@ const models = market.chain((mk) => {
   return fc.tuple(outlay, fc.array(right, { minLength: 1, maxLength: 3 })).map(([defer, rights]) => {
     const options = (defer ? [defer, ...rights] : rights) as OptionTemplate[];
     const model: ProjectModel = {
-      underlying: {
-        value: mk.value,
-        volatility: mk.volatility,
-        payoutYield: mk.payoutYield,
-        payoutPeriods: Array.from({ length: mk.horizon }, (_, y) => ({ from: y, to: y + 1, fraction: mk.leak })),
-      },
+      underlying: underlyingOf(mk),
       riskFreeRate: mk.riskFreeRate,
       horizon: mk.horizon,
       steps: mk.horizon * mk.perYear,

@@ -4,29 +4,16 @@
  * words for every right. Before, the workbook showed the grid's first exercise (year 0.8) and
  * the pack a rule from "year 0.0". The demo plant (invented figures).
  */
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
 import ExcelJS from 'exceljs';
 import { describe, expect, it } from 'vitest';
-import { demoPortfolio } from '@/demo/portfolio';
 import { valueProject, type ValuationResult } from '@/lattice';
-import { renderBoardPack } from '@/lib/board-pack/render';
-import { caseToModel } from '@/lib/case-model';
 import { decisionRule } from '@/lib/decision-rules';
 import { caseWorkbook } from '@/lib/spreadsheets/case-export';
-
-function pdfText(pdf: Buffer): string {
-  const file = path.join(mkdtempSync(path.join(tmpdir(), 'leeway-rule-')), 'pack.pdf');
-  writeFileSync(file, pdf);
-  return execFileSync('pdftotext', [file, '-']).toString().replace(/\s+/g, ' ');
-}
+import { demoPlant, pdfText, renderPlantPack } from './support/demo-pack';
 
 describe('the decision rule of a case', () => {
   it('reads the same from the stored run, the workbook and the board pack', async () => {
-    const inputs = demoPortfolio.find((p) => p.name === 'Phased bio-resin plant')!.cases[0]!;
-    const { model } = caseToModel(inputs);
+    const { inputs, model } = demoPlant();
     const stored = JSON.parse(JSON.stringify(valueProject(model, { grid: { steps: 4 } }))) as ValuationResult;
     const rules = stored.switches.map((s) => decisionRule(s, 'EUR').text);
     expect(rules.length).toBe(2);
@@ -48,29 +35,7 @@ describe('the decision rule of a case', () => {
     const fromWorkbook = stored.switches.map((_, k) => String(sheet.getRow(k + 2).getCell(6).value));
     expect(fromWorkbook).toEqual(rules);
 
-    const when = new Date(0).toISOString();
-    const pack = pdfText(
-      await renderBoardPack({
-        pageSize: 'A4',
-        organisation: 'Invented Test Organisation',
-        isDemo: true,
-        project: { name: 'Plant', description: 'Invented', currency: 'EUR' },
-        snapshot: {
-          id: 't',
-          caseName: inputs.name,
-          caseVersion: 1,
-          inputs,
-          model,
-          result: stored,
-          engineVersion: stored.engineVersion,
-          inputHash: 't',
-          submittedBy: 'A',
-          submittedAt: when,
-          decidedBy: 'B',
-          decidedAt: when,
-        },
-      }),
-    );
+    const pack = pdfText(await renderPlantPack(model, stored));
     for (const rule of rules) expect(pack).toContain(rule);
   }, 60_000);
 });
