@@ -15,8 +15,25 @@ declare global {
   var leewayPool: pg.Pool | undefined;
 }
 
-/** One pool per process (kept across hot reloads in development). */
-export const pool: pg.Pool = globalThis.leewayPool ?? new pg.Pool({ connectionString: databaseUrl(), max: 10 });
+/**
+ * One pool per process (kept across hot reloads in development). Bounded waits: a connection
+ * that cannot be had in 5 s, or a statement running over 30 s, fails that request (503 or 500)
+ * instead of holding it. An idle client whose server went away emits 'error' on the pool; it is
+ * logged and dropped, and the pool reconnects when PostgreSQL is back, with no restart.
+ */
+function newPool(): pg.Pool {
+  const created = new pg.Pool({
+    connectionString: databaseUrl(),
+    max: 10,
+    connectionTimeoutMillis: 5_000,
+    idleTimeoutMillis: 30_000,
+    statement_timeout: 30_000,
+  });
+  created.on('error', (error) => console.error('[leeway] database connection lost:', error.message));
+  return created;
+}
+
+export const pool: pg.Pool = globalThis.leewayPool ?? newPool();
 if (process.env.NODE_ENV !== 'production') globalThis.leewayPool = pool;
 
 export const db = new Kysely<DB>({ dialect: new PostgresDialect({ pool }) });

@@ -13,5 +13,11 @@ export const MAX_MODES = 64;
  * row per mode, and the decision map is run-length encoded by row.
  */
 export const MAX_DECISION_CELLS = 150_000_000;
+/**
+ * Most (node × switchable mode) cells one whole valuation may visit, every re-run of its extras
+ * included (the breakdown, convergence, the premium split, the sensitivities): about three
+ * seconds here, so no single request can hold an engine worker for minutes.
+ */
+export const MAX_REQUEST_CELLS = 600_000_000;
 /** Most (node × mode) cells returned when the caller asks for the full node grid. */
 export const NODE_BUDGET = 200_000;

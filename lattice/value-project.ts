@@ -6,7 +6,7 @@
 import type { CompiledModel } from './compiled';
 import { prepareModel } from './check-model';
 import { ModelError } from './errors';
-import { NODE_BUDGET } from './limits';
+import { MAX_REQUEST_CELLS, NODE_BUDGET } from './limits';
 import type { Convergence, Sensitivity, ValuationResult } from './result';
 import type { Cost, ExerciseWindow, ProjectModel } from './schema';
 import type { Years } from './units';
@@ -197,8 +197,29 @@ function assertFinite(root: unknown): void {
   }
 }
 
+/**
+ * The lattice passes a valuation runs, counted in full passes: the main one and, with extras,
+ * the breakdown (two per right when there are several), convergence (N/4 and N/2: 1/16 + 1/4 of
+ * a pass), the premium split (one) and two per sensitivity row (V0, σ, r, payouts, each right).
+ */
+function passesOf(model: ProjectModel, compiled: CompiledModel, extras: boolean): number {
+  if (!extras) return 1;
+  const rights = compiled.rights.length;
+  const rows = 3 + 1 + rights;
+  return 1 + (rights > 1 ? 2 * rights : 0) + 0.3125 + 1 + 2 * rows;
+}
+
 export function valueProject(input: unknown, options: ValueOptions = {}): ValuationResult {
   const { model, compiled } = prepareModel(input);
+  const switchable = Math.max(1, new Set(compiled.switches.map((s) => s.from)).size);
+  const cells = (((model.steps + 1) * (model.steps + 2)) / 2) * switchable * passesOf(model, compiled, options.extras !== false);
+  if (cells > MAX_REQUEST_CELLS)
+    throw new ModelError([
+      {
+        field: 'steps',
+        message: `with ${compiled.rights.length} rights and ${options.extras !== false ? 'the breakdown, convergence and sensitivities' : 'one pass'} this valuation would visit ${cells.toExponential(2)} node × mode cells, over the budget of ${MAX_REQUEST_CELLS.toExponential(2)}; use fewer steps or fewer rights`,
+      },
+    ]);
   const gridSteps = options.grid === true ? model.steps : options.grid ? Math.min(options.grid.steps, model.steps) : -1;
   if (gridSteps >= 0) {
     const cells = ((gridSteps + 1) * (gridSteps + 2) * compiled.modes.length) / 2;

@@ -34,8 +34,8 @@ type Body<S> = S extends z.ZodType ? z.infer<S> : undefined;
 export { MAX_JSON_BYTES, readJson, requireMediaType } from './request-body';
 
 export function errorResponse(error: unknown): NextResponse {
-  const { status, body } = toErrorBody(error);
-  return NextResponse.json(body, { status });
+  const { status, body, retryAfter } = toErrorBody(error);
+  return NextResponse.json(body, { status, ...(retryAfter ? { headers: { 'retry-after': String(retryAfter) } } : {}) });
 }
 
 /** Ids in paths are uuids or the auth library's random ids: anything else cannot name a record. */

@@ -15,6 +15,7 @@ export const errorStatus = {
   unsupported_media_type: 415,
   unprocessable: 422,
   rate_limited: 429,
+  unavailable: 503,
 } as const;
 
 export type ErrorCode = keyof typeof errorStatus;
@@ -24,22 +25,37 @@ export class AppError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly fields?: Record<string, string[]>,
+    /** Seconds after which the client may try again (sent as Retry-After on 429 and 503). */
+    readonly retryAfter?: number,
   ) {
     super(message);
     this.name = 'AppError';
   }
 }
 
+/** PostgreSQL or its connection is down (connection refused or reset, server shutting down, pool timeout). */
+function isDatabaseUnavailable(error: unknown): boolean {
+  const e = error as { code?: string; message?: string } | null;
+  if (!e || typeof e !== 'object') return false;
+  if (['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', '57P01', '57P02', '57P03', '08000', '08003', '08006'].includes(e.code ?? '')) return true;
+  return /Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error/.test(e.message ?? '');
+}
+
 export interface ErrorBody {
   error: { code: ErrorCode | 'internal'; message: string; fields?: Record<string, string[]> };
 }
 
-export function toErrorBody(error: unknown): { status: number; body: ErrorBody } {
+export function toErrorBody(error: unknown): { status: number; body: ErrorBody; retryAfter?: number } {
   if (error instanceof AppError) {
     return {
       status: errorStatus[error.code],
       body: { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } },
+      ...(error.retryAfter ? { retryAfter: error.retryAfter } : {}),
     };
+  }
+  if (isDatabaseUnavailable(error)) {
+    console.error('[leeway] database unavailable', (error as Error).message);
+    return { status: 503, body: { error: { code: 'unavailable', message: 'The database is not answering. Please try again in a moment.' } }, retryAfter: 5 };
   }
   if (error instanceof z.ZodError) {
     const fields: Record<string, string[]> = {};

@@ -6,7 +6,7 @@
 import type { Case } from '@/db/types';
 import type { ValuationResult, ValueOptions } from '@/lattice';
 import { caseToModel } from './case-model';
-import { EngineRefusal, valueInWorker } from './engine/pool';
+import { EngineRefusal, valueInWorker, type RunOptions } from './engine/pool';
 import { AppError } from './errors';
 import { hashModel } from './model-hash';
 import type { CaseInput } from './validations/case';
@@ -19,11 +19,11 @@ export interface CaseValuation {
   inputHash: string;
 }
 
-export async function valueStoredCase(stored: Case, options?: ValueOptions): Promise<CaseValuation> {
+export async function valueStoredCase(stored: Case, options?: ValueOptions, run?: RunOptions): Promise<CaseValuation> {
   const inputs = { name: stored.name, cashFlows: stored.cash_flows, settings: stored.settings, options: stored.options } as CaseInput;
   const { model, warnings } = caseToModel(inputs);
   try {
-    const result = await valueInWorker(model, options);
+    const result = await valueInWorker(model, options, run);
     return { inputs, model, warnings, result, inputHash: hashModel(model) };
   } catch (error) {
     if (error instanceof EngineRefusal) throw new AppError('unprocessable', `The case cannot be valued: ${error.issues[0]?.message}`);

@@ -119,7 +119,7 @@ start() {
     as_pg "$BIN/initdb" -D "$DATA" -U postgres --auth-local=trust --auth-host=scram-sha-256 -E UTF8 --locale=C.UTF-8 >/dev/null
   fi
   if ! as_pg "$BIN/pg_ctl" -D "$DATA" -l "$LOG" -w -t 60 \
-    -o "-c listen_addresses=127.0.0.1 -p $PORT -k $SOCK -c unix_socket_permissions=0770 -c fsync=off -c max_connections=100" start >/dev/null; then
+    -o "-c listen_addresses=127.0.0.1 -p $PORT -k $SOCK -c unix_socket_permissions=0770 -c max_connections=100" start >/dev/null; then
     echo "› db: PostgreSQL did not start; the end of $LOG says:" >&2
     tail -n 5 "$LOG" >&2
     echo "› db: if another server holds port $PORT, stop it or set PG_PORT" >&2

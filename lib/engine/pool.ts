@@ -1,13 +1,23 @@
 /**
- * Runs valuations in worker threads, never on a request's event loop. A small pool (one worker
- * per spare core, at least one) takes jobs in order; a worker that crashes is replaced and its
- * job fails with a clear error. The worker is the bundled engine (.data/engine-worker.mjs,
- * built by scripts/build-engine-worker.sh with the app).
+ * Runs valuations in worker threads, never on a request's event loop, and cannot be wedged by
+ * one request:
+ * - one worker per core (at most eight), each taking one job at a time;
+ * - a bounded queue in front: when it is full, or when one person already has their share of
+ *   jobs waiting or running, a new job is refused at once (429 with Retry-After);
+ * - every job has a deadline from the moment it is queued: one still waiting is dropped, one
+ *   running has its worker replaced, and the caller gets a clear 503;
+ * - a caller that goes away (its AbortSignal fires) cancels its job the same way;
+ * - a slot is freed on every path: an answer, a failed post, a worker error or exit, a deadline,
+ *   an abort.
+ * The worker is the bundled engine (.data/engine-worker.mjs, built by
+ * scripts/build-engine-worker.sh with the app); the engine itself refuses a model whose work is
+ * over its budget before doing any (docs/engine.md §8).
  */
 import os from 'node:os';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { ModelIssue, ValuationResult, ValueOptions } from '@/lattice';
+import { AppError } from '../errors';
 
 export class EngineRefusal extends Error {
   constructor(readonly issues: ModelIssue[]) {
@@ -15,12 +25,31 @@ export class EngineRefusal extends Error {
   }
 }
 
+/** How long a valuation may take, queue included, before its caller gets a 503. */
+const DEADLINE_MS = Number(process.env.ENGINE_DEADLINE_MS ?? 30_000);
+/** Most jobs waiting for a worker; more are refused with 429. */
+const QUEUE_LIMIT = Number(process.env.ENGINE_QUEUE_LIMIT ?? 32);
+/** Most jobs one person may have waiting or running at once. */
+const PER_OWNER_LIMIT = Number(process.env.ENGINE_PER_USER_LIMIT ?? 4);
+
+export interface RunOptions {
+  /** Who asked (a user id): their jobs are counted against PER_OWNER_LIMIT. */
+  owner?: string;
+  /** Fires when the caller has gone away: the job is dropped or its worker replaced. */
+  signal?: AbortSignal;
+  deadlineMs?: number;
+}
+
 interface Job {
   id: number;
   input: unknown;
   options?: ValueOptions;
+  owner: string | undefined;
+  settled: boolean;
+  timer: NodeJS.Timeout;
   resolve: (result: ValuationResult) => void;
   reject: (error: Error) => void;
+  detach: () => void;
 }
 
 interface Slot {
@@ -32,17 +61,79 @@ type Answer = { id: number; ok: true; result: ValuationResult } | { id: number; 
 
 const workerFile = () => path.join(/*turbopackIgnore: true*/ process.cwd(), '.data', 'engine-worker.mjs');
 
-class EnginePool {
+export interface PoolStats {
+  workers: number;
+  busy: number;
+  queued: number;
+  queueLimit: number;
+}
+
+export class EnginePool {
   private readonly slots: Slot[] = [];
   private readonly queue: Job[] = [];
   private nextId = 1;
-  private readonly size = Math.max(1, Math.min(4, os.availableParallelism() - 1));
+  readonly size = Math.max(1, Math.min(8, os.availableParallelism()));
 
-  run(input: unknown, options?: ValueOptions): Promise<ValuationResult> {
+  constructor(private readonly file = workerFile()) {}
+
+  stats(): PoolStats {
+    return { workers: this.slots.length, busy: this.slots.filter((s) => s.job).length, queued: this.queue.length, queueLimit: QUEUE_LIMIT };
+  }
+
+  run(input: unknown, options?: ValueOptions, run: RunOptions = {}): Promise<ValuationResult> {
     return new Promise((resolve, reject) => {
-      this.queue.push({ id: this.nextId++, input, options, resolve, reject });
+      if (run.signal?.aborted) return reject(new AppError('bad_request', 'The request was cancelled.'));
+      const waiting = this.queue.length;
+      if (waiting >= QUEUE_LIMIT)
+        return reject(new AppError('rate_limited', `The engine has ${waiting} valuations waiting; try again in a few seconds.`, undefined, 5));
+      const mine = run.owner ? this.queue.filter((j) => j.owner === run.owner).length + this.slots.filter((s) => s.job?.owner === run.owner).length : 0;
+      if (mine >= PER_OWNER_LIMIT)
+        return reject(new AppError('rate_limited', `You already have ${mine} valuations running or waiting; wait for them to finish.`, undefined, 2));
+      const id = this.nextId++;
+      const onAbort = () => this.cancel(job, new AppError('bad_request', 'The request was cancelled.'));
+      const job: Job = {
+        id,
+        input,
+        options,
+        owner: run.owner,
+        settled: false,
+        timer: setTimeout(() => this.cancel(job, this.overDeadline(run.deadlineMs ?? DEADLINE_MS)), run.deadlineMs ?? DEADLINE_MS),
+        resolve: (result) => this.settle(job, () => resolve(result)),
+        reject: (error) => this.settle(job, () => reject(error)),
+        detach: () => run.signal?.removeEventListener('abort', onAbort),
+      };
+      job.timer.unref();
+      run.signal?.addEventListener('abort', onAbort, { once: true });
+      this.queue.push(job);
       this.dispatch();
     });
+  }
+
+  private overDeadline(ms: number) {
+    return new AppError(
+      'unavailable',
+      `The valuation did not finish within ${Math.round(ms / 1000)} s and was stopped; try fewer steps or fewer rights.`,
+      undefined,
+      5,
+    );
+  }
+
+  private settle(job: Job, deliver: () => void) {
+    if (job.settled) return;
+    job.settled = true;
+    clearTimeout(job.timer);
+    job.detach();
+    deliver();
+  }
+
+  /** Drops a waiting job, or stops the worker running it (a new one takes its place). */
+  private cancel(job: Job, error: Error) {
+    if (job.settled) return;
+    const queued = this.queue.indexOf(job);
+    if (queued >= 0) this.queue.splice(queued, 1);
+    const slot = this.slots.find((s) => s.job === job);
+    job.reject(error);
+    if (slot) this.retire(slot, error);
   }
 
   private dispatch() {
@@ -52,12 +143,28 @@ class EnginePool {
       if (!slot) return;
       const job = this.queue.shift()!;
       slot.job = job;
-      slot.worker.postMessage({ id: job.id, input: job.input, options: job.options });
+      try {
+        slot.worker.postMessage({ id: job.id, input: job.input, options: job.options });
+      } catch (error) {
+        // The input could not be sent (not cloneable, too deep): the job fails, the slot stays free.
+        slot.job = null;
+        job.reject(new AppError('unprocessable', `The model could not be handed to the engine: ${(error as Error).message}`));
+      }
     }
   }
 
+  private retire(slot: Slot, error: Error) {
+    const index = this.slots.indexOf(slot);
+    if (index < 0) return;
+    this.slots.splice(index, 1);
+    slot.job?.reject(error);
+    slot.job = null;
+    void slot.worker.terminate();
+    this.dispatch();
+  }
+
   private spawn(): Slot {
-    const worker = new Worker(workerFile());
+    const worker = new Worker(this.file);
     const slot: Slot = { worker, job: null };
     worker.on('message', (answer: Answer) => {
       const job = slot.job;
@@ -69,15 +176,8 @@ class EnginePool {
       }
       this.dispatch();
     });
-    const retire = (error: Error) => {
-      const index = this.slots.indexOf(slot);
-      if (index >= 0) this.slots.splice(index, 1);
-      slot.job?.reject(error);
-      slot.job = null;
-      this.dispatch();
-    };
-    worker.on('error', (error) => retire(error));
-    worker.on('exit', (code) => retire(new Error(`the valuation worker stopped (exit ${code})`)));
+    worker.on('error', (error) => this.retire(slot, error));
+    worker.on('exit', (code) => this.retire(slot, new Error(`the valuation worker stopped (exit ${code})`)));
     worker.unref();
     this.slots.push(slot);
     return slot;
@@ -88,8 +188,16 @@ declare global {
   var leewayEnginePool: EnginePool | undefined;
 }
 
-/** Values a model in a worker thread; a refused model rejects with EngineRefusal. */
-export function valueInWorker(input: unknown, options?: ValueOptions): Promise<ValuationResult> {
+function pool(): EnginePool {
   globalThis.leewayEnginePool ??= new EnginePool();
-  return globalThis.leewayEnginePool.run(input, options);
+  return globalThis.leewayEnginePool;
+}
+
+/** Values a model in a worker thread; a refused model rejects with EngineRefusal, a busy engine with a 429 or 503 AppError. */
+export function valueInWorker(input: unknown, options?: ValueOptions, run?: RunOptions): Promise<ValuationResult> {
+  return pool().run(input, options, run);
+}
+
+export function enginePoolStats(): PoolStats {
+  return pool().stats();
 }

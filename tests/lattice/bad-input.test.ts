@@ -195,3 +195,48 @@ describe('bad input is refused with its own message', () => {
     expect(result.value).toBeCloseTo(valueProject(model).value, 12);
   });
 });
+
+describe('the work of a whole valuation is priced before any is done (docs/engine.md §8)', () => {
+  // The review's case: twelve rights at 10,000 steps with every extra ran 193 s on one worker.
+  const twelve = {
+    underlying: { value: 100, volatility: 0.3 },
+    riskFreeRate: 0.03,
+    horizon: 10,
+    steps: 10_000,
+    investment: 80,
+    options: Array.from({ length: 12 }, (_, k) => ({
+      type: 'abandon' as const,
+      id: `sale ${k + 1}`,
+      salvage: 40 + k,
+      window: { kind: 'american' as const, from: k / 2, to: 10 },
+    })),
+  };
+
+  it('refuses twelve rights at 10,000 steps with extras, naming the figure and the budget, at once', () => {
+    const started = performance.now();
+    const refusal = (() => {
+      try {
+        valueProject(twelve);
+      } catch (error) {
+        return error as ModelError;
+      }
+    })();
+    expect(refusal?.issues[0]?.field).toBe('steps');
+    expect(refusal?.issues[0]?.message).toMatch(/would visit 2\.\d+e\+9 node × mode cells, over the budget of 6\.00e\+8/);
+    expect(performance.now() - started).toBeLessThan(1_000);
+  });
+
+  it('values a four-right model at 500 steps with every extra', () => {
+    const r = valueProject({
+      ...ok,
+      steps: 500,
+      options: [
+        { type: 'expand', factor: 0.5, cost: 40, window: american },
+        { type: 'contract', fraction: 0.3, savings: 25, window: american },
+        { type: 'abandon', salvage: 50, window: american },
+        { type: 'switch', toScale: 0, cost: 2, backCost: 4 },
+      ],
+    });
+    expect(r.sensitivities).not.toBeNull();
+  });
+});

@@ -1,17 +1,49 @@
-// GET /api/health – is the app up and can it reach its database?
+// GET /api/health – can the app reach its database, and does the engine answer? (no sign-in)
 import { sql } from 'kysely';
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
-import { ENGINE_VERSION } from '@/lattice';
+import { ENGINE_VERSION, type ProjectModel } from '@/lattice';
+import { enginePoolStats, valueInWorker } from '@/lib/engine/pool';
+import { AppError } from '@/lib/errors';
 
 export const dynamic = 'force-dynamic';
 
-export async function GET() {
+/** A valuation small enough to answer in milliseconds: it proves a worker is alive. */
+const canary: ProjectModel = {
+  underlying: { value: 100, volatility: 0.3 },
+  riskFreeRate: 0.03,
+  horizon: 1,
+  steps: 4,
+  options: [{ type: 'abandon', salvage: 90, window: { kind: 'american', from: 0, to: 1 } }],
+};
+
+async function databaseCheck(): Promise<{ database: 'ok' | 'unreachable'; databaseMs: number }> {
   const started = performance.now();
   try {
     await sql`select 1`.execute(db);
-    return NextResponse.json({ status: 'ok', database: 'ok', databaseMs: Math.round(performance.now() - started), engineVersion: ENGINE_VERSION });
+    return { database: 'ok', databaseMs: Math.round(performance.now() - started) };
   } catch {
-    return NextResponse.json({ status: 'degraded', database: 'unreachable' }, { status: 503 });
+    return { database: 'unreachable', databaseMs: Math.round(performance.now() - started) };
   }
+}
+
+async function engineCheck(): Promise<{ engine: 'ok' | 'busy' | 'unavailable'; engineMs: number }> {
+  const started = performance.now();
+  try {
+    await valueInWorker(canary, { extras: false }, { owner: 'health-check', deadlineMs: 5_000 });
+    return { engine: 'ok', engineMs: Math.round(performance.now() - started) };
+  } catch (error) {
+    // A full queue is load, not an outage; anything else (a deadline, a dead worker) is.
+    const busy = error instanceof AppError && error.code === 'rate_limited';
+    return { engine: busy ? 'busy' : 'unavailable', engineMs: Math.round(performance.now() - started) };
+  }
+}
+
+export async function GET() {
+  const [database, engine] = await Promise.all([databaseCheck(), engineCheck()]);
+  const healthy = database.database === 'ok' && engine.engine !== 'unavailable';
+  return NextResponse.json(
+    { status: healthy ? 'ok' : 'degraded', ...database, ...engine, queue: enginePoolStats(), engineVersion: ENGINE_VERSION },
+    { status: healthy ? 200 : 503, headers: { 'cache-control': 'no-store' } },
+  );
 }

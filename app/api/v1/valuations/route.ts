@@ -8,11 +8,11 @@ export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 export const POST = withAuth(
-  async ({ request }) => {
+  async ({ member, request }) => {
     const input = await readJson(request);
     const extras = request.nextUrl.searchParams.get('extras') !== 'false';
     try {
-      return NextResponse.json(await valueInWorker(input, { extras }));
+      return NextResponse.json(await valueInWorker(input, { extras }, { owner: member.userId, signal: request.signal }));
     } catch (error) {
       if (error instanceof EngineRefusal) {
         const fields: Record<string, string[]> = {};

@@ -9,10 +9,10 @@ export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 export const GET = withAuth<{ caseId: string }>(
-  async ({ member, params }) => {
+  async ({ member, params, request }) => {
     const c = await loadCaseRef(member.orgId, params.caseId);
     // Valued now, from the saved case, with the first steps of the lattice for the sheet.
-    const { inputs, result } = await valueStoredCase(c, { grid: { steps: 6 } });
+    const { inputs, result } = await valueStoredCase(c, { grid: { steps: 6 } }, { owner: member.userId, signal: request.signal });
     const bytes = await caseWorkbook({
       projectName: c.project_name,
       currency: c.currency,

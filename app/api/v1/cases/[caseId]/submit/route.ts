@@ -16,12 +16,12 @@ export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 export const POST = withAuth<{ caseId: string }>(
-  async ({ member, params }) => {
+  async ({ member, params, request }) => {
     const stored = await loadCaseRef(member.orgId, params.caseId);
     // Refuse early (before the valuation) when the status does not allow it; the transaction checks again.
     const early = checkTransition(member.role, 'submit', stored.status);
     if (!early.ok) throw new AppError(early.code, early.message);
-    const valuation = await valueStoredCase(stored);
+    const valuation = await valueStoredCase(stored, undefined, { owner: member.userId, signal: request.signal });
     const snapshot = await db.transaction().execute(async (trx) => {
       const outcome = await submitCase(trx, {
         orgId: member.orgId,

@@ -20,10 +20,10 @@ function summary(result: { value: number; staticNpv: number; expandedNpv: number
 }
 
 export const POST = withAuth<Params>(
-  async ({ member, params }) => {
+  async ({ member, params, request }) => {
     const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
     if (!stored) throw missing();
-    const { model, warnings, result, inputHash } = await valueStoredCase(stored);
+    const { model, warnings, result, inputHash } = await valueStoredCase(stored, undefined, { owner: member.userId, signal: request.signal });
     // The change and its audit entry commit together or not at all.
     const run = await db.transaction().execute(async (trx) => {
       const run = await recordValuationRun(trx, {
