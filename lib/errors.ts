@@ -33,12 +33,16 @@ export class AppError extends Error {
   }
 }
 
-/** PostgreSQL or its connection is down (connection refused or reset, server shutting down, pool timeout). */
-function isDatabaseUnavailable(error: unknown): boolean {
-  const e = error as { code?: string; message?: string } | null;
-  if (!e || typeof e !== 'object') return false;
+/**
+ * PostgreSQL or its connection is down (connection refused or reset, server shutting down, pool
+ * timeout), found on the error or on its causes (the auth library wraps the driver's error).
+ */
+function isDatabaseUnavailable(error: unknown, depth = 0): boolean {
+  const e = error as { code?: string; message?: string; cause?: unknown } | null;
+  if (!e || typeof e !== 'object' || depth > 4) return false;
   if (['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', '57P01', '57P02', '57P03', '08000', '08003', '08006'].includes(e.code ?? '')) return true;
-  return /Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error/.test(e.message ?? '');
+  if (/Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error/.test(e.message ?? '')) return true;
+  return isDatabaseUnavailable(e.cause, depth + 1);
 }
 
 export interface ErrorBody {

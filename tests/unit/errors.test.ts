@@ -25,4 +25,17 @@ describe('toErrorBody', () => {
     expect(log).toHaveBeenCalled();
     log.mockRestore();
   });
+
+  it('answers a database outage with 503 and Retry-After, also when the auth library wraps the driver error', () => {
+    const log = vi.spyOn(console, 'error').mockImplementation(() => {});
+    const refused = Object.assign(new Error('connect ECONNREFUSED 127.0.0.1:54329'), { code: 'ECONNREFUSED' });
+    const wrapped = Object.assign(new Error('Failed to get session'), { cause: refused });
+    for (const error of [refused, wrapped, new Error('Connection terminated unexpectedly')]) {
+      const { status, body, retryAfter } = toErrorBody(error);
+      expect([status, body.error.code, retryAfter]).toEqual([503, 'unavailable', 5]);
+    }
+    // A programming error is still a 500, whatever its cause says about the network.
+    expect(toErrorBody(new TypeError('x is undefined')).status).toBe(500);
+    log.mockRestore();
+  });
 });
