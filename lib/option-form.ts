@@ -6,6 +6,7 @@
  * (growth, expansion factor, fraction kept) are fractions in the templates.
  */
 import type { CashFlowAnalysis } from './cash-flows';
+import { readNumberText } from './number-text';
 import { optionTemplateSchema, type Cost, type ExerciseWindow, type OptionTemplate } from '@/lattice';
 
 export type OptionType = OptionTemplate['type'];
@@ -163,12 +164,12 @@ export function newOptionForm(type: OptionType, basis: CardBasis): OptionForm {
 type Problems = Record<string, string>;
 
 function readNumber(text: string, path: string, problems: Problems, rule?: (x: number) => string | null): number {
-  const cleaned = text.trim().replace(/^−/, '-').replace(/,/g, '');
-  const value = cleaned === '' ? NaN : Number(cleaned);
-  if (!Number.isFinite(value)) {
-    problems[path] ??= 'Enter a number.';
+  const read = readNumberText(text);
+  if (!read.ok) {
+    problems[path] ??= read.message;
     return 0;
   }
+  const value = read.value;
   const broken = rule?.(value);
   if (broken) problems[path] ??= broken;
   return value;

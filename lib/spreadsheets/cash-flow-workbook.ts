@@ -8,6 +8,7 @@
  * formula is refused (values only), so nothing that would compute differently elsewhere gets in.
  */
 import ExcelJS from 'exceljs';
+import { readNumberText } from '../number-text';
 import { cashFlowScheduleSchema, type CashFlowYear } from '../cash-flows';
 
 export const CASH_FLOW_SHEET = 'Cash flows';
@@ -83,9 +84,10 @@ function cellNumber(cell: ExcelJS.Cell, where: string, problems: string[], blank
   }
   if (typeof v === 'number' && Number.isFinite(v)) return v;
   if (typeof v === 'string') {
-    const cleaned = v.trim().replace(/^−/, '-').replace(/,/g, '');
-    if (/^-?(\d+\.?\d*|\.\d+)$/.test(cleaned)) return Number(cleaned);
-    problems.push(`${where}: expected a number, got "${v}".`);
+    // Text in a cell is read as a person's typing is, and an ambiguous comma is flagged, never guessed.
+    const read = readNumberText(v);
+    if (read.ok) return read.value;
+    problems.push(`${where}: ${read.message}`);
     return null;
   }
   problems.push(`${where}: expected a number, got ${typeof v === 'object' ? 'a date or rich text' : String(v)}.`);

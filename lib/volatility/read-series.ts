@@ -5,21 +5,16 @@
  */
 import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
+import { numberOrNull } from '../number-text';
 import { HistoryError, MAX_OBSERVATIONS, type HistoryPoint } from './history';
 
 const isoDate = /^\d{4}-\d{2}-\d{2}$/;
-
-function readNumber(text: string): number | null {
-  const cleaned = text.trim().replace(/^−/, '-').replace(/,/g, '');
-  if (cleaned === '' || !/^-?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(cleaned)) return null;
-  return Number(cleaned);
-}
 
 function toPoints(rows: { place: string; date: unknown; value: unknown }[]): HistoryPoint[] {
   const points: HistoryPoint[] = [];
   rows.forEach((row, k) => {
     const dateText = row.date instanceof Date ? row.date.toISOString().slice(0, 10) : String(row.date ?? '').trim();
-    const value = typeof row.value === 'number' ? row.value : readNumber(String(row.value ?? ''));
+    const value = typeof row.value === 'number' ? row.value : numberOrNull(String(row.value ?? ''));
     // A first row of labels (neither a date nor a number) is a header.
     if (k === 0 && !isoDate.test(dateText) && value === null) return;
     if (dateText === '' && (row.value === null || row.value === undefined || String(row.value).trim() === '')) return;

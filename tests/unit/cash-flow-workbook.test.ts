@@ -47,6 +47,8 @@ describe('cash-flow workbook', () => {
   it('names every problem by sheet and cell, formulas included, and returns nothing else', async () => {
     const bytes = await edit(await cashFlowTemplate(0.08), (sheet) => {
       sheet.getCell('B3').value = 'n/a';
+      // Text with a comma that may be a decimal comma is flagged, never read as 235.
+      sheet.getCell('B4').value = '23,5';
       sheet.getCell('C4').value = { formula: 'B4*0.6', result: 0 } as ExcelJS.CellFormulaValue;
       sheet.getCell('A5').value = 2.5;
       sheet.getCell('I2').value = null;
@@ -56,7 +58,8 @@ describe('cash-flow workbook', () => {
       ok: false,
       problems: [
         'Cash flows!I2: is empty; expected a number.',
-        'Cash flows!B3: expected a number, got "n/a".',
+        'Cash flows!B3: “n/a” is not a number.',
+        'Cash flows!B4: “23,5”: write decimals with a point (23.5).',
         'Cash flows!C4: holds a formula; type the value instead.',
         'Cash flows!A5: the year must be a whole number from 0, got 2.5.',
       ],

@@ -1,9 +1,10 @@
 'use client';
 
-import { useState, type KeyboardEvent } from 'react';
+import { useState, type ClipboardEvent, type KeyboardEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import type { CashFlowAnalysis, CashFlowYear } from '@/lib/cash-flows';
 import { formatNumber } from '@/lib/format';
+import { numberOrNull, readNumberText } from '@/lib/number-text';
 
 type Line = Exclude<keyof CashFlowYear, 'year'>;
 
@@ -14,15 +15,6 @@ const lines: { key: Line; label: string; hint: string }[] = [
   { key: 'workingCapital', label: 'Working capital increase', hint: 'Cash tied up (negative when released)' },
   { key: 'capex', label: 'Capex', hint: 'Capital spending, as a positive number' },
 ];
-
-/** Reads what a person types into a number: allows spaces, thousands commas and a unicode minus. */
-export function parseAmount(text: string): number | null {
-  const cleaned = text.replace(/[\s,]/g, '').replace(/^−/, '-');
-  if (cleaned === '' || cleaned === '-') return null;
-  if (!/^-?(\d+\.?\d*|\.\d+)(e-?\d+)?$/i.test(cleaned)) return null;
-  const value = Number(cleaned);
-  return Number.isFinite(value) && Math.abs(value) <= 1e15 ? value : null;
-}
 
 interface Props {
   rows: CashFlowYear[];
@@ -35,27 +27,72 @@ interface Props {
 
 /**
  * The cash-flow schedule as finance people lay it out: line items down, years across, totals on
- * the right, free cash flow computed. Arrow keys and Enter move between cells like a spreadsheet;
- * a cell holding something that is not a number is marked and explained, and keeps the last
- * good value in the model until it is fixed.
+ * the right, free cash flow computed. Arrow keys and Enter move between cells like a spreadsheet.
+ * What a person types stays exactly as typed until they leave the cell ("23." is kept while a
+ * "5" is on its way); each readable value goes into the model at once, so the figures follow.
+ * A cell holding something that is not a number — or an ambiguous comma, lib/number-text.ts —
+ * is marked and explained, and keeps the last good value in the model until it is fixed. A block
+ * copied from a spreadsheet (tab-separated, several rows and years) pastes from the cell.
  */
 export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCount }: Props) {
   const [drafts, setDrafts] = useState<Record<string, string>>({});
+  const [pasteNote, setPasteNote] = useState<string | null>(null);
   const key = (line: Line, col: number) => `${line}:${col}`;
 
   const setDraft = (next: Record<string, string>) => {
     setDrafts(next);
-    onInvalidCount(Object.values(next).filter((t) => parseAmount(t) === null).length);
+    onInvalidCount(Object.values(next).filter((t) => numberOrNull(t) === null).length);
   };
 
   const edit = (line: Line, col: number, text: string) => {
-    const value = parseAmount(text);
-    const next = { ...drafts, [key(line, col)]: text };
-    if (value !== null) {
-      delete next[key(line, col)];
-      onChange(rows.map((r, k) => (k === col ? { ...r, [line]: value } : r)));
-    }
+    const value = numberOrNull(text);
+    if (value !== null) onChange(rows.map((r, k) => (k === col ? { ...r, [line]: value } : r)));
+    setDraft({ ...drafts, [key(line, col)]: text });
+  };
+
+  /** Leaving a cell: readable text gives way to the stored value; unreadable text stays, marked. */
+  const leave = (line: Line, col: number) => {
+    const text = drafts[key(line, col)];
+    if (text === undefined || numberOrNull(text) === null) return;
+    const next = { ...drafts };
+    delete next[key(line, col)];
     setDraft(next);
+  };
+
+  const paste = (event: ClipboardEvent<HTMLInputElement>, row: number, col: number) => {
+    const text = event.clipboardData.getData('text/plain');
+    if (!/[\t\n]/.test(text.trim())) return;
+    event.preventDefault();
+    const block = text
+      .replace(/\r/g, '')
+      .replace(/\n+$/, '')
+      .split('\n')
+      .map((l) => l.split('\t'));
+    const nextRows = rows.map((r) => ({ ...r }));
+    const nextDrafts = { ...drafts };
+    let outside = 0;
+    block.forEach((cells, r) =>
+      cells.forEach((cell, c) => {
+        const line = lines[row + r]?.key;
+        const target = nextRows[col + c];
+        if (!line || !target) {
+          outside++;
+          return;
+        }
+        const value = numberOrNull(cell);
+        if (value !== null) {
+          target[line] = value;
+          delete nextDrafts[key(line, col + c)];
+        } else nextDrafts[key(line, col + c)] = cell;
+      }),
+    );
+    onChange(nextRows);
+    setDraft(nextDrafts);
+    setPasteNote(
+      outside > 0
+        ? `${outside} pasted value${outside > 1 ? 's' : ''} fell outside the grid and ${outside > 1 ? 'were' : 'was'} left out; add years first.`
+        : null,
+    );
   };
 
   const move = (event: KeyboardEvent<HTMLInputElement>, row: number, col: number) => {
@@ -85,12 +122,12 @@ export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCoun
     onChange(rows.slice(0, -1));
   };
 
-  const problems = Object.entries(drafts)
-    .filter(([, text]) => parseAmount(text) === null)
-    .map(([k, text]) => {
-      const [line, col] = k.split(':');
-      return `${lines.find((l) => l.key === line)?.label}, year ${rows[Number(col)]?.year}: “${text}” is not a number.`;
-    });
+  const problems = Object.entries(drafts).flatMap(([k, text]) => {
+    const read = readNumberText(text);
+    if (read.ok) return [];
+    const [line, col] = k.split(':');
+    return [`${lines.find((l) => l.key === line)?.label}, year ${rows[Number(col)]?.year}: ${read.message}`];
+  });
   const total = (line: Line) => rows.reduce((s, r) => s + r[line], 0);
 
   return (
@@ -131,7 +168,7 @@ export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCoun
                 </th>
                 {rows.map((r, col) => {
                   const draft = drafts[key(line.key, col)];
-                  const invalid = draft !== undefined && parseAmount(draft) === null;
+                  const invalid = draft !== undefined && numberOrNull(draft) === null;
                   return (
                     <td key={r.year} className="border-b border-line px-1 py-1">
                       <input
@@ -143,6 +180,8 @@ export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCoun
                         value={draft ?? String(r[line.key])}
                         onChange={(e) => edit(line.key, col, e.target.value)}
                         onKeyDown={(e) => move(e, row, col)}
+                        onBlur={() => leave(line.key, col)}
+                        onPaste={(e) => paste(e, row, col)}
                         onFocus={(e) => e.currentTarget.select()}
                         className={`h-8 w-full min-w-20 rounded border px-2 text-right ${invalid ? 'border-brick-500 bg-brick-100' : 'border-transparent hover:border-line focus:border-tide-500'} ${readOnly ? 'bg-transparent' : ''}`}
                       />
@@ -188,6 +227,11 @@ export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCoun
           </tbody>
         </table>
       </div>
+      {pasteNote ? (
+        <p role="status" className="mt-2 text-caption text-ember-700">
+          {pasteNote}
+        </p>
+      ) : null}
       {problems.length > 0 ? (
         <ul role="alert" className="mt-2 list-disc pl-5 text-caption text-brick-700">
           {problems.map((p) => (
