@@ -1,6 +1,8 @@
 'use client';
 
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
+import { readNumberText } from '@/lib/number-text';
+import { useReportProblem } from './field-problems';
 import { Input } from './ui/input';
 
 interface Props {
@@ -22,7 +24,9 @@ const show = (value: number, percent: boolean) => (percent ? String(Number((valu
 
 /**
  * A number input that lets people type freely: the text is kept as typed, and the model only
- * changes when it reads as a valid number; otherwise the field says what is wrong.
+ * changes when it reads as a valid number (lib/number-text.ts); otherwise the field says what is
+ * wrong and reports it to the form around it (components/field-problems.tsx), which then will not
+ * save.
  */
 export function NumberField({ label, value, onChange, percent = false, check, hint, readOnly, integer, className }: Props) {
   const [text, setText] = useState(show(value, percent));
@@ -34,20 +38,25 @@ export function NumberField({ label, value, onChange, percent = false, check, hi
     setSeen(value);
     if (Number(text) * (percent ? 0.01 : 1) !== value) setText(show(value, percent));
   }
+  const report = useReportProblem();
+  const field = percent ? `${label} (%)` : label;
+  // A field that goes away takes its problem with it.
+  useEffect(() => () => report(field, null), [report, field]);
   const change = (next: string) => {
     setText(next);
-    const cleaned = next.trim().replace(/^−/, '-');
-    const parsed = cleaned === '' ? NaN : Number(cleaned);
-    if (!Number.isFinite(parsed)) return setError('Enter a number.');
-    if (integer && !Number.isInteger(parsed)) return setError('Enter a whole number.');
-    const model = percent ? parsed / 100 : parsed;
-    const problem = check?.(model) ?? null;
+    const read = readNumberText(next);
+    const problem = !read.ok
+      ? read.message
+      : integer && !Number.isInteger(read.value)
+        ? 'Enter a whole number.'
+        : (check?.(percent ? read.value / 100 : read.value) ?? null);
     setError(problem);
-    if (!problem) onChange(model);
+    report(field, problem);
+    if (!problem && read.ok) onChange(percent ? read.value / 100 : read.value);
   };
   return (
     <Input
-      label={percent ? `${label} (%)` : label}
+      label={field}
       inputMode="decimal"
       value={text}
       onChange={(e) => change(e.target.value)}

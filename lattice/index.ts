@@ -2,7 +2,7 @@
  * Leeway's valuation engine: interacting real options on a binomial lattice.
  * Pure TypeScript with no I/O, so it runs on the server, in a Web Worker and in the CLI.
  */
-export { valueProject, type ValueOptions } from './value-project';
+export { largestStepsWithinBudget, valueProject, type ValueOptions } from './value-project';
 export { explainNode, type NodeExplanation, type NodeRef } from './explain';
 export { prepareModel, parseModel } from './check-model';
 export { ModelError, type ModelIssue } from './errors';

@@ -6,7 +6,7 @@
 import type { CompiledModel } from './compiled';
 import { prepareModel } from './check-model';
 import { ModelError } from './errors';
-import { MAX_REQUEST_CELLS, NODE_BUDGET } from './limits';
+import { MAX_REQUEST_CELLS, MAX_STEPS, NODE_BUDGET } from './limits';
 import type { Convergence, Sensitivity, ValuationResult } from './result';
 import type { Cost, ExerciseWindow, ProjectModel } from './schema';
 import type { Years } from './units';
@@ -209,10 +209,28 @@ function passesOf(model: ProjectModel, compiled: CompiledModel, extras: boolean)
   return 1 + (rights > 1 ? 2 * rights : 0) + 0.3125 + 1 + 2 * rows;
 }
 
+/** The node × switchable-mode cells a valuation at `steps` visits, every pass counted. */
+function cellsAt(steps: number, compiled: CompiledModel, model: ProjectModel, extras: boolean): number {
+  const switchable = Math.max(1, new Set(compiled.switches.map((s) => s.from)).size);
+  return (((steps + 1) * (steps + 2)) / 2) * switchable * passesOf(model, compiled, extras);
+}
+
+/** The most steps a full valuation (extras included) of this model may use within the budget. */
+export function largestStepsWithinBudget(input: unknown): number {
+  const { model, compiled } = prepareModel(input);
+  let low = 1;
+  let high = MAX_STEPS;
+  while (low < high) {
+    const mid = Math.ceil((low + high) / 2);
+    if (cellsAt(mid, compiled, model, true) <= MAX_REQUEST_CELLS) low = mid;
+    else high = mid - 1;
+  }
+  return low;
+}
+
 export function valueProject(input: unknown, options: ValueOptions = {}): ValuationResult {
   const { model, compiled } = prepareModel(input);
-  const switchable = Math.max(1, new Set(compiled.switches.map((s) => s.from)).size);
-  const cells = (((model.steps + 1) * (model.steps + 2)) / 2) * switchable * passesOf(model, compiled, options.extras !== false);
+  const cells = cellsAt(model.steps, compiled, model, options.extras !== false);
   if (cells > MAX_REQUEST_CELLS)
     throw new ModelError([
       {

@@ -1,14 +1,15 @@
 'use client';
 
 import Link from 'next/link';
-import { useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useState } from 'react';
 import useSWR from 'swr';
+import { FieldProblems } from '@/components/field-problems';
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { StatusBadge } from '@/components/status-badge';
 import { Button } from '@/components/ui/button';
 import { Tabs } from '@/components/ui/tabs';
 import { useToast } from '@/components/ui/toast';
-import { ModelError, prepareModel, type OptionTemplate, type ProjectModel } from '@/lattice';
+import { largestStepsWithinBudget, MAX_STEPS, ModelError, prepareModel, type OptionTemplate, type ProjectModel } from '@/lattice';
 import { ApiError, getJson, sendJson } from '@/lib/api-client';
 import type { CaseJson } from '@/lib/case-json';
 import { caseToModel } from '@/lib/case-model';
@@ -75,6 +76,20 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
   const [dirty, setDirty] = useState(false);
   const [invalidCells, setInvalidCells] = useState(0);
   const [optionProblems, setOptionProblems] = useState(0);
+  // Fields whose text is not a valid value (components/field-problems.tsx), by label.
+  const [fieldProblems, setFieldProblems] = useState<Record<string, string>>({});
+  const reportProblem = useCallback((field: string, problem: string | null) => {
+    // What is on screen is no longer what is saved, even if no valid value changed.
+    if (problem) setDirty(true);
+    setFieldProblems((current) => {
+      if ((current[field] ?? null) === problem) return current;
+      const next = { ...current };
+      if (problem) next[field] = problem;
+      else delete next[field];
+      return next;
+    });
+  }, []);
+  const wrongFields = Object.entries(fieldProblems);
   const [saving, setSaving] = useState(false);
   const [valuing, setValuing] = useState(false);
   const [conflict, setConflict] = useState<string | null>(null);
@@ -105,6 +120,14 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
     }
   }, [draft]);
   const model = 'model' in built ? built.model : null;
+  // The steps field allows what the engine's budget allows for these rights (it refuses more).
+  const maxSteps = useMemo(() => {
+    try {
+      return largestStepsWithinBudget(caseToModel({ ...draft, settings: { ...draft.settings, steps: 1 } }).model);
+    } catch {
+      return MAX_STEPS;
+    }
+  }, [draft]);
   const valuation = useValuation(model, {});
   const result = model ? valuation.result : null;
 
@@ -116,13 +139,15 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
   }, [dirty]);
 
   const blocked =
-    invalidCells > 0
-      ? 'Fix the cells marked in red first.'
-      : optionProblems > 0
-        ? 'Fix the option fields marked in red first.'
-        : draft.name.trim() === ''
-          ? 'Give the case a name first.'
-          : null;
+    wrongFields.length > 0
+      ? `Fix ${wrongFields.map(([field, problem]) => `“${field}” (${problem})`).join(', ')} first.`
+      : invalidCells > 0
+        ? 'Fix the cells marked in red first.'
+        : optionProblems > 0
+          ? 'Fix the option fields marked in red first.'
+          : draft.name.trim() === ''
+            ? 'Give the case a name first.'
+            : null;
 
   const save = async (): Promise<boolean> => {
     if (blocked) {
@@ -174,205 +199,231 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
   const readOnly = !canEdit || status === 'in_review';
 
   return (
-    <div className="flex flex-col gap-6">
-      <div>
-        <nav aria-label="Breadcrumb" className="mb-2 text-caption text-ink-muted">
-          <Link href="/projects" className="hover:underline">
-            Projects
-          </Link>{' '}
-          /{' '}
-          <Link href={`/projects/${projectId}`} className="hover:underline">
-            {projectName}
-          </Link>{' '}
-          / {draft.name || 'Untitled case'}
-        </nav>
-        <div className="flex flex-wrap items-end justify-between gap-4">
-          <div className="flex flex-col gap-1">
-            {readOnly ? (
-              <h1>{draft.name}</h1>
-            ) : (
-              <label className="flex flex-col">
-                <span className="sr-only">Case name</span>
-                <input
-                  value={draft.name}
-                  onChange={(e) => update({ name: e.target.value })}
-                  maxLength={120}
-                  className="-ml-2 rounded-md border border-transparent bg-transparent px-2 py-1 text-title hover:border-line focus:border-tide-500"
-                />
-              </label>
-            )}
-            <p className="flex flex-wrap items-center gap-2 text-caption text-ink-muted">
-              <StatusBadge status={status} />
-              Version {version}
-              {dirty ? ' · unsaved changes' : ' · saved'}
-              {latestRun
-                ? ` · last stored valuation ${formatDateTime(latestRun.createdAt)} by ${latestRun.createdBy ?? 'someone'} (version ${latestRun.caseVersion})`
-                : ' · never valued on the server'}
-            </p>
-          </div>
-          <div className="flex flex-wrap items-center gap-3">
-            <a
-              href={`/api/v1/cases/${caseId}/export.xlsx`}
-              className="text-tide-600 underline"
-              title="Inputs, cash flows, settings, options, results and the first lattice steps of the saved case"
-            >
-              Export workbook
-            </a>
-            {readOnly ? (
-              <p className="rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
-                {canEdit
-                  ? 'In review: the case is frozen until a reviewer returns it.'
-                  : rights.canDecide && status === 'in_review'
-                    ? 'In review: read the case, then decide in the Review tab.'
-                    : 'Read-only: your role can read this case but not change it.'}
-              </p>
-            ) : (
-              <div className="flex gap-2">
-                <Button variant="secondary" onClick={() => void save()} busy={saving} disabled={!dirty}>
-                  Save
-                </Button>
-                <Button onClick={() => void valueCase()} busy={valuing} disabled={!model}>
-                  Value case
-                </Button>
-              </div>
-            )}
-          </div>
-        </div>
-      </div>
-
-      {conflict ? (
-        <div
-          role="alert"
-          className="flex flex-wrap items-center justify-between gap-3 rounded-md border border-brick-500 bg-brick-100 px-4 py-3 text-brick-700"
-        >
-          <p>{conflict}</p>
-          <Button variant="secondary" onClick={reload}>
-            Load the saved version (drops my changes)
-          </Button>
-        </div>
-      ) : null}
-
-      <div className="grid gap-4 sm:grid-cols-3">
-        <Headline label="Static NPV" value={formatMoney(result?.staticNpv ?? analysis?.staticNpv, currency)} busy={busy} />
-        <Headline label="Option premium" value={formatMoney(result?.optionPremium, currency)} busy={busy} />
-        <Headline label="Expanded NPV" value={formatMoney(result?.expandedNpv, currency)} strong busy={busy} />
-      </div>
-      <p className="-mt-3 text-caption text-ink-muted" aria-live="polite">
-        {'problem' in built
-          ? `Not valued: ${built.problem}`
-          : valuation.issues
-            ? `Not valued: ${valuation.issues.map((i) => i.message).join('; ')}`
-            : busy
-              ? 'Recomputing in your browser…'
-              : 'Computed live in your browser from the figures on screen; “Value case” stores a run on the server.'}
-        {result && analysis && Math.abs(result.staticNpv - analysis.staticNpv) > 0.05
-          ? ` Static NPV here is the plan without flexibility as the lattice values it: a defer cost or stage payments are discounted at the risk-free rate (at the WACC it is ${formatMoney(analysis.staticNpv, currency)}, see Cash flows).`
-          : ''}
-      </p>
-
-      <Tabs
-        tabs={[
-          {
-            id: 'cash-flows',
-            label: 'Cash flows',
-            content: (
-              <CashFlowSection
-                cashFlows={draft.cashFlows}
-                analysis={analysis}
-                currency={currency}
-                readOnly={readOnly}
-                onChange={(cashFlows) => update({ cashFlows })}
-                onInvalidCount={setInvalidCells}
-                importer={
-                  readOnly ? null : (
-                    <CashFlowImport
-                      caseId={caseId}
-                      version={version}
-                      currency={currency}
-                      disabledReason={dirty ? 'Save or discard your changes first: an import replaces the cash flows and saves.' : null}
-                      onImported={reload}
-                    />
-                  )
-                }
-              />
-            ),
-          },
-          {
-            id: 'uncertainty',
-            label: 'Uncertainty',
-            content: (
-              <LatticeSettingsSection
-                caseId={caseId}
-                unsaved={dirty}
-                settings={draft.settings}
-                horizon={horizon}
-                readOnly={readOnly}
-                onChange={(settings) => update({ settings })}
-              />
-            ),
-          },
-          {
-            id: 'flexibility',
-            label: 'Flexibility',
-            content: (
-              <div className="flex flex-col gap-6">
-                <OptionCards
-                  options={(draft.options ?? []) as OptionTemplate[]}
-                  horizon={horizon}
-                  basis={cardBasis(analysis, horizon, draft.settings.riskFreeRate)}
-                  readOnly={readOnly}
-                  onChange={(options, problems) => {
-                    setOptionProblems(problems);
-                    if (options) update({ options });
-                    else setDirty(true);
-                  }}
-                />
-                <details className="rounded-card border border-line bg-paper-raised p-5">
-                  <summary className="cursor-pointer font-medium">Advanced: the operating modes and switches these options compile to</summary>
-                  <div className="mt-4">
-                    <CompiledView model={model} />
-                  </div>
-                </details>
-              </div>
-            ),
-          },
-          {
-            id: 'results',
-            label: 'Results',
-            content: result ? <ResultsSection result={result} currency={currency} /> : <LoadingBlock label="Valuing the case" lines={5} />,
-          },
-          {
-            id: 'lattice',
-            label: 'Lattice',
-            content:
-              model && 'modes' in built ? (
-                <LatticeSection model={model} modes={built.modes} startMode={built.start} result={result} currency={currency} />
+    <FieldProblems.Provider value={reportProblem}>
+      <div className="flex flex-col gap-6">
+        <div>
+          <nav aria-label="Breadcrumb" className="mb-2 text-caption text-ink-muted">
+            <Link href="/projects" className="hover:underline">
+              Projects
+            </Link>{' '}
+            /{' '}
+            <Link href={`/projects/${projectId}`} className="hover:underline">
+              {projectName}
+            </Link>{' '}
+            / {draft.name || 'Untitled case'}
+          </nav>
+          <div className="flex flex-wrap items-end justify-between gap-4">
+            <div className="flex flex-col gap-1">
+              {readOnly ? (
+                <h1>{draft.name}</h1>
               ) : (
-                <p className="text-ink-soft">The lattice appears once the case can be valued.</p>
+                <label className="flex flex-col">
+                  <span className="sr-only">Case name</span>
+                  <input
+                    value={draft.name}
+                    onChange={(e) => update({ name: e.target.value })}
+                    maxLength={120}
+                    className="-ml-2 rounded-md border border-transparent bg-transparent px-2 py-1 text-title hover:border-line focus:border-tide-500"
+                  />
+                </label>
+              )}
+              <p className="flex flex-wrap items-center gap-2 text-caption text-ink-muted">
+                <StatusBadge status={status} />
+                Version {version}
+                {dirty ? ' · unsaved changes' : ' · saved'}
+                {latestRun
+                  ? ` · last stored valuation ${formatDateTime(latestRun.createdAt)} by ${latestRun.createdBy ?? 'someone'} (version ${latestRun.caseVersion})`
+                  : ' · never valued on the server'}
+              </p>
+            </div>
+            <div className="flex flex-wrap items-center gap-3">
+              <a
+                href={`/api/v1/cases/${caseId}/export.xlsx`}
+                className="text-tide-600 underline"
+                title="Inputs, cash flows, settings, options, results and the first lattice steps of the saved case"
+              >
+                Export workbook
+              </a>
+              {readOnly ? (
+                <p className="rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
+                  {canEdit
+                    ? 'In review: the case is frozen until a reviewer returns it.'
+                    : rights.canDecide && status === 'in_review'
+                      ? 'In review: read the case, then decide in the Review tab.'
+                      : 'Read-only: your role can read this case but not change it.'}
+                </p>
+              ) : (
+                <div className="flex gap-2">
+                  <Button variant="secondary" onClick={() => void save()} busy={saving} disabled={!dirty}>
+                    Save
+                  </Button>
+                  <Button onClick={() => void valueCase()} busy={valuing} disabled={!model || blocked !== null}>
+                    Value case
+                  </Button>
+                </div>
+              )}
+            </div>
+          </div>
+        </div>
+
+        {conflict ? (
+          <div
+            role="alert"
+            className="flex flex-wrap items-center justify-between gap-3 rounded-md border border-brick-500 bg-brick-100 px-4 py-3 text-brick-700"
+          >
+            <p>{conflict}</p>
+            <Button variant="secondary" onClick={reload}>
+              Load the saved version (drops my changes)
+            </Button>
+          </div>
+        ) : null}
+
+        <div className="grid gap-4 sm:grid-cols-3">
+          <Headline label="Static NPV" value={formatMoney(result?.staticNpv ?? analysis?.staticNpv, currency)} busy={busy} />
+          <Headline label="Option premium" value={formatMoney(result?.optionPremium, currency)} busy={busy} />
+          <Headline label="Expanded NPV" value={formatMoney(result?.expandedNpv, currency)} strong busy={busy} />
+        </div>
+        {wrongFields.length > 0 || invalidCells > 0 || optionProblems > 0 ? (
+          <p role="alert" className="-mt-3 rounded-md border border-brick-500 bg-brick-100 px-3 py-2 text-caption text-brick-700">
+            These figures use the last valid values, not what is on screen:{' '}
+            {[
+              ...wrongFields.map(([field, problem]) => `${field}: ${problem}`),
+              ...(invalidCells > 0 ? [`${invalidCells} cash-flow cell${invalidCells > 1 ? 's are' : ' is'} not a number`] : []),
+              ...(optionProblems > 0 ? [`${optionProblems} option field${optionProblems > 1 ? 's are' : ' is'} not valid`] : []),
+            ].join('; ')}
+            . The case cannot be saved or valued until they are fixed.
+          </p>
+        ) : null}
+        <p className="-mt-3 text-caption text-ink-muted" aria-live="polite">
+          {'problem' in built
+            ? `Not valued: ${built.problem}`
+            : valuation.issues
+              ? `Not valued: ${valuation.issues.map((i) => i.message).join('; ')}`
+              : busy
+                ? 'Recomputing in your browser…'
+                : 'Computed live in your browser from the figures on screen; “Value case” stores a run on the server.'}
+          {result && analysis && Math.abs(result.staticNpv - analysis.staticNpv) > 0.05
+            ? ` Static NPV here is the plan without flexibility as the lattice values it: a defer cost or stage payments are discounted at the risk-free rate (at the WACC it is ${formatMoney(analysis.staticNpv, currency)}, see Cash flows).`
+            : ''}
+        </p>
+
+        <Tabs
+          tabs={[
+            {
+              id: 'cash-flows',
+              label: 'Cash flows',
+              content: (
+                <CashFlowSection
+                  cashFlows={draft.cashFlows}
+                  analysis={analysis}
+                  currency={currency}
+                  readOnly={readOnly}
+                  onChange={(cashFlows) => update({ cashFlows })}
+                  onInvalidCount={setInvalidCells}
+                  importer={
+                    readOnly ? null : (
+                      <CashFlowImport
+                        caseId={caseId}
+                        version={version}
+                        currency={currency}
+                        disabledReason={dirty ? 'Save or discard your changes first: an import replaces the cash flows and saves.' : null}
+                        onImported={reload}
+                      />
+                    )
+                  }
+                />
               ),
-          },
-          {
-            id: 'documents',
-            label: 'Documents',
-            content: <AttachmentsPanel caseId={caseId} canEdit={canEdit} />,
-          },
-          {
-            id: 'review',
-            label: 'Review',
-            content: (
-              <ReviewPanel
-                caseId={caseId}
-                currency={currency}
-                status={status}
-                optionNames={((draft.options ?? []) as OptionTemplate[]).map((o, k) => o.id ?? `Option ${k + 1}`)}
-                rights={rights}
-                beforeSubmit={readyToSubmit}
-                onStatus={setStatus}
-              />
-            ),
-          },
-        ]}
-      />
-    </div>
+            },
+            {
+              id: 'uncertainty',
+              label: 'Uncertainty',
+              content: (
+                <LatticeSettingsSection
+                  caseId={caseId}
+                  unsaved={dirty}
+                  settings={draft.settings}
+                  horizon={horizon}
+                  readOnly={readOnly}
+                  maxSteps={maxSteps}
+                  onChange={(settings) => update({ settings })}
+                />
+              ),
+            },
+            {
+              id: 'flexibility',
+              label: 'Flexibility',
+              content: (
+                <div className="flex flex-col gap-6">
+                  <OptionCards
+                    options={(draft.options ?? []) as OptionTemplate[]}
+                    horizon={horizon}
+                    basis={cardBasis(analysis, horizon, draft.settings.riskFreeRate)}
+                    readOnly={readOnly}
+                    onChange={(options, problems) => {
+                      setOptionProblems(problems);
+                      if (options) update({ options });
+                      else setDirty(true);
+                    }}
+                  />
+                  <details className="rounded-card border border-line bg-paper-raised p-5">
+                    <summary className="cursor-pointer font-medium">Advanced: the operating modes and switches these options compile to</summary>
+                    <div className="mt-4">
+                      <CompiledView model={model} />
+                    </div>
+                  </details>
+                </div>
+              ),
+            },
+            {
+              id: 'results',
+              label: 'Results',
+              content: result ? (
+                <ResultsSection result={result} currency={currency} />
+              ) : 'problem' in built || valuation.issues ? (
+                <div role="alert" className="rounded-card border border-brick-500 bg-brick-100 px-5 py-4 text-brick-700">
+                  <p className="font-medium">The engine cannot value this case as it stands.</p>
+                  <p className="mt-1">{'problem' in built ? built.problem : valuation.issues!.map((i) => i.message).join('; ')}</p>
+                  <p className="mt-2 text-caption">
+                    Change the figure it names (Uncertainty holds the steps; Flexibility the options) and the results appear here at once.
+                  </p>
+                </div>
+              ) : (
+                <LoadingBlock label="Valuing the case" lines={5} />
+              ),
+            },
+            {
+              id: 'lattice',
+              label: 'Lattice',
+              content:
+                model && 'modes' in built ? (
+                  <LatticeSection model={model} modes={built.modes} startMode={built.start} result={result} currency={currency} />
+                ) : (
+                  <p className="text-ink-soft">The lattice appears once the case can be valued.</p>
+                ),
+            },
+            {
+              id: 'documents',
+              label: 'Documents',
+              content: <AttachmentsPanel caseId={caseId} canEdit={canEdit} />,
+            },
+            {
+              id: 'review',
+              label: 'Review',
+              content: (
+                <ReviewPanel
+                  caseId={caseId}
+                  currency={currency}
+                  status={status}
+                  optionNames={((draft.options ?? []) as OptionTemplate[]).map((o, k) => o.id ?? `Option ${k + 1}`)}
+                  rights={rights}
+                  beforeSubmit={readyToSubmit}
+                  onStatus={setStatus}
+                />
+              ),
+            },
+          ]}
+        />
+      </div>
+    </FieldProblems.Provider>
   );
 }

@@ -30,6 +30,7 @@ export function LatticeSettingsSection({
   horizon,
   readOnly,
   onChange,
+  maxSteps = MAX_STEPS,
 }: {
   caseId: string;
   unsaved: boolean;
@@ -37,6 +38,8 @@ export function LatticeSettingsSection({
   horizon: number;
   readOnly: boolean;
   onChange: (s: CaseSettings) => void;
+  /** The most steps the engine's budget allows for a full valuation of this case with its rights. */
+  maxSteps?: number;
 }) {
   const perYear = settings.steps / Math.max(horizon, 1);
   const source = settings.volatilitySource;
@@ -106,7 +109,11 @@ export function LatticeSettingsSection({
             value={settings.steps}
             readOnly={readOnly}
             hint={`${perYear.toFixed(1)} steps a year over the ${horizon}-year horizon; more steps, smaller error (see Results → convergence).`}
-            check={(v) => (v < 1 || v > MAX_STEPS ? `Use 1 to ${MAX_STEPS.toLocaleString('en-GB')} steps.` : null)}
+            check={(v) =>
+              v < 1 || v > maxSteps
+                ? `Use 1 to ${maxSteps.toLocaleString('en-GB')} steps${maxSteps < MAX_STEPS ? ' (the most a full valuation with these rights may use)' : ''}.`
+                : null
+            }
             onChange={(steps) => onChange({ ...settings, steps })}
           />
           <Select
