@@ -60,7 +60,7 @@ export async function notifyDecided(
   const intro =
     args.decision === 'approved'
       ? `${args.by} approved “${c.caseName}” of ${c.projectName}. The board pack is attached and can be downloaded from the case.`
-      : `${args.by} returned “${c.caseName}” of ${c.projectName} with this reason: “${args.reason ?? ''}”. Edit the case and submit it again when it is ready.`;
+      : `${args.by} returned “${c.caseName}” of ${c.projectName}. Edit the case and submit it again when it is ready. Their reason:\n\n${args.reason ?? ''}`;
   const mail = linkMail(
     args.to,
     `${args.decision === 'approved' ? 'Approved' : 'Returned'}: ${c.projectName} — ${c.caseName}`,

@@ -95,7 +95,7 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
       lattice,
       ['Step', 'Node (up-moves)', 'Year', 'Project value V', `Value with flexibility W (${start})`, 'Decision'],
       c.result.grid.steps.flatMap((step, i) =>
-        step.underlying.map((v, j) => [i, j, step.t, v, step.modes[start]?.value[j] ?? null, step.modes[start]?.decision[j] ?? 'continue']),
+        step.underlying.map((v, j) => [i, j, Number(step.t.toFixed(10)), v, step.modes[start]?.value[j] ?? null, step.modes[start]?.decision[j] ?? 'continue']),
       ),
     );
   }

@@ -31,8 +31,25 @@ function describe(e: Entry, currency: string): string {
       return `deleted the case ${name}`;
     case 'case.value':
       return `valued ${name}: expanded NPV ${formatMoney(Number(e.detail.expandedNpv), currency)}`;
+    case 'case.submit':
+      return `submitted ${name} for review`;
+    case 'case.approve':
+      return `approved ${name}`;
+    case 'case.return':
+      return `returned ${name} to the analyst`;
+    case 'case.comment':
+      return `commented on ${name}`;
+    case 'case.attach':
+      return `attached a document to ${name}`;
+    case 'case.detach':
+      return `removed a document from ${name}`;
+    case 'case.import':
+      return `imported cash flows into ${name}`;
+    case 'volatility.simulate':
+      return `started a Monte Carlo volatility estimate for ${name}`;
     default:
-      return e.action;
+      // An event this list does not know yet reads as words, not as a key.
+      return e.action.replace(/[._]/g, ' ');
   }
 }
 

@@ -6,6 +6,7 @@ import { DecisionMap } from '@/components/charts/decision-map';
 import { LoadingBlock } from '@/components/load-state';
 import { Select } from '@/components/ui/select';
 import { NODE_BUDGET, type ProjectModel, type ValuationResult } from '@/lattice';
+import { modeLabel } from '@/lib/mode-words';
 import { useNodeExplanation, useValuation } from '@/lib/engine/use-engine';
 import { decisionFills, LatticeTree } from './lattice-tree';
 import { NodeInspector } from './node-inspector';
@@ -46,7 +47,7 @@ export function LatticeSection({ model, modes, startMode, result, currency }: Pr
           label="Mode shown"
           value={activeMode}
           onChange={(e) => setMode(e.target.value)}
-          options={modes.map((m) => ({ value: m, label: m === startMode ? `${m} (start)` : m }))}
+          options={modes.map((m) => ({ value: m, label: m === startMode ? `${modeLabel(m)} (today)` : modeLabel(m) }))}
           className="w-72"
         />
         <Select
