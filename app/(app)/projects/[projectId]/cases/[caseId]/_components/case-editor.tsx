@@ -16,6 +16,7 @@ import { caseToModel } from '@/lib/case-model';
 import { analyseCashFlows, type CashFlowAnalysis } from '@/lib/cash-flows';
 import { useValuation } from '@/lib/engine/use-engine';
 import { formatDateTime, formatMoney } from '@/lib/format';
+import { issueInWords } from '@/lib/issue-words';
 import { cardBasis } from '@/lib/option-form';
 import type { CaseInput } from '@/lib/validations/case';
 import type { CaseStatus } from '@/db/types';
@@ -115,7 +116,8 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
       const { compiled } = prepareModel(model);
       return { model, modes: compiled.modes.map((m) => m.id), start: compiled.modes[compiled.start]!.id };
     } catch (error) {
-      if (error instanceof ModelError) return { problem: error.issues.map((i) => i.message).join('; ') };
+      if (error instanceof ModelError)
+        return { problem: error.issues.map((i) => issueInWords(i.message, (draft.options ?? []) as OptionTemplate[])).join('; ') };
       return { problem: error instanceof Error ? error.message : 'The case cannot be valued yet.' };
     }
   }, [draft]);
@@ -298,7 +300,7 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
           {'problem' in built
             ? `Not valued: ${built.problem}`
             : valuation.issues
-              ? `Not valued: ${valuation.issues.map((i) => i.message).join('; ')}`
+              ? `Not valued: ${valuation.issues.map((i) => issueInWords(i.message, (draft.options ?? []) as OptionTemplate[])).join('; ')}`
               : busy
                 ? 'Recomputing in your browser…'
                 : 'Computed live in your browser from the figures on screen; “Value case” stores a run on the server.'}
@@ -382,7 +384,11 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
               ) : 'problem' in built || valuation.issues ? (
                 <div role="alert" className="rounded-card border border-brick-500 bg-brick-100 px-5 py-4 text-brick-700">
                   <p className="font-medium">The engine cannot value this case as it stands.</p>
-                  <p className="mt-1">{'problem' in built ? built.problem : valuation.issues!.map((i) => i.message).join('; ')}</p>
+                  <p className="mt-1">
+                    {'problem' in built
+                      ? built.problem
+                      : valuation.issues!.map((i) => issueInWords(i.message, (draft.options ?? []) as OptionTemplate[])).join('; ')}
+                  </p>
                   <p className="mt-2 text-caption">
                     Change the figure it names (Uncertainty holds the steps; Flexibility the options) and the results appear here at once.
                   </p>
