@@ -13,7 +13,7 @@ export interface CaseContent {
   options: unknown[];
 }
 
-export type CaseSave = { ok: true; row: Case } | { ok: false; reason: 'not_found' | 'conflict' | 'in_review'; currentVersion?: number };
+export type CaseSave = { ok: true; row: Case } | { ok: false; reason: 'not_found' | 'conflict' | 'in_review' | 'approved'; currentVersion?: number };
 
 export async function createCase(db: Database, args: { orgId: string; projectId: string; createdBy: string; content: CaseContent }): Promise<Case | undefined> {
   const project = await db.selectFrom('project').select('id').where('organization_id', '=', args.orgId).where('id', '=', args.projectId).executeTakeFirst();
@@ -42,9 +42,10 @@ export async function listCases(db: Database, { orgId, projectId }: { orgId: str
 }
 
 /**
- * Saves new content if the case is still at `expectedVersion` and not in review, and moves it to
- * the next version. A saved case is a draft: an approval or a return belongs to the snapshot
- * that was reviewed, not to later edits (lib/review/transitions.ts).
+ * Saves new content if the case is still at `expectedVersion` and editable (a draft or returned),
+ * and moves it to the next version. A case in review waits for its reviewer; an approved case
+ * is changed only through an explicit revision (`startRevision`), so no keystroke quietly turns
+ * an approved case into a draft (lib/review/transitions.ts).
  */
 export async function saveCase(db: Database, args: { orgId: string; caseId: string; expectedVersion: number; content: CaseContent }): Promise<CaseSave> {
   const row = await db
@@ -61,13 +62,30 @@ export async function saveCase(db: Database, args: { orgId: string; caseId: stri
     .where('organization_id', '=', args.orgId)
     .where('id', '=', args.caseId)
     .where('version', '=', args.expectedVersion)
-    .where('status', '!=', 'in_review')
+    .where('status', 'in', ['draft', 'returned'])
     .returningAll()
     .executeTakeFirst();
   if (row) return { ok: true, row };
   const current = await findCase(db, { orgId: args.orgId, caseId: args.caseId });
   if (!current) return { ok: false, reason: 'not_found' };
-  return { ok: false, reason: current.status === 'in_review' ? 'in_review' : 'conflict', currentVersion: current.version };
+  const reason = current.status === 'in_review' ? 'in_review' : current.status === 'approved' ? 'approved' : 'conflict';
+  return { ok: false, reason, currentVersion: current.version };
+}
+
+/**
+ * Starts a revision of an approved case: it becomes a draft at the next version, to be edited
+ * and submitted again. The approved snapshot, its figures and its board pack stay as they are.
+ * Undefined when the case is not approved (or not in the organisation).
+ */
+export async function startRevision(db: Database, args: { orgId: string; caseId: string }): Promise<Case | undefined> {
+  return db
+    .updateTable('case')
+    .set((eb) => ({ status: 'draft' as const, version: eb('version', '+', 1), updated_at: new Date() }))
+    .where('organization_id', '=', args.orgId)
+    .where('id', '=', args.caseId)
+    .where('status', '=', 'approved')
+    .returningAll()
+    .executeTakeFirst();
 }
 
 /** A copy of a case, as a new case at version 1 under the same project. */

@@ -7,10 +7,13 @@
  *     ▲                  │
  *     │               return (with a reason)
  *     │                  ▼
- *     └──── (edit) ── returned ──submit──▶ in_review
+ *     ├──── (edit) ── returned ──submit──▶ in_review
+ *     │
+ *     └── start a revision ── approved
  *
- * Saving edits to a returned or approved case makes it a draft again (an approval belongs to
- * the snapshot that was reviewed, never to later edits); a case in review cannot be edited.
+ * Saving edits to a returned case makes it a draft again. An approved case is changed only by
+ * an explicit revision, which makes it a draft at the next version and leaves the approved
+ * snapshot and its board pack as they are; a case in review cannot be edited.
  */
 import type { CaseStatus } from '@/db/types';
 import { roleAllows, type Permission, type RoleName } from '../permissions';
@@ -31,7 +34,7 @@ export const statusLabels: Record<CaseStatus, string> = {
 };
 
 /** Statuses in which a case's inputs may be saved. */
-export const editableStatuses: CaseStatus[] = ['draft', 'returned', 'approved'];
+export const editableStatuses: CaseStatus[] = ['draft', 'returned'];
 
 export type TransitionCheck = { ok: true; to: CaseStatus } | { ok: false; code: 'forbidden' | 'conflict'; message: string };
 

@@ -6,7 +6,7 @@
 import { sql } from 'kysely';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
-import { createCase, saveCase } from '@/db/queries/cases';
+import { createCase, saveCase, startRevision } from '@/db/queries/cases';
 import { createProject } from '@/db/queries/projects';
 import { decideCase, submitCase } from '@/db/queries/reviews';
 import { minimalCase, seededDemo } from './support/demo';
@@ -75,7 +75,7 @@ describe('review workflow', () => {
     expect(decided).toEqual([{ status: 'approved' }]);
   });
 
-  it('keeps a snapshot byte-identical when the case is edited afterwards, and refuses saves while in review', async () => {
+  it('keeps a snapshot byte-identical when the case is revised and edited afterwards, and refuses saves while in review or approved', async () => {
     const c = await freshCase();
     const submitted = await submit(c.id);
     if (!submitted.ok) throw new Error('not submitted');
@@ -91,13 +91,13 @@ describe('review workflow', () => {
       reason: 'in_review',
     });
     await approve(c.id);
-    const edited = await saveCase(db, {
-      orgId: kestrel,
-      caseId: c.id,
-      expectedVersion: 1,
-      content: { ...content, settings: { ...content.settings, volatility: 0.6 } },
-    });
-    expect(edited).toMatchObject({ ok: true, row: { status: 'draft' } });
+    const change = { ...content, settings: { ...content.settings, volatility: 0.6 } };
+    // Approved: a save is refused until a revision is started, which makes a draft at version 2.
+    expect(await saveCase(db, { orgId: kestrel, caseId: c.id, expectedVersion: 1, content: change })).toMatchObject({ ok: false, reason: 'approved' });
+    expect(await startRevision(db, { orgId: kestrel, caseId: c.id })).toMatchObject({ status: 'draft', version: 2 });
+    expect(await startRevision(db, { orgId: kestrel, caseId: c.id })).toBeUndefined();
+    const edited = await saveCase(db, { orgId: kestrel, caseId: c.id, expectedVersion: 2, content: change });
+    expect(edited).toMatchObject({ ok: true, row: { status: 'draft', version: 3 } });
     expect(await bytes()).toBe(before);
   });
 });

@@ -34,6 +34,7 @@ const routes: [string, string][] = [
   ['POST', '/api/v1/cases/:id/submit'],
   ['POST', '/api/v1/cases/:id/duplicate'],
   ['POST', '/api/v1/cases/:id/approve'],
+  ['POST', '/api/v1/cases/:id/revisions'],
   ['POST', '/api/v1/cases/:id/return'],
   ['GET', '/api/v1/cases/:id/board-pack'],
   ['POST', '/api/v1/cases/:id/valuations'],

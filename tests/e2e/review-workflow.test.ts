@@ -202,4 +202,32 @@ describe('review workflow', () => {
     await outsider.context.close();
     await viewer.context.close();
   });
+
+  it('keeps an approved case as approved until someone starts a revision, which leaves the approval and its pack untouched', async () => {
+    const { context, page } = await signedInPage('analyst@kestrelbay.example');
+    await page.goto(`/projects/${projectId}/cases/${caseId}`);
+    await page.getByRole('tab', { name: 'Cash flows' }).click();
+    await expect.poll(() => page.getByRole('button', { name: 'Start a revision' }).isVisible(), { timeout: 20_000 }).toBe(true);
+    // No keystroke can change it: the fields are read-only and a direct save is refused.
+    expect(await page.getByLabel('Revenue, year 1', { exact: true }).getAttribute('readonly')).not.toBeNull();
+    const current = (await (await page.request.get(`/api/v1/cases/${caseId}`)).json()).case;
+    const refused = await page.request.patch(`/api/v1/cases/${caseId}`, { data: { ...current, name: 'Edited after approval', version: current.version } });
+    expect(refused.status()).toBe(409);
+    expect((await refused.json()).error.message).toContain('start a revision');
+    const packBefore = Buffer.from(await (await page.request.get(`/api/v1/cases/${caseId}/board-pack?size=A4`)).body());
+
+    await page.getByRole('button', { name: 'Start a revision' }).click();
+    await expect.poll(async () => (await (await page.request.get(`/api/v1/cases/${caseId}`)).json()).case.status, { timeout: 20_000 }).toBe('draft');
+    const revised = (await (await page.request.get(`/api/v1/cases/${caseId}`)).json()).case;
+    expect(revised.version).toBe(current.version + 1);
+    await expect.poll(() => page.getByLabel('Revenue, year 1', { exact: true }).getAttribute('readonly'), { timeout: 20_000 }).toBeNull();
+    // The approval, its snapshot and its pack are as they were.
+    const snapshots = (await (await page.request.get(`/api/v1/cases/${caseId}/snapshots`)).json()).snapshots;
+    expect(snapshots[0].status).toBe('approved');
+    const packAfter = Buffer.from(await (await page.request.get(`/api/v1/cases/${caseId}/board-pack?size=A4`)).body());
+    expect(packAfter.equals(packBefore)).toBe(true);
+    // A second revision of a draft is refused: it is edited as it is.
+    expect((await page.request.post(`/api/v1/cases/${caseId}/revisions`)).status()).toBe(409);
+    await context.close();
+  });
 });

@@ -60,6 +60,7 @@ const matrix: [Method, string, Role[], Probe?][] = [
   ['POST', '/api/v1/cases/:case/submit', ['analyst']],
   ['POST', '/api/v1/cases/:case/duplicate', BUILDERS, { json: { name: 5 }, status: 422, valid: { name: 'Copy' } }],
   ['POST', '/api/v1/cases/:case/approve', ['reviewer']],
+  ['POST', '/api/v1/cases/:case/revisions', BUILDERS],
   ['POST', '/api/v1/cases/:case/return', ['reviewer'], { json: { reason: 5 }, status: 422, valid: { reason: 'Not yours to return.' } }],
   ['GET', '/api/v1/cases/:case/board-pack', ALL],
   ['POST', '/api/v1/cases/:case/valuations', BUILDERS],

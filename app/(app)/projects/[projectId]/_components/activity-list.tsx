@@ -43,6 +43,8 @@ function describe(e: Entry, currency: string): string {
       return `attached a document to ${name}`;
     case 'case.detach':
       return `removed a document from ${name}`;
+    case 'case.revise':
+      return `started a revision of ${name} (version ${String(e.detail.version ?? '?')})`;
     case 'case.import':
       return `imported cash flows into ${name}`;
     case 'volatility.simulate':

@@ -33,6 +33,11 @@ export const PATCH = withAuth<Params, typeof caseSaveSchema>(
       if (!saved.ok && saved.reason === 'not_found') throw missing();
       if (!saved.ok && saved.reason === 'in_review')
         throw new AppError('conflict', 'This case is in review and cannot be edited until a reviewer returns it. Nothing was changed.');
+      if (!saved.ok && saved.reason === 'approved')
+        throw new AppError(
+          'conflict',
+          'This case is approved: start a revision to change it (the approved version and its board pack stay as they are). Nothing was changed.',
+        );
       if (!saved.ok)
         throw new AppError(
           'conflict',

@@ -197,8 +197,22 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
 
   const latestRun = runs.data?.runs[0];
   const busy = valuation.computing;
-  // A case in review is frozen for everyone until a reviewer returns it.
-  const readOnly = !canEdit || status === 'in_review';
+  // A case in review is frozen for everyone until a reviewer returns it; an approved one until
+  // someone starts a revision, so no keystroke quietly turns it into a draft.
+  const readOnly = !canEdit || status === 'in_review' || status === 'approved';
+  const [revising, setRevising] = useState(false);
+  const startRevision = async () => {
+    setRevising(true);
+    try {
+      const { case: revised } = await sendJson<{ case: CaseJson }>('POST', `/api/v1/cases/${caseId}/revisions`);
+      toast(`Revision started: version ${revised.version} is a draft. The approved version and its board pack stay as they are.`, 'success');
+      reload();
+    } catch (error) {
+      toast(error instanceof Error ? error.message : 'The revision could not be started.', 'error');
+    } finally {
+      setRevising(false);
+    }
+  };
 
   return (
     <FieldProblems.Provider value={reportProblem}>
@@ -246,7 +260,14 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
               >
                 Export workbook
               </a>
-              {readOnly ? (
+              {readOnly && canEdit && status === 'approved' ? (
+                <div className="flex flex-wrap items-center gap-3 rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
+                  <span>Approved: changing it starts a revision, a new draft version. The approved version and its board pack stay as they are.</span>
+                  <Button variant="secondary" onClick={() => void startRevision()} busy={revising}>
+                    Start a revision
+                  </Button>
+                </div>
+              ) : readOnly ? (
                 <p className="rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
                   {canEdit
                     ? 'In review: the case is frozen until a reviewer returns it.'
