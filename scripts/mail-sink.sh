@@ -11,9 +11,16 @@ fi
 mkdir -p .data
 nohup node --import tsx scripts/mail-sink.ts > .data/mail-sink.log 2>&1 &
 pid=$!
-for _ in $(seq 1 50); do
+# Loading tsx takes 5–8 s on a busy two-core machine: wait up to 60 s, but stop at once if the
+# process died, and say why.
+for _ in $(seq 1 300); do
   if (exec 3<>"/dev/tcp/127.0.0.1/$PORT") 2>/dev/null; then echo "$pid"; exit 0; fi
-  sleep 0.1
+  if ! kill -0 "$pid" 2>/dev/null; then
+    echo "› mail sink: stopped before listening on 127.0.0.1:$PORT; the end of .data/mail-sink.log says:" >&2
+    tail -n 5 .data/mail-sink.log >&2
+    exit 1
+  fi
+  sleep 0.2
 done
-echo "mail sink did not start; see .data/mail-sink.log" >&2
+echo "› mail sink: not listening on 127.0.0.1:$PORT after 60 s; see .data/mail-sink.log" >&2
 exit 1
