@@ -1,0 +1,115 @@
+/**
+ * `npm run load`: closed-loop clients against a running Leeway on loopback (start it with
+ * `npm start`; LOAD_URL to point elsewhere on this machine). Each scenario runs CLIENTS clients
+ * for SECONDS seconds, each sending its next request when the last answered, and prints
+ * latency percentiles, throughput, answers by status, and the health check's latency sampled
+ * once a second meanwhile. It signs in as the invented demo analyst, stops by itself and
+ * changes nothing but one demo draft's stored runs.
+ */
+export {};
+
+const base = process.env.LOAD_URL ?? 'http://127.0.0.1:3000';
+if (!/^http:\/\/(127\.0\.0\.1|localhost)(:\d+)?$/.test(base)) throw new Error('load: loopback only (LOAD_URL must be http://127.0.0.1:PORT)');
+const CLIENTS = Number(process.env.LOAD_CLIENTS ?? 20);
+const SECONDS = Number(process.env.LOAD_SECONDS ?? 15);
+
+async function signIn(): Promise<string> {
+  const answer = await fetch(`${base}/api/auth/sign-in/email`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', origin: base },
+    body: JSON.stringify({ email: 'analyst@kestrelbay.example', password: 'leeway-demo-2026' }),
+  });
+  if (!answer.ok) throw new Error(`load: sign-in answered ${answer.status}; is the demo seeded?`);
+  return answer.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
+}
+
+const fourOptions = {
+  underlying: { value: 100, volatility: 0.3, payoutYield: 0.02 },
+  riskFreeRate: 0.05,
+  horizon: 5,
+  steps: 500,
+  options: [
+    { type: 'defer', cost: 90, window: { kind: 'american', from: 0, to: 2 } },
+    { type: 'expand', factor: 0.5, cost: 40, window: { kind: 'american', from: 1, to: 4 } },
+    { type: 'contract', fraction: 0.3, savings: 25, window: { kind: 'american', from: 1, to: 5 } },
+    { type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 5 } },
+  ],
+};
+
+type Send = () => Promise<Response>;
+
+const percentile = (sorted: number[], p: number) => (sorted.length ? sorted[Math.min(sorted.length - 1, Math.floor(p * sorted.length))]! : NaN);
+
+async function scenario(name: string, next: (client: number, k: number) => Send) {
+  const latencies: number[] = [];
+  const statuses = new Map<number | string, number>();
+  const health: number[] = [];
+  const end = Date.now() + SECONDS * 1000;
+  const sampler = (async () => {
+    while (Date.now() < end) {
+      const started = performance.now();
+      await fetch(`${base}/api/health`).catch(() => null);
+      health.push(performance.now() - started);
+      await new Promise((r) => setTimeout(r, 1000));
+    }
+  })();
+  await Promise.all(
+    Array.from({ length: CLIENTS }, async (_, client) => {
+      for (let k = 0; Date.now() < end; k++) {
+        const started = performance.now();
+        let retryAfter = 0;
+        const status = await next(client, k)()
+          .then(async (r) => {
+            await r.arrayBuffer();
+            retryAfter = Number(r.headers.get('retry-after') ?? 0);
+            return r.status;
+          })
+          .catch((e: Error) => e.name);
+        latencies.push(performance.now() - started);
+        statuses.set(status, (statuses.get(status) ?? 0) + 1);
+        // A well-behaved client waits as it is told (here at most 2 s) before trying again.
+        if (retryAfter > 0) await new Promise((r) => setTimeout(r, Math.min(2, retryAfter) * 1000));
+      }
+    }),
+  );
+  await sampler;
+  const sorted = [...latencies].sort((a, b) => a - b);
+  const hs = [...health].sort((a, b) => a - b);
+  const ms = (x: number) => `${Math.round(x)} ms`;
+  console.log(`\n${name} — ${CLIENTS} clients, ${SECONDS} s`);
+  console.log(
+    `  ${latencies.length} requests, ${(latencies.length / SECONDS).toFixed(1)}/s; p50 ${ms(percentile(sorted, 0.5))}, p95 ${ms(percentile(sorted, 0.95))}, p99 ${ms(percentile(sorted, 0.99))}`,
+  );
+  console.log(`  answers: ${[...statuses.entries()].map(([s, n]) => `${s} × ${n}`).join(', ')}`);
+  console.log(`  health meanwhile: p50 ${ms(percentile(hs, 0.5))}, max ${ms(hs.at(-1) ?? NaN)}`);
+}
+
+const cookie = await signIn();
+const headers = { cookie, origin: base };
+const json = { ...headers, 'content-type': 'application/json' };
+const cases = (await (await fetch(`${base}/api/v1/cases`, { headers })).json()) as { cases: { id: string; projectId: string; status: string }[] };
+const draft = cases.cases.find((c) => c.status === 'draft');
+if (!draft) throw new Error('load: no draft case to value; reseed the demo');
+
+const single = performance.now();
+await fetch(`${base}/api/v1/valuations`, { method: 'POST', headers: json, body: JSON.stringify(fourOptions) });
+console.log(`one four-option valuation at 500 steps with extras, alone: ${Math.round(performance.now() - single)} ms`);
+
+await scenario(
+  '(a) stateless valuation, four options, 500 steps, extras',
+  () => () => fetch(`${base}/api/v1/valuations`, { method: 'POST', headers: json, body: JSON.stringify(fourOptions) }),
+);
+await scenario(
+  '(b) the case page and the portfolio page',
+  (client, k) => () => fetch((client + k) % 2 ? `${base}/portfolio` : `${base}/projects/${draft.projectId}/cases/${draft.id}`, { headers }),
+);
+await scenario(
+  "(c) an analyst's mix: read the case, value and store it",
+  (client, k) => () =>
+    k % 3 === 2
+      ? fetch(`${base}/api/v1/cases/${draft.id}/valuations`, { method: 'POST', headers: json })
+      : fetch(`${base}/api/v1/cases/${draft.id}`, { headers }),
+);
