@@ -12,6 +12,7 @@
  * on-the-fly loader made the same loops about twice as slow when measured).
  */
 import { valueProject, type ProjectModel } from '../lattice';
+import fourRights from '../lattice/examples/four-rights.json';
 import { prepareModel } from '../lattice/check-model';
 import { singlePass } from '../lattice/single-pass';
 import { quantlibAmerican } from '../tests/lattice/support/quantlib';
@@ -62,18 +63,8 @@ for (const steps of [1000, 2000, 5000]) {
   );
 }
 
-const fourOptions: ProjectModel = {
-  underlying: { value: 100, volatility: 0.3, payoutYield: 0.02 },
-  riskFreeRate: 0.05,
-  horizon: 5,
-  steps: 500,
-  options: [
-    { type: 'defer', cost: 90, window: { kind: 'american', from: 0, to: 2 } },
-    { type: 'expand', factor: 0.5, cost: 40, window: { kind: 'american', from: 1, to: 4 } },
-    { type: 'contract', fraction: 0.3, savings: 25, window: { kind: 'american', from: 1, to: 5 } },
-    { type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 5 } },
-  ],
-};
+// The benchmark model, shared with `npm run load` (invented figures).
+const fourOptions = fourRights as ProjectModel;
 const single = time(() => valueProject(fourOptions, { extras: false }), 21);
 const full = time(() => valueProject(fourOptions), 11);
 console.log('\nFour options (defer, expand, contract, abandon), 500 steps, 6 modes');

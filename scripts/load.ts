@@ -6,7 +6,7 @@
  * once a second meanwhile. It signs in as the invented demo analyst, stops by itself and
  * changes nothing but one demo draft's stored runs.
  */
-export {};
+import fourRights from '../lattice/examples/four-rights.json';
 
 const base = process.env.LOAD_URL ?? 'http://127.0.0.1:3000';
 if (!/^http:\/\/(127\.0\.0\.1|localhost)(:\d+)?$/.test(base)) throw new Error('load: loopback only (LOAD_URL must be http://127.0.0.1:PORT)');
@@ -26,18 +26,8 @@ async function signIn(): Promise<string> {
     .join('; ');
 }
 
-const fourOptions = {
-  underlying: { value: 100, volatility: 0.3, payoutYield: 0.02 },
-  riskFreeRate: 0.05,
-  horizon: 5,
-  steps: 500,
-  options: [
-    { type: 'defer', cost: 90, window: { kind: 'american', from: 0, to: 2 } },
-    { type: 'expand', factor: 0.5, cost: 40, window: { kind: 'american', from: 1, to: 4 } },
-    { type: 'contract', fraction: 0.3, savings: 25, window: { kind: 'american', from: 1, to: 5 } },
-    { type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 5 } },
-  ],
-};
+// The benchmark's model (invented figures), shared with `npm run bench`.
+const fourOptions = fourRights;
 
 type Send = () => Promise<Response>;
 
