@@ -139,9 +139,12 @@ function convergenceOf(model: ProjectModel, expandedNpv: number, warnings: strin
     warnings.push('convergence: no coarser step count keeps every decision date on the grid, so the lattice error is not estimated');
     return { points, extrapolated: expandedNpv, errorEstimate: NaN, band: null, datesOnGrid };
   }
-  // Error ∝ 1/N: V_N − V_∞ ≈ (V_N − V_M)·M/(N − M) for a coarser count M.
-  const lastChange = (Math.abs(expandedNpv - second.expandedNpv) * second.steps) / (n - second.steps);
-  const earlierChange = first ? (Math.abs(second.expandedNpv - first.expandedNpv) * first.steps) / (n - first.steps) : 0;
+  // Error ∝ 1/N, V_K ≈ V_∞ + c/K: two counts K < L give c = (V_K − V_L)·K·L/(L − K), and the
+  // error at N is c/N. From the last pair (M, N) that is (V_M − V_N)·M/(N − M).
+  const scaledToN = (a: { steps: number; expandedNpv: number }, b: { steps: number; expandedNpv: number }) =>
+    (Math.abs(a.expandedNpv - b.expandedNpv) * a.steps * b.steps) / (n * (b.steps - a.steps));
+  const lastChange = scaledToN(second, { steps: n, expandedNpv });
+  const earlierChange = first ? scaledToN(first, second) : 0;
   const errorEstimate = Math.max(lastChange, earlierChange);
   const extrapolated = (n * expandedNpv - second.steps * second.expandedNpv) / (n - second.steps);
   const half = BAND_FACTOR * errorEstimate;
