@@ -2,6 +2,7 @@
 
 import { line, scaleLinear } from 'd3';
 import type { Convergence } from '@/lattice';
+import { tickDigits } from '@/lib/charts/tick-digits';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 
@@ -23,6 +24,9 @@ export function ConvergenceChart({ convergence, currency }: { convergence: Conve
     .domain([Math.min(...values) - pad, Math.max(...values) + pad])
     .nice()
     .range([height - margin.bottom, margin.top]);
+  // As many decimals as the tick spacing needs, so no two ticks read the same.
+  const ticks = y.ticks(4);
+  const digits = tickDigits(ticks);
   const path = line<{ steps: number; value: number }>()
     .x((p) => x(p.steps))
     .y((p) => y(p.value))(points);
@@ -39,9 +43,9 @@ export function ConvergenceChart({ convergence, currency }: { convergence: Conve
         <text x={width - margin.right} y={y(extrapolated) - 6} textAnchor="end" className="fill-tide-700 text-caption">
           extrapolated {formatMoney(extrapolated, currency, 2)}
         </text>
-        {y.ticks(4).map((t) => (
+        {ticks.map((t) => (
           <text key={t} x={margin.left - 8} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
-            {formatMoney(t, undefined, 1)}
+            {formatMoney(t, undefined, digits)}
           </text>
         ))}
         {path ? <path d={path} fill="none" stroke="#16232d" strokeWidth="1.5" /> : null}

@@ -249,7 +249,9 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
                 {dirty ? ' · unsaved changes' : ' · saved'}
                 {latestRun
                   ? ` · last stored valuation ${formatDateTime(latestRun.createdAt)} by ${latestRun.createdBy ?? 'someone'} (version ${latestRun.caseVersion})`
-                  : ' · never valued on the server'}
+                  : runs.data
+                    ? ' · never valued on the server'
+                    : ''}
               </p>
             </div>
             <div className="flex flex-wrap items-center gap-3">
