@@ -65,4 +65,15 @@ describe('invalid fields', () => {
     await expect.poll(async () => (await saved()).cashFlows.wacc, { timeout: 20_000 }).toBe(0.095);
     expect((await saved()).settings.steps).toBe(90);
   });
+
+  it('marks the option card the engine refuses, naming it', async () => {
+    await page.getByRole('tab', { name: 'Flexibility' }).click();
+    await page.getByRole('button', { name: 'Defer', exact: true }).click();
+    await page.getByRole('button', { name: 'Stage', exact: true }).click();
+    const refusal = page.getByRole('alert').filter({ hasText: 'The engine cannot use this option' });
+    await expect.poll(() => refusal.count(), { timeout: 20_000 }).toBe(1);
+    expect(await refusal.innerText()).toContain('option “Stages” cannot be combined with a defer option');
+    await page.getByRole('tab', { name: 'Results' }).click();
+    await expect.poll(() => page.getByText('The engine cannot value this case as it stands.').isVisible()).toBe(true);
+  });
 });

@@ -110,14 +110,22 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
   }, [draft.cashFlows]);
   const horizon = Math.max(1, draft.cashFlows.rows.at(-1)?.year ?? 1);
 
-  const built = useMemo((): { model: ProjectModel; modes: string[]; start: string } | { problem: string } => {
+  const built = useMemo((): { model: ProjectModel; modes: string[]; start: string } | { problem: string; cards?: Record<number, string> } => {
     try {
       const { model } = caseToModel(draft);
       const { compiled } = prepareModel(model);
       return { model, modes: compiled.modes.map((m) => m.id), start: compiled.modes[compiled.start]!.id };
     } catch (error) {
-      if (error instanceof ModelError)
-        return { problem: error.issues.map((i) => issueInWords(i.message, (draft.options ?? []) as OptionTemplate[])).join('; ') };
+      if (error instanceof ModelError) {
+        const options = (draft.options ?? []) as OptionTemplate[];
+        // A refusal that names an option marks its card too.
+        const cards: Record<number, string> = {};
+        for (const issue of error.issues) {
+          const index = issue.field.match(/^options\[(\d+)\]/)?.[1];
+          if (index !== undefined) cards[Number(index)] = issueInWords(issue.message, options);
+        }
+        return { problem: error.issues.map((i) => issueInWords(i.message, options)).join('; '), cards };
+      }
       return { problem: error instanceof Error ? error.message : 'The case cannot be valued yet.' };
     }
   }, [draft]);
@@ -383,6 +391,7 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
                     options={(draft.options ?? []) as OptionTemplate[]}
                     horizon={horizon}
                     basis={cardBasis(analysis, horizon, draft.settings.riskFreeRate)}
+                    engineProblems={'cards' in built ? built.cards : undefined}
                     readOnly={readOnly}
                     onChange={(options, problems) => {
                       setOptionProblems(problems);

@@ -234,6 +234,8 @@ interface Props {
   horizon: number;
   /** What a fresh card is sized against (the project's value and the static plan's outlays). */
   basis: CardBasis;
+  /** The engine's refusal of a card, by its position, in words. */
+  engineProblems?: Record<number, string>;
   readOnly: boolean;
   /** Called with the templates whenever every card reads; `problems` counts the fields that do not. */
   onChange: (templates: OptionTemplate[] | null, problems: number) => void;
@@ -245,7 +247,7 @@ interface Props {
  * while a field does not read, its message shows beside it and the valuation keeps the last
  * good set of options.
  */
-export function OptionCards({ options, horizon, basis, readOnly, onChange }: Props) {
+export function OptionCards({ options, horizon, basis, readOnly, onChange, engineProblems }: Props) {
   const horizonRef = useRef(horizon);
   const resolver: Resolver<Fields> = async (values, _context, resolverOptions) => {
     const { problems } = toTemplates(values.options, horizonRef.current);
@@ -301,7 +303,16 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange }: Pro
         const parts = { register: form.register, control: form.control, errors, readOnly };
         const type = card.type;
         return (
-          <section key={card.id} aria-label={`${optionTypeLabels[type]} option`} className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
+          <section
+            key={card.id}
+            aria-label={`${optionTypeLabels[type]} option`}
+            className={`rounded-card border bg-paper-raised p-5 shadow-card ${engineProblems?.[k] ? 'border-brick-500' : 'border-line'}`}
+          >
+            {engineProblems?.[k] ? (
+              <p role="alert" className="mb-3 rounded-md bg-brick-100 px-3 py-2 text-caption text-brick-700">
+                The engine cannot use this option: {engineProblems[k]}
+              </p>
+            ) : null}
             <header className="mb-4 flex flex-wrap items-start gap-3">
               <span className="rounded bg-tide-50 px-2 py-1 text-caption font-semibold uppercase tracking-wide text-tide-700">{optionTypeLabels[type]}</span>
               <div className="flex flex-col">
