@@ -205,7 +205,7 @@ function assertFinite(root: unknown): void {
  * the breakdown (two per right when there are several), convergence (N/4 and N/2: 1/16 + 1/4 of
  * a pass), the premium split (one) and two per sensitivity row (V0, σ, r, payouts, each right).
  */
-function passesOf(model: ProjectModel, compiled: CompiledModel, extras: boolean): number {
+function passesOf(compiled: CompiledModel, extras: boolean): number {
   if (!extras) return 1;
   const rights = compiled.rights.length;
   const rows = 3 + 1 + rights;
@@ -213,9 +213,9 @@ function passesOf(model: ProjectModel, compiled: CompiledModel, extras: boolean)
 }
 
 /** The node × switchable-mode cells a valuation at `steps` visits, every pass counted. */
-function cellsAt(steps: number, compiled: CompiledModel, model: ProjectModel, extras: boolean): number {
+function cellsAt(steps: number, compiled: CompiledModel, extras: boolean): number {
   const switchable = Math.max(1, new Set(compiled.switches.map((s) => s.from)).size);
-  return (((steps + 1) * (steps + 2)) / 2) * switchable * passesOf(model, compiled, extras);
+  return (((steps + 1) * (steps + 2)) / 2) * switchable * passesOf(compiled, extras);
 }
 
 /** The most steps a full valuation (extras included) of this model may use within the budget. */
@@ -225,7 +225,7 @@ export function largestStepsWithinBudget(input: unknown): number {
   let high = MAX_STEPS;
   while (low < high) {
     const mid = Math.ceil((low + high) / 2);
-    if (cellsAt(mid, compiled, model, true) <= MAX_REQUEST_CELLS) low = mid;
+    if (cellsAt(mid, compiled, true) <= MAX_REQUEST_CELLS) low = mid;
     else high = mid - 1;
   }
   return low;
@@ -233,7 +233,7 @@ export function largestStepsWithinBudget(input: unknown): number {
 
 export function valueProject(input: unknown, options: ValueOptions = {}): ValuationResult {
   const { model, compiled } = prepareModel(input);
-  const cells = cellsAt(model.steps, compiled, model, options.extras !== false);
+  const cells = cellsAt(model.steps, compiled, options.extras !== false);
   if (cells > MAX_REQUEST_CELLS)
     throw new ModelError([
       {

@@ -131,13 +131,8 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
   }, [draft]);
   const model = 'model' in built ? built.model : null;
   // The steps field allows what the engine's budget allows for these rights (it refuses more).
-  const maxSteps = useMemo(() => {
-    try {
-      return largestStepsWithinBudget(caseToModel({ ...draft, settings: { ...draft.settings, steps: 1 } }).model);
-    } catch {
-      return MAX_STEPS;
-    }
-  }, [draft]);
+  // Read off the model already built from the draft, not a second build of it.
+  const maxSteps = useMemo(() => (model ? largestStepsWithinBudget(model) : MAX_STEPS), [model]);
   const valuation = useValuation(model, {});
   const result = model ? valuation.result : null;
 
