@@ -3,7 +3,7 @@ const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
   // The server binds loopback by default; the app is served under one origin.
-  serverExternalPackages: ['pg', 'nodemailer'],
+  serverExternalPackages: ['pg', 'pg-boss', 'nodemailer'],
   // Pages and API answers get their security headers in proxy.ts; the build's static files, which
   // the proxy skips, get the one that matters for scripts and styles.
   async headers() {

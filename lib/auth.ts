@@ -18,8 +18,8 @@ import { INVITATION_LIFETIME_MS } from '@/db/queries/members';
 import { CLIENT_ADDRESS_HEADER } from './client-address';
 import { COMMON_PASSWORD_MESSAGE, isCommonPassword } from './common-passwords';
 import { authSecret, env } from './env';
-import { sendInvitationMail } from './invitation-mail';
-import { linkMail, sendMail } from './mail';
+import { queueInvitationMail } from './invitation-mail';
+import { linkMail, queueMail } from './mail';
 import { ac, roles } from './permissions';
 import { clearFailures, recordFailure, secondsUntilAllowed } from './sign-in-backoff';
 
@@ -46,8 +46,8 @@ export const auth = betterAuth({
     maxPasswordLength: 128,
     revokeSessionsOnPasswordReset: true,
     sendResetPassword: async ({ user, url }) => {
-      // Not awaited: waiting for the mail server would tell an observer that the account exists.
-      sendMail(
+      // Not awaited: even queueing takes time an unknown address would not, which would tell an observer the account exists.
+      queueMail(
         linkMail(user.email, 'Reset your Leeway password', 'Someone asked to reset the password of your Leeway account.', 'Choose a new password', url),
       ).catch((error) => console.error('[leeway] reset-password mail', error));
     },
@@ -56,7 +56,7 @@ export const auth = betterAuth({
     sendOnSignUp: true,
     autoSignInAfterVerification: true,
     sendVerificationEmail: async ({ user, url }) => {
-      await sendMail(
+      await queueMail(
         linkMail(user.email, 'Confirm your e-mail for Leeway', 'Welcome to Leeway. Please confirm this is your e-mail address.', 'Confirm my e-mail', url),
       );
     },
@@ -125,7 +125,7 @@ export const auth = betterAuth({
       invitationExpiresIn: INVITATION_LIFETIME_MS / 1000,
       cancelPendingInvitationsOnReInvite: true,
       sendInvitationEmail: async ({ id, email, organization: org, inviter, role }) =>
-        sendInvitationMail({ invitationId: id, email, organisationName: org.name, inviterName: inviter.user.name, role }),
+        queueInvitationMail({ invitationId: id, email, organisationName: org.name, inviterName: inviter.user.name, role }),
     }),
     nextCookies(),
   ],

@@ -1,10 +1,10 @@
-/** The e-mail that carries an invitation's link; sent after the invitation is committed. */
+/** The e-mail that carries an invitation's link; queued after the invitation is committed. */
 import { env } from './env';
-import { linkMail, sendMail } from './mail';
+import { linkMail, queueMail } from './mail';
 
-export async function sendInvitationMail(args: { invitationId: string; email: string; organisationName: string; inviterName: string; role: string }) {
+export async function queueInvitationMail(args: { invitationId: string; email: string; organisationName: string; inviterName: string; role: string }) {
   const url = `${env.APP_URL}/accept-invitation/${args.invitationId}`;
-  await sendMail(
+  await queueMail(
     linkMail(
       args.email,
       `Join ${args.organisationName} on Leeway`,

@@ -1,22 +1,15 @@
 /**
- * Sends e-mail through nodemailer: to SMTP_URL when it is set, otherwise to the local sink
- * (scripts/mail-sink.ts), which keeps every message for the tests and the local inbox page.
+ * E-mail from the app: every message is a job on the `mail` queue, written in the caller's
+ * transaction when it has one, and sent by a worker (lib/jobs/deliver-mail.ts) with retries while
+ * the mail server is away. A request never waits for SMTP.
  */
-import nodemailer from 'nodemailer';
-import { env } from './env';
+import { enqueue, type Executor } from './jobs/enqueue';
+import { QUEUES, type MailJob } from './jobs/queues';
 
-const transport = nodemailer.createTransport(env.SMTP_URL ?? { host: '127.0.0.1', port: env.MAIL_SINK_PORT, secure: false, ignoreTLS: true });
+export type Mail = MailJob;
 
-export interface Mail {
-  to: string;
-  subject: string;
-  text: string;
-  html?: string;
-  attachments?: { filename: string; content: Buffer; contentType: string }[];
-}
-
-export async function sendMail(mail: Mail): Promise<void> {
-  await transport.sendMail({ from: env.MAIL_FROM, ...mail });
+export async function queueMail(mail: Mail, executor?: Executor): Promise<void> {
+  await enqueue(QUEUES.mail, mail, { executor });
 }
 
 /** A plain, readable message with one call to action. */

@@ -1,9 +1,11 @@
 /**
- * `npm run migrate -- up|down|status`: up migrates to the latest, down undoes the last one.
+ * `npm run migrate -- up|down|status`: up migrates to the latest (and installs the job queues,
+ * lib/jobs/install.ts), down undoes the last one.
  * Uses DATABASE_URL, or the project-local cluster (PG_DATABASE picks the database).
  */
 import { db } from '../db';
 import { assertMigrated, migrator } from '../db/migrator';
+import { installQueues } from '../lib/jobs/install';
 
 async function main(command: string) {
   const m = migrator(db);
@@ -12,6 +14,8 @@ async function main(command: string) {
     assertMigrated(result);
     const applied = result.results?.filter((r) => r.status === 'Success') ?? [];
     console.log(applied.length === 0 ? '› migrations: up to date' : applied.map((r) => `› migrated up: ${r.migrationName}`).join('\n'));
+    await installQueues();
+    console.log('› job queues: ready');
   } else if (command === 'down') {
     const result = await m.migrateDown();
     assertMigrated(result);

@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # npm start: on a fresh machine, installs packages, starts PostgreSQL and the mail sink,
 # migrates, seeds the invented demo data (local database only), builds when needed and serves
-# the app on http://127.0.0.1:${PORT:-3000}.
+# the app on http://127.0.0.1:${PORT:-3000}, with one job worker beside it (npm run worker).
 set -euo pipefail
 cd "$(dirname "$0")/.."
 export NEXT_TELEMETRY_DISABLED=1
@@ -13,8 +13,16 @@ mkdir -p .data
 bash scripts/ensure-deps.sh
 bash scripts/db.sh start
 sink_pid=$(bash scripts/mail-sink.sh)
-cleanup() { [ -n "$sink_pid" ] && kill "$sink_pid" 2>/dev/null || true; }
-trap cleanup EXIT INT TERM
+worker_pid=
+next_pid=
+# SIGTERM or Ctrl-C: the server and the worker get their own SIGTERM and up to 10 s to finish.
+cleanup() {
+  for pid in $next_pid $worker_pid; do kill -TERM "$pid" 2>/dev/null || true; done
+  for pid in $next_pid $worker_pid; do wait "$pid" 2>/dev/null || true; done
+  [ -n "$sink_pid" ] && kill "$sink_pid" 2>/dev/null || true
+}
+trap cleanup EXIT
+trap 'exit 143' INT TERM
 npx tsx scripts/migrate.ts up
 npx tsx scripts/seed.ts
 bash scripts/build-if-needed.sh
@@ -31,6 +39,8 @@ cat <<TXT
   E-mail goes to the local inbox, open only from this machine: $APP_URL/inbox
 
 TXT
+node .data/worker.mjs &
+worker_pid=$!
 HOST=$HOST PORT=$PORT node .data/serve.mjs &
 next_pid=$!
 wait "$next_pid"

@@ -1,13 +1,17 @@
 /**
  * The review workflow's e-mail: reviewers hear of a submission, the analyst of a decision (the
  * reason when returned, the board pack attached when approved), each with a link back into the
- * app. Sending never undoes a transition: a failed e-mail is logged and the action stands.
+ * app. The messages are queued in the transaction that records the transition, so they go out
+ * exactly when it commits; the worker sends them and retries while the mail server is away.
  */
 import 'server-only';
-import { db } from '@/db';
+import type { Transaction } from 'kysely';
+import type { DB } from '@/db/types';
 import { env } from '../env';
 import { formatMoney } from '../format';
-import { linkMail, sendMail, type Mail } from '../mail';
+import { enqueue } from '../jobs/enqueue';
+import { QUEUES } from '../jobs/queues';
+import { linkMail, queueMail } from '../mail';
 
 interface CaseRef {
   orgId: string;
@@ -21,53 +25,46 @@ interface CaseRef {
 
 const caseUrl = (c: CaseRef) => `${env.APP_URL}/projects/${c.projectId}/cases/${c.caseId}`;
 
-async function deliver(mails: Mail[]) {
-  for (const mail of mails) {
-    try {
-      await sendMail(mail);
-    } catch (error) {
-      console.error('[leeway] review e-mail not sent', mail.to, error);
-    }
-  }
-}
-
-export async function notifySubmitted(c: CaseRef, submitter: string) {
-  const reviewers = await db
+export async function notifySubmitted(trx: Transaction<DB>, c: CaseRef, submitter: string) {
+  const reviewers = await trx
     .selectFrom('member')
     .innerJoin('user', 'user.id', 'member.userId')
     .select('user.email')
     .where('member.organizationId', '=', c.orgId)
     .where('member.role', '=', 'reviewer')
     .execute();
-  await deliver(
-    reviewers.map((r) =>
+  for (const reviewer of reviewers)
+    await queueMail(
       linkMail(
-        r.email,
+        reviewer.email,
         `For review: ${c.projectName} — ${c.caseName}`,
         `${submitter} submitted “${c.caseName}” of ${c.projectName} for review. Expanded NPV in the submitted snapshot: ${formatMoney(c.expandedNpv, c.currency)}.`,
         'Open the case',
         caseUrl(c),
       ),
-    ),
-  );
+      trx,
+    );
 }
 
+/** Queues the analyst's e-mail; an approval first renders the board packs, then sends it with the A4 pack attached. */
 export async function notifyDecided(
+  trx: Transaction<DB>,
   c: CaseRef,
-  args: { to: string | null; decision: 'approved' | 'returned'; by: string; reason?: string | null; pdf?: Buffer },
+  args: { to: string | null; decision: 'approved' | 'returned'; by: string; reason?: string | null; snapshotId: string },
 ) {
-  if (!args.to) return;
-  const intro =
-    args.decision === 'approved'
-      ? `${args.by} approved “${c.caseName}” of ${c.projectName}. The board pack is attached and can be downloaded from the case.`
-      : `${args.by} returned “${c.caseName}” of ${c.projectName}. Edit the case and submit it again when it is ready. Their reason:\n\n${args.reason ?? ''}`;
-  const mail = linkMail(
-    args.to,
-    `${args.decision === 'approved' ? 'Approved' : 'Returned'}: ${c.projectName} — ${c.caseName}`,
-    intro,
-    'Open the case',
-    caseUrl(c),
-  );
-  if (args.pdf) mail.attachments = [{ filename: `${c.projectName} - ${c.caseName} - board pack.pdf`, content: args.pdf, contentType: 'application/pdf' }];
-  await deliver([mail]);
+  const approved = args.decision === 'approved';
+  const intro = approved
+    ? `${args.by} approved “${c.caseName}” of ${c.projectName}. The board pack is attached and can be downloaded from the case.`
+    : `${args.by} returned “${c.caseName}” of ${c.projectName}. Edit the case and submit it again when it is ready. Their reason:\n\n${args.reason ?? ''}`;
+  const mail = args.to
+    ? linkMail(args.to, `${approved ? 'Approved' : 'Returned'}: ${c.projectName} — ${c.caseName}`, intro, 'Open the case', caseUrl(c))
+    : undefined;
+  // Every page size is rendered from the snapshot alone, so the approval record never changes later.
+  if (approved)
+    await enqueue(
+      QUEUES.boardPack,
+      { orgId: c.orgId, snapshotId: args.snapshotId, mail: mail && { ...mail, filename: `${c.projectName} - ${c.caseName} - board pack.pdf` } },
+      { executor: trx },
+    );
+  else if (mail) await queueMail(mail, trx);
 }

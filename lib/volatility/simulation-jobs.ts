@@ -1,36 +1,21 @@
 /**
  * Monte Carlo volatility estimates as jobs: a row in `volatility_simulation` holds the
  * specification (with its seed), progress, status and result, so any app server can report on a
- * run; the run itself is a worker thread of the server that started it. Progress is written as
- * it arrives (about fifty times a run); a run whose row was marked cancelled — by this server or
- * another — is stopped at its next progress report.
+ * run; the run itself is a job on the `volatility-simulation` queue (lib/jobs/queues.ts) whose id
+ * is the row's, taken by whichever worker process is free (lib/jobs/run-simulation.ts).
  */
 import 'server-only';
-import path from 'node:path';
-import { Worker } from 'node:worker_threads';
+import { sql } from 'kysely';
 import { db } from '@/db';
 import { recordAudit, type AuditEvent } from '@/db/queries/audit';
 import type { CashFlowSchedule } from '../cash-flows';
-import type { SimulationResult, SimulationSpec } from './monte-carlo';
+import { AppError } from '../errors';
+import { cancelJob, enqueue } from '../jobs/enqueue';
+import { QUEUES } from '../jobs/queues';
+import type { SimulationSpec } from './monte-carlo';
 
-const running = new Map<string, Worker>();
-const workerFile = () => path.join(/*turbopackIgnore: true*/ process.cwd(), '.data', 'simulation-worker.mjs');
-
-async function finish(id: string, values: { status: 'done' | 'failed'; result?: SimulationResult; error?: string }) {
-  running.delete(id);
-  await db
-    .updateTable('volatility_simulation')
-    .set({
-      status: values.status,
-      progress: values.status === 'done' ? 1 : undefined,
-      result: values.result ? JSON.stringify(values.result) : null,
-      error: values.error ?? null,
-      finished_at: new Date(),
-    })
-    .where('id', '=', id)
-    .where('status', '=', 'running')
-    .execute();
-}
+/** Estimates one organisation may have waiting or running at once, so no team crowds out the others. */
+export const SIMULATIONS_PER_ORGANISATION = Number(process.env.SIMULATIONS_PER_ORGANISATION ?? 3);
 
 export async function startSimulation(args: {
   orgId: string;
@@ -41,58 +26,47 @@ export async function startSimulation(args: {
   /** The audit entry for the new run, written in the transaction that stores it. */
   audit: (simulationId: string) => AuditEvent;
 }): Promise<string> {
-  const row = await db.transaction().execute(async (trx) => {
+  return db.transaction().execute(async (trx) => {
+    // One organisation's requests are counted one at a time (the lock), so the limit holds under a burst.
+    await sql`select pg_advisory_xact_lock(hashtext('volatility_simulation'), hashtext(${args.orgId}))`.execute(trx);
+    const { running } = await trx
+      .selectFrom('volatility_simulation')
+      .select((eb) => eb.fn.countAll<number>().as('running'))
+      .where('organization_id', '=', args.orgId)
+      .where('status', '=', 'running')
+      .executeTakeFirstOrThrow();
+    if (Number(running) >= SIMULATIONS_PER_ORGANISATION)
+      throw new AppError(
+        'rate_limited',
+        `Your organisation already has ${SIMULATIONS_PER_ORGANISATION} Monte Carlo estimates waiting or running; wait for one to finish, or cancel one, and try again.`,
+        undefined,
+        15,
+      );
     const row = await trx
       .insertInto('volatility_simulation')
       .values({ organization_id: args.orgId, case_id: args.caseId, spec: JSON.stringify(args.spec), created_by: args.userId })
       .returning('id')
       .executeTakeFirstOrThrow();
     await recordAudit(trx, args.audit(row.id));
-    return row;
+    await enqueue(QUEUES.simulation, { simulationId: row.id, schedule: args.schedule, spec: args.spec }, { executor: trx, id: row.id });
+    return row.id;
   });
-  const worker = new Worker(workerFile(), { workerData: { schedule: args.schedule, spec: args.spec } });
-  running.set(row.id, worker);
-  worker.on('message', async (message: { progress?: number; done?: SimulationResult; failed?: string }) => {
-    try {
-      if (message.done) return await finish(row.id, { status: 'done', result: message.done });
-      if (message.failed) return await finish(row.id, { status: 'failed', error: message.failed });
-      if (message.progress !== undefined) {
-        const updated = await db
-          .updateTable('volatility_simulation')
-          .set({ progress: message.progress })
-          .where('id', '=', row.id)
-          .where('status', '=', 'running')
-          .returning('id')
-          .executeTakeFirst();
-        // No running row: it was cancelled (perhaps from another server).
-        if (!updated) await stopLocal(row.id);
-      }
-    } catch (error) {
-      console.error('[leeway] simulation bookkeeping failed', row.id, error);
-    }
-  });
-  worker.on('error', (error) => void finish(row.id, { status: 'failed', error: error.message }));
-  return row.id;
 }
 
-async function stopLocal(id: string) {
-  const worker = running.get(id);
-  running.delete(id);
-  await worker?.terminate();
-}
-
-/** Marks a running simulation cancelled and stops it; returns false when it had already ended. */
+/** Marks a running simulation cancelled and withdraws its job; returns false when it had already ended. */
 export async function cancelSimulation(orgId: string, id: string): Promise<boolean> {
-  const updated = await db
-    .updateTable('volatility_simulation')
-    .set({ status: 'cancelled', finished_at: new Date() })
-    .where('organization_id', '=', orgId)
-    .where('id', '=', id)
-    .where('status', '=', 'running')
-    .returning('id')
-    .executeTakeFirst();
-  await stopLocal(id);
-  return !!updated;
+  return db.transaction().execute(async (trx) => {
+    const updated = await trx
+      .updateTable('volatility_simulation')
+      .set({ status: 'cancelled', finished_at: new Date() })
+      .where('organization_id', '=', orgId)
+      .where('id', '=', id)
+      .where('status', '=', 'running')
+      .returning('id')
+      .executeTakeFirst();
+    if (updated) await cancelJob(QUEUES.simulation, id, trx);
+    return !!updated;
+  });
 }
 
 export async function findSimulation(orgId: string, id: string) {

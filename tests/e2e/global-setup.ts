@@ -1,7 +1,7 @@
 /**
  * Starts what the end-to-end tests drive: a fresh, migrated and seeded test database, the mail
- * sink on its own port and folder, and the built app (scripts/serve.ts) on 127.0.0.1:3100 — the
- * same production server `npm start` runs. Stops them afterwards. The tests stand in for a
+ * sink on its own port and folder, a job worker (scripts/worker.ts), and the built app
+ * (scripts/serve.ts) on 127.0.0.1:3100 — the same processes `npm start` runs. Stops them afterwards. The tests stand in for a
  * reverse proxy on loopback (TRUSTED_PROXIES), so each browser context's X-Forwarded-For is its
  * own client address for the sign-in limits.
  */
@@ -57,6 +57,7 @@ export default async function setup() {
   await run(process.execPath, ['--import', 'tsx', 'scripts/seed.ts'], env);
   rmSync(E2E_MAIL_DIR, { recursive: true, force: true });
   start(process.execPath, ['--import', 'tsx', 'scripts/mail-sink.ts'], env, 'mail sink');
+  start(process.execPath, ['.data/worker.mjs'], env, 'worker');
   const log = start(process.execPath, ['.data/serve.mjs'], { ...env, HOST: '127.0.0.1', PORT: String(E2E_PORT), TRUSTED_PROXIES: '127.0.0.1' }, 'app');
   await waitFor(`${BASE_URL}/api/health`, log);
   return async () => {

@@ -1,10 +1,11 @@
-// GET /api/health – can the app reach its database, and does the engine answer? (no sign-in)
+// GET /api/health – can the app reach its database, does the engine answer, and is the job queue worked? (no sign-in)
 import { sql } from 'kysely';
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { ENGINE_VERSION, type ProjectModel } from '@/lattice';
 import { enginePoolStats, valueInWorker } from '@/lib/engine/pool';
 import { AppError } from '@/lib/errors';
+import { queueHealth, type QueueHealth } from '@/lib/jobs/queue-health';
 
 export const dynamic = 'force-dynamic';
 
@@ -39,11 +40,21 @@ async function engineCheck(): Promise<{ engine: 'ok' | 'busy' | 'unavailable'; e
   }
 }
 
+/** The job queue's state; null when the database cannot be asked (reported above). */
+async function jobsCheck(): Promise<QueueHealth | null> {
+  try {
+    return await queueHealth();
+  } catch {
+    return null;
+  }
+}
+
 export async function GET() {
-  const [database, engine] = await Promise.all([databaseCheck(), engineCheck()]);
+  const [database, engine, jobs] = await Promise.all([databaseCheck(), engineCheck(), jobsCheck()]);
+  // A queue with no worker delays e-mail and simulations but serves every page: reported, not failed.
   const healthy = database.database === 'ok' && engine.engine !== 'unavailable';
   return NextResponse.json(
-    { status: healthy ? 'ok' : 'degraded', ...database, ...engine, queue: enginePoolStats(), engineVersion: ENGINE_VERSION },
+    { status: healthy ? 'ok' : 'degraded', ...database, ...engine, queue: enginePoolStats(), jobs, engineVersion: ENGINE_VERSION },
     { status: healthy ? 200 : 503, headers: { 'cache-control': 'no-store' } },
   );
 }

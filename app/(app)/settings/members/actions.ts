@@ -6,7 +6,7 @@ import { recordAudit } from '@/db/queries/audit';
 import { addInvitation, cancelPendingInvitation, deleteMember, findMemberInOrganisation, isMemberByEmail, setMemberRole } from '@/db/queries/members';
 import { requirePermission } from '@/lib/dal';
 import { AppError } from '@/lib/errors';
-import { sendInvitationMail } from '@/lib/invitation-mail';
+import { queueInvitationMail } from '@/lib/invitation-mail';
 import { changeRoleSchema, inviteSchema } from '@/lib/validations/auth';
 import type { ActionResult } from '../actions';
 
@@ -40,7 +40,7 @@ export async function inviteMemberAction(input: unknown): Promise<ActionResult> 
     });
     revalidatePath('/settings/members');
     try {
-      await sendInvitationMail({ invitationId: invitation.id, email: invitation.email, organisationName: member.orgName, inviterName: member.name, role });
+      await queueInvitationMail({ invitationId: invitation.id, email: invitation.email, organisationName: member.orgName, inviterName: member.name, role });
     } catch (error) {
       console.error('[leeway] invitation mail', error);
       return { ok: false, message: `The invitation to ${email} is saved, but its e-mail could not be sent. Send it again in a moment.` };

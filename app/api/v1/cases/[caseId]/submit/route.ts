@@ -59,9 +59,9 @@ export const POST = withAuth<{ caseId: string }>(
         subjectId: stored.id,
         detail: { name: stored.name, snapshot: outcome.value.id, expandedNpv: valuation.result.expandedNpv },
       });
+      await notifySubmitted(trx, refOf(stored, valuation.result.expandedNpv), member.name);
       return outcome.value;
     });
-    await notifySubmitted(refOf(stored, valuation.result.expandedNpv), member.name);
     return NextResponse.json({ snapshot: presentSnapshot(snapshot) }, { status: 201 });
   },
   { permission: { case: ['submit'] } },

@@ -1,0 +1,78 @@
+/**
+ * The job queues (pg-boss, in PostgreSQL's `pgboss` schema) and what each may do on failure.
+ * A queue's policy is written once here and applied by `npm run migrate`: retries only where a
+ * second attempt is safe, a deadline after which PostgreSQL itself fails a job whose worker died,
+ * and a dead-letter queue where the app must learn that a job gave up.
+ */
+import type PgBoss from 'pg-boss';
+import type { CashFlowSchedule } from '../cash-flows';
+import type { SimulationSpec } from '../volatility/monte-carlo';
+
+/** Seconds a worker lets a Monte Carlo estimate run before it is stopped and marked failed. */
+export const SIMULATION_DEADLINE_SECONDS = Number(process.env.SIMULATION_DEADLINE_SECONDS ?? 600);
+
+export const QUEUES = {
+  mail: 'mail',
+  boardPack: 'board-pack',
+  simulation: 'volatility-simulation',
+  simulationGaveUp: 'volatility-simulation-gave-up',
+} as const;
+
+export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
+
+/** A board pack attached to an e-mail by reference: the worker reads the stored PDF. */
+export interface BoardPackAttachment {
+  orgId: string;
+  snapshotId: string;
+  pageSize: 'A4' | 'LETTER';
+  filename: string;
+}
+
+export interface MailJob {
+  to: string;
+  subject: string;
+  text: string;
+  html?: string;
+  boardPack?: BoardPackAttachment;
+}
+
+/** Render every page size of an approved snapshot's pack, then send `mail` with the A4 one attached. */
+export interface BoardPackJob {
+  orgId: string;
+  snapshotId: string;
+  mail?: Omit<MailJob, 'boardPack'> & { filename: string };
+}
+
+export interface SimulationJob {
+  simulationId: string;
+  schedule: CashFlowSchedule;
+  spec: SimulationSpec;
+}
+
+export interface JobData {
+  [QUEUES.mail]: MailJob;
+  [QUEUES.boardPack]: BoardPackJob;
+  [QUEUES.simulation]: SimulationJob;
+  [QUEUES.simulationGaveUp]: SimulationJob;
+}
+
+/**
+ * Retries: an e-mail may be sent again (a duplicate is better than none) with backoff while the
+ * mail server is away; a board pack is rendered idempotently; a seeded simulation gives the same
+ * answer on every attempt, so a worker that died mid-run is simply replaced. `expireInSeconds` is
+ * the deadline after which pg-boss's maintenance fails (or retries) a job left active.
+ */
+export const QUEUE_POLICIES: Record<QueueName, PgBoss.Queue> = {
+  [QUEUES.mail]: { name: QUEUES.mail, retryLimit: 6, retryDelay: 5, retryBackoff: true, expireInSeconds: 60 },
+  [QUEUES.boardPack]: { name: QUEUES.boardPack, retryLimit: 3, retryDelay: 5, retryBackoff: true, expireInSeconds: 180 },
+  [QUEUES.simulation]: {
+    name: QUEUES.simulation,
+    retryLimit: 2,
+    retryDelay: 2,
+    retryBackoff: false,
+    // The worker stops a run at its own deadline; the queue's is later, for a worker that died.
+    expireInSeconds: SIMULATION_DEADLINE_SECONDS + 15,
+    deadLetter: QUEUES.simulationGaveUp,
+  },
+  [QUEUES.simulationGaveUp]: { name: QUEUES.simulationGaveUp, retryLimit: 5, retryDelay: 5, retryBackoff: true, expireInSeconds: 60 },
+};

@@ -1,0 +1,70 @@
+/**
+ * The worker: takes jobs off every queue (lib/jobs/queues.ts) and runs them. Any number of
+ * workers may run, on this machine or others, against the same database; pg-boss hands each job
+ * to one of them. Its maintenance fails or retries the jobs of a worker that died, once their
+ * deadline has passed, so nothing stays "active" for ever.
+ */
+import PgBoss from 'pg-boss';
+import { databaseUrl } from '../env';
+import { deliverMail } from './deliver-mail';
+import { QUEUES, type JobData, type QueueName } from './queues';
+import { renderBoardPacks } from './render-board-packs';
+import { markSimulationGaveUp, runSimulation, stopAllSimulations } from './run-simulation';
+
+const seconds = (name: string, fallback: number) => Number(process.env[name] ?? fallback);
+
+/** Jobs of each queue one worker process runs at once (simulations are the CPU-heavy ones). */
+const CONCURRENCY: Record<QueueName, number> = {
+  [QUEUES.mail]: 2,
+  [QUEUES.boardPack]: 1,
+  [QUEUES.simulation]: seconds('WORKER_SIMULATIONS', 1),
+  [QUEUES.simulationGaveUp]: 1,
+};
+
+const HANDLERS: { [Q in QueueName]: (data: JobData[Q]) => Promise<void> } = {
+  [QUEUES.mail]: deliverMail,
+  [QUEUES.boardPack]: renderBoardPacks,
+  [QUEUES.simulation]: runSimulation,
+  [QUEUES.simulationGaveUp]: markSimulationGaveUp,
+};
+
+export interface RunningWorker {
+  /** Stops taking jobs; simulations go back on the queue at once, other jobs get `graceMs` to finish. */
+  stop(graceMs?: number): Promise<void>;
+}
+
+export async function startWorker(): Promise<RunningWorker> {
+  const boss = new PgBoss({
+    connectionString: databaseUrl(),
+    max: 4,
+    // How often a worker looks for jobs a dead worker left active past their deadline.
+    maintenanceIntervalSeconds: seconds('JOB_MAINTENANCE_SECONDS', 30),
+    migrate: false,
+    schedule: false,
+  });
+  // Without a listener an 'error' event (a lost connection while PostgreSQL restarts) would end the process.
+  boss.on('error', (error) => console.error('[leeway worker] queue:', error.message));
+  await boss.start();
+  for (const queue of Object.keys(HANDLERS) as QueueName[]) {
+    const handle = HANDLERS[queue] as (data: unknown) => Promise<void>;
+    for (let k = 0; k < CONCURRENCY[queue]; k++)
+      await boss.work(queue, { pollingIntervalSeconds: 1 }, async ([job]) => {
+        if (!job) return;
+        try {
+          await handle(job.data);
+        } catch (error) {
+          // Logged here (pg-boss keeps only the last attempt's error), then thrown so the queue retries.
+          console.error(`[leeway worker] ${queue} job ${job.id} failed:`, error instanceof Error ? error.message : error);
+          throw error;
+        }
+      });
+  }
+  return {
+    async stop(graceMs = 7_000) {
+      await stopAllSimulations();
+      // pg-boss records a failed handler's job without waiting; give it a moment before closing its pool.
+      await new Promise((resolve) => setTimeout(resolve, 500));
+      await boss.stop({ graceful: true, timeout: graceMs });
+    },
+  };
+}
