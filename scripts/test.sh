@@ -32,3 +32,6 @@ bash scripts/build-if-needed.sh
 
 step "end-to-end tests (Chromium, the built app, its own database and mail sink)"
 npx vitest run --project e2e
+
+step "faults: SIGKILL of a worker and of PostgreSQL, SIGTERM, oversized work (npm run faults)"
+npx tsx scripts/faults.ts
