@@ -6,6 +6,7 @@
  * once a second meanwhile. It signs in as the invented demo analyst, stops by itself and
  * changes nothing but one demo draft's stored runs.
  */
+import { availableParallelism } from 'node:os';
 import fourRights from '../lattice/examples/four-rights.json';
 
 const base = process.env.LOAD_URL ?? 'http://127.0.0.1:3000';
@@ -31,10 +32,18 @@ const fourOptions = fourRights;
 
 type Send = () => Promise<Response>;
 
+/** The queue and engine durations the valuation route reports in its Server-Timing header. */
+function serverTiming(answer: Response): { queue: number; engine: number } {
+  const header = answer.headers.get('server-timing') ?? '';
+  const dur = (name: string) => Number(new RegExp(`${name};dur=([0-9.]+)`).exec(header)?.[1] ?? 0);
+  return { queue: dur('queue'), engine: dur('engine') };
+}
+
 const percentile = (sorted: number[], p: number) => (sorted.length ? sorted[Math.min(sorted.length - 1, Math.floor(p * sorted.length))]! : NaN);
 
 async function scenario(name: string, next: (client: number, k: number) => Send) {
   const latencies: number[] = [];
+  const overheads: number[] = [];
   const statuses = new Map<number | string, number>();
   const health: number[] = [];
   const end = Date.now() + SECONDS * 1000;
@@ -55,6 +64,10 @@ async function scenario(name: string, next: (client: number, k: number) => Send)
           .then(async (r) => {
             await r.arrayBuffer();
             retryAfter = Number(r.headers.get('retry-after') ?? 0);
+            if (r.headers.has('server-timing')) {
+              const { queue, engine } = serverTiming(r);
+              overheads.push(performance.now() - started - queue - engine);
+            }
             return r.status;
           })
           .catch((e: Error) => e.name);
@@ -74,6 +87,13 @@ async function scenario(name: string, next: (client: number, k: number) => Send)
     `  ${latencies.length} requests, ${(latencies.length / SECONDS).toFixed(1)}/s; p50 ${ms(percentile(sorted, 0.5))}, p95 ${ms(percentile(sorted, 0.95))}, p99 ${ms(percentile(sorted, 0.99))}`,
   );
   console.log(`  answers: ${[...statuses.entries()].map(([s, n]) => `${s} × ${n}`).join(', ')}`);
+  const valued = statuses.get(200) ?? 0;
+  if (overheads.length) {
+    const sortedOverheads = [...overheads].sort((a, b) => a - b);
+    console.log(
+      `  valuations completed: ${(valued / SECONDS).toFixed(1)}/s; the API's own time (response less queue and engine): p50 ${ms(percentile(sortedOverheads, 0.5))}, p95 ${ms(percentile(sortedOverheads, 0.95))}`,
+    );
+  }
   console.log(`  health meanwhile: p50 ${ms(percentile(hs, 0.5))}, max ${ms(hs.at(-1) ?? NaN)}`);
 }
 
@@ -84,9 +104,30 @@ const cases = (await (await fetch(`${base}/api/v1/cases`, { headers })).json()) 
 const draft = cases.cases.find((c) => c.status === 'draft');
 if (!draft) throw new Error('load: no draft case to value; reseed the demo');
 
-const single = performance.now();
-await fetch(`${base}/api/v1/valuations`, { method: 'POST', headers: json, body: JSON.stringify(fourOptions) });
-console.log(`one four-option valuation at 500 steps with extras, alone: ${Math.round(performance.now() - single)} ms`);
+// One client alone (after three to warm the workers): where a valuation's time goes.
+const alone = { total: [] as number[], engine: [] as number[], overhead: [] as number[] };
+for (let k = 0; k < 33; k++) {
+  const started = performance.now();
+  const answer = await fetch(`${base}/api/v1/valuations`, { method: 'POST', headers: json, body: JSON.stringify(fourOptions) });
+  await answer.arrayBuffer();
+  const total = performance.now() - started;
+  const { engine, queue } = serverTiming(answer);
+  if (k < 3) continue;
+  alone.total.push(total);
+  alone.engine.push(engine);
+  alone.overhead.push(total - engine - queue);
+}
+const median = (xs: number[]) =>
+  percentile(
+    [...xs].sort((a, b) => a - b),
+    0.5,
+  );
+const engineMs = median(alone.engine);
+console.log(
+  `one four-option valuation at 500 steps with extras, alone (median of 30): ${Math.round(median(alone.total))} ms, of which ${Math.round(engineMs)} ms in the engine and ${Math.round(median(alone.overhead))} ms the API's own (goal: under 20 ms)`,
+);
+const cores = availableParallelism();
+console.log(`goal for (a): at least ${(0.8 * cores * (1000 / engineMs)).toFixed(1)} valuations/s (80 % of ${cores} cores ÷ ${Math.round(engineMs)} ms)`);
 
 await scenario(
   '(a) stateless valuation, four options, 500 steps, extras',

@@ -38,6 +38,8 @@ export interface RunOptions {
   /** Fires when the caller has gone away: the job is dropped or its worker replaced. */
   signal?: AbortSignal;
   deadlineMs?: number;
+  /** Filled in when the job is answered: time waiting for a worker and time inside the engine (Server-Timing). */
+  timing?: { queueMs?: number; engineMs?: number };
 }
 
 interface Job {
@@ -45,6 +47,8 @@ interface Job {
   input: unknown;
   options?: ValueOptions;
   owner: string | undefined;
+  queuedAt: number;
+  timing?: RunOptions['timing'];
   settled: boolean;
   timer: NodeJS.Timeout;
   resolve: (result: ValuationResult) => void;
@@ -57,7 +61,7 @@ interface Slot {
   job: Job | null;
 }
 
-type Answer = { id: number; ok: true; result: ValuationResult } | { id: number; ok: false; issues?: ModelIssue[]; crash?: string };
+type Answer = { id: number; ok: true; result: ValuationResult; engineMs: number } | { id: number; ok: false; issues?: ModelIssue[]; crash?: string };
 
 const workerFile = () => path.join(/*turbopackIgnore: true*/ process.cwd(), '.data', 'engine-worker.mjs');
 
@@ -96,6 +100,8 @@ export class EnginePool {
         input,
         options,
         owner: run.owner,
+        queuedAt: performance.now(),
+        timing: run.timing,
         settled: false,
         timer: setTimeout(() => this.cancel(job, this.overDeadline(run.deadlineMs ?? DEADLINE_MS)), run.deadlineMs ?? DEADLINE_MS),
         resolve: (result) => this.settle(job, () => resolve(result)),
@@ -143,6 +149,7 @@ export class EnginePool {
       if (!slot) return;
       const job = this.queue.shift()!;
       slot.job = job;
+      if (job.timing) job.timing.queueMs = performance.now() - job.queuedAt;
       try {
         slot.worker.postMessage({ id: job.id, input: job.input, options: job.options });
       } catch (error) {
@@ -170,8 +177,10 @@ export class EnginePool {
       const job = slot.job;
       slot.job = null;
       if (job && job.id === answer.id) {
-        if (answer.ok) job.resolve(answer.result);
-        else if (answer.issues) job.reject(new EngineRefusal(answer.issues));
+        if (answer.ok) {
+          if (job.timing) job.timing.engineMs = answer.engineMs;
+          job.resolve(answer.result);
+        } else if (answer.issues) job.reject(new EngineRefusal(answer.issues));
         else job.reject(new Error(`the valuation failed: ${answer.crash}`));
       }
       this.dispatch();

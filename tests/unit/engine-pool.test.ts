@@ -19,7 +19,7 @@ parentPort.on('message', ({ id, input }) => {
   if (input === 'hang') for (;;) {}
   if (input === 'exit') process.exit(3);
   if (input === 'crash') throw new Error('boom');
-  parentPort.postMessage({ id, ok: true, result: { echo: input } });
+  parentPort.postMessage({ id, ok: true, result: { echo: input }, engineMs: 12.5 });
 });
 `,
 );
@@ -30,8 +30,12 @@ const newPool = () => new EnginePool(file);
 const answers = async (pool: EnginePool) => expect(await pool.run('ping')).toEqual({ echo: 'ping' });
 
 describe('the engine pool', () => {
-  it('answers a plain job', async () => {
+  it('answers a plain job, and passes on the time the worker says it spent (Server-Timing)', async () => {
     await answers(newPool());
+    const timing: { queueMs?: number; engineMs?: number } = {};
+    await newPool().run('ping', undefined, { timing });
+    expect(timing.engineMs).toBe(12.5);
+    expect(timing.queueMs).toBeGreaterThanOrEqual(0);
   });
 
   it('frees the slot when the input cannot be posted, and says why (422)', async () => {

@@ -12,7 +12,11 @@ export const POST = withAuth(
     const input = await readJson(request);
     const extras = request.nextUrl.searchParams.get('extras') !== 'false';
     try {
-      return NextResponse.json(await valueInWorker(input, { extras }, { owner: member.userId, signal: request.signal }));
+      const timing: { queueMs?: number; engineMs?: number } = {};
+      const result = await valueInWorker(input, { extras }, { owner: member.userId, signal: request.signal, timing });
+      // How long the job waited for a worker and ran in the engine: the rest of a response's time is the API's own.
+      const serverTiming = `queue;dur=${(timing.queueMs ?? 0).toFixed(1)}, engine;dur=${(timing.engineMs ?? 0).toFixed(1)}`;
+      return NextResponse.json(result, { headers: { 'server-timing': serverTiming } });
     } catch (error) {
       if (error instanceof EngineRefusal) {
         const fields: Record<string, string[]> = {};
