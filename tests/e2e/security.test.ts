@@ -190,13 +190,19 @@ describe('approvals', () => {
   it('keep their board packs byte for byte when the project, the organisation and the people are renamed', async () => {
     const reviewer = await as('reviewer@kestrelbay.example');
     const pack = async (size: string) => Buffer.from(await (await reviewer.page.request.get(`/api/v1/cases/${caseId}/board-pack?size=${size}`)).body());
-    const stored = await db
-      .selectFrom('board_pack')
-      .innerJoin('case_snapshot', 'case_snapshot.id', 'board_pack.snapshot_id')
-      .select('board_pack.page_size')
-      .where('case_snapshot.case_id', '=', caseId)
-      .execute();
-    expect(stored.map((r) => r.page_size).sort()).toEqual(['A4', 'LETTER']);
+    // The approval queued a job that renders and stores every page size.
+    const stored = async () =>
+      (
+        await db
+          .selectFrom('board_pack')
+          .innerJoin('case_snapshot', 'case_snapshot.id', 'board_pack.snapshot_id')
+          .select('board_pack.page_size')
+          .where('case_snapshot.case_id', '=', caseId)
+          .execute()
+      )
+        .map((r) => r.page_size)
+        .sort();
+    await expect.poll(stored, { timeout: 60_000, interval: 500 }).toEqual(['A4', 'LETTER']);
     const before = [await pack('A4'), await pack('LETTER')];
     const admin = await as('admin@kestrelbay.example');
     expect((await admin.page.request.patch(`/api/v1/projects/${projectId}`, { data: { name: 'Renamed after approval' } })).status()).toBe(200);
