@@ -111,6 +111,7 @@ export interface ValuationRunTable {
 }
 
 export type CaseStatus = 'draft' | 'in_review' | 'approved' | 'returned';
+export type SnapshotStatus = 'in_review' | 'approved' | 'returned' | 'withdrawn';
 
 export interface CaseSnapshotTable {
   id: Generated<string>;
@@ -125,7 +126,7 @@ export interface CaseSnapshotTable {
   input_hash: string;
   submitted_by: string | null;
   submitted_at: Timestamp;
-  status: Generated<'in_review' | 'approved' | 'returned'>;
+  status: Generated<SnapshotStatus>;
   decided_by: string | null;
   decided_at: Date | null;
   decision_reason: string | null;

@@ -75,7 +75,7 @@ export async function submitCase(
 /** Approves or returns the case's snapshot under review. */
 export async function decideCase(
   trx: Transaction<DB>,
-  args: { orgId: string; caseId: string; role: RoleName; userId: string; action: Exclude<ReviewAction, 'submit'>; reason?: string },
+  args: { orgId: string; caseId: string; role: RoleName; userId: string; action: Extract<ReviewAction, 'approve' | 'return'>; reason?: string },
 ): Promise<ReviewOutcome<CaseSnapshot>> {
   const row = await lockCase(trx, args.orgId, args.caseId);
   if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
@@ -109,6 +109,37 @@ export async function decideCase(
   return { ok: true, value: snapshot };
 }
 
+/**
+ * Withdraws the submission waiting for review: only whoever submitted it may. The snapshot stays,
+ * marked withdrawn with the time; the case becomes a draft again at the same version.
+ */
+export async function withdrawSubmission(
+  trx: Transaction<DB>,
+  args: { orgId: string; caseId: string; role: RoleName; userId: string },
+): Promise<ReviewOutcome<CaseSnapshot>> {
+  const row = await lockCase(trx, args.orgId, args.caseId);
+  if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
+  const check = checkTransition(args.role, 'withdraw', row.status);
+  if (!check.ok) return check;
+  const waiting = await trx
+    .selectFrom('case_snapshot')
+    .select(['id', 'submitted_by'])
+    .where('organization_id', '=', args.orgId)
+    .where('case_id', '=', row.id)
+    .where('status', '=', 'in_review')
+    .executeTakeFirst();
+  if (!waiting) return { ok: false, code: 'conflict', message: 'There is no submission waiting for review.' };
+  if (waiting.submitted_by !== args.userId) return { ok: false, code: 'forbidden', message: 'Only the person who submitted this version can withdraw it.' };
+  const snapshot = await trx
+    .updateTable('case_snapshot')
+    .set({ status: 'withdrawn', decided_at: new Date() })
+    .where('id', '=', waiting.id)
+    .returningAll()
+    .executeTakeFirstOrThrow();
+  await trx.updateTable('case').set({ status: check.to }).where('id', '=', row.id).execute();
+  return { ok: true, value: snapshot };
+}
+
 export async function listSnapshots(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
   return db
     .selectFrom('case_snapshot')
@@ -118,6 +149,7 @@ export async function listSnapshots(db: Database, { orgId, caseId }: { orgId: st
       'case_snapshot.id',
       'case_snapshot.case_version',
       'case_snapshot.case_name',
+      'case_snapshot.submitted_by',
       'case_snapshot.status',
       'case_snapshot.submitted_at',
       'case_snapshot.decided_at',

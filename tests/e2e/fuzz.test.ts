@@ -36,6 +36,7 @@ const routes: [string, string][] = [
   ['POST', '/api/v1/cases/:id/approve'],
   ['POST', '/api/v1/cases/:id/revisions'],
   ['POST', '/api/v1/cases/:id/return'],
+  ['POST', '/api/v1/cases/:id/withdraw'],
   ['GET', '/api/v1/cases/:id/board-pack'],
   ['POST', '/api/v1/cases/:id/valuations'],
   ['GET', '/api/v1/cases/:id/valuations'],

@@ -38,7 +38,8 @@ const BUILDERS: Role[] = ['admin', 'analyst'];
  * body that passes validation, sent only by the other organisation (JSON bodies are validated
  * before the record is looked up, so only a valid one reaches the lookup). Writes with
  * no probe (a delete, a submission, an approval, a valuation that is stored) are exercised by
- * the allowed role in their own tests (workspace-api, review-workflow, attachments, monte-carlo).
+ * the allowed role in their own tests (workspace-api, review-workflow, attachments, monte-carlo,
+ * withdraw).
  */
 type Probe = { json?: unknown; text?: string; status: number; valid?: unknown };
 const matrix: [Method, string, Role[], Probe?][] = [
@@ -60,6 +61,7 @@ const matrix: [Method, string, Role[], Probe?][] = [
   ['POST', '/api/v1/cases/:case/submit', ['analyst']],
   ['POST', '/api/v1/cases/:case/duplicate', BUILDERS, { json: { name: 5 }, status: 422, valid: { name: 'Copy' } }],
   ['POST', '/api/v1/cases/:case/approve', ['reviewer']],
+  ['POST', '/api/v1/cases/:case/withdraw', ['analyst']],
   ['POST', '/api/v1/cases/:case/revisions', BUILDERS],
   ['POST', '/api/v1/cases/:case/return', ['reviewer'], { json: { reason: 5 }, status: 422, valid: { reason: 'Not yours to return.' } }],
   ['GET', '/api/v1/cases/:case/board-pack', ALL],

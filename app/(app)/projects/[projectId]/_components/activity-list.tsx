@@ -37,6 +37,8 @@ function describe(e: Entry, currency: string): string {
       return `approved ${name}`;
     case 'case.return':
       return `returned ${name} to the analyst`;
+    case 'case.withdraw':
+      return `withdrew the submission of ${name}`;
     case 'case.comment':
       return `commented on ${name}`;
     case 'case.attach':

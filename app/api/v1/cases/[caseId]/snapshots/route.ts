@@ -22,6 +22,8 @@ export const GET = withAuth<{ caseId: string }>(
         status: s.status,
         submittedAt: s.submitted_at,
         submittedBy: s.submitted_by_name,
+        // Only whoever submitted a version may withdraw it (the panel offers it to them alone).
+        submittedByYou: s.submitted_by === member.userId,
         decidedAt: s.decided_at,
         decidedBy: s.decided_by_name,
         decisionReason: s.decision_reason,

@@ -9,9 +9,10 @@ import { Dialog } from '@/components/ui/dialog';
 import { StatusBadge } from '@/components/status-badge';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { useToast } from '@/components/ui/toast';
-import type { CaseStatus } from '@/db/types';
+import type { CaseStatus, SnapshotStatus } from '@/db/types';
 import { getJson, sendJson } from '@/lib/api-client';
 import { formatDateTime, formatMoney } from '@/lib/format';
+import { transitions, type ReviewAction } from '@/lib/review/transitions';
 
 export interface ReviewRights {
   canSubmit: boolean;
@@ -22,9 +23,10 @@ export interface ReviewRights {
 interface Snapshot {
   id: string;
   caseVersion: number;
-  status: 'in_review' | 'approved' | 'returned';
+  status: SnapshotStatus;
   submittedAt: string;
   submittedBy: string | null;
+  submittedByYou: boolean;
   decidedAt: string | null;
   decidedBy: string | null;
   decisionReason: string | null;
@@ -68,7 +70,7 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
   const toast = useToast();
   const history = useSWR<{ status: CaseStatus; snapshots: Snapshot[] }>(`/api/v1/cases/${caseId}/snapshots`, getJson);
   const comments = useSWR<{ comments: Comment[] }>(`/api/v1/cases/${caseId}/comments`, getJson);
-  const [busy, setBusy] = useState<null | 'submit' | 'approve' | 'return' | 'comment'>(null);
+  const [busy, setBusy] = useState<null | ReviewAction | 'comment'>(null);
   const [returning, setReturning] = useState(false);
   const [reason, setReason] = useState('');
   const [problem, setProblem] = useState<string | null>(null);
@@ -78,14 +80,13 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
   const sections: [string, string][] = [...baseSections, ...optionNames.map((n): [string, string] => [`option:${n}`, `Option: ${n}`])];
   const sectionLabel = (s: string) => sections.find(([k]) => k === s)?.[1] ?? s;
 
-  const act = async (kind: 'submit' | 'approve' | 'return') => {
+  const act = async (kind: ReviewAction) => {
     setBusy(kind);
     setProblem(null);
     try {
       if (kind === 'submit' && !(await beforeSubmit())) return;
       await sendJson('POST', `/api/v1/cases/${caseId}/${kind}`, kind === 'return' ? { reason } : undefined);
-      const next: CaseStatus = kind === 'submit' ? 'in_review' : kind === 'approve' ? 'approved' : 'returned';
-      onStatus(next);
+      onStatus(transitions[kind].to);
       setReturning(false);
       setReason('');
       toast(
@@ -93,7 +94,9 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
           ? 'Submitted for review; the reviewers have been told by e-mail.'
           : kind === 'approve'
             ? 'Approved. The board pack is ready.'
-            : 'Returned to the analyst with your reason.',
+            : kind === 'return'
+              ? 'Returned to the analyst with your reason.'
+              : 'Submission withdrawn. The case is a draft again; the reviewers no longer see it waiting.',
         'success',
       );
       await history.mutate();
@@ -144,6 +147,11 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
             {rights.canSubmit && (status === 'draft' || status === 'returned') ? (
               <Button onClick={() => void act('submit')} busy={busy === 'submit'}>
                 Submit for review
+              </Button>
+            ) : null}
+            {rights.canSubmit && status === 'in_review' && latest?.status === 'in_review' && latest.submittedByYou ? (
+              <Button variant="secondary" onClick={() => void act('withdraw')} busy={busy === 'withdraw'}>
+                Withdraw my submission
               </Button>
             ) : null}
             {rights.canDecide && status === 'in_review' ? (
@@ -206,7 +214,8 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
                       <StatusBadge status={s.status} />
                       {s.decidedAt ? (
                         <span className="block text-caption text-ink-muted">
-                          {s.decidedBy ?? 'a former member'}, {formatDateTime(s.decidedAt)}
+                          {s.status === 'withdrawn' ? `by ${s.submittedBy ?? 'a former member'}` : (s.decidedBy ?? 'a former member')},{' '}
+                          {formatDateTime(s.decidedAt)}
                           {s.decisionReason ? `: “${s.decisionReason}”` : ''}
                         </span>
                       ) : null}
