@@ -2,6 +2,8 @@
 const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
+  // scripts/serve.ts compresses every response itself, at a cheaper level.
+  compress: false,
   // The server binds loopback by default; the app is served under one origin.
   serverExternalPackages: ['pg', 'pg-boss', 'nodemailer'],
   // Pages and API answers get their security headers in proxy.ts; the build's static files, which

@@ -11,8 +11,8 @@ npx esbuild lattice/worker-entry.ts --bundle --platform=node --format=esm --targ
 # worker imports them from node_modules like the app does.
 npx esbuild lib/board-pack/worker-entry.ts --bundle --platform=node --format=esm --target=node20 --jsx=automatic --alias:@=. \
   --external:@react-pdf/renderer --external:react --outfile=.data/board-pack-worker.mjs --log-level=warning
-# The production server (scripts/serve.ts): Next.js itself stays outside the bundle.
-npx esbuild scripts/serve.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. --external:next \
+# The production server (scripts/serve.ts): Next.js and compression (CommonJS) stay outside the bundle.
+npx esbuild scripts/serve.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. --external:next --external:compression \
   --outfile=.data/serve.mjs --log-level=warning
 npx esbuild lib/volatility/simulation-worker-entry.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. \
   --outfile=.data/simulation-worker.mjs --log-level=warning

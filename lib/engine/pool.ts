@@ -51,7 +51,9 @@ interface Job {
   timing?: RunOptions['timing'];
   settled: boolean;
   timer: NodeJS.Timeout;
-  resolve: (result: ValuationResult) => void;
+  /** Answer the result as JSON text, serialised in the worker (for a route that only sends it on). */
+  asJson: boolean;
+  resolve: (result: ValuationResult | string) => void;
   reject: (error: Error) => void;
   detach: () => void;
 }
@@ -61,7 +63,7 @@ interface Slot {
   job: Job | null;
 }
 
-type Answer = { id: number; ok: true; result: ValuationResult; engineMs: number } | { id: number; ok: false; issues?: ModelIssue[]; crash?: string };
+type Answer = { id: number; ok: true; result: ValuationResult | string; engineMs: number } | { id: number; ok: false; issues?: ModelIssue[]; crash?: string };
 
 const workerFile = () => path.join(/*turbopackIgnore: true*/ process.cwd(), '.data', 'engine-worker.mjs');
 
@@ -85,6 +87,18 @@ export class EnginePool {
   }
 
   run(input: unknown, options?: ValueOptions, run: RunOptions = {}): Promise<ValuationResult> {
+    return this.enqueue(input, options, run, false) as Promise<ValuationResult>;
+  }
+
+  /**
+   * The same, answered as JSON text serialised in the worker: a route that only sends the result
+   * on spares its own thread the copy of a large object and its serialisation.
+   */
+  runAsJson(input: unknown, options?: ValueOptions, run: RunOptions = {}): Promise<string> {
+    return this.enqueue(input, options, run, true) as Promise<string>;
+  }
+
+  private enqueue(input: unknown, options: ValueOptions | undefined, run: RunOptions, asJson: boolean): Promise<ValuationResult | string> {
     return new Promise((resolve, reject) => {
       if (run.signal?.aborted) return reject(new AppError('bad_request', 'The request was cancelled.'));
       const waiting = this.queue.length;
@@ -100,6 +114,7 @@ export class EnginePool {
         input,
         options,
         owner: run.owner,
+        asJson,
         queuedAt: performance.now(),
         timing: run.timing,
         settled: false,
@@ -151,7 +166,7 @@ export class EnginePool {
       slot.job = job;
       if (job.timing) job.timing.queueMs = performance.now() - job.queuedAt;
       try {
-        slot.worker.postMessage({ id: job.id, input: job.input, options: job.options });
+        slot.worker.postMessage({ id: job.id, input: job.input, options: job.options, asJson: job.asJson });
       } catch (error) {
         // The input could not be sent (not cloneable, too deep): the job fails, the slot stays free.
         slot.job = null;
@@ -205,6 +220,11 @@ function pool(): EnginePool {
 /** Values a model in a worker thread; a refused model rejects with EngineRefusal, a busy engine with a 429 or 503 AppError. */
 export function valueInWorker(input: unknown, options?: ValueOptions, run?: RunOptions): Promise<ValuationResult> {
   return pool().run(input, options, run);
+}
+
+/** Values a model in a worker thread and answers the result as JSON text (see EnginePool.runAsJson). */
+export function valueInWorkerAsJson(input: unknown, options?: ValueOptions, run?: RunOptions): Promise<string> {
+  return pool().runAsJson(input, options, run);
 }
 
 export function enginePoolStats(): PoolStats {

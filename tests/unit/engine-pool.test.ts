@@ -15,11 +15,12 @@ const file = path.join(mkdtempSync(path.join(tmpdir(), 'leeway-pool-')), 'worker
 writeFileSync(
   file,
   `import { parentPort } from 'node:worker_threads';
-parentPort.on('message', ({ id, input }) => {
+parentPort.on('message', ({ id, input, asJson }) => {
   if (input === 'hang') for (;;) {}
   if (input === 'exit') process.exit(3);
   if (input === 'crash') throw new Error('boom');
-  parentPort.postMessage({ id, ok: true, result: { echo: input }, engineMs: 12.5 });
+  const result = { echo: input };
+  parentPort.postMessage({ id, ok: true, result: asJson ? JSON.stringify(result) : result, engineMs: 12.5 });
 });
 `,
 );
@@ -36,6 +37,10 @@ describe('the engine pool', () => {
     await newPool().run('ping', undefined, { timing });
     expect(timing.engineMs).toBe(12.5);
     expect(timing.queueMs).toBeGreaterThanOrEqual(0);
+  });
+
+  it('answers JSON text when asked, for a route that only sends the result on', async () => {
+    expect(JSON.parse(await newPool().runAsJson('ping'))).toEqual({ echo: 'ping' });
   });
 
   it('frees the slot when the input cannot be posted, and says why (422)', async () => {

@@ -1,7 +1,7 @@
 // POST /api/v1/valuations – value an engine model (stateless: nothing is stored); ?extras=false for one lattice pass
 import { NextResponse } from 'next/server';
 import { readJson, withAuth } from '@/lib/api';
-import { EngineRefusal, valueInWorker } from '@/lib/engine/pool';
+import { EngineRefusal, valueInWorkerAsJson } from '@/lib/engine/pool';
 import { AppError } from '@/lib/errors';
 
 export const dynamic = 'force-dynamic';
@@ -13,10 +13,10 @@ export const POST = withAuth(
     const extras = request.nextUrl.searchParams.get('extras') !== 'false';
     try {
       const timing: { queueMs?: number; engineMs?: number } = {};
-      const result = await valueInWorker(input, { extras }, { owner: member.userId, signal: request.signal, timing });
+      const json = await valueInWorkerAsJson(input, { extras }, { owner: member.userId, signal: request.signal, timing });
       // How long the job waited for a worker and ran in the engine: the rest of a response's time is the API's own.
       const serverTiming = `queue;dur=${(timing.queueMs ?? 0).toFixed(1)}, engine;dur=${(timing.engineMs ?? 0).toFixed(1)}`;
-      return NextResponse.json(result, { headers: { 'server-timing': serverTiming } });
+      return new NextResponse(json, { headers: { 'content-type': 'application/json', 'server-timing': serverTiming } });
     } catch (error) {
       if (error instanceof EngineRefusal) {
         const fields: Record<string, string[]> = {};
