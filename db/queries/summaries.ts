@@ -51,6 +51,39 @@ function latestRuns(db: Database, orgId: string, projectId?: string) {
   return query.execute();
 }
 
+/** The project's most recently approved snapshot: what the committee last approved, and its board pack. */
+export interface Approval {
+  snapshotId: string;
+  caseId: string;
+  caseName: string;
+  caseVersion: number;
+  expandedNpv: number;
+  decidedAt: Date;
+}
+
+/** The latest approved snapshot of every project of the organisation, keyed by project id. */
+async function latestApprovals(db: Database, orgId: string): Promise<Map<string, Approval>> {
+  const rows = await db
+    .selectFrom('case_snapshot')
+    .innerJoin('case', 'case.id', 'case_snapshot.case_id')
+    .distinctOn('case.project_id')
+    .select([
+      'case.project_id as projectId',
+      'case_snapshot.id as snapshotId',
+      'case_snapshot.case_id as caseId',
+      'case_snapshot.case_name as caseName',
+      'case_snapshot.case_version as caseVersion',
+      'case_snapshot.decided_at as decidedAt',
+      sql<number>`(case_snapshot.result->>'expandedNpv')::float8`.as('expandedNpv'),
+    ])
+    .where('case_snapshot.organization_id', '=', orgId)
+    .where('case_snapshot.status', '=', 'approved')
+    .orderBy('case.project_id')
+    .orderBy('case_snapshot.decided_at', 'desc')
+    .execute();
+  return new Map(rows.map(({ projectId, decidedAt, ...rest }) => [projectId, { ...rest, decidedAt: decidedAt! }]));
+}
+
 export interface ProjectSummary {
   id: string;
   name: string;
@@ -62,6 +95,10 @@ export interface ProjectSummary {
   updatedAt: Date;
   /** The latest run of the project's first valued case (its base case), or null when no case has been valued. */
   latest: Headline | null;
+  /** The last approval of any of its cases, or null when none was approved. */
+  approved: Approval | null;
+  /** How many of its cases wait for a review decision now. */
+  inReview: number;
 }
 
 export async function listProjectSummaries(db: Database, { orgId }: { orgId: string }): Promise<ProjectSummary[]> {
@@ -81,11 +118,18 @@ export async function listProjectSummaries(db: Database, { orgId }: { orgId: str
         .select(sql<number>`count(*)::int`.as('n'))
         .whereRef('case.project_id', '=', 'project.id')
         .as('caseCount'),
+      eb
+        .selectFrom('case')
+        .select(sql<number>`count(*)::int`.as('n'))
+        .whereRef('case.project_id', '=', 'project.id')
+        .where('case.status', '=', 'in_review')
+        .as('inReview'),
     ])
     .where('project.organization_id', '=', orgId)
     .orderBy('project.name')
     .execute();
   const runs = await latestRuns(db, orgId);
+  const approvals = await latestApprovals(db, orgId);
   return projects.map((p) => {
     // The base case speaks for the project: scenarios are read on the project's own page.
     const mine = runs.filter((r) => r.projectId === p.id).sort((a, b) => +a.caseCreatedAt - +b.caseCreatedAt);
@@ -100,6 +144,8 @@ export async function listProjectSummaries(db: Database, { orgId }: { orgId: str
       caseCount: p.caseCount ?? 0,
       updatedAt: p.updated_at,
       latest,
+      approved: approvals.get(p.id) ?? null,
+      inReview: p.inReview ?? 0,
     };
   });
 }

@@ -47,6 +47,13 @@ const columns = helper.columns([
     enableGlobalFilter: false,
     cell: (info) => <StatusBadge status={info.getValue()} />,
   }),
+  helper.accessor((p) => p.approved?.decidedAt ?? '', {
+    id: 'approval',
+    header: 'Approval',
+    enableGlobalFilter: false,
+    sortUndefined: 'last',
+    cell: (info) => <ApprovalCell project={info.row.original} />,
+  }),
   helper.accessor(
     money((p) => p.latest?.staticNpv),
     {
@@ -96,6 +103,29 @@ function StatusBadge({ status }: { status: ProjectSummaryJson['status'] }) {
     <span className={`rounded px-2 py-0.5 text-caption font-medium ${status === 'active' ? 'bg-moss-100 text-moss-700' : 'bg-paper-sunk text-ink-soft'}`}>
       {status === 'active' ? 'Active' : 'Archived'}
     </span>
+  );
+}
+
+/** What the committee last approved for the project, with its board pack, and what waits for review. */
+function ApprovalCell({ project }: { project: ProjectSummaryJson }) {
+  const { approved, inReview } = project;
+  const waiting = inReview > 0 ? `${inReview} ${inReview === 1 ? 'case' : 'cases'} in review` : null;
+  if (!approved) return <span className="text-ink-soft">{waiting ?? 'Not approved yet'}</span>;
+  return (
+    <div className="min-w-48">
+      <span className="font-medium text-moss-700">Approved</span> {formatDate(approved.decidedAt)}
+      <span className="block text-caption text-ink-soft">
+        {approved.caseName} v{approved.caseVersion} · {formatMoney(approved.expandedNpv, project.currency)}
+      </span>
+      <a
+        href={`/api/v1/cases/${approved.caseId}/board-pack?size=A4`}
+        className="text-caption font-medium text-tide-600 underline underline-offset-2"
+        aria-label={`Board pack of ${project.name}, ${approved.caseName} version ${approved.caseVersion} (PDF)`}
+      >
+        Board pack (PDF)
+      </a>
+      {waiting ? <span className="block text-caption text-ink-muted">{waiting}</span> : null}
+    </div>
   );
 }
 

@@ -11,6 +11,7 @@ import { guardPage } from '@/lib/page-guard';
 import { roleAllows } from '@/lib/permissions';
 import { ActivityList } from './_components/activity-list';
 import { CaseTable } from './_components/case-table';
+import { ProjectActions } from './_components/project-actions';
 
 export const metadata: Metadata = { title: 'Project' };
 
@@ -29,7 +30,15 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         </Link>{' '}
         / {project.name}
       </nav>
-      <PageHeader title={project.name} lead={project.description || undefined} />
+      <PageHeader
+        title={project.name}
+        lead={project.status === 'archived' ? `Archived. ${project.description}`.trim() : project.description || undefined}
+        actions={
+          roleAllows(member.role, { project: ['update'] }) ? (
+            <ProjectActions projectId={project.id} name={project.name} description={project.description} status={project.status} />
+          ) : undefined
+        }
+      />
       <div className="grid gap-8 xl:grid-cols-[minmax(0,1fr)_20rem]">
         <section aria-labelledby="cases-heading">
           <h2 id="cases-heading" className="mb-3">

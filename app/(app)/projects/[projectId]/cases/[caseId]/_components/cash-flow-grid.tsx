@@ -139,18 +139,18 @@ export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCoun
             <tr>
               <th
                 scope="col"
-                className="sticky left-0 border-b border-line bg-paper-sunk px-3 py-2 text-left text-caption font-semibold uppercase tracking-wide text-ink-soft"
+                className="sticky left-0 border-b border-line bg-paper-sunk px-2 py-2 text-left text-caption font-semibold uppercase tracking-wide text-ink-soft"
               >
                 Year
               </th>
               {rows.map((r) => (
-                <th key={r.year} scope="col" className="min-w-24 border-b border-line bg-paper-sunk px-2 py-2 text-caption font-semibold text-ink-soft">
+                <th key={r.year} scope="col" className="min-w-16 border-b border-line bg-paper-sunk px-2 py-2 text-caption font-semibold text-ink-soft">
                   {r.year}
                 </th>
               ))}
               <th
                 scope="col"
-                className="border-b border-l border-line bg-paper-sunk px-3 py-2 text-caption font-semibold uppercase tracking-wide text-ink-soft"
+                className="border-b border-l border-line bg-paper-sunk px-2 py-2 text-caption font-semibold uppercase tracking-wide text-ink-soft"
               >
                 Total
               </th>
@@ -162,7 +162,7 @@ export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCoun
                 <th
                   scope="row"
                   title={line.hint}
-                  className="sticky left-0 whitespace-nowrap border-b border-line bg-paper-raised px-3 py-1 text-left font-normal text-ink-soft"
+                  className="sticky left-0 min-w-36 max-w-44 border-b border-line bg-paper-raised px-2 py-1 text-left font-normal leading-tight text-ink-soft"
                 >
                   {line.label}
                 </th>
@@ -170,7 +170,7 @@ export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCoun
                   const draft = drafts[key(line.key, col)];
                   const invalid = draft !== undefined && numberOrNull(draft) === null;
                   return (
-                    <td key={r.year} className="border-b border-line px-1 py-1">
+                    <td key={r.year} className="border-b border-line px-0.5 py-1">
                       <input
                         data-cell={`${row}:${col}`}
                         aria-label={`${line.label}, year ${r.year}`}
@@ -183,46 +183,46 @@ export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCoun
                         onBlur={() => leave(line.key, col)}
                         onPaste={(e) => paste(e, row, col)}
                         onFocus={(e) => e.currentTarget.select()}
-                        className={`h-8 w-full min-w-20 rounded border px-2 text-right ${invalid ? 'border-brick-500 bg-brick-100' : 'border-transparent hover:border-line focus:border-tide-500'} ${readOnly ? 'bg-transparent' : ''}`}
+                        className={`h-8 w-full min-w-16 rounded border px-1 text-right ${invalid ? 'border-brick-500 bg-brick-100' : 'border-transparent hover:border-line focus:border-tide-500'} ${readOnly ? 'bg-transparent' : ''}`}
                       />
                     </td>
                   );
                 })}
-                <td className="border-b border-l border-line px-3 py-1 text-ink-soft">{formatNumber(total(line.key))}</td>
+                <td className="border-b border-l border-line px-2 py-1 text-ink-soft">{formatNumber(total(line.key))}</td>
               </tr>
             ))}
             <tr className="bg-tide-50/60 font-semibold">
-              <th scope="row" className="sticky left-0 bg-tide-50 px-3 py-2 text-left">
+              <th scope="row" className="sticky left-0 bg-tide-50 px-2 py-2 text-left">
                 Free cash flow
               </th>
               {rows.map((r, col) => (
-                <td key={r.year} className="px-3 py-2">
+                <td key={r.year} className="px-1.5 py-2">
                   {formatNumber(analysis?.rows[col]?.freeCashFlow)}
                 </td>
               ))}
-              <td className="border-l border-line px-3 py-2">{formatNumber(analysis?.totals.freeCashFlow)}</td>
+              <td className="border-l border-line px-2 py-2">{formatNumber(analysis?.totals.freeCashFlow)}</td>
             </tr>
             <tr className="text-ink-soft">
-              <th scope="row" className="sticky left-0 bg-paper-raised px-3 py-1 text-left font-normal">
+              <th scope="row" className="sticky left-0 bg-paper-raised px-2 py-1 text-left font-normal">
                 Discount factor
               </th>
               {rows.map((r, col) => (
-                <td key={r.year} className="px-3 py-1">
+                <td key={r.year} className="px-1.5 py-1">
                   {analysis?.rows[col]?.discountFactor.toFixed(4) ?? '–'}
                 </td>
               ))}
               <td className="border-l border-line" />
             </tr>
             <tr className="text-ink-soft">
-              <th scope="row" className="sticky left-0 bg-paper-raised px-3 py-1 text-left font-normal">
+              <th scope="row" className="sticky left-0 bg-paper-raised px-2 py-1 text-left font-normal">
                 Present value
               </th>
               {rows.map((r, col) => (
-                <td key={r.year} className="px-3 py-1">
+                <td key={r.year} className="px-1.5 py-1">
                   {formatNumber(analysis?.rows[col]?.presentValue)}
                 </td>
               ))}
-              <td className="border-l border-line px-3 py-1">{formatNumber(analysis?.staticNpv)}</td>
+              <td className="border-l border-line px-2 py-1">{formatNumber(analysis?.staticNpv)}</td>
             </tr>
           </tbody>
         </table>

@@ -1,0 +1,109 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { FormProblem } from '@/components/form-problem';
+import { Button } from '@/components/ui/button';
+import { Dialog } from '@/components/ui/dialog';
+import { Input } from '@/components/ui/input';
+import { useToast } from '@/components/ui/toast';
+import { sendJson } from '@/lib/api-client';
+
+interface Props {
+  projectId: string;
+  name: string;
+  description: string;
+  status: 'active' | 'archived';
+}
+
+/**
+ * Rename or describe the project, and archive or restore it (PATCH /api/v1/projects/{id}).
+ * Archiving hides nothing and deletes nothing: the portfolio lists it as archived, and its cases,
+ * approvals and board packs stay as they are.
+ */
+export function ProjectActions({ projectId, name, description, status }: Props) {
+  const router = useRouter();
+  const toast = useToast();
+  const [dialog, setDialog] = useState<null | 'rename' | 'archive'>(null);
+  const [draftName, setDraftName] = useState(name);
+  const [draftDescription, setDraftDescription] = useState(description);
+  const [busy, setBusy] = useState(false);
+  const [problem, setProblem] = useState<string | null>(null);
+
+  const open = (kind: 'rename' | 'archive') => {
+    setDraftName(name);
+    setDraftDescription(description);
+    setProblem(null);
+    setDialog(kind);
+  };
+
+  const save = async (change: { name?: string; description?: string; status?: 'active' | 'archived' }, done: string) => {
+    setBusy(true);
+    setProblem(null);
+    try {
+      await sendJson('PATCH', `/api/v1/projects/${projectId}`, change);
+      setDialog(null);
+      toast(done, 'success');
+      router.refresh();
+    } catch (error) {
+      setProblem(error instanceof Error ? error.message : 'The project was not changed.');
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  const archived = status === 'archived';
+  return (
+    <div className="flex flex-wrap gap-2">
+      <Button variant="secondary" onClick={() => open('rename')}>
+        Rename…
+      </Button>
+      {archived ? (
+        <Button variant="secondary" busy={busy} onClick={() => void save({ status: 'active' }, 'The project is active again.')}>
+          Restore project
+        </Button>
+      ) : (
+        <Button variant="secondary" onClick={() => open('archive')}>
+          Archive…
+        </Button>
+      )}
+      <Dialog open={dialog !== null} title={dialog === 'rename' ? 'Rename the project' : `Archive “${name}”?`} onClose={() => setDialog(null)}>
+        <form
+          className="flex flex-col gap-4"
+          onSubmit={(e) => {
+            e.preventDefault();
+            if (dialog === 'rename') void save({ name: draftName.trim(), description: draftDescription.trim() }, 'The project was renamed.');
+            else void save({ status: 'archived' }, 'The project is archived.');
+          }}
+        >
+          {dialog === 'rename' ? (
+            <>
+              <Input label="Project name" autoFocus required maxLength={120} value={draftName} onChange={(e) => setDraftName(e.target.value)} />
+              <Input
+                label="Description"
+                maxLength={2000}
+                value={draftDescription}
+                onChange={(e) => setDraftDescription(e.target.value)}
+                hint="Approved board packs keep the name they were approved under."
+              />
+            </>
+          ) : (
+            <p className="text-ink-soft">
+              The portfolio will list it as archived. Nothing is deleted: its cases, approvals and board packs stay as they are, and you can restore it at any
+              time.
+            </p>
+          )}
+          <FormProblem message={problem} />
+          <div className="flex justify-end gap-2">
+            <Button variant="secondary" onClick={() => setDialog(null)}>
+              Cancel
+            </Button>
+            <Button type="submit" busy={busy} disabled={dialog === 'rename' && draftName.trim() === ''}>
+              {dialog === 'rename' ? 'Save name' : 'Archive project'}
+            </Button>
+          </div>
+        </form>
+      </Dialog>
+    </div>
+  );
+}
