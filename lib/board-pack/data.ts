@@ -7,6 +7,16 @@ export type PageSize = 'A4' | 'LETTER';
 /** Every page size a pack is rendered in, all of them at approval. */
 export const pageSizes: PageSize[] = ['A4', 'LETTER'];
 
+/** One step of the case's road to this approval, as frozen in its snapshots. */
+export interface RecordEvent {
+  kind: 'submitted' | 'returned' | 'withdrawn' | 'approved';
+  caseVersion: number;
+  by: string;
+  at: string;
+  /** A return's reason. */
+  reason?: string;
+}
+
 export interface BoardPackData {
   pageSize: PageSize;
   organisation: string;
@@ -26,6 +36,8 @@ export interface BoardPackData {
     decidedBy: string;
     decidedAt: string;
   };
+  /** Every submission of the case up to this one and what became of it, oldest first, ending with this approval. */
+  record: RecordEvent[];
   /** The first steps of the lattice and the mode it starts in, for the diagram; computed from the snapshot's model. */
   excerpt?: { grid: NodeGrid; startMode: string };
 }

@@ -8,19 +8,20 @@
  */
 import { Circle, Document, G, Line, Page, Rect, StyleSheet, Svg, Text, View } from '@react-pdf/renderer';
 import type { ReactNode } from 'react';
-import type { ValuationResult } from '@/lattice';
+import type { Sensitivity, ValuationResult } from '@/lattice';
 import { VALUATION_CAUTION } from '@/components/valuation-caution';
 import { analyseCashFlows } from '../cash-flows';
 import { layoutLatticeTree } from '../charts/lattice-tree';
 import { layoutNpvComparison } from '../charts/npv-comparison';
 import { layoutTornado } from '../charts/tornado';
 import { layoutWaterfall, waterfallSteps } from '../charts/waterfall';
+import { textWidth, wrapLabel } from '../charts/wrap-label';
 import { decisionRule } from '../decision-rules';
 import { formatChange, formatDateTime, formatMoney, formatPercent } from '../format';
 import { optionTypeLabels, type OptionType } from '../option-form';
 import { premiumSplitText } from '../premium-split';
 import { describeOption } from '../option-words';
-import type { BoardPackData } from './data';
+import type { BoardPackData, RecordEvent } from './data';
 import { recommendation } from './recommendation';
 import { pdfText } from './text';
 
@@ -32,10 +33,11 @@ const tide = '#23727a';
 const brick = '#ad3f2b';
 
 const styles = StyleSheet.create({
-  page: { fontFamily: 'Work Sans', fontSize: 10, color: ink, paddingTop: 48, paddingBottom: 56, paddingHorizontal: 48 },
+  page: { fontFamily: 'Work Sans', fontSize: 10, color: ink, paddingTop: 48, paddingBottom: 64, paddingHorizontal: 48 },
   // Line height is set per paragraph, never on the page: on the page it drops the footer's page numbers (react-pdf 4.9).
   para: { fontSize: 10, lineHeight: 1.4 },
-  footer: { position: 'absolute', bottom: 24, left: 48, right: 48, fontSize: 8, color: muted, flexDirection: 'row', justifyContent: 'space-between' },
+  // Four footer lines (the longest project and case names) fit between the page's bottom padding (64) and the footer's bottom (16).
+  footer: { position: 'absolute', bottom: 16, left: 48, right: 48, fontSize: 8, color: muted, flexDirection: 'row', justifyContent: 'space-between' },
   eyebrow: { fontSize: 8, letterSpacing: 1, color: muted, textTransform: 'uppercase' },
   h1: { fontSize: 24, fontWeight: 600, marginTop: 6, marginBottom: 6, lineHeight: 1.2 },
   h2: { fontSize: 14, fontWeight: 600, marginBottom: 8, marginTop: 4 },
@@ -58,14 +60,24 @@ const styles = StyleSheet.create({
 
 const money = (value: number | null | undefined, currency?: string, digits = 1) => formatMoney(value, currency, digits);
 
+/** Chart label size (pt), and the tornado's label column, in which long labels wrap. */
+const LABEL_SIZE = 7.5;
+const LABEL_COLUMN = 150;
+const NPV_LABEL_COLUMN = 90;
+const WATERFALL_LABEL_LINES = 5;
+/** The longest decision name a lattice node shows whole; a longer one is keyed to a line under the diagram. */
+const NODE_LABEL_CHARS = 15;
+
 function Footer({ data }: { data: BoardPackData }) {
   return (
     <View style={styles.footer} fixed>
-      <Text>
+      {/* The left part takes what the page number leaves and wraps there: a long name never runs into it. */}
+      <Text style={{ flex: 1, marginRight: 16 }}>
         {pdfText(`${data.project.name} · ${data.snapshot.caseName} · approved ${formatDateTime(data.snapshot.decidedAt)}`)}
         {data.isDemo ? ' · invented demo figures' : ''}
       </Text>
-      <Text render={({ pageNumber, totalPages }) => `Leeway board pack · page ${pageNumber} of ${totalPages}`} />
+      {/* A fixed width: react-pdf lays out a render-prop text before it knows its words. */}
+      <Text style={{ width: 150, textAlign: 'right' }} render={({ pageNumber, totalPages }) => `Leeway board pack · page ${pageNumber} of ${totalPages}`} />
     </View>
   );
 }
@@ -109,7 +121,7 @@ function SvgText({
   y,
   children,
   anchor = 'start',
-  size = 7.5,
+  size = LABEL_SIZE,
   color = soft,
   bold = false,
 }: {
@@ -130,9 +142,10 @@ function SvgText({
 
 function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
   const r = data.snapshot.result;
-  const layout = layoutNpvComparison([{ id: 'case', label: data.snapshot.caseName, staticNpv: r.staticNpv, expandedNpv: r.expandedNpv }], width, {
+  // One row, the approved case, whose name heads the page: a short label that always fits.
+  const layout = layoutNpvComparison([{ id: 'case', label: 'This case', staticNpv: r.staticNpv, expandedNpv: r.expandedNpv }], width, {
     rowHeight: 56,
-    labelWidth: 110,
+    labelWidth: NPV_LABEL_COLUMN,
   });
   const row = layout.rows[0]!;
   return (
@@ -154,9 +167,11 @@ function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
         strokeWidth={1}
         strokeDasharray="3 3"
       />
-      <SvgText x={layout.margin.left - 8} y={row.y + 3} anchor="end" color={ink} size={8.5}>
-        {row.label.length > 22 ? `${row.label.slice(0, 21)}…` : row.label}
-      </SvgText>
+      {wrapLabel(row.label, NPV_LABEL_COLUMN - 12, 8.5, 3).map((text, k, lines) => (
+        <SvgText key={k} x={layout.margin.left - 8} y={row.y + 3 + (k - (lines.length - 1) / 2) * 10.5} anchor="end" color={ink} size={8.5}>
+          {text}
+        </SvgText>
+      ))}
       <Line x1={row.staticX} x2={row.expandedX} y1={row.y} y2={row.y} stroke="#7fbcc0" strokeWidth={6} />
       <Circle cx={row.staticX} cy={row.y} r={5} fill="#ffffff" stroke={soft} strokeWidth={1.5} />
       <Circle cx={row.expandedX} cy={row.y} r={5.5} fill={tide} />
@@ -169,7 +184,8 @@ function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
 }
 
 function WaterfallPdf({ data, width }: { data: BoardPackData; width: number }) {
-  const layout = layoutWaterfall(waterfallSteps(data.snapshot.result), width, 220);
+  // Up to five lines of label under each bar: an option's name (at most 64 characters) fits whole.
+  const layout = layoutWaterfall(waterfallSteps(data.snapshot.result), width, 240, 12 + WATERFALL_LABEL_LINES * (LABEL_SIZE + 2));
   return (
     <Svg width={layout.width} height={layout.height}>
       {layout.ticks.map((t) => (
@@ -187,9 +203,11 @@ function WaterfallPdf({ data, width }: { data: BoardPackData; width: number }) {
           <SvgText x={b.center} y={b.y - 4} anchor="middle" color={ink} bold>
             {b.kind === 'total' ? money(b.value) : formatChange(b.value)}
           </SvgText>
-          <SvgText x={b.center} y={layout.height - layout.margin.bottom + 12} anchor="middle">
-            {b.label.length > 16 ? `${b.label.slice(0, 15)}…` : b.label}
-          </SvgText>
+          {wrapLabel(b.label, b.width / 0.7, LABEL_SIZE, WATERFALL_LABEL_LINES).map((text, k) => (
+            <SvgText key={k} x={b.center} y={layout.height - layout.margin.bottom + 12 + k * (LABEL_SIZE + 2)} anchor="middle">
+              {text}
+            </SvgText>
+          ))}
         </G>
       ))}
     </Svg>
@@ -199,7 +217,9 @@ function WaterfallPdf({ data, width }: { data: BoardPackData; width: number }) {
 function TornadoPdf({ data, width }: { data: BoardPackData; width: number }) {
   const r = data.snapshot.result;
   if (!r.sensitivities) return null;
-  const layout = layoutTornado(r.sensitivities, r.expandedNpv, width, { labelWidth: 190 });
+  const figures = (s: Sensitivity) => `${money(s.low.expandedNpv)} / ${money(s.high.expandedNpv)}`;
+  const rightWidth = Math.max(...r.sensitivities.map((s) => textWidth(figures(s), LABEL_SIZE))) + 8;
+  const layout = layoutTornado(r.sensitivities, r.expandedNpv, width, { labelWidth: LABEL_COLUMN, rightWidth });
   return (
     <Svg width={layout.width} height={layout.height}>
       {layout.ticks.map((t) => (
@@ -218,21 +238,40 @@ function TornadoPdf({ data, width }: { data: BoardPackData; width: number }) {
           );
         return (
           <G key={s.parameter}>
-            <SvgText x={layout.margin.left - 8} y={row.y + row.bandHeight / 2 + 3} anchor="end" color={ink}>
-              {s.label}
-            </SvgText>
+            {wrapLabel(s.label, LABEL_COLUMN - 12, LABEL_SIZE, 3).map((text, k, lines) => (
+              <SvgText
+                key={k}
+                x={layout.margin.left - 8}
+                y={row.y + row.bandHeight / 2 + 3 + (k - (lines.length - 1) / 2) * (LABEL_SIZE + 2)}
+                anchor="end"
+                color={ink}
+              >
+                {text}
+              </SvgText>
+            ))}
             {bar(row.lowX, '#b9b1a2')}
             {bar(row.highX, tide)}
-            <SvgText
-              x={layout.width - layout.margin.right + 4}
-              y={row.y + row.bandHeight / 2 + 3}
-            >{`${money(s.low.expandedNpv)} / ${money(s.high.expandedNpv)}`}</SvgText>
+            <SvgText x={layout.width - layout.margin.right + 4} y={row.y + row.bandHeight / 2 + 3}>
+              {figures(s)}
+            </SvgText>
           </G>
         );
       })}
       <Line x1={layout.baseX} x2={layout.baseX} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={ink} strokeWidth={1.2} />
     </Svg>
   );
+}
+
+const eventWords: Record<RecordEvent['kind'], string> = {
+  submitted: 'Submitted for review',
+  returned: 'Returned',
+  withdrawn: 'Withdrawn by the analyst',
+  approved: 'Approved',
+};
+
+function recordRow(event: RecordEvent): string[] {
+  const what = event.reason ? `${eventWords[event.kind]}: “${event.reason}”` : eventWords[event.kind];
+  return [what, `v${event.caseVersion}`, event.by, formatDateTime(event.at)];
 }
 
 /** A convergence point's expanded NPV; results stored by engine 1.x kept the lattice value instead. */
@@ -247,7 +286,7 @@ function LatticePdf({ data, width }: { data: BoardPackData; width: number }) {
   const layout = layoutLatticeTree(grid, startMode, Math.min(4, grid.steps.length - 1));
   const scale = Math.min(1, width / layout.width);
   const fills = ['#cfe7e8', '#f7e3d6', '#dcebdc', '#f5dcd6'];
-  return (
+  const diagram = (
     <Svg width={layout.width * scale} height={layout.height * scale} viewBox={`0 0 ${layout.width} ${layout.height}`}>
       {layout.edges.map((e) => (
         <Line key={`${e.from.step}:${e.from.node}-${e.to.node}`} x1={e.from.x + 112} y1={e.from.y} x2={e.to.x} y2={e.to.y} stroke="#b9b1a2" strokeWidth={1} />
@@ -267,11 +306,22 @@ function LatticePdf({ data, width }: { data: BoardPackData; width: number }) {
           <SvgText x={n.x + 8} y={n.y - 10} size={10}>{`V ${money(n.underlying)}`}</SvgText>
           <SvgText x={n.x + 8} y={n.y + 5} size={11} color={ink} bold>{`W ${money(n.value)}`}</SvgText>
           <SvgText x={n.x + 8} y={n.y + 19} size={9}>
-            {n.decision ? `> ${n.decision.length > 15 ? `${n.decision.slice(0, 14)}…` : n.decision}` : 'continue'}
+            {n.decision ? `> ${n.decision.length > NODE_LABEL_CHARS ? `(${layout.decisions.indexOf(n.decision) + 1})` : n.decision}` : 'continue'}
           </SvgText>
         </G>
       ))}
     </Svg>
+  );
+  const keyed = layout.decisions.map((d, k) => ({ d, k })).filter(({ d }) => d.length > NODE_LABEL_CHARS);
+  return (
+    <View>
+      {diagram}
+      {keyed.map(({ d, k }) => (
+        <Text key={d} style={{ fontSize: 8.5, lineHeight: 1.4, color: soft }}>
+          {pdfText(`(${k + 1}) ${d}`)}
+        </Text>
+      ))}
+    </View>
   );
 }
 
@@ -316,13 +366,15 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
           </View>
         </View>
         {premiumSplitText(r, currency) ? (
-          <Text style={{ fontSize: 10, lineHeight: 1.4, marginBottom: 6 }}>{pdfText(premiumSplitText(r, currency)!)}</Text>
+          <Text style={{ fontSize: 10, lineHeight: 1.4, marginTop: 8, marginBottom: 6 }}>{pdfText(premiumSplitText(r, currency)!)}</Text>
         ) : null}
         <Text style={styles.h3}>Recommendation</Text>
         <Text style={{ fontSize: 10, lineHeight: 1.4, fontWeight: 600 }}>{rec.headline}</Text>
         <Text style={{ fontSize: 10, lineHeight: 1.4, marginTop: 4 }}>{pdfText(rec.body)}</Text>
-        <Text style={styles.h3}>NPV with and without flexibility</Text>
-        <NpvChart data={data} width={contentWidth} />
+        <View wrap={false}>
+          <Text style={styles.h3}>NPV with and without flexibility</Text>
+          <NpvChart data={data} width={contentWidth} />
+        </View>
         <Text style={styles.h3}>Decision rules</Text>
         {rules.length === 0 ? <Text style={styles.para}>The case holds no options: it is a now-or-never commitment.</Text> : null}
         {rules.map((rule) => (
@@ -352,15 +404,20 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
             ...(r.interaction !== null && r.interaction !== undefined ? [['Interaction (together vs. alone)', money(r.interaction, currency), '', '']] : []),
           ]}
         />
-        <Text style={styles.h3}>From static to expanded NPV ({currency})</Text>
-        <WaterfallPdf data={data} width={contentWidth} />
-        <Text style={styles.h3}>Sensitivity of the expanded NPV ({currency})</Text>
-        <Text style={{ lineHeight: 1.4, color: soft, fontSize: 8.5 }}>
-          Each input moved on its own, both ways: V0 and volatility by 10 % down (grey) and up (teal), the risk-free rate by one point, the payout schedule and
-          each option&apos;s money by 10 %. Figures: expanded NPV when moved down / up; the vertical line is the valued expanded NPV,{' '}
-          {money(r.expandedNpv, currency)}.
-        </Text>
-        <TornadoPdf data={data} width={contentWidth} />
+        {/* A heading and its chart stay on one page: a block that does not fit starts the next one. */}
+        <View wrap={false}>
+          <Text style={styles.h3}>From static to expanded NPV ({currency})</Text>
+          <WaterfallPdf data={data} width={contentWidth} />
+        </View>
+        <View wrap={false}>
+          <Text style={styles.h3}>Sensitivity of the expanded NPV ({currency})</Text>
+          <Text style={{ lineHeight: 1.4, color: soft, fontSize: 8.5 }}>
+            Each input moved on its own, both ways: V0 and volatility by 10 % down (grey) and up (teal), the risk-free rate by one point, the payout schedule
+            and each option&apos;s money by 10 %. Figures: expanded NPV when moved down / up; the vertical line is the valued expanded NPV,{' '}
+            {money(r.expandedNpv, currency)}.
+          </Text>
+          <TornadoPdf data={data} width={contentWidth} />
+        </View>
       </Section>
 
       <Section data={data} title="The lattice">
@@ -435,14 +492,8 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
         </Text>
         <Text style={styles.caution}>{pdfText(VALUATION_CAUTION)}</Text>
         <Text style={styles.h3}>Approval record</Text>
-        <Table
-          columns={['Event', 'By', 'When']}
-          widths={[34, 33, 33]}
-          rows={[
-            ['Submitted for review', snapshot.submittedBy, formatDateTime(snapshot.submittedAt)],
-            ['Approved', snapshot.decidedBy, formatDateTime(snapshot.decidedAt)],
-          ]}
-        />
+        <Text style={{ fontSize: 8.5, lineHeight: 1.4, color: soft }}>Every submission of this case up to this approval, and what became of it.</Text>
+        <Table columns={['Event', 'Version', 'By', 'When']} widths={[46, 10, 22, 22]} rows={data.record.map(recordRow)} />
         <Text style={{ lineHeight: 1.4, marginTop: 8, fontSize: 8, color: muted }}>
           {pdfText(
             `Snapshot ${snapshot.id} of case version ${snapshot.caseVersion}; engine ${snapshot.engineVersion}; input fingerprint (SHA-256) ${snapshot.inputHash}.`,

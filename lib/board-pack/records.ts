@@ -5,7 +5,7 @@
 import { createHash } from 'node:crypto';
 import { db } from '@/db';
 import { AppError } from '../errors';
-import type { BoardPackData, PageSize } from './data';
+import type { BoardPackData, PageSize, RecordEvent } from './data';
 
 /**
  * Everything the pack shows, from the approved snapshot alone: its frozen inputs and results and
@@ -14,6 +14,38 @@ import type { BoardPackData, PageSize } from './data';
 export async function boardPackData(orgId: string, snapshotId: string, pageSize: PageSize): Promise<BoardPackData> {
   const row = await db.selectFrom('case_snapshot').selectAll().where('organization_id', '=', orgId).where('id', '=', snapshotId).executeTakeFirst();
   if (!row || row.status !== 'approved' || !row.decided_at) throw new AppError('not_found', 'No approved snapshot to make a board pack from.');
+  // The case's earlier submissions: all frozen (snapshots are append-only), so the record never changes.
+  const earlier = await db
+    .selectFrom('case_snapshot')
+    .select(['case_version', 'status', 'submitted_at', 'submitted_by_name', 'decided_at', 'decided_by_name', 'decision_reason'])
+    .where('organization_id', '=', orgId)
+    .where('case_id', '=', row.case_id)
+    // Compared in SQL: the JavaScript Date of row.submitted_at has lost the microseconds.
+    .where('submitted_at', '<=', (eb) => eb.selectFrom('case_snapshot as approved').select('approved.submitted_at').where('approved.id', '=', row.id))
+    .orderBy('submitted_at')
+    .execute();
+  const former = 'a former member';
+  const record: RecordEvent[] = earlier.flatMap((s): RecordEvent[] => {
+    const submitted: RecordEvent = {
+      kind: 'submitted',
+      caseVersion: s.case_version,
+      by: s.submitted_by_name ?? former,
+      at: new Date(s.submitted_at).toISOString(),
+    };
+    if (!s.decided_at || s.status === 'in_review') return [submitted];
+    const decided = new Date(s.decided_at).toISOString();
+    if (s.status === 'withdrawn') return [submitted, { kind: 'withdrawn', caseVersion: s.case_version, by: s.submitted_by_name ?? former, at: decided }];
+    return [
+      submitted,
+      {
+        kind: s.status,
+        caseVersion: s.case_version,
+        by: s.decided_by_name ?? former,
+        at: decided,
+        ...(s.decision_reason ? { reason: s.decision_reason } : {}),
+      },
+    ];
+  });
   return {
     pageSize,
     organisation: row.organization_name ?? '',
@@ -33,6 +65,7 @@ export async function boardPackData(orgId: string, snapshotId: string, pageSize:
       decidedBy: row.decided_by_name ?? 'a former member',
       decidedAt: new Date(row.decided_at).toISOString(),
     },
+    record,
   };
 }
 

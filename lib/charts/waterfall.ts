@@ -41,8 +41,9 @@ export interface WaterfallLayout {
   zeroY: number;
 }
 
-export function layoutWaterfall(steps: WaterfallStep[], width: number, height = 300): WaterfallLayout {
-  const margin = { top: 24, right: 16, bottom: 48, left: 56 };
+/** `labelSpace` is the room under the bars for their labels (several lines in the board pack). */
+export function layoutWaterfall(steps: WaterfallStep[], width: number, height = 300, labelSpace = 48): WaterfallLayout {
+  const margin = { top: 24, right: 16, bottom: labelSpace, left: 56 };
   const values = steps.flatMap((s) => [s.from, s.to, 0]);
   const y = scaleLinear()
     .domain([Math.min(...values), Math.max(...values)])

@@ -142,6 +142,9 @@ describe('review workflow', () => {
     for (const figure of [result.staticNpv, result.optionPremium, result.expandedNpv]) expect(text).toContain(formatMoney(figure, 'EUR'));
     expect(text).toContain('Approval record');
     expect(text).toContain('Tomasz Okafor');
+    // The record holds the whole road: the first submission, its return with the reason, the resubmission and the approval.
+    expect(text).toContain('Returned: “Justify the volatility before approval.”');
+    expect(text.match(/Submitted for review/g)).toHaveLength(2);
     expect(text).toContain(decisionRule(result.switches[0]!, 'EUR').text.slice(0, 40));
 
     // The same snapshot always gives the same document, and Letter is there too.

@@ -3,40 +3,15 @@ import { execFileSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { demoPortfolio } from '@/demo/portfolio';
+import { demoBoardPackData, demoPlant } from '@/demo/board-pack-data';
 import type { ProjectModel, ValuationResult } from '@/lattice';
 import { renderBoardPack } from '@/lib/board-pack/render';
-import { caseToModel } from '@/lib/case-model';
 
-/** The demo plant's base case (invented figures) and its engine model. */
-export function demoPlant() {
-  const inputs = demoPortfolio.find((p) => p.name === 'Phased bio-resin plant')!.cases[0]!;
-  return { inputs, model: caseToModel(inputs).model };
-}
+export { demoPlant };
 
 export async function renderPlantPack(model: ProjectModel, result: ValuationResult): Promise<Buffer> {
-  const { inputs } = demoPlant();
-  const when = new Date('2026-01-01T00:00:00Z').toISOString();
-  return renderBoardPack({
-    pageSize: 'A4',
-    organisation: 'Invented Test Organisation',
-    isDemo: true,
-    project: { name: 'Phased bio-resin plant', description: 'Invented', currency: 'EUR' },
-    snapshot: {
-      id: 'test',
-      caseName: inputs.name,
-      caseVersion: 1,
-      inputs,
-      model,
-      result,
-      engineVersion: result.engineVersion,
-      inputHash: 'test',
-      submittedBy: 'A',
-      submittedAt: when,
-      decidedBy: 'B',
-      decidedAt: when,
-    },
-  });
+  const data = demoBoardPackData('A4', { result });
+  return renderBoardPack({ ...data, snapshot: { ...data.snapshot, model } });
 }
 
 /** The PDF's text with runs of white space as one space (`layout` keeps columns side by side). */
