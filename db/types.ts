@@ -138,6 +138,8 @@ export interface CaseSnapshotTable {
   organization_is_demo: boolean | null;
   submitted_by_name: string | null;
   decided_by_name: string | null;
+  /** The analyst's recommendation to the committee, written at submission (null before migration 0009). */
+  recommendation: Generated<string | null>;
 }
 
 /** Consecutive failed sign-ins per e-mail address (lib/sign-in-backoff.ts). */

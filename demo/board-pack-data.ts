@@ -45,6 +45,8 @@ export function demoBoardPackData(
       submittedAt: '2026-11-30T09:00:00.000Z',
       decidedBy: reviewer,
       decidedAt: '2026-12-01T15:30:00.000Z',
+      recommendation:
+        'Approve phase 1 now. On its own the plan does not pay back, but the right to add phase 2 and the sale option carry it: commit to phase 2 only above its boundary in years 2–4, and sell below the sale boundary. (Invented demo text.)',
     },
     record: [
       { kind: 'submitted', caseVersion: 1, by: analyst, at: '2026-11-20T10:00:00.000Z' },

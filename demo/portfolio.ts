@@ -14,7 +14,7 @@ export interface DemoProject {
   description: string;
   cases: CaseInput[];
   /** Where a case stands in the review workflow once seeded (the others stay drafts). */
-  reviews?: { caseIndex: number; outcome: 'approved' | 'in_review' }[];
+  reviews?: { caseIndex: number; outcome: 'approved' | 'in_review'; recommendation: string }[];
 }
 
 /** A yearly schedule from parallel columns (year 0 first), so the figures read like a spreadsheet. */
@@ -149,14 +149,28 @@ export const demoPortfolio: DemoProject[] = [
     description:
       'Phase 1 of a bio-resin plant now, with the right to add phase 2 in years 2–4 and to sell the plant for a salvage value that falls after year 4. Invented demo figures, EUR millions.',
     cases: [plantBase, { ...plantBase, name: 'Volatile demand', settings: { ...plantBase.settings, volatility: 0.42 } }],
-    reviews: [{ caseIndex: 0, outcome: 'approved' }],
+    reviews: [
+      {
+        caseIndex: 0,
+        outcome: 'approved',
+        recommendation:
+          'Approve phase 1 now. On its own the plan does not pay back (static NPV below zero), but the right to add phase 2 and the sale option carry it: commit to phase 2 only if the plant is worth more than the boundary in years 2–4, and sell if it falls below its boundary. (Invented demo text.)',
+      },
+    ],
   },
   {
     name: 'Cold-storage hub',
     description:
       'A regional cold-storage hub that may be built now or at any time in the next three years, at a build cost rising 4 % a year. Invented demo figures, EUR millions.',
     cases: [hubBase, { ...hubBase, name: 'Calmer market', settings: { ...hubBase.settings, volatility: 0.2 } }],
-    reviews: [{ caseIndex: 0, outcome: 'in_review' }],
+    reviews: [
+      {
+        caseIndex: 0,
+        outcome: 'in_review',
+        recommendation:
+          'Approve the right to build within three years, not the build itself: wait while the hub is worth less than its boundary, then build. (Invented demo text.)',
+      },
+    ],
   },
   {
     name: 'Staged pilot line',

@@ -72,6 +72,7 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; re
           caseId: made.id,
           caseName: input.name,
           outcome: review.outcome,
+          recommendation: review.recommendation,
           frozen: { inputs: input, model, result, engineVersion: result.engineVersion, inputHash: hashModel(model) },
         });
     }
@@ -88,6 +89,7 @@ async function seedReview(args: {
   caseId: string;
   caseName: string;
   outcome: 'approved' | 'in_review';
+  recommendation: string;
   frozen: FrozenValuation;
 }) {
   await db.transaction().execute(async (trx) => {
@@ -98,6 +100,7 @@ async function seedReview(args: {
       userId: args.analystId,
       caseVersion: 1,
       frozen: args.frozen,
+      recommendation: args.recommendation,
     });
     if (!outcome.ok) throw new Error(`seed: could not submit ${args.caseName}: ${outcome.message}`);
     await recordAudit(trx, {

@@ -25,12 +25,12 @@ export interface FrozenValuation {
 }
 
 /**
- * Submits the case for review: freezes `frozen` (valued from the case at `caseVersion`) as a
- * snapshot and moves the case to in_review. Refused if the case changed since it was valued.
+ * Submits the case for review: freezes `frozen` (valued from the case at `caseVersion`) and the
+ * analyst's written recommendation as a snapshot and moves the case to in_review. Refused if the case changed since it was valued.
  */
 export async function submitCase(
   trx: Transaction<DB>,
-  args: { orgId: string; caseId: string; role: RoleName; userId: string; caseVersion: number; frozen: FrozenValuation },
+  args: { orgId: string; caseId: string; role: RoleName; userId: string; caseVersion: number; frozen: FrozenValuation; recommendation: string },
 ): Promise<ReviewOutcome<CaseSnapshot>> {
   const row = await lockCase(trx, args.orgId, args.caseId);
   if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
@@ -65,6 +65,7 @@ export async function submitCase(
       organization_name: names.organization_name,
       organization_is_demo: names.metadata?.includes('"demo":true') ?? false,
       submitted_by_name: submitter?.name ?? null,
+      recommendation: args.recommendation,
     })
     .returningAll()
     .executeTakeFirstOrThrow();
@@ -154,6 +155,7 @@ export async function listSnapshots(db: Database, { orgId, caseId }: { orgId: st
       'case_snapshot.submitted_at',
       'case_snapshot.decided_at',
       'case_snapshot.decision_reason',
+      'case_snapshot.recommendation',
       'case_snapshot.engine_version',
       'case_snapshot.input_hash',
       'submitter.name as submitted_by_name',

@@ -35,6 +35,8 @@ export interface BoardPackData {
     submittedAt: string;
     decidedBy: string;
     decidedAt: string;
+    /** The analyst's recommendation, written at submission; null for a snapshot from before written recommendations. */
+    recommendation: string | null;
   };
   /** Every submission of the case up to this one and what became of it, oldest first, ending with this approval. */
   record: RecordEvent[];

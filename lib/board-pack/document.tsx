@@ -17,12 +17,12 @@ import { layoutTornado } from '../charts/tornado';
 import { layoutWaterfall, waterfallSteps } from '../charts/waterfall';
 import { textWidth, wrapLabel } from '../charts/wrap-label';
 import { decisionRule } from '../decision-rules';
+import { readingOfFigures } from '../figures-reading';
 import { formatChange, formatDateTime, formatMoney, formatPercent } from '../format';
 import { optionTypeLabels, type OptionType } from '../option-form';
 import { premiumSplitText } from '../premium-split';
 import { describeOption } from '../option-words';
 import type { BoardPackData, RecordEvent } from './data';
-import { recommendation } from './recommendation';
 import { pdfText } from './text';
 
 const ink = '#16232d';
@@ -330,7 +330,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
   const r = snapshot.result;
   const currency = project.currency;
   const contentWidth = (data.pageSize === 'A4' ? 595.28 : 612) - 96;
-  const rec = recommendation(r, currency);
+  const rec = readingOfFigures(r, currency);
   const rules = r.switches.map((s) => decisionRule(s, currency));
   const analysis = analyseCashFlows(snapshot.inputs.cashFlows);
   const rows = snapshot.inputs.cashFlows.rows;
@@ -369,8 +369,22 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
           <Text style={{ fontSize: 10, lineHeight: 1.4, marginTop: 8, marginBottom: 6 }}>{pdfText(premiumSplitText(r, currency)!)}</Text>
         ) : null}
         <Text style={styles.h3}>Recommendation</Text>
-        <Text style={{ fontSize: 10, lineHeight: 1.4, fontWeight: 600 }}>{rec.headline}</Text>
-        <Text style={{ fontSize: 10, lineHeight: 1.4, marginTop: 4 }}>{pdfText(rec.body)}</Text>
+        {snapshot.recommendation ? (
+          <>
+            <Text style={{ fontSize: 10, lineHeight: 1.4 }}>{pdfText(snapshot.recommendation)}</Text>
+            <Text style={{ fontSize: 8.5, lineHeight: 1.4, color: muted, marginTop: 2 }}>
+              {pdfText(`Written by ${snapshot.submittedBy} when submitting version ${snapshot.caseVersion}.`)}
+            </Text>
+          </>
+        ) : (
+          <Text style={{ fontSize: 10, lineHeight: 1.4, color: soft }}>
+            No recommendation was written when this version was submitted (it predates written recommendations).
+          </Text>
+        )}
+        {/* Leeway's own reading is labelled as such: it is a suggestion, never the recommendation. */}
+        <Text style={{ fontSize: 8.5, lineHeight: 1.4, color: soft, marginTop: 6 }}>
+          {pdfText(`Leeway's reading of the figures (generated, for reference): ${rec.headline} ${rec.body}`)}
+        </Text>
         <View wrap={false}>
           <Text style={styles.h3}>NPV with and without flexibility</Text>
           <NpvChart data={data} width={contentWidth} />

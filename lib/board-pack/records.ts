@@ -64,6 +64,7 @@ export async function boardPackData(orgId: string, snapshotId: string, pageSize:
       submittedAt: new Date(row.submitted_at).toISOString(),
       decidedBy: row.decided_by_name ?? 'a former member',
       decidedAt: new Date(row.decided_at).toISOString(),
+      recommendation: row.recommendation,
     },
     record,
   };

@@ -13,5 +13,6 @@ export function presentSnapshot(s: CaseSnapshot) {
     submittedAt: s.submitted_at,
     decidedAt: s.decided_at,
     decisionReason: s.decision_reason,
+    recommendation: s.recommendation,
   };
 }

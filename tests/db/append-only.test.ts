@@ -27,7 +27,9 @@ describe('append-only records', () => {
     const frozen = { inputs: {}, model: {}, result: { expandedNpv: 1 }, engineVersion: 'test', inputHash: 'h' };
     const submitted = await db
       .transaction()
-      .execute((trx) => submitCase(trx, { orgId: kestrel, caseId: c.id, role: 'analyst', userId: analyst, caseVersion: c.version, frozen }));
+      .execute((trx) =>
+        submitCase(trx, { orgId: kestrel, caseId: c.id, role: 'analyst', userId: analyst, caseVersion: c.version, frozen, recommendation: 'Proceed (test).' }),
+      );
     expect(submitted.ok).toBe(true);
     if (!submitted.ok) return;
     expect(submitted.value.project_name).toBeTruthy();
@@ -40,6 +42,10 @@ describe('append-only records', () => {
     );
     // Frozen columns never change, even while in review.
     await expect(sql`update case_snapshot set result = '{"expandedNpv": 99}' where id = ${submitted.value.id}`.execute(db)).rejects.toThrow(/frozen/);
+    // Nor may a decision rewrite the analyst's recommendation on the way (migration 0009).
+    await expect(
+      sql`update case_snapshot set status = 'returned', recommendation = 'Something else' where id = ${submitted.value.id}`.execute(db),
+    ).rejects.toThrow(/frozen/);
     const decided = await db
       .transaction()
       .execute((trx) => decideCase(trx, { orgId: kestrel, caseId: c.id, role: 'reviewer', userId: reviewer, action: 'approve' }));

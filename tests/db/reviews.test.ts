@@ -25,7 +25,9 @@ async function freshCase() {
 }
 
 const submit = (caseId: string, caseVersion = 1) =>
-  db.transaction().execute((trx) => submitCase(trx, { orgId: kestrel, caseId, role: 'analyst', userId: analyst, caseVersion, frozen }));
+  db
+    .transaction()
+    .execute((trx) => submitCase(trx, { orgId: kestrel, caseId, role: 'analyst', userId: analyst, caseVersion, frozen, recommendation: 'Proceed (test).' }));
 const approve = (caseId: string) =>
   db.transaction().execute((trx) => decideCase(trx, { orgId: kestrel, caseId, role: 'reviewer', userId: reviewer, action: 'approve' }));
 
@@ -54,11 +56,19 @@ describe('review workflow', () => {
   it('refuses the wrong role, a stale version, and another organisation', async () => {
     const c = await freshCase();
     expect(
-      await db.transaction().execute((trx) => submitCase(trx, { orgId: kestrel, caseId: c.id, role: 'reviewer', userId: reviewer, caseVersion: 1, frozen })),
+      await db
+        .transaction()
+        .execute((trx) =>
+          submitCase(trx, { orgId: kestrel, caseId: c.id, role: 'reviewer', userId: reviewer, caseVersion: 1, frozen, recommendation: 'Proceed (test).' }),
+        ),
     ).toMatchObject({ ok: false, code: 'forbidden' });
     expect(await submit(c.id, 7)).toMatchObject({ ok: false, code: 'conflict' });
     expect(
-      await db.transaction().execute((trx) => submitCase(trx, { orgId: harrow, caseId: c.id, role: 'analyst', userId: analyst, caseVersion: 1, frozen })),
+      await db
+        .transaction()
+        .execute((trx) =>
+          submitCase(trx, { orgId: harrow, caseId: c.id, role: 'analyst', userId: analyst, caseVersion: 1, frozen, recommendation: 'Proceed (test).' }),
+        ),
     ).toMatchObject({
       ok: false,
       code: 'not_found',

@@ -70,6 +70,7 @@ const declared = {
     organization_is_demo: 'nullable',
     submitted_by_name: 'nullable',
     decided_by_name: 'nullable',
+    recommendation: 'nullable',
   },
   sign_in_failure: { email: 'not null', failures: 'not null', last_failure_at: 'not null' },
   invitation: {

@@ -27,17 +27,19 @@ describe('the portfolio and project pages', () => {
     await executive.page.goto('/portfolio');
     const row = executive.page.getByRole('row', { name: /Phased bio-resin plant/ });
     await expect.poll(() => row.getByText('Approved').isVisible(), { timeout: 30_000 }).toBe(true);
+    // The project's latest approval, whichever of its cases it was (other tests approve cases too).
     const approved = await db
       .selectFrom('case_snapshot')
-      .select(['case_version', 'case_name'])
-      .where('case_id', '=', plant.caseId)
-      .where('status', '=', 'approved')
-      .orderBy('decided_at', 'desc')
+      .innerJoin('case', 'case.id', 'case_snapshot.case_id')
+      .select(['case_snapshot.case_id', 'case_snapshot.case_version', 'case_snapshot.case_name'])
+      .where('case.project_id', '=', plant.projectId)
+      .where('case_snapshot.status', '=', 'approved')
+      .orderBy('case_snapshot.decided_at', 'desc')
       .executeTakeFirstOrThrow();
     expect(await row.textContent()).toContain(`${approved.case_name} v${approved.case_version}`);
     const link = row.getByRole('link', { name: /^Board pack of Phased bio-resin plant/ });
     const href = await link.getAttribute('href');
-    expect(href).toBe(`/api/v1/cases/${plant.caseId}/board-pack?size=A4`);
+    expect(href).toBe(`/api/v1/cases/${approved.case_id}/board-pack?size=A4`);
     const pdf = await executive.page.request.get(href!);
     expect([pdf.status(), pdf.headers()['content-type']]).toEqual([200, 'application/pdf']);
     // A project with nothing approved says so instead of showing a link.

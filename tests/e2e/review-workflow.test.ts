@@ -38,6 +38,13 @@ async function openReviewTab(page: Page) {
   await expect.poll(() => page.getByRole('heading', { name: 'Review history' }).isVisible(), { timeout: 20_000 }).toBe(true);
 }
 
+/** Submits as an analyst does: the dialog asks for the recommendation, typed key by key. */
+async function submitWithRecommendation(page: Page, text: string) {
+  await page.getByRole('button', { name: 'Submit for review…' }).click();
+  await page.getByLabel('Your recommendation to the committee').pressSequentially(text);
+  await page.getByRole('dialog').getByRole('button', { name: 'Submit for review' }).click();
+}
+
 /** The page's text, as pdftotext reads it, with line breaks as spaces. */
 function pdfText(pdf: Buffer): string {
   const dir = mkdtempSync(path.join(tmpdir(), 'leeway-pack-'));
@@ -50,7 +57,7 @@ describe('review workflow', () => {
   it('goes from submission through a return and a resubmission to approval and the board pack', async () => {
     const analyst = await signedInPage('analyst@kestrelbay.example');
     await openReviewTab(analyst.page);
-    await analyst.page.getByRole('button', { name: 'Submit for review' }).click();
+    await submitWithRecommendation(analyst.page, 'Proceed with phase 1; keep the sale option open.');
     await expect
       .poll(() => analyst.page.getByText('Submitted for review; the reviewers have been told by e-mail.').isVisible(), { timeout: 20_000 })
       .toBe(true);
@@ -90,7 +97,7 @@ describe('review workflow', () => {
     await expect
       .poll(() => analyst.page.getByText('Justify the volatility before approval.', { exact: false }).first().isVisible(), { timeout: 20_000 })
       .toBe(true);
-    await analyst.page.getByRole('button', { name: 'Submit for review' }).click();
+    await submitWithRecommendation(analyst.page, 'Proceed; volatility now justified from the history.');
     await expect
       .poll(() => analyst.page.getByText('Submitted for review; the reviewers have been told by e-mail.').isVisible(), { timeout: 20_000 })
       .toBe(true);
@@ -144,6 +151,10 @@ describe('review workflow', () => {
     expect(text).toContain('Tomasz Okafor');
     // The record holds the whole road: the first submission, its return with the reason, the resubmission and the approval.
     expect(text).toContain('Returned: “Justify the volatility before approval.”');
+    // The recommendation is the analyst's own, as written at submission; Leeway's reading is labelled as generated.
+    expect(text).toContain('Proceed; volatility now justified from the history.');
+    expect(text).toContain('Written by Priya Lindqvist when submitting version');
+    expect(text).toContain("Leeway's reading of the figures (generated, for reference)");
     expect(text.match(/Submitted for review/g)).toHaveLength(2);
     expect(text).toContain(decisionRule(result.switches[0]!, 'EUR').text.slice(0, 40));
 
@@ -169,7 +180,7 @@ describe('review workflow', () => {
     // The other organisation's member takes, in turn, the role each route needs, so only the organisation differs.
     const actAs = (role: string) => db.updateTable('member').set({ role }).where('id', '=', harrowMember.id).execute();
     const routes: ['get' | 'post', string, string, unknown?][] = [
-      ['post', 'analyst', `/api/v1/cases/${caseId}/submit`],
+      ['post', 'analyst', `/api/v1/cases/${caseId}/submit`, { recommendation: 'Not yours to submit.' }],
       ['post', 'reviewer', `/api/v1/cases/${caseId}/approve`],
       ['post', 'reviewer', `/api/v1/cases/${caseId}/return`, { reason: 'Not yours to return.' }],
       ['get', 'viewer', `/api/v1/cases/${caseId}/comments`],

@@ -58,7 +58,7 @@ const matrix: [Method, string, Role[], Probe?][] = [
   ['GET', '/api/v1/cases/:case/export.xlsx', ALL],
   ['GET', '/api/v1/cases/:case/snapshots', ALL],
   ['POST', '/api/v1/cases/:case/cash-flows/import', BUILDERS, { text: 'not a workbook', status: 415 }],
-  ['POST', '/api/v1/cases/:case/submit', ['analyst']],
+  ['POST', '/api/v1/cases/:case/submit', ['analyst'], { json: { recommendation: '' }, status: 422, valid: { recommendation: 'Not yours.' } }],
   ['POST', '/api/v1/cases/:case/duplicate', BUILDERS, { json: { name: 5 }, status: 422, valid: { name: 'Copy' } }],
   ['POST', '/api/v1/cases/:case/approve', ['reviewer']],
   ['POST', '/api/v1/cases/:case/withdraw', ['analyst']],

@@ -161,7 +161,7 @@ describe('approvals', () => {
 
   it('are never decided by the person who submitted, even after their role changed to reviewer', async () => {
     const analyst = await as('analyst@kestrelbay.example');
-    expect((await analyst.page.request.post(`/api/v1/cases/${caseId}/submit`)).status()).toBe(201);
+    expect((await analyst.page.request.post(`/api/v1/cases/${caseId}/submit`, { data: { recommendation: 'Proceed.' } })).status()).toBe(201);
     const setRole = (role: string) =>
       db
         .updateTable('member')

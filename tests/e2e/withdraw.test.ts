@@ -30,7 +30,9 @@ describe('withdrawing a submission', () => {
 
     await analyst.page.goto(url);
     await analyst.page.getByRole('tab', { name: 'Review' }).click();
-    await analyst.page.getByRole('button', { name: 'Submit for review' }).click();
+    await analyst.page.getByRole('button', { name: 'Submit for review…' }).click();
+    await analyst.page.getByLabel('Your recommendation to the committee').pressSequentially('Build the pilot line in two stages.');
+    await analyst.page.getByRole('dialog').getByRole('button', { name: 'Submit for review' }).click();
     await expect.poll(() => analyst.page.getByRole('button', { name: 'Withdraw my submission' }).isVisible(), { timeout: 30_000 }).toBe(true);
 
     // Nobody else is offered the button, and the server refuses them too.
@@ -38,6 +40,8 @@ describe('withdrawing a submission', () => {
     await reviewer.page.goto(url);
     await reviewer.page.getByRole('tab', { name: 'Review' }).click();
     await expect.poll(() => reviewer.page.getByRole('button', { name: 'Approve' }).isVisible(), { timeout: 30_000 }).toBe(true);
+    // The reviewer reads the analyst's recommendation beside the actions.
+    expect(await reviewer.page.getByText('Build the pilot line in two stages.').isVisible()).toBe(true);
     expect(await reviewer.page.getByRole('button', { name: 'Withdraw my submission' }).count()).toBe(0);
     expect((await reviewer.page.request.post(`/api/v1/cases/${caseId}/withdraw`)).status()).toBe(403);
     const admin = await signedInPage('admin@kestrelbay.example');
@@ -50,7 +54,7 @@ describe('withdrawing a submission', () => {
     await expect
       .poll(() => analyst.page.getByText('Submission withdrawn. The case is a draft again', { exact: false }).isVisible(), { timeout: 30_000 })
       .toBe(true);
-    await expect.poll(() => analyst.page.getByRole('button', { name: 'Submit for review' }).isVisible(), { timeout: 30_000 }).toBe(true);
+    await expect.poll(() => analyst.page.getByRole('button', { name: 'Submit for review…' }).isVisible(), { timeout: 30_000 }).toBe(true);
     await expect.poll(() => analyst.page.getByRole('cell', { name: /Withdrawn/ }).isVisible(), { timeout: 30_000 }).toBe(true);
 
     const after = (await (await analyst.page.request.get(`/api/v1/cases/${caseId}`)).json()).case;

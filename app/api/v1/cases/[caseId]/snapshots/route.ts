@@ -27,6 +27,7 @@ export const GET = withAuth<{ caseId: string }>(
         decidedAt: s.decided_at,
         decidedBy: s.decided_by_name,
         decisionReason: s.decision_reason,
+        recommendation: s.recommendation,
         engineVersion: s.engine_version,
         inputHash: s.input_hash,
         expandedNpv: s.expanded_npv,

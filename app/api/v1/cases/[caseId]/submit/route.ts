@@ -1,5 +1,6 @@
-// POST /api/v1/cases/{id}/submit – value the case, freeze the snapshot and send it for review
+// POST /api/v1/cases/{id}/submit – value the case, freeze the snapshot with the analyst's recommendation ({ recommendation }) and send it for review
 import { NextResponse } from 'next/server';
+import { z } from 'zod';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { submitCase } from '@/db/queries/reviews';
@@ -15,8 +16,13 @@ import { valueStoredCase } from '@/lib/value-case';
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
-export const POST = withAuth<{ caseId: string }>(
-  async ({ member, params, request }) => {
+/** The analyst's own recommendation to the committee: the board pack prints it (Leeway's reading of the figures is only a suggestion). */
+const submitSchema = z.object({
+  recommendation: z.string().trim().min(1, 'Write your recommendation to the committee.').max(4000, 'Keep the recommendation under 4,000 characters.'),
+});
+
+export const POST = withAuth<{ caseId: string }, typeof submitSchema>(
+  async ({ member, params, request, body }) => {
     const stored = await loadCaseRef(member.orgId, params.caseId);
     // Refuse early (before the valuation) when the status does not allow it; the transaction checks again.
     const early = checkTransition(member.role, 'submit', stored.status);
@@ -36,6 +42,7 @@ export const POST = withAuth<{ caseId: string }>(
           engineVersion: valuation.result.engineVersion,
           inputHash: valuation.inputHash,
         },
+        recommendation: body.recommendation,
       });
       if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
       // The submitted figures are also the case's latest run, so every list shows them beside
@@ -64,5 +71,5 @@ export const POST = withAuth<{ caseId: string }>(
     });
     return NextResponse.json({ snapshot: presentSnapshot(snapshot) }, { status: 201 });
   },
-  { permission: { case: ['submit'] } },
+  { permission: { case: ['submit'] }, body: submitSchema },
 );

@@ -451,6 +451,7 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
                   rights={rights}
                   beforeSubmit={readyToSubmit}
                   onStatus={setStatus}
+                  figures={result}
                 />
               ),
             },

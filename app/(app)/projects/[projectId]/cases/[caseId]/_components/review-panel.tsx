@@ -12,7 +12,9 @@ import { useToast } from '@/components/ui/toast';
 import type { CaseStatus, SnapshotStatus } from '@/db/types';
 import { getJson, sendJson } from '@/lib/api-client';
 import { formatDateTime, formatMoney } from '@/lib/format';
+import { readingOfFigures } from '@/lib/figures-reading';
 import { transitions, type ReviewAction } from '@/lib/review/transitions';
+import { SubmitDialog } from './submit-dialog';
 
 export interface ReviewRights {
   canSubmit: boolean;
@@ -30,6 +32,7 @@ interface Snapshot {
   decidedAt: string | null;
   decidedBy: string | null;
   decisionReason: string | null;
+  recommendation: string | null;
   expandedNpv: number;
 }
 
@@ -59,6 +62,8 @@ interface Props {
   /** Saves pending edits first; false when saving did not work. */
   beforeSubmit: () => Promise<boolean>;
   onStatus: (status: CaseStatus) => void;
+  /** The figures on screen, for Leeway's reading offered when writing the recommendation; null while there are none. */
+  figures: { staticNpv: number; expandedNpv: number; optionPremium: number } | null;
 }
 
 /**
@@ -66,12 +71,14 @@ interface Props {
  * and the actions the signed-in role may take (submit; approve or return with a reason), plus
  * the board pack of the latest approved snapshot.
  */
-export function ReviewPanel({ caseId, currency, status, optionNames, rights, beforeSubmit, onStatus }: Props) {
+export function ReviewPanel({ caseId, currency, status, optionNames, rights, beforeSubmit, onStatus, figures }: Props) {
   const toast = useToast();
   const history = useSWR<{ status: CaseStatus; snapshots: Snapshot[] }>(`/api/v1/cases/${caseId}/snapshots`, getJson);
   const comments = useSWR<{ comments: Comment[] }>(`/api/v1/cases/${caseId}/comments`, getJson);
   const [busy, setBusy] = useState<null | ReviewAction | 'comment'>(null);
   const [returning, setReturning] = useState(false);
+  const [submitting, setSubmitting] = useState(false);
+  const [recommendation, setRecommendation] = useState('');
   const [reason, setReason] = useState('');
   const [problem, setProblem] = useState<string | null>(null);
   const [section, setSection] = useState('general');
@@ -85,10 +92,13 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
     setProblem(null);
     try {
       if (kind === 'submit' && !(await beforeSubmit())) return;
-      await sendJson('POST', `/api/v1/cases/${caseId}/${kind}`, kind === 'return' ? { reason } : undefined);
+      const body = kind === 'return' ? { reason } : kind === 'submit' ? { recommendation } : undefined;
+      await sendJson('POST', `/api/v1/cases/${caseId}/${kind}`, body);
       onStatus(transitions[kind].to);
       setReturning(false);
       setReason('');
+      setSubmitting(false);
+      setRecommendation('');
       toast(
         kind === 'submit'
           ? 'Submitted for review; the reviewers have been told by e-mail.'
@@ -102,7 +112,7 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
       await history.mutate();
     } catch (error) {
       const message = error instanceof Error ? error.message : 'That did not work.';
-      if (kind === 'return') setProblem(message);
+      if (kind === 'return' || kind === 'submit') setProblem(message);
       else toast(message, 'error');
       await history.mutate();
     } finally {
@@ -128,6 +138,7 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
   const snapshots = history.data.snapshots;
   const latest = snapshots[0];
   const approved = snapshots.find((s) => s.status === 'approved');
+  const reading = figures ? readingOfFigures(figures, currency) : null;
 
   return (
     <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_26rem]">
@@ -143,10 +154,21 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
             </p>
           ) : null}
           {status === 'in_review' ? <p className="mt-2 text-ink-soft">The case is frozen for review: nobody can edit it until a reviewer returns it.</p> : null}
+          {status === 'in_review' && latest?.status === 'in_review' && latest.recommendation ? (
+            <blockquote className="mt-3 border-l-4 border-tide-500 bg-tide-50/60 px-3 py-2">
+              <p className="text-caption font-semibold uppercase tracking-wide text-ink-soft">Recommendation of {latest.submittedBy ?? 'the analyst'}</p>
+              <p className="mt-1 whitespace-pre-line">{latest.recommendation}</p>
+            </blockquote>
+          ) : null}
           <div className="mt-4 flex flex-wrap gap-2">
             {rights.canSubmit && (status === 'draft' || status === 'returned') ? (
-              <Button onClick={() => void act('submit')} busy={busy === 'submit'}>
-                Submit for review
+              <Button
+                onClick={() => {
+                  setProblem(null);
+                  setSubmitting(true);
+                }}
+              >
+                Submit for review…
               </Button>
             ) : null}
             {rights.canSubmit && status === 'in_review' && latest?.status === 'in_review' && latest.submittedByYou ? (
@@ -281,6 +303,16 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
           </form>
         ) : null}
       </section>
+      <SubmitDialog
+        open={submitting}
+        text={recommendation}
+        onText={setRecommendation}
+        suggestion={reading ? `${reading.headline} ${reading.body}` : null}
+        busy={busy === 'submit'}
+        problem={submitting ? problem : null}
+        onSubmit={() => void act('submit')}
+        onClose={() => setSubmitting(false)}
+      />
       <Dialog open={returning} title="Return the case to the analyst" onClose={() => setReturning(false)}>
         <form
           onSubmit={(e) => {

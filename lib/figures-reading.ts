@@ -1,10 +1,12 @@
 /**
- * The board pack's recommendation, stated as what the model indicates (the decision itself rests
- * with the organisation): whether the case is worth undertaking with its flexibility, and why.
+ * Leeway's reading of the figures, stated as what the model indicates: whether the case is worth
+ * undertaking with its flexibility, and why. It is a suggestion the analyst may start from when
+ * writing their recommendation at submission; the board pack prints it beside theirs, labelled as
+ * generated, never as the recommendation (the decision rests with the organisation).
  */
-import { formatMoney } from '../format';
+import { formatMoney } from './format';
 
-export function recommendation(
+export function readingOfFigures(
   figures: { staticNpv: number; expandedNpv: number; optionPremium: number },
   currency: string,
 ): { headline: string; body: string } {
