@@ -1,15 +1,14 @@
 /**
- * Side-by-side comparison of two to four cases (of one project or several): the headline
- * figures of each case's latest stored valuation, each option's value, and the assumptions that
- * drive them. A row "differs" when any case's value is not the first case's.
+ * Side-by-side comparison of two to four cases (of one project or several): their status and the
+ * rows of lib/comparison-rows.ts (figures of each case's latest stored valuation, options,
+ * assumptions with the volatility's source, cash flows year by year). A row "differs" when any
+ * case's value is not the first case's.
  */
 import 'server-only';
 import { db } from '@/db';
 import type { ValuationResult } from '@/lattice';
-import { analyseCashFlows } from './cash-flows';
+import { comparisonRows, type ComparisonRow } from './comparison-rows';
 import { AppError } from './errors';
-import { formatMoney, formatPercent } from './format';
-import { describeOption } from './option-words';
 import { statusLabels } from './review/transitions';
 import type { CaseInput } from './validations/case';
 import type { CaseStatus } from '@/db/types';
@@ -30,14 +29,7 @@ export interface ComparedCase {
   expandedNpv: number | null;
 }
 
-export interface ComparisonRow {
-  group: 'Valuation' | 'Options' | 'Assumptions';
-  label: string;
-  values: (string | null)[];
-  /** Raw numbers where the row is numeric, for charts and the workbook. */
-  numbers?: (number | null)[];
-  differs: boolean;
-}
+export type { ComparisonRow };
 
 export interface Comparison {
   cases: ComparedCase[];
@@ -85,77 +77,19 @@ export async function compareCases(orgId: string, caseIds: string[]): Promise<Co
     expandedNpv: results[k]?.expandedNpv ?? null,
   }));
 
-  const rows: ComparisonRow[] = [];
-  const add = (group: ComparisonRow['group'], label: string, values: (string | null)[], numbers?: (number | null)[]) =>
-    rows.push({ group, label, values, numbers, differs: values.some((v) => v !== values[0]) });
-  const money = (pick: (r: ValuationResult) => number | null) =>
-    [results.map((r, k) => (r ? formatMoney(pick(r), cases[k]!.currency) : null)), results.map((r) => (r ? pick(r) : null))] as const;
-
-  add(
-    'Valuation',
-    'Status',
-    cases.map((c) => statusLabels[c.status]),
-  );
-  add('Valuation', 'Static NPV', ...money((r) => r.staticNpv));
-  add('Valuation', 'Option premium', ...money((r) => r.optionPremium));
-  add('Valuation', 'of which a better plan', ...money((r) => r.premiumSplit?.betterPlan ?? null));
-  add('Valuation', 'of which flexibility under uncertainty', ...money((r) => r.premiumSplit?.uncertainty ?? null));
-  add('Valuation', 'Expanded NPV', ...money((r) => r.expandedNpv));
-
-  const optionIds = [...new Set(results.flatMap((r) => r?.switches.map((s) => s.id) ?? []))];
-  for (const id of optionIds) {
-    add('Options', `${id}: incremental value`, ...money((r) => r.switches.find((s) => s.id === id)?.incremental ?? null));
-    add(
-      'Options',
-      `${id}: terms`,
-      inputs.map((input, k) => {
-        const template = (input.options ?? []).find((o, j) => (o.id ?? `option ${j + 1}`) === id);
-        return template ? describeOption(template, cases[k]!.currency) : null;
-      }),
-    );
-  }
-
-  const analyses = inputs.map((input) => analyseCashFlows(input.cashFlows));
-  add(
-    'Assumptions',
-    'Underlying value V₀',
-    analyses.map((a, k) => formatMoney(a.underlyingValue, cases[k]!.currency)),
-    analyses.map((a) => a.underlyingValue),
-  );
-  add(
-    'Assumptions',
-    'Volatility',
-    inputs.map((i) => formatPercent(i.settings.volatility)),
-    inputs.map((i) => i.settings.volatility),
-  );
-  add(
-    'Assumptions',
-    'Risk-free rate',
-    inputs.map((i) => formatPercent(i.settings.riskFreeRate, 2)),
-    inputs.map((i) => i.settings.riskFreeRate),
-  );
-  add(
-    'Assumptions',
-    'WACC',
-    inputs.map((i) => formatPercent(i.cashFlows.wacc)),
-    inputs.map((i) => i.cashFlows.wacc),
-  );
-  add(
-    'Assumptions',
-    'Lattice steps',
-    inputs.map((i) => String(i.settings.steps)),
-    inputs.map((i) => i.settings.steps),
-  );
-  add(
-    'Assumptions',
-    'Tree',
-    inputs.map((i) => i.settings.tree ?? 'crr'),
-  );
-  add(
-    'Assumptions',
-    'Horizon (years)',
-    inputs.map((i) => String(i.cashFlows.rows.at(-1)?.year ?? 0)),
-    inputs.map((i) => i.cashFlows.rows.at(-1)?.year ?? 0),
-  );
+  const statusRow: ComparisonRow = {
+    group: 'Valuation',
+    label: 'Status',
+    values: cases.map((c) => statusLabels[c.status]),
+    differs: cases.some((c) => c.status !== cases[0]!.status),
+  };
+  const rows = [
+    statusRow,
+    ...comparisonRows(
+      inputs,
+      results,
+      cases.map((c) => c.currency),
+    ),
+  ];
   return { cases, rows };
 }

@@ -104,6 +104,11 @@ describe('review workflow', () => {
 
     await reviewer.page.goto(`/projects/${projectId}/cases/${caseId}`);
     await reviewer.page.getByRole('tab', { name: 'Review' }).click();
+    // Before deciding, the reviewer sees what changed since they returned version 1: the volatility, and the figures with it.
+    await expect.poll(() => reviewer.page.getByText('What changed since version 1 was returned', { exact: false }).isVisible(), { timeout: 30_000 }).toBe(true);
+    const volatilityChange = reviewer.page.getByRole('row', { name: /^Assumptions: Volatility/ });
+    expect(await volatilityChange.textContent()).toMatch(/42 %.*38 %/);
+    expect(await reviewer.page.getByRole('row', { name: /^Valuation: Expanded NPV/ }).count()).toBe(1);
     await reviewer.page.getByRole('button', { name: 'Approve' }).click();
     await expect.poll(() => reviewer.page.getByText('Approved. The board pack is ready.').isVisible(), { timeout: 30_000 }).toBe(true);
 
@@ -242,6 +247,19 @@ describe('review workflow', () => {
     expect(packAfter.equals(packBefore)).toBe(true);
     // A second revision of a draft is refused: it is edited as it is.
     expect((await page.request.post(`/api/v1/cases/${caseId}/revisions`)).status()).toBe(409);
+
+    // Submitted again unchanged, the reviewer is told these very inputs were approved before.
+    expect((await page.request.post(`/api/v1/cases/${caseId}/submit`, { data: { recommendation: 'Unchanged; resubmitted.' } })).status()).toBe(201);
+    const reviewer = await signedInPage('reviewer@kestrelbay.example');
+    await reviewer.page.goto(`/projects/${projectId}/cases/${caseId}`);
+    await reviewer.page.getByRole('tab', { name: 'Review' }).click();
+    const approvedVersion = snapshots[0].caseVersion;
+    await expect
+      .poll(() => reviewer.page.getByText(`These inputs are identical to version ${approvedVersion}, approved on`).isVisible(), { timeout: 30_000 })
+      .toBe(true);
+    // Left in review for nobody: the analyst withdraws it again.
+    expect((await page.request.post(`/api/v1/cases/${caseId}/withdraw`)).status()).toBe(200);
+    await reviewer.context.close();
     await context.close();
   });
 });

@@ -1,6 +1,7 @@
 'use client';
 
 import { usePathname, useRouter, useSearchParams } from 'next/navigation';
+import { useState } from 'react';
 import useSWR from 'swr';
 import { NpvComparisonChart } from '@/components/charts/npv-comparison-chart';
 import { LoadError, LoadingBlock } from '@/components/load-state';
@@ -44,6 +45,8 @@ export function CompareView() {
   const all = useSWR<{ cases: CaseOption[] }>('/api/v1/cases', getJson);
   const query = selected.length >= 2 ? `/api/v1/compare?cases=${selected.join(',')}` : null;
   const comparison = useSWR<ComparisonJson>(query, getJson);
+  const [onlyDifferences, setOnlyDifferences] = useState(false);
+  const shownRows = (comparison.data?.rows ?? []).filter((r) => r.differs || !onlyDifferences);
 
   const toggle = (id: string) => {
     const next = selected.includes(id) ? selected.filter((x) => x !== id) : [...selected, id].slice(0, MAX);
@@ -92,9 +95,13 @@ export function CompareView() {
           <>
             <div className="flex flex-wrap items-center justify-between gap-3">
               <p className="text-caption text-ink-muted">
-                Figures from each case&rsquo;s latest stored valuation. Rows marked “differs” are not the same in every case; cells unlike the first case are
-                tinted.
+                Figures from each case&rsquo;s latest stored valuation; inputs as typed. Rows marked “differs” are not the same in every case; cells unlike the
+                first case are tinted. {comparison.data.rows.filter((r) => r.differs).length} of {comparison.data.rows.length} rows differ.
               </p>
+              <label className="flex items-center gap-2 text-body">
+                <input type="checkbox" checked={onlyDifferences} onChange={(e) => setOnlyDifferences(e.target.checked)} className="h-4 w-4" />
+                Only rows that differ
+              </label>
               <a
                 href={`/api/v1/compare.xlsx?cases=${selected.join(',')}`}
                 className="inline-flex items-center rounded-md border border-line-strong bg-paper-raised px-4 py-2 font-medium hover:bg-paper-sunk"
@@ -124,13 +131,10 @@ export function CompareView() {
                   </tr>
                 </thead>
                 <tbody>
-                  {comparison.data.rows.map((row, k) => (
-                    <tr
-                      key={`${row.group}:${row.label}`}
-                      className={k > 0 && comparison.data!.rows[k - 1]!.group !== row.group ? 'border-t-2 border-line-strong' : ''}
-                    >
+                  {shownRows.map((row, k) => (
+                    <tr key={`${row.group}:${row.label}`} className={k > 0 && shownRows[k - 1]!.group !== row.group ? 'border-t-2 border-line-strong' : ''}>
                       <th scope="row" className="border-b border-line px-4 py-2 text-left font-normal">
-                        {k === 0 || comparison.data!.rows[k - 1]!.group !== row.group ? (
+                        {k === 0 || shownRows[k - 1]!.group !== row.group ? (
                           <span className="block text-caption uppercase tracking-wide text-ink-muted">{row.group}</span>
                         ) : null}
                         {row.label}

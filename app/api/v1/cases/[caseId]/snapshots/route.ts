@@ -1,10 +1,12 @@
-// GET /api/v1/cases/{id}/snapshots – the case's review history: every frozen snapshot and its decision
+// GET /api/v1/cases/{id}/snapshots – the case's review history: every frozen snapshot and its decision, and for a
+// submission in review what changed since the version last returned and whether the same inputs were approved before
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { findCase } from '@/db/queries/cases';
 import { listSnapshots } from '@/db/queries/reviews';
 import { withAuth } from '@/lib/api';
 import { AppError } from '@/lib/errors';
+import { versionChanges } from '@/lib/review/version-changes';
 
 export const dynamic = 'force-dynamic';
 
@@ -13,8 +15,10 @@ export const GET = withAuth<{ caseId: string }>(
     const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
     if (!found) throw new AppError('not_found', 'No such case in your organisation.');
     const snapshots = await listSnapshots(db, { orgId: member.orgId, caseId: found.id });
+    const project = await db.selectFrom('project').select('currency').where('id', '=', found.project_id).executeTakeFirstOrThrow();
     return NextResponse.json({
       status: found.status,
+      changes: await versionChanges(member.orgId, found.id, project.currency),
       snapshots: snapshots.map((s) => ({
         id: s.id,
         caseVersion: s.case_version,

@@ -15,6 +15,7 @@ import { formatDateTime, formatMoney } from '@/lib/format';
 import { readingOfFigures } from '@/lib/figures-reading';
 import { transitions, type ReviewAction } from '@/lib/review/transitions';
 import { SubmitDialog } from './submit-dialog';
+import { VersionChanges, type VersionChangesJson } from './version-changes';
 
 export interface ReviewRights {
   canSubmit: boolean;
@@ -73,7 +74,7 @@ interface Props {
  */
 export function ReviewPanel({ caseId, currency, status, optionNames, rights, beforeSubmit, onStatus, figures }: Props) {
   const toast = useToast();
-  const history = useSWR<{ status: CaseStatus; snapshots: Snapshot[] }>(`/api/v1/cases/${caseId}/snapshots`, getJson);
+  const history = useSWR<{ status: CaseStatus; snapshots: Snapshot[]; changes: VersionChangesJson | null }>(`/api/v1/cases/${caseId}/snapshots`, getJson);
   const comments = useSWR<{ comments: Comment[] }>(`/api/v1/cases/${caseId}/comments`, getJson);
   const [busy, setBusy] = useState<null | ReviewAction | 'comment'>(null);
   const [returning, setReturning] = useState(false);
@@ -153,13 +154,16 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
               Returned by {latest.decidedBy ?? 'a reviewer'} on {formatDateTime(latest.decidedAt!)}: “{latest.decisionReason}”
             </p>
           ) : null}
-          {status === 'in_review' ? <p className="mt-2 text-ink-soft">The case is frozen for review: nobody can edit it until a reviewer returns it.</p> : null}
+          {status === 'in_review' ? (
+            <p className="mt-2 text-ink-soft">The case is frozen for review: nobody can edit it until a reviewer returns it or its analyst withdraws it.</p>
+          ) : null}
           {status === 'in_review' && latest?.status === 'in_review' && latest.recommendation ? (
             <blockquote className="mt-3 border-l-4 border-tide-500 bg-tide-50/60 px-3 py-2">
               <p className="text-caption font-semibold uppercase tracking-wide text-ink-soft">Recommendation of {latest.submittedBy ?? 'the analyst'}</p>
               <p className="mt-1 whitespace-pre-line">{latest.recommendation}</p>
             </blockquote>
           ) : null}
+          {status === 'in_review' && history.data.changes ? <VersionChanges changes={history.data.changes} /> : null}
           <div className="mt-4 flex flex-wrap gap-2">
             {rights.canSubmit && (status === 'draft' || status === 'returned') ? (
               <Button

@@ -1,0 +1,46 @@
+/**
+ * What a reviewer needs to know about a submission before deciding: what changed since the
+ * version they returned (every differing row of lib/comparison-rows.ts, inputs and results), and
+ * whether the same content was approved before. Read from the frozen snapshots alone.
+ */
+import 'server-only';
+import { db } from '@/db';
+import type { ValuationResult } from '@/lattice';
+import { comparisonRows, type ComparisonRow } from '../comparison-rows';
+import type { CaseInput } from '../validations/case';
+
+export interface VersionChanges {
+  /** The version last returned before this submission, and what differs from it; null when none was returned. */
+  sinceReturned: { caseVersion: number; decidedAt: string; rows: ComparisonRow[] } | null;
+  /** An earlier approved version with exactly these inputs; null when there is none. */
+  sameAsApproved: { caseVersion: number; decidedAt: string } | null;
+}
+
+export async function versionChanges(orgId: string, caseId: string, currency: string): Promise<VersionChanges | null> {
+  const snapshots = await db
+    .selectFrom('case_snapshot')
+    .select(['id', 'case_version', 'status', 'inputs', 'result', 'decided_at'])
+    .where('organization_id', '=', orgId)
+    .where('case_id', '=', caseId)
+    .orderBy('submitted_at', 'desc')
+    .execute();
+  const [current, ...earlier] = snapshots;
+  if (!current || current.status !== 'in_review') return null;
+  const returned = earlier.find((s) => s.status === 'returned');
+  // jsonb keeps its keys sorted, so equal inputs read back as equal text.
+  const same = earlier.find((s) => s.status === 'approved' && JSON.stringify(s.inputs) === JSON.stringify(current.inputs));
+  return {
+    sinceReturned: returned
+      ? {
+          caseVersion: returned.case_version,
+          decidedAt: new Date(returned.decided_at!).toISOString(),
+          rows: comparisonRows(
+            [returned.inputs as CaseInput, current.inputs as CaseInput],
+            [returned.result as ValuationResult, current.result as ValuationResult],
+            [currency, currency],
+          ).filter((row) => row.differs),
+        }
+      : null,
+    sameAsApproved: same ? { caseVersion: same.case_version, decidedAt: new Date(same.decided_at!).toISOString() } : null,
+  };
+}
