@@ -3,7 +3,8 @@
 import { select, zoom, zoomIdentity, type ZoomBehavior } from 'd3';
 import { useEffect, useRef } from 'react';
 import type { NodeGrid } from '@/lattice';
-import { layoutLatticeTree, NODE_HEIGHT, NODE_WIDTH } from '@/lib/charts/lattice-tree';
+import { NODE_HEIGHT, NODE_WIDTH } from '@/lib/charts/lattice-tree';
+import { layoutLatticeWindow, type LatticeWindow } from '@/lib/charts/lattice-window';
 import { formatNumber } from '@/lib/format';
 
 /** Fills for decisions, in order; continuing is always white. The decision's name is printed on the node too. */
@@ -12,22 +13,23 @@ export const decisionFills = ['#cfe7e8', '#f7e3d6', '#dcebdc', '#f5dcd6', '#e6e0
 interface Props {
   grid: NodeGrid;
   mode: string;
-  steps: number;
+  frame: LatticeWindow;
   selected: { step: number; node: number } | null;
   onSelect: (ref: { step: number; node: number }) => void;
   decisionOrder: string[];
 }
 
 /**
- * The first steps of the lattice as a tree: each node shows the project's value (V) and the
- * mode's value with flexibility (W), and names the decision taken there. Drag to pan, scroll
- * or pinch to zoom; nodes are buttons (Tab, Enter) that open the inspector.
+ * A window onto the lattice as a tree (lib/charts/lattice-window.ts): each node shows the
+ * project's value (V) and the mode's value with flexibility (W), and names the decision taken
+ * there. Drag to pan, scroll or pinch to zoom; nodes are buttons (Tab, Enter) that open the
+ * inspector.
  */
-export function LatticeTree({ grid, mode, steps, selected, onSelect, decisionOrder }: Props) {
+export function LatticeTree({ grid, mode, frame, selected, onSelect, decisionOrder }: Props) {
   const svgRef = useRef<SVGSVGElement>(null);
   const layerRef = useRef<SVGGElement>(null);
   const zoomRef = useRef<ZoomBehavior<SVGSVGElement, unknown> | null>(null);
-  const layout = layoutLatticeTree(grid, mode, steps);
+  const layout = layoutLatticeWindow(grid, mode, frame);
   const viewHeight = Math.min(560, Math.max(260, layout.height));
 
   useEffect(() => {
@@ -57,7 +59,8 @@ export function LatticeTree({ grid, mode, steps, selected, onSelect, decisionOrd
       observer.disconnect();
       svg.on('.zoom', null);
     };
-  }, [layout.width, layout.height, viewHeight]);
+    // A new window is fitted afresh.
+  }, [layout.width, layout.height, viewHeight, frame.from, frame.steps, frame.centre]);
 
   const zoomBy = (k: number) => svgRef.current && zoomRef.current && select(svgRef.current).call(zoomRef.current.scaleBy, k);
   const fillOf = (decision: string | null) => (decision === null ? '#ffffff' : decisionFills[decisionOrder.indexOf(decision) % decisionFills.length]);
@@ -78,7 +81,7 @@ export function LatticeTree({ grid, mode, steps, selected, onSelect, decisionOrd
         height={viewHeight}
         className="cursor-grab touch-none active:cursor-grabbing"
         role="group"
-        aria-label={`Lattice, first ${steps} steps, mode ${mode}`}
+        aria-label={`Lattice, steps ${frame.from} to ${frame.from + frame.steps}, mode ${mode}`}
       >
         <g ref={layerRef}>
           {layout.edges.map((e) => (
