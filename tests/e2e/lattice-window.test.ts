@@ -2,7 +2,8 @@
  * The lattice is navigable beyond its first steps, in Chromium: the analyst jumps to the first
  * node where a right is used (found in the node grid the engine returns), the window moves there
  * with the node selected and explained, the window moves on by buttons and a typed step, and a
- * node is chosen with the keyboard alone. The demo plant's figures are invented.
+ * node is chosen with the keyboard alone; the exercise timing by year opens by keyboard too. The
+ * demo plant's figures are invented.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
@@ -59,6 +60,16 @@ describe('the lattice window', () => {
     await page.keyboard.press('Enter');
     expect(await node.getAttribute('aria-pressed')).toBe('true');
     expect(await node.getAttribute('aria-label')).toMatch(/^Step 30, node \d+:/);
+
+    // The timing of each right's first use, year by year, opens by keyboard too (not a hover tooltip only).
+    await page.getByRole('tab', { name: 'Results' }).click();
+    const byYear = page.locator('summary', { hasText: 'By year' }).first();
+    await expect.poll(() => byYear.isVisible(), { timeout: 30_000 }).toBe(true);
+    await byYear.focus();
+    await page.keyboard.press('Enter');
+    const list = page.getByRole('list', { name: /^Probability of first exercise of / }).first();
+    await expect.poll(() => list.isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(await list.textContent()).toMatch(/year \d+–\d+: \d+\.\d %/);
     await context.close();
   }, 120_000);
 });

@@ -12,7 +12,11 @@ import { formatMoney, formatPercent } from '@/lib/format';
 import { premiumSplitText } from '@/lib/premium-split';
 import { optionTypeLabels, type OptionType } from '@/lib/option-form';
 
-/** Probability of first exercise per year (summed over the steps of each year), as small bars with the numbers in a tooltip. */
+/**
+ * Probability of first exercise per year (summed over the steps of each year), as small bars;
+ * the numbers are in a disclosure that opens by keyboard as well as by pointer (and in the
+ * bars' tooltips).
+ */
 function TimingBars({ s }: { s: SwitchResult }) {
   const byYear = new Map<number, number>();
   for (const p of s.exerciseTiming) {
@@ -24,18 +28,28 @@ function TimingBars({ s }: { s: SwitchResult }) {
   const max = Math.max(...entries.map(([, p]) => p));
   const peak = entries.reduce((best, e) => (e[1] > best[1] ? e : best));
   return (
-    <span className="inline-flex items-end gap-2">
-      <svg width={entries.length * 9} height="24" aria-hidden>
+    <div className="flex items-start gap-2">
+      <svg width={entries.length * 9} height="24" aria-hidden className="shrink-0">
         {entries.map(([year, p], k) => (
           <rect key={year} x={k * 9} y={24 - (p / max) * 22} width="7" height={Math.max(1, (p / max) * 22)} fill="#23727a">
             <title>{`year ${year}–${year + 1}: ${formatPercent(p)}`}</title>
           </rect>
         ))}
       </svg>
-      <span className="text-caption text-ink-soft">
+      <div className="text-caption text-ink-soft">
         most likely year {peak[0]}–{peak[0] + 1} ({formatPercent(peak[1])})
-      </span>
-    </span>
+        <details className="mt-0.5">
+          <summary className="cursor-pointer text-tide-600 underline-offset-2 hover:underline">By year</summary>
+          <ul className="figures mt-1" aria-label={`Probability of first exercise of ${s.id}, by year`}>
+            {entries.map(([year, p]) => (
+              <li key={year}>
+                year {year}–{year + 1}: {formatPercent(p)}
+              </li>
+            ))}
+          </ul>
+        </details>
+      </div>
+    </div>
   );
 }
 
