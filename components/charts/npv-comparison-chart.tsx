@@ -1,6 +1,7 @@
 'use client';
 
 import { layoutNpvComparison, type NpvPair } from '@/lib/charts/npv-comparison';
+import { wrapLabel } from '@/lib/charts/wrap-label';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 
@@ -12,7 +13,6 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
   const { ref, width } = useWidth<HTMLDivElement>();
   const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(260, width * 0.32) });
   // About 7 px a character at the body size: labels never run off the left edge.
-  const maxChars = Math.floor((layout.margin.left - 16) / 7);
   return (
     <figure ref={ref} className="w-full">
       <figcaption className="mb-2 flex flex-wrap items-center gap-x-6 gap-y-1 text-caption text-ink-soft">
@@ -47,8 +47,12 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
         <line x1={layout.zeroX} x2={layout.zeroX} y1={layout.margin.top - 4} y2={layout.height - layout.margin.bottom} stroke="#66737d" strokeDasharray="3 3" />
         {layout.rows.map((r) => (
           <g key={r.id}>
-            <text x={layout.margin.left - 12} y={r.y} dy="0.35em" textAnchor="end" className="fill-ink text-body">
-              {r.label.length > maxChars ? `${r.label.slice(0, maxChars - 1)}…` : r.label}
+            <text x={layout.margin.left - 12} y={r.y} textAnchor="end" className="fill-ink text-body">
+              {wrapLabel(r.label, layout.margin.left - 16, 15, 2).map((line, k, lines) => (
+                <tspan key={k} x={layout.margin.left - 12} dy={k === 0 ? `${0.35 - (lines.length - 1) * 0.6}em` : '1.2em'}>
+                  {line}
+                </tspan>
+              ))}
             </text>
             <line x1={r.staticX} x2={r.expandedX} y1={r.y} y2={r.y} stroke="#7fbcc0" strokeWidth="6" strokeLinecap="round" />
             <circle cx={r.staticX} cy={r.y} r="6" fill="white" stroke="#3c4b57" strokeWidth="2" />

@@ -1,6 +1,7 @@
 'use client';
 
 import { layoutTornado } from '@/lib/charts/tornado';
+import { wrapLabel } from '@/lib/charts/wrap-label';
 import { formatMoney, formatPercent } from '@/lib/format';
 import type { Sensitivity } from '@/lattice';
 import { useWidth } from './use-width';
@@ -13,10 +14,19 @@ export function describeBump(s: Sensitivity, side: 'low' | 'high'): string {
   return `${input >= 1 ? '+' : '−'}${Math.round(Math.abs(input - 1) * 100)} %`;
 }
 
+/** The caption text size in pixels (tailwind.config.ts: 0.75rem), for wrapping labels. */
+const CAPTION_PX = 12;
+
 /** Expanded NPV when each input moves down (left label) and up (right label); the widest swing is on top. */
 export function TornadoChart({ sensitivities, base, currency }: { sensitivities: Sensitivity[]; base: number; currency: string }) {
   const { ref, width } = useWidth<HTMLDivElement>();
-  const layout = layoutTornado(sensitivities, base, width, { labelWidth: Math.min(240, width * 0.35) });
+  const labelWidth = Math.min(240, width * 0.35);
+  // Each label wrapped to fit its column, in full; rows grow to hold the longest.
+  const labels = new Map(
+    sensitivities.map((x) => [x.parameter, wrapLabel(`${x.label} (${describeBump(x, 'low')} / ${describeBump(x, 'high')})`, labelWidth - 14, CAPTION_PX, 4)]),
+  );
+  const lines = Math.max(1, ...[...labels.values()].map((l) => l.length));
+  const layout = layoutTornado(sensitivities, base, width, { labelWidth, rowHeight: Math.max(34, lines * 15 + 8) });
   return (
     <div ref={ref} className="w-full">
       <svg width={layout.width} height={layout.height} role="img" aria-label={`Sensitivity of expanded NPV (${currency}); base ${formatMoney(base)}`}>
@@ -45,8 +55,12 @@ export function TornadoChart({ sensitivities, base, currency }: { sensitivities:
             );
           return (
             <g key={r.sensitivity.parameter}>
-              <text x={layout.margin.left - 10} y={mid} dy="0.35em" textAnchor="end" className="fill-ink text-caption">
-                {r.sensitivity.label} ({describeBump(r.sensitivity, 'low')} / {describeBump(r.sensitivity, 'high')})
+              <text x={layout.margin.left - 10} y={mid} textAnchor="end" className="fill-ink text-caption">
+                {labels.get(r.sensitivity.parameter)!.map((line, k, lines) => (
+                  <tspan key={k} x={layout.margin.left - 10} dy={k === 0 ? `${0.35 - (lines.length - 1) * 0.6}em` : '1.2em'}>
+                    {line}
+                  </tspan>
+                ))}
               </text>
               {bar(r.lowX, 'low')}
               {bar(r.highX, 'high')}

@@ -1,15 +1,20 @@
 'use client';
 
 import { layoutWaterfall, waterfallSteps } from '@/lib/charts/waterfall';
+import { wrapLabel } from '@/lib/charts/wrap-label';
 import { formatChange, formatMoney } from '@/lib/format';
 import type { ValuationResult } from '@/lattice';
 import { useWidth } from './use-width';
+
+/** Lines of label under each bar. */
+const LABEL_LINES = 4;
 
 /** From static to expanded NPV: each right's stand-alone value and the engine's interaction, signed in text as well as colour. */
 export function WaterfallChart({ result, currency }: { result: ValuationResult; currency: string }) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const steps = waterfallSteps(result);
-  const layout = layoutWaterfall(steps, width);
+  // Room under the bars for four lines of label: an option's name (at most 64 characters) fits whole.
+  const layout = layoutWaterfall(steps, width, 300 + 28, 16 + LABEL_LINES * 14);
   return (
     <div ref={ref} className="w-full">
       <svg
@@ -47,7 +52,11 @@ export function WaterfallChart({ result, currency }: { result: ValuationResult; 
                 {b.kind === 'total' ? formatMoney(b.value) : formatChange(b.value)}
               </text>
               <text x={b.center} y={layout.height - layout.margin.bottom + 16} textAnchor="middle" className="fill-ink-soft text-caption">
-                {b.label.length > 18 ? `${b.label.slice(0, 17)}…` : b.label}
+                {wrapLabel(b.label, b.width / 0.7, 12, LABEL_LINES).map((line, k) => (
+                  <tspan key={k} x={b.center} dy={k === 0 ? 0 : 14}>
+                    {line}
+                  </tspan>
+                ))}
               </text>
             </g>
           );

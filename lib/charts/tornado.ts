@@ -18,12 +18,12 @@ export function layoutTornado(
   sensitivities: Sensitivity[],
   base: number,
   width: number,
-  options: { labelWidth?: number; rightWidth?: number } = {},
+  options: { labelWidth?: number; rightWidth?: number; rowHeight?: number } = {},
 ): TornadoLayout {
   const usable = sensitivities.filter((s) => s.low.expandedNpv !== null || s.high.expandedNpv !== null);
   const swing = (s: Sensitivity) => Math.abs((s.high.expandedNpv ?? base) - (s.low.expandedNpv ?? base));
   const sorted = [...usable].sort((a, b) => swing(b) - swing(a));
-  const rowHeight = 34;
+  const rowHeight = options.rowHeight ?? 34;
   const margin = { top: 8, right: options.rightWidth ?? 64, bottom: 28, left: options.labelWidth ?? 220 };
   const height = margin.top + margin.bottom + rowHeight * Math.max(sorted.length, 1);
   const values = sorted.flatMap((s) => [s.low.expandedNpv ?? base, s.high.expandedNpv ?? base]).concat(base);

@@ -242,7 +242,9 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
                     value={draft.name}
                     onChange={(e) => update({ name: e.target.value })}
                     maxLength={120}
-                    className="-ml-2 rounded-md border border-transparent bg-transparent px-2 py-1 text-title hover:border-line focus:border-tide-500"
+                    // As wide as the name (within the page), so a long name is never cut off.
+                    size={Math.max(12, draft.name.length + 2)}
+                    className="-ml-2 max-w-full rounded-md border border-transparent bg-transparent px-2 py-1 text-title hover:border-line focus:border-tide-500"
                   />
                 </label>
               )}
