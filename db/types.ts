@@ -213,6 +213,22 @@ export interface DB {
   volatility_simulation: VolatilitySimulationTable;
   attachment: AttachmentTable;
   sign_in_failure: SignInFailureTable;
+  portfolio_revaluation: PortfolioRevaluationTable;
+}
+
+/** A request to re-value every case whose stored figures come from an older engine (a job). */
+export interface PortfolioRevaluationTable {
+  id: Generated<string>;
+  organization_id: string;
+  requested_by: string | null;
+  status: Generated<'running' | 'done' | 'failed'>;
+  /** Cases taken; null until the worker has listed them. */
+  total: number | null;
+  done: Generated<number>;
+  failed: Generated<number>;
+  error: string | null;
+  created_at: Generated<Timestamp>;
+  finished_at: Timestamp | null;
 }
 
 export type OrganizationSettings = Selectable<OrganizationSettingsTable>;

@@ -12,6 +12,7 @@ import * as m0006 from './0006_attachments';
 import * as m0007 from './0007_safe_by_default';
 import * as m0008 from './0008_withdrawn_submissions';
 import * as m0009 from './0009_written_recommendations';
+import * as m0010 from './0010_portfolio_revaluations';
 
 export const migrations: Record<string, Migration> = {
   '0001_auth_tables': m0001,
@@ -23,4 +24,5 @@ export const migrations: Record<string, Migration> = {
   '0007_safe_by_default': m0007,
   '0008_withdrawn_submissions': m0008,
   '0009_written_recommendations': m0009,
+  '0010_portfolio_revaluations': m0010,
 };

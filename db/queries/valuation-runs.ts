@@ -1,6 +1,6 @@
 /** Stored valuation runs: the exact engine input, its hash, the result and who ran it. */
 import type { Database } from '../index';
-import type { ValuationRun } from '../types';
+import type { Case, ValuationRun } from '../types';
 
 export async function recordValuationRun(
   db: Database,
@@ -51,5 +51,25 @@ export async function listValuationRuns(db: Database, { orgId, caseId }: { orgId
     .where('valuation_run.organization_id', '=', orgId)
     .where('valuation_run.case_id', '=', caseId)
     .orderBy('valuation_run.created_at', 'desc')
+    .execute();
+}
+
+/** Cases of the organisation whose latest stored run was computed by an engine other than `engineVersion`. */
+export async function listCasesValuedByOtherEngines(db: Database, { orgId, engineVersion }: { orgId: string; engineVersion: string }): Promise<Case[]> {
+  const latest = db
+    .selectFrom('valuation_run')
+    .distinctOn('case_id')
+    .select(['case_id', 'engine_version'])
+    .where('organization_id', '=', orgId)
+    .orderBy('case_id')
+    .orderBy('created_at', 'desc')
+    .as('latest');
+  return db
+    .selectFrom('case')
+    .innerJoin(latest, 'latest.case_id', 'case.id')
+    .selectAll('case')
+    .where('case.organization_id', '=', orgId)
+    .where('latest.engine_version', '<>', engineVersion)
+    .orderBy('case.created_at')
     .execute();
 }

@@ -16,6 +16,7 @@ export const QUEUES = {
   boardPack: 'board-pack',
   simulation: 'volatility-simulation',
   simulationGaveUp: 'volatility-simulation-gave-up',
+  revaluation: 'portfolio-revaluation',
 } as const;
 
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
@@ -49,11 +50,19 @@ export interface SimulationJob {
   spec: SimulationSpec;
 }
 
+export interface RevaluationJob {
+  revaluationId: string;
+  orgId: string;
+  /** Who asked: the runs and their audit entries are theirs. */
+  userId: string;
+}
+
 export interface JobData {
   [QUEUES.mail]: MailJob;
   [QUEUES.boardPack]: BoardPackJob;
   [QUEUES.simulation]: SimulationJob;
   [QUEUES.simulationGaveUp]: SimulationJob;
+  [QUEUES.revaluation]: RevaluationJob;
 }
 
 /**
@@ -75,4 +84,6 @@ export const QUEUE_POLICIES: Record<QueueName, PgBoss.Queue> = {
     deadLetter: QUEUES.simulationGaveUp,
   },
   [QUEUES.simulationGaveUp]: { name: QUEUES.simulationGaveUp, retryLimit: 5, retryDelay: 5, retryBackoff: true, expireInSeconds: 60 },
+  // A second attempt re-values only what is still stale, so a retry is safe.
+  [QUEUES.revaluation]: { name: QUEUES.revaluation, retryLimit: 2, retryDelay: 5, retryBackoff: true, expireInSeconds: 1800 },
 };

@@ -9,6 +9,7 @@ import { databaseUrl } from '../env';
 import { deliverMail } from './deliver-mail';
 import { QUEUES, type JobData, type QueueName } from './queues';
 import { renderBoardPacks } from './render-board-packs';
+import { revaluePortfolio } from './revalue-portfolio';
 import { markSimulationGaveUp, runSimulation, stopAllSimulations } from './run-simulation';
 
 const seconds = (name: string, fallback: number) => Number(process.env[name] ?? fallback);
@@ -19,6 +20,7 @@ const CONCURRENCY: Record<QueueName, number> = {
   [QUEUES.boardPack]: 1,
   [QUEUES.simulation]: seconds('WORKER_SIMULATIONS', 1),
   [QUEUES.simulationGaveUp]: 1,
+  [QUEUES.revaluation]: 1,
 };
 
 const HANDLERS: { [Q in QueueName]: (data: JobData[Q]) => Promise<void> } = {
@@ -26,6 +28,7 @@ const HANDLERS: { [Q in QueueName]: (data: JobData[Q]) => Promise<void> } = {
   [QUEUES.boardPack]: renderBoardPacks,
   [QUEUES.simulation]: runSimulation,
   [QUEUES.simulationGaveUp]: markSimulationGaveUp,
+  [QUEUES.revaluation]: revaluePortfolio,
 };
 
 export interface RunningWorker {

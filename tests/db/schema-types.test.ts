@@ -154,6 +154,18 @@ const declared = {
     uploaded_by: 'nullable',
     created_at: 'not null',
   },
+  portfolio_revaluation: {
+    id: 'not null',
+    organization_id: 'not null',
+    requested_by: 'nullable',
+    status: 'not null',
+    total: 'nullable',
+    done: 'not null',
+    failed: 'not null',
+    error: 'nullable',
+    created_at: 'not null',
+    finished_at: 'nullable',
+  },
 } satisfies Schema;
 
 describe('db/types.ts', () => {

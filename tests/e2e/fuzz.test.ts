@@ -55,6 +55,7 @@ const routes: [string, string][] = [
   ['DELETE', '/api/v1/attachments/:id'],
   ['POST', '/api/v1/volatility/history'],
   ['POST', '/api/v1/volatility/simulations'],
+  ['POST', '/api/v1/portfolio/revaluations'],
   ['GET', '/api/v1/volatility/simulations/:id'],
   ['DELETE', '/api/v1/volatility/simulations/:id'],
   ['GET', '/api/v1/organisations/:id/settings'],

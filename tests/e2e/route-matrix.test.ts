@@ -85,6 +85,8 @@ const matrix: [Method, string, Role[], Probe?][] = [
   ['GET', '/api/v1/volatility/simulations/:simulation', ALL],
   ['DELETE', '/api/v1/volatility/simulations/:simulation', BUILDERS],
   ['GET', '/api/v1/organisations/:organisation/settings', ALL],
+  ['POST', '/api/v1/portfolio/revaluations', BUILDERS],
+  ['GET', '/api/v1/portfolio/revaluations/:revaluation', ALL],
 ];
 
 const emails: Record<Role, string> = {
@@ -125,6 +127,7 @@ const filePlaceholders: Record<string, string> = {
   attachment: 'attachmentId',
   simulation: 'simulationId',
   organisation: 'orgId',
+  revaluation: 'revaluationId',
 };
 
 const fill = (path: string) => path.replace(/:(\w+)/g, (_, key: string) => ids[key]!);
@@ -152,7 +155,7 @@ beforeAll(async () => {
   contexts.push(anonymous);
   as.anonymous = anonymous.request;
 
-  // The approved demo case, so its board pack exists; an attachment and a finished simulation on it.
+  // The approved demo case, so its board pack exists; an attachment and a finished simulation on it, and a finished re-valuation.
   const approved = await demoCase('Phased bio-resin plant', 'Base case');
   ids.case = approved.caseId;
   ids.project = approved.projectId;
@@ -193,6 +196,13 @@ beforeAll(async () => {
       .returning('id')
       .executeTakeFirstOrThrow()
   ).id;
+  ids.revaluation = (
+    await db
+      .insertInto('portfolio_revaluation')
+      .values({ organization_id: org.id, status: 'done', total: 0, finished_at: new Date() })
+      .returning('id')
+      .executeTakeFirstOrThrow()
+  ).id;
   outsiderMemberId = (
     await db
       .selectFrom('member')
@@ -206,6 +216,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await db.deleteFrom('attachment').where('id', '=', ids.attachment!).execute();
   await db.deleteFrom('volatility_simulation').where('id', '=', ids.simulation!).execute();
+  await db.deleteFrom('portfolio_revaluation').where('id', '=', ids.revaluation!).execute();
   await db.updateTable('member').set({ role: 'admin' }).where('id', '=', outsiderMemberId).execute();
   for (const c of contexts) await c.close();
   await closeBrowser();

@@ -1,14 +1,17 @@
 'use client';
 
 import Link from 'next/link';
+import { useState } from 'react';
 import useSWR from 'swr';
 import { NpvComparisonChart } from '@/components/charts/npv-comparison-chart';
 import { EmptyState } from '@/components/empty-state';
 import { LoadError, LoadingBlock } from '@/components/load-state';
+import { ENGINE_VERSION } from '@/lattice';
 import { getJson } from '@/lib/api-client';
 import { formatMoney } from '@/lib/format';
 import type { ProjectSummaryJson } from '@/lib/project-summary';
 import { PortfolioTable } from './portfolio-table';
+import { RevaluePortfolio } from './revalue-portfolio';
 
 function Figure({ label, value, note }: { label: string; value: string; note?: string }) {
   return (
@@ -22,6 +25,8 @@ function Figure({ label, value, note }: { label: string; value: string; note?: s
 
 export function PortfolioView({ canCreate }: { canCreate: boolean }) {
   const { data, error, isLoading, mutate } = useSWR<{ projects: ProjectSummaryJson[] }>('/api/v1/projects', getJson);
+  // Once a re-valuation starts, its progress and outcome stay on screen after the figures are current.
+  const [revaluing, setRevaluing] = useState(false);
   if (isLoading) return <LoadingBlock label="Loading the portfolio" lines={6} />;
   if (error || !data) return <LoadError message={error?.message ?? 'No answer from the server.'} onRetry={() => mutate()} />;
   const projects = data.projects;
@@ -46,8 +51,10 @@ export function PortfolioView({ canCreate }: { canCreate: boolean }) {
   const oneCurrency = currencies.length === 1 ? currencies[0] : undefined;
   const total = (key: 'staticNpv' | 'optionPremium' | 'expandedNpv') => valued.reduce((s, p) => s + p.latest![key], 0);
   const mixed = 'Projects use more than one currency; see each row.';
+  const stale = projects.some((p) => p.latest && p.latest.engineVersion !== ENGINE_VERSION);
   return (
     <div className="flex flex-col gap-8">
+      {canCreate && (stale || revaluing) ? <RevaluePortfolio onStarted={() => setRevaluing(true)} onFinished={() => void mutate()} /> : null}
       <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-4">
         <Figure label="Active projects valued" value={`${valued.length} of ${projects.filter((p) => p.status === 'active').length}`} />
         <Figure

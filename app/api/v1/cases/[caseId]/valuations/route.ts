@@ -1,13 +1,11 @@
 // POST /api/v1/cases/{id}/valuations – value the stored case and keep the run; GET – its runs, newest first
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
-import { recordAudit } from '@/db/queries/audit';
 import { findCase } from '@/db/queries/cases';
-import { listValuationRuns, recordValuationRun } from '@/db/queries/valuation-runs';
+import { listValuationRuns } from '@/db/queries/valuation-runs';
 import { withAuth } from '@/lib/api';
 import { AppError } from '@/lib/errors';
-import type { CaseInput } from '@/lib/validations/case';
-import { valueStoredCase } from '@/lib/value-case';
+import { valueAndStore } from '@/lib/store-valuation';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -23,30 +21,7 @@ export const POST = withAuth<Params>(
   async ({ member, params, request }) => {
     const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
     if (!stored) throw missing();
-    const { model, warnings, result, inputHash } = await valueStoredCase(stored, undefined, { owner: member.userId, signal: request.signal });
-    // The change and its audit entry commit together or not at all.
-    const run = await db.transaction().execute(async (trx) => {
-      const run = await recordValuationRun(trx, {
-        orgId: member.orgId,
-        caseId: stored.id,
-        caseVersion: stored.version,
-        input: model,
-        inputHash,
-        result,
-        engineVersion: result.engineVersion,
-        createdBy: member.userId,
-        volatilitySource: (stored.settings as CaseInput['settings']).volatilitySource ?? null,
-      });
-      await recordAudit(trx, {
-        orgId: member.orgId,
-        actorId: member.userId,
-        action: 'case.value',
-        subjectType: 'case',
-        subjectId: stored.id,
-        detail: { run: run.id, name: stored.name, ...summary(result) },
-      });
-      return run;
-    });
+    const { model, warnings, result, inputHash, run } = await valueAndStore(stored, member, { owner: member.userId, signal: request.signal });
     return NextResponse.json(
       {
         run: {

@@ -1,0 +1,38 @@
+/**
+ * A worker's side of re-valuing a portfolio: every case whose latest stored figures come from an
+ * older engine is valued again with today's and the run kept (lib/store-valuation.ts), counted
+ * on the request's row as it goes. A case the engine now refuses is counted as failed and the
+ * rest go on. A second attempt (after a worker died) takes only the cases still stale.
+ */
+import { db } from '@/db';
+import { listCasesValuedByOtherEngines } from '@/db/queries/valuation-runs';
+import { ENGINE_VERSION } from '@/lattice';
+import { valueAndStore } from '../store-valuation';
+import type { RevaluationJob } from './queues';
+
+export async function revaluePortfolio(job: RevaluationJob): Promise<void> {
+  const request = await db.selectFrom('portfolio_revaluation').select('status').where('id', '=', job.revaluationId).executeTakeFirst();
+  if (request?.status !== 'running') return;
+  const stale = await listCasesValuedByOtherEngines(db, { orgId: job.orgId, engineVersion: ENGINE_VERSION });
+  await db.updateTable('portfolio_revaluation').set({ total: stale.length, done: 0, failed: 0 }).where('id', '=', job.revaluationId).execute();
+  let failed = 0;
+  for (const [k, stored] of stale.entries()) {
+    try {
+      await valueAndStore(stored, { orgId: job.orgId, userId: job.userId }, { owner: `revaluation:${job.revaluationId}` });
+    } catch (error) {
+      failed++;
+      console.error(`[leeway worker] re-valuation ${job.revaluationId}: case ${stored.id} not valued:`, error instanceof Error ? error.message : error);
+    }
+    await db
+      .updateTable('portfolio_revaluation')
+      .set({ done: k + 1, failed })
+      .where('id', '=', job.revaluationId)
+      .execute();
+  }
+  await db
+    .updateTable('portfolio_revaluation')
+    .set({ status: 'done', finished_at: new Date() })
+    .where('id', '=', job.revaluationId)
+    .where('status', '=', 'running')
+    .execute();
+}
