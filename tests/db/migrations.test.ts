@@ -31,6 +31,7 @@ describe('migrations', () => {
       'member',
       'organization',
       'organization_settings',
+      'portfolio_revaluation',
       'project',
       'rateLimit',
       'review_comment',
