@@ -152,6 +152,17 @@ async function startEstimate(caseId: string): Promise<string> {
 const estimateState = async (id: string) =>
   (await (await api(`/api/v1/volatility/simulations/${id}`)).json()) as { status: string; progress: number; error: string | null };
 
+/** Waits until the estimate is no longer running and answers its final state. */
+const estimateEnds = (id: string, timeoutMs: number) =>
+  until(
+    'the estimate ends',
+    async () => {
+      const state = await estimateState(id);
+      return state.status === 'running' ? undefined : state;
+    },
+    timeoutMs,
+  );
+
 async function jobState(id: string): Promise<string | undefined> {
   const client = database();
   await client.connect();
@@ -194,14 +205,7 @@ async function workerKilled(caseId: string, worker: ChildProcess): Promise<Child
   worker.kill('SIGKILL');
   const killedAt = Date.now();
   const replacement = startWorker();
-  const final = await until(
-    'the estimate ends',
-    async () => {
-      const state = await estimateState(id);
-      return state.status === 'running' ? undefined : state;
-    },
-    120_000,
-  );
+  const final = await estimateEnds(id, 120_000);
   const seconds = ((Date.now() - killedAt) / 1000).toFixed(1);
   check(
     'the killed worker’s estimate is run again to the end',
@@ -258,14 +262,7 @@ async function databaseKilled(caseId: string) {
   const health = await api('/api/health');
   check('health is ok again', health.status === 200, `GET /api/health answered ${health.status}`);
   const id = await startEstimate(caseId);
-  const final = await until(
-    'the estimate ends',
-    async () => {
-      const state = await estimateState(id);
-      return state.status === 'running' ? undefined : state;
-    },
-    90_000,
-  );
+  const final = await estimateEnds(id, 90_000);
   check('the same worker runs jobs again', final.status === 'done', `an estimate started after the restart: ${final.status}`);
 }
 
@@ -280,14 +277,7 @@ async function terminated(caseId: string, app: ChildProcess, worker: ChildProces
   check('the estimate went back on the queue', state === 'retry' || state === 'created', `queue state: ${state}`);
   const again = [startApp(), startWorker()];
   await until('the app answers', async () => ((await fetch(`${base}/api/health`)).ok ? true : undefined), 60_000);
-  const final = await until(
-    'the estimate ends',
-    async () => {
-      const row = await estimateState(id);
-      return row.status === 'running' ? undefined : row;
-    },
-    90_000,
-  );
+  const final = await estimateEnds(id, 90_000);
   check('a new worker finishes it', final.status === 'done', final.status);
   await Promise.all(again.map(terminate));
 }

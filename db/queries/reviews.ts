@@ -16,6 +16,17 @@ async function lockCase(trx: Transaction<DB>, orgId: string, caseId: string) {
   return trx.selectFrom('case').selectAll().where('organization_id', '=', orgId).where('id', '=', caseId).forUpdate().executeTakeFirst();
 }
 
+/** The case's snapshot in review (at most one), with who submitted it. */
+function waitingSnapshot(trx: Transaction<DB>, orgId: string, caseId: string) {
+  return trx
+    .selectFrom('case_snapshot')
+    .select(['id', 'submitted_by'])
+    .where('organization_id', '=', orgId)
+    .where('case_id', '=', caseId)
+    .where('status', '=', 'in_review')
+    .executeTakeFirst();
+}
+
 export interface FrozenValuation {
   inputs: unknown;
   model: unknown;
@@ -82,13 +93,7 @@ export async function decideCase(
   if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
   const check = checkTransition(args.role, args.action, row.status);
   if (!check.ok) return check;
-  const waiting = await trx
-    .selectFrom('case_snapshot')
-    .select(['id', 'submitted_by'])
-    .where('organization_id', '=', args.orgId)
-    .where('case_id', '=', row.id)
-    .where('status', '=', 'in_review')
-    .executeTakeFirst();
+  const waiting = await waitingSnapshot(trx, args.orgId, row.id);
   if (!waiting) return { ok: false, code: 'conflict', message: 'There is no snapshot waiting for a decision.' };
   // Four eyes: whoever submitted a version never approves or returns it, whatever their role now.
   if (waiting.submitted_by === args.userId)
@@ -122,13 +127,7 @@ export async function withdrawSubmission(
   if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
   const check = checkTransition(args.role, 'withdraw', row.status);
   if (!check.ok) return check;
-  const waiting = await trx
-    .selectFrom('case_snapshot')
-    .select(['id', 'submitted_by'])
-    .where('organization_id', '=', args.orgId)
-    .where('case_id', '=', row.id)
-    .where('status', '=', 'in_review')
-    .executeTakeFirst();
+  const waiting = await waitingSnapshot(trx, args.orgId, row.id);
   if (!waiting) return { ok: false, code: 'conflict', message: 'There is no submission waiting for review.' };
   if (waiting.submitted_by !== args.userId) return { ok: false, code: 'forbidden', message: 'Only the person who submitted this version can withdraw it.' };
   const snapshot = await trx
