@@ -167,10 +167,6 @@ export async function listSnapshots(db: Database, { orgId, caseId }: { orgId: st
     .execute();
 }
 
-export async function findSnapshot(db: Database, { orgId, snapshotId }: { orgId: string; snapshotId: string }) {
-  return db.selectFrom('case_snapshot').selectAll().where('organization_id', '=', orgId).where('id', '=', snapshotId).executeTakeFirst();
-}
-
 export async function latestApprovedSnapshot(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
   return db
     .selectFrom('case_snapshot')

@@ -18,11 +18,6 @@ const builders: Record<TreeKind, (input: TreeInput) => TreeStep> = {
   trigeorgis: trigeorgisStep,
 };
 
-/** True when the tree matches E[V_{t+Δt}] = e^{(r−δ)Δt}·V exactly (up to rounding). */
-export function matchesFirstMoment(kind: TreeKind): boolean {
-  return kind === 'crr' || kind === 'tian';
-}
-
 /**
  * Builds one step of the chosen tree and refuses it unless 0 < p < 1 and
  * d < e^{(r−δ)Δt} < u (otherwise a riskless profit would exist on the tree).

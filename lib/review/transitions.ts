@@ -41,9 +41,6 @@ export const statusLabels: Record<CaseStatus | SnapshotStatus, string> = {
   withdrawn: 'Withdrawn',
 };
 
-/** Statuses in which a case's inputs may be saved. */
-export const editableStatuses: CaseStatus[] = ['draft', 'returned'];
-
 export type TransitionCheck = { ok: true; to: CaseStatus } | { ok: false; code: 'forbidden' | 'conflict'; message: string };
 
 export function checkTransition(role: RoleName, action: ReviewAction, status: CaseStatus): TransitionCheck {
