@@ -1,7 +1,7 @@
 /**
- * The review workflow's e-mail: reviewers hear of a submission, the analyst of a decision (the
- * reason when returned, the board pack attached when approved), each with a link back into the
- * app. The messages are queued in the transaction that records the transition, so they go out
+ * The review workflow's e-mail: reviewers hear of a submission and of its withdrawal, the analyst
+ * of a decision (the reason when returned, the board pack attached when approved), each with a
+ * link back into the app. The messages are queued in the transaction that records the transition, so they go out
  * exactly when it commits; the worker sends them and retries while the mail server is away.
  */
 import 'server-only';
@@ -25,20 +25,39 @@ interface CaseRef {
 
 const caseUrl = (c: CaseRef) => `${env.APP_URL}/projects/${c.projectId}/cases/${c.caseId}`;
 
-export async function notifySubmitted(trx: Transaction<DB>, c: CaseRef, submitter: string) {
-  const reviewers = await trx
+async function reviewerEmails(trx: Transaction<DB>, orgId: string): Promise<string[]> {
+  const rows = await trx
     .selectFrom('member')
     .innerJoin('user', 'user.id', 'member.userId')
     .select('user.email')
-    .where('member.organizationId', '=', c.orgId)
+    .where('member.organizationId', '=', orgId)
     .where('member.role', '=', 'reviewer')
     .execute();
-  for (const reviewer of reviewers)
+  return rows.map((r) => r.email);
+}
+
+export async function notifySubmitted(trx: Transaction<DB>, c: CaseRef, submitter: string) {
+  for (const email of await reviewerEmails(trx, c.orgId))
     await queueMail(
       linkMail(
-        reviewer.email,
+        email,
         `For review: ${c.projectName} — ${c.caseName}`,
         `${submitter} submitted “${c.caseName}” of ${c.projectName} for review. Expanded NPV in the submitted snapshot: ${formatMoney(c.expandedNpv, c.currency)}.`,
+        'Open the case',
+        caseUrl(c),
+      ),
+      trx,
+    );
+}
+
+/** Tells the reviewers that a submission they were asked to review was withdrawn, so nobody reviews it in vain. */
+export async function notifyWithdrawn(trx: Transaction<DB>, c: CaseRef, analyst: string) {
+  for (const email of await reviewerEmails(trx, c.orgId))
+    await queueMail(
+      linkMail(
+        email,
+        `Withdrawn: ${c.projectName} — ${c.caseName}`,
+        `${analyst} withdrew “${c.caseName}” of ${c.projectName} from review; nothing waits for your decision until it is submitted again.`,
         'Open the case',
         caseUrl(c),
       ),

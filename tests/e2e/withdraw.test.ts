@@ -1,7 +1,7 @@
 /**
  * An analyst takes back their own submission before a reviewer decides: in Chromium the button
  * appears only for them, the case is a draft again at the same version, the review history keeps
- * the snapshot marked "Withdrawn", and the audit log records it. A reviewer can then no longer
+ * the snapshot marked "Withdrawn", the reviewers are told by e-mail, and the audit log records it. A reviewer can then no longer
  * decide on it (409); other roles are refused (403). Another organisation's analyst gets 404
  * (tests/e2e/route-matrix.test.ts).
  */
@@ -9,6 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
+import { firstLink, waitForMail } from './support/mail';
 
 let caseId = '';
 let url = '';
@@ -56,6 +57,10 @@ describe('withdrawing a submission', () => {
       .toBe(true);
     await expect.poll(() => analyst.page.getByRole('button', { name: 'Submit for review…' }).isVisible(), { timeout: 30_000 }).toBe(true);
     await expect.poll(() => analyst.page.getByRole('cell', { name: /Withdrawn/ }).isVisible(), { timeout: 30_000 }).toBe(true);
+
+    // The reviewers, told of the submission, are told of its withdrawal too.
+    const told = await waitForMail('reviewer@kestrelbay.example', /^Withdrawn: Staged pilot line — Base case$/, 60_000);
+    expect(firstLink(told)).toContain(`/cases/${caseId}`);
 
     const after = (await (await analyst.page.request.get(`/api/v1/cases/${caseId}`)).json()).case;
     expect([after.status, after.version]).toEqual(['draft', before.version]);

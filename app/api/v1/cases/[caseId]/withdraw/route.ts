@@ -1,10 +1,12 @@
-// POST /api/v1/cases/{id}/withdraw – the submitter takes back their submission before a decision; the case is a draft again
+// POST /api/v1/cases/{id}/withdraw – the submitter takes back their submission before a decision; the case is a draft again and the reviewers are told
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { withdrawSubmission } from '@/db/queries/reviews';
 import { withAuth } from '@/lib/api';
 import { AppError } from '@/lib/errors';
+import { loadCaseRef, refOf } from '@/lib/review/case-ref';
+import { notifyWithdrawn } from '@/lib/review/notify';
 import { presentSnapshot } from '@/lib/review/present';
 
 export const dynamic = 'force-dynamic';
@@ -12,9 +14,10 @@ export const runtime = 'nodejs';
 
 export const POST = withAuth<{ caseId: string }>(
   async ({ member, params }) => {
-    // The withdrawal and its audit entry commit together or not at all.
+    const ref = await loadCaseRef(member.orgId, params.caseId);
+    // The withdrawal, its audit entry and the reviewers' e-mail commit together or not at all.
     const snapshot = await db.transaction().execute(async (trx) => {
-      const outcome = await withdrawSubmission(trx, { orgId: member.orgId, caseId: params.caseId, role: member.role, userId: member.userId });
+      const outcome = await withdrawSubmission(trx, { orgId: member.orgId, caseId: ref.id, role: member.role, userId: member.userId });
       if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
       await recordAudit(trx, {
         orgId: member.orgId,
@@ -24,6 +27,7 @@ export const POST = withAuth<{ caseId: string }>(
         subjectId: outcome.value.case_id,
         detail: { name: outcome.value.case_name, snapshot: outcome.value.id },
       });
+      await notifyWithdrawn(trx, refOf(ref, (outcome.value.result as { expandedNpv: number }).expandedNpv), member.name);
       return outcome.value;
     });
     return NextResponse.json({ snapshot: presentSnapshot(snapshot) });
