@@ -1,7 +1,7 @@
 /**
  * Re-valuing a portfolio, the app's side: a request row and its job are written in one
- * transaction (one request running per organisation at a time), and reading a request settles
- * one whose job the queue gave up on, so none stays "running" for ever.
+ * transaction (one request running per organisation at a time). A request whose job the queue
+ * gave up on is marked failed by the worker (lib/jobs/revalue-portfolio.ts).
  */
 import 'server-only';
 import { sql } from 'kysely';
@@ -40,17 +40,5 @@ export async function startRevaluation(actor: { orgId: string; userId: string })
 }
 
 export async function findRevaluation(orgId: string, id: string) {
-  const row = await db.selectFrom('portfolio_revaluation').selectAll().where('organization_id', '=', orgId).where('id', '=', id).executeTakeFirst();
-  if (row?.status !== 'running') return row;
-  const job = await sql<{ state: string }>`select state from pgboss.job where id = ${id}::uuid`.execute(db);
-  const state = job.rows[0]?.state;
-  if (state !== 'failed' && state !== 'cancelled') return row;
-  return db
-    .updateTable('portfolio_revaluation')
-    .set({ status: 'failed', error: 'The worker running it stopped more than once; start it again.', finished_at: new Date() })
-    .where('id', '=', id)
-    .where('status', '=', 'running')
-    .returningAll()
-    .executeTakeFirst()
-    .then((updated) => updated ?? row);
+  return db.selectFrom('portfolio_revaluation').selectAll().where('organization_id', '=', orgId).where('id', '=', id).executeTakeFirst();
 }

@@ -2,7 +2,8 @@
  * The job queues (pg-boss, in PostgreSQL's `pgboss` schema) and what each may do on failure.
  * A queue's policy is written once here and applied by `npm run migrate`: retries only where a
  * second attempt is safe, a deadline after which PostgreSQL itself fails a job whose worker died,
- * and a dead-letter queue where the app must learn that a job gave up.
+ * and a dead-letter queue where the app must learn that a job gave up (its row is then marked
+ * failed, so nothing shows "running" for ever).
  */
 import type PgBoss from 'pg-boss';
 import type { CashFlowSchedule } from '../cash-flows';
@@ -17,6 +18,7 @@ export const QUEUES = {
   simulation: 'volatility-simulation',
   simulationGaveUp: 'volatility-simulation-gave-up',
   revaluation: 'portfolio-revaluation',
+  revaluationGaveUp: 'portfolio-revaluation-gave-up',
 } as const;
 
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
@@ -63,6 +65,7 @@ export interface JobData {
   [QUEUES.simulation]: SimulationJob;
   [QUEUES.simulationGaveUp]: SimulationJob;
   [QUEUES.revaluation]: RevaluationJob;
+  [QUEUES.revaluationGaveUp]: RevaluationJob;
 }
 
 /**
@@ -85,5 +88,13 @@ export const QUEUE_POLICIES: Record<QueueName, PgBoss.Queue> = {
   },
   [QUEUES.simulationGaveUp]: { name: QUEUES.simulationGaveUp, retryLimit: 5, retryDelay: 5, retryBackoff: true, expireInSeconds: 60 },
   // A second attempt re-values only what is still stale, so a retry is safe.
-  [QUEUES.revaluation]: { name: QUEUES.revaluation, retryLimit: 2, retryDelay: 5, retryBackoff: true, expireInSeconds: 1800 },
+  [QUEUES.revaluation]: {
+    name: QUEUES.revaluation,
+    retryLimit: 2,
+    retryDelay: 5,
+    retryBackoff: true,
+    expireInSeconds: 1800,
+    deadLetter: QUEUES.revaluationGaveUp,
+  },
+  [QUEUES.revaluationGaveUp]: { name: QUEUES.revaluationGaveUp, retryLimit: 5, retryDelay: 5, retryBackoff: true, expireInSeconds: 60 },
 };

@@ -2,7 +2,8 @@
  * A worker's side of re-valuing a portfolio: every case whose latest stored figures come from an
  * older engine is valued again with today's and the run kept (lib/store-valuation.ts), counted
  * on the request's row as it goes. A case the engine now refuses is counted as failed and the
- * rest go on. A second attempt (after a worker died) takes only the cases still stale.
+ * rest go on. A second attempt (after a worker died) takes only the cases still stale; a request
+ * the queue gave up on is marked failed (its dead-letter queue).
  */
 import { db } from '@/db';
 import { listCasesValuedByOtherEngines } from '@/db/queries/valuation-runs';
@@ -32,6 +33,16 @@ export async function revaluePortfolio(job: RevaluationJob): Promise<void> {
   await db
     .updateTable('portfolio_revaluation')
     .set({ status: 'done', finished_at: new Date() })
+    .where('id', '=', job.revaluationId)
+    .where('status', '=', 'running')
+    .execute();
+}
+
+/** Marks the request failed when the queue gave up on it. */
+export async function markRevaluationGaveUp(job: RevaluationJob): Promise<void> {
+  await db
+    .updateTable('portfolio_revaluation')
+    .set({ status: 'failed', error: 'The worker running it stopped more than once; start it again.', finished_at: new Date() })
     .where('id', '=', job.revaluationId)
     .where('status', '=', 'running')
     .execute();

@@ -9,7 +9,7 @@ import { databaseUrl } from '../env';
 import { deliverMail } from './deliver-mail';
 import { QUEUES, type JobData, type QueueName } from './queues';
 import { renderBoardPacks } from './render-board-packs';
-import { revaluePortfolio } from './revalue-portfolio';
+import { markRevaluationGaveUp, revaluePortfolio } from './revalue-portfolio';
 import { markSimulationGaveUp, runSimulation, stopAllSimulations } from './run-simulation';
 
 const seconds = (name: string, fallback: number) => Number(process.env[name] ?? fallback);
@@ -21,6 +21,7 @@ const CONCURRENCY: Record<QueueName, number> = {
   [QUEUES.simulation]: seconds('WORKER_SIMULATIONS', 1),
   [QUEUES.simulationGaveUp]: 1,
   [QUEUES.revaluation]: 1,
+  [QUEUES.revaluationGaveUp]: 1,
 };
 
 const HANDLERS: { [Q in QueueName]: (data: JobData[Q]) => Promise<void> } = {
@@ -29,6 +30,7 @@ const HANDLERS: { [Q in QueueName]: (data: JobData[Q]) => Promise<void> } = {
   [QUEUES.simulation]: runSimulation,
   [QUEUES.simulationGaveUp]: markSimulationGaveUp,
   [QUEUES.revaluation]: revaluePortfolio,
+  [QUEUES.revaluationGaveUp]: markRevaluationGaveUp,
 };
 
 export interface RunningWorker {

@@ -4,6 +4,7 @@
  * whether the same content was approved before. Read from the frozen snapshots alone.
  */
 import 'server-only';
+import { sql } from 'kysely';
 import { db } from '@/db';
 import type { ValuationResult } from '@/lattice';
 import { comparisonRows, type ComparisonRow } from '../comparison-rows';
@@ -16,19 +17,23 @@ export interface VersionChanges {
   sameAsApproved: { caseVersion: number; decidedAt: string } | null;
 }
 
-export async function versionChanges(orgId: string, caseId: string, currency: string): Promise<VersionChanges | null> {
-  const snapshots = await db
-    .selectFrom('case_snapshot')
-    .select(['id', 'case_version', 'status', 'inputs', 'result', 'decided_at'])
-    .where('organization_id', '=', orgId)
-    .where('case_id', '=', caseId)
+export async function versionChanges(orgId: string, caseId: string): Promise<VersionChanges | null> {
+  const ofCase = db.selectFrom('case_snapshot').where('organization_id', '=', orgId).where('case_id', '=', caseId);
+  const current = await ofCase.select(['id', 'inputs', 'result', 'currency']).where('status', '=', 'in_review').executeTakeFirst();
+  if (!current) return null;
+  const returned = await ofCase
+    .select(['case_version', 'inputs', 'result', 'decided_at'])
+    .where('status', '=', 'returned')
     .orderBy('submitted_at', 'desc')
-    .execute();
-  const [current, ...earlier] = snapshots;
-  if (!current || current.status !== 'in_review') return null;
-  const returned = earlier.find((s) => s.status === 'returned');
-  // jsonb keeps its keys sorted, so equal inputs read back as equal text.
-  const same = earlier.find((s) => s.status === 'approved' && JSON.stringify(s.inputs) === JSON.stringify(current.inputs));
+    .executeTakeFirst();
+  // Compared in PostgreSQL (jsonb equality), so no earlier inputs travel to the app.
+  const same = await ofCase
+    .select(['case_version', 'decided_at'])
+    .where('status', '=', 'approved')
+    .where(sql<boolean>`inputs = (select s.inputs from case_snapshot s where s.id = ${current.id})`)
+    .orderBy('decided_at', 'desc')
+    .executeTakeFirst();
+  const currency = current.currency ?? '';
   return {
     sinceReturned: returned
       ? {

@@ -15,10 +15,9 @@ export const GET = withAuth<{ caseId: string }>(
     const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
     if (!found) throw new AppError('not_found', 'No such case in your organisation.');
     const snapshots = await listSnapshots(db, { orgId: member.orgId, caseId: found.id });
-    const project = await db.selectFrom('project').select('currency').where('id', '=', found.project_id).executeTakeFirstOrThrow();
     return NextResponse.json({
       status: found.status,
-      changes: await versionChanges(member.orgId, found.id, project.currency),
+      changes: await versionChanges(member.orgId, found.id),
       snapshots: snapshots.map((s) => ({
         id: s.id,
         caseVersion: s.case_version,
