@@ -21,6 +21,7 @@
 import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import pg from 'pg';
+import { deeplyNestedBody, smallModel, twelveRightsModel } from '../tests/e2e/support/abuse';
 
 const PORT = 3200;
 const base = `http://127.0.0.1:${PORT}`;
@@ -125,18 +126,9 @@ async function signIn() {
     .join('; ');
 }
 
-// Invented figures, small enough to answer in milliseconds.
-const small = {
-  underlying: { value: 100, volatility: 0.3 },
-  riskFreeRate: 0.04,
-  horizon: 3,
-  steps: 60,
-  options: [{ type: 'abandon', salvage: 70, window: { kind: 'american', from: 0, to: 3 } }],
-};
-
 async function smallValuationMs(): Promise<number> {
   const started = Date.now();
-  const answer = await api('/api/v1/valuations?extras=false', { method: 'POST', body: JSON.stringify(small) });
+  const answer = await api('/api/v1/valuations?extras=false', { method: 'POST', body: JSON.stringify(smallModel) });
   await answer.arrayBuffer();
   return answer.status === 200 ? Date.now() - started : Infinity;
 }
@@ -175,21 +167,8 @@ async function jobState(id: string): Promise<string | undefined> {
 
 async function refusals() {
   console.log('\n1. Oversized work is refused while small work answers');
-  const deep = api('/api/v1/valuations', { method: 'POST', body: '['.repeat(100_000) + ']'.repeat(100_000) });
-  const twelve = api('/api/v1/valuations', {
-    method: 'POST',
-    body: JSON.stringify({
-      ...small,
-      horizon: 10,
-      steps: 10_000,
-      options: Array.from({ length: 12 }, (_, k) => ({
-        type: 'abandon',
-        id: `sale ${k + 1}`,
-        salvage: 40 + k,
-        window: { kind: 'american', from: k / 2, to: 10 },
-      })),
-    }),
-  });
+  const deep = api('/api/v1/valuations', { method: 'POST', body: deeplyNestedBody });
+  const twelve = api('/api/v1/valuations', { method: 'POST', body: JSON.stringify(twelveRightsModel) });
   const latencies = await Promise.all([smallValuationMs(), smallValuationMs(), smallValuationMs()]);
   const [deepStatus, twelveStatus] = await Promise.all([deep.then((r) => r.status), twelve.then((r) => r.status)]);
   check('a body nested 100,000 deep', deepStatus === 400, `answered ${deepStatus}`);

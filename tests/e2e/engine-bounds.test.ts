@@ -7,16 +7,8 @@
  */
 import type { APIRequestContext, BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { deeplyNestedBody, smallModel, twelveRightsModel } from './support/abuse';
 import { closeBrowser, newContext, signedInPage } from './support/browser';
-
-const small = {
-  underlying: { value: 100, volatility: 0.3 },
-  riskFreeRate: 0.03,
-  horizon: 3,
-  steps: 60,
-  investment: 90,
-  options: [{ type: 'abandon', salvage: 70, window: { kind: 'american', from: 0, to: 3 } }],
-};
 
 const contexts: BrowserContext[] = [];
 let analyst: APIRequestContext;
@@ -37,7 +29,7 @@ afterAll(async () => {
 
 async function smallAnswersQuickly(who: APIRequestContext) {
   const started = Date.now();
-  const answer = await who.post('/api/v1/valuations?extras=false', { data: small });
+  const answer = await who.post('/api/v1/valuations?extras=false', { data: smallModel });
   expect(answer.status()).toBe(200);
   expect(Date.now() - started).toBeLessThan(2_000);
 }
@@ -55,19 +47,8 @@ describe('the engine under abuse', () => {
   });
 
   it('refuses twelve rights at 10,000 steps at once, and a small valuation still answers', async () => {
-    const twelve = {
-      ...small,
-      horizon: 10,
-      steps: 10_000,
-      options: Array.from({ length: 12 }, (_, k) => ({
-        type: 'abandon',
-        id: `sale ${k + 1}`,
-        salvage: 40 + k,
-        window: { kind: 'american', from: k / 2, to: 10 },
-      })),
-    };
     const started = Date.now();
-    const refused = await viewer.post('/api/v1/valuations', { data: twelve });
+    const refused = await viewer.post('/api/v1/valuations', { data: twelveRightsModel });
     expect(refused.status()).toBe(422);
     expect((await refused.json()).error.message).toMatch(/over the budget/);
     expect(Date.now() - started).toBeLessThan(5_000);
@@ -77,7 +58,7 @@ describe('the engine under abuse', () => {
   it('refuses a body nested 100,000 deep before parsing it, and a small valuation still answers', async () => {
     const deep = await viewer.post('/api/v1/valuations', {
       headers: { 'content-type': 'application/json' },
-      data: Buffer.from('['.repeat(100_000) + ']'.repeat(100_000)),
+      data: Buffer.from(deeplyNestedBody),
     });
     expect(deep.status()).toBe(400);
     await smallAnswersQuickly(viewer);
@@ -86,7 +67,7 @@ describe('the engine under abuse', () => {
   it("gives one person's burst 429 with Retry-After beyond their share, and serves another person", async () => {
     // About half a second each on this machine: all six arrive while the first four run or wait.
     const heavy = {
-      ...small,
+      ...smallModel,
       steps: 1500,
       options: [
         { type: 'expand', factor: 0.5, cost: 40, window: { kind: 'american', from: 0, to: 3 } },

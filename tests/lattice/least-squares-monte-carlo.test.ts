@@ -24,7 +24,7 @@ import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
 import { xoroshiro128plus } from 'pure-rand/generator/xoroshiro128plus';
 import type { RandomGenerator } from 'pure-rand/types/RandomGenerator';
 import { describe, expect, it } from 'vitest';
-import { valueProject, type ProjectModel } from '@/lattice';
+import { valueProject, type OptionTemplate, type ProjectModel } from '@/lattice';
 
 const V0 = 100;
 const SIGMA = 0.35;
@@ -197,17 +197,20 @@ function check(rights: Rights, latticeValue: number) {
   expect(latticeValue).toBeLessThanOrEqual(high);
 }
 
+/** A model on the test's market (V0, σ, δ, r, T), 600 steps, with `options` and, when given, an investment. */
+const onTheMarket = (options: OptionTemplate[], investment?: number): ProjectModel => ({
+  underlying: { value: V0, volatility: SIGMA, payoutYield: DELTA },
+  riskFreeRate: R,
+  horizon: T,
+  steps: 600,
+  ...(investment === undefined ? {} : { investment }),
+  options,
+});
+
 describe('the lattice against an independent least-squares Monte Carlo', () => {
   it('abandon alone (a Bermudan put, which the lattice also matches with quantlib.js): the Monte Carlo itself is sound', () => {
     const rights: Rights = { modes: 2, order: [0, 1], start: 1, switches: [{ from: 1, to: 0, payoff: (v) => 90 - v }] };
-    const model: ProjectModel = {
-      underlying: { value: V0, volatility: SIGMA, payoutYield: DELTA },
-      riskFreeRate: R,
-      horizon: T,
-      steps: 600,
-      investment: 90,
-      options: [{ type: 'abandon', salvage: 90, window: { kind: 'bermudan', dates } }],
-    };
+    const model = onTheMarket([{ type: 'abandon', salvage: 90, window: { kind: 'bermudan', dates } }], 90);
     check(rights, valueProject(model, { extras: false }).optionPremium);
   }, 120_000);
   it('expand with a growing cost, and abandon for a salvage that follows the scale', () => {
@@ -223,17 +226,13 @@ describe('the lattice against an independent least-squares Monte Carlo', () => {
         { from: 1, to: 0, payoff: (v) => 1.5 * 70 - 1.5 * v },
       ],
     };
-    const model: ProjectModel = {
-      underlying: { value: V0, volatility: SIGMA, payoutYield: DELTA },
-      riskFreeRate: R,
-      horizon: T,
-      steps: 600,
-      investment: 90,
-      options: [
+    const model = onTheMarket(
+      [
         { type: 'expand', factor: 0.5, cost: { amount: 50, growth: 0.05 }, window: { kind: 'bermudan', dates } },
         { type: 'abandon', salvage: 70, window: { kind: 'bermudan', dates } },
       ],
-    };
+      90,
+    );
     const r = valueProject(model, { extras: false });
     check(rights, r.optionPremium);
   }, 120_000);
@@ -249,16 +248,10 @@ describe('the lattice against an independent least-squares Monte Carlo', () => {
         { from: 1, to: 0, payoff: (v) => 60 - v },
       ],
     };
-    const model: ProjectModel = {
-      underlying: { value: V0, volatility: SIGMA, payoutYield: DELTA },
-      riskFreeRate: R,
-      horizon: T,
-      steps: 600,
-      options: [
-        { type: 'defer', cost: 95, window: { kind: 'bermudan', dates } },
-        { type: 'abandon', salvage: 60, window: { kind: 'bermudan', dates } },
-      ],
-    };
+    const model = onTheMarket([
+      { type: 'defer', cost: 95, window: { kind: 'bermudan', dates } },
+      { type: 'abandon', salvage: 60, window: { kind: 'bermudan', dates } },
+    ]);
     const r = valueProject(model, { extras: false });
     check(rights, r.expandedNpv);
   }, 120_000);

@@ -6,6 +6,7 @@ import { findCase, startRevision } from '@/db/queries/cases';
 import { withAuth } from '@/lib/api';
 import { presentCase } from '@/lib/case-response';
 import { AppError } from '@/lib/errors';
+import { statusLabels } from '@/lib/review/transitions';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -18,7 +19,7 @@ export const POST = withAuth<{ caseId: string }>(
       if (!revised) {
         const found = await findCase(trx, { orgId: member.orgId, caseId: params.caseId });
         if (!found) throw new AppError('not_found', 'No such case in your organisation.');
-        throw new AppError('conflict', `Only an approved case is revised; this one is ${found.status.replace('_', ' ')} and can be edited as it is.`);
+        throw new AppError('conflict', `Only an approved case is revised; this one is ${statusLabels[found.status].toLowerCase()} and can be edited as it is.`);
       }
       await recordAudit(trx, {
         orgId: member.orgId,
