@@ -1,7 +1,8 @@
 /**
  * Runs before every request (but static files):
  * - refuses a state-changing request whose Origin is not the app's with 403 (lib/same-origin.ts),
- *   before a server action or route sees it;
+ *   before a server action or route sees it — unless it is an API request carrying an API key,
+ *   which a browser never adds by itself (lib/api.ts authenticates it by the key alone);
  * - gives every page a fresh CSP nonce (lib/security-headers.ts), and every API answer
  *   `Cache-Control: no-store` (case data must not sit in shared or browser caches);
  * - redirects to sign-in when an app page is opened without a session cookie — a convenience
@@ -9,6 +10,7 @@
  */
 import { getSessionCookie } from 'better-auth/cookies';
 import { NextResponse, type NextRequest } from 'next/server';
+import { hasBearer } from '@/lib/api-keys/bearer';
 import { isSameOrigin, SAFE_METHODS } from '@/lib/same-origin';
 import { commonSecurityHeaders, contentSecurityPolicy } from '@/lib/security-headers';
 
@@ -23,7 +25,8 @@ export function proxy(request: NextRequest) {
   const { pathname } = request.nextUrl;
   const isApi = pathname.startsWith('/api/');
 
-  if (!SAFE_METHODS.has(request.method) && !isSameOrigin(request.headers)) {
+  const keyed = pathname.startsWith('/api/v1/') && hasBearer(request.headers);
+  if (!SAFE_METHODS.has(request.method) && !keyed && !isSameOrigin(request.headers)) {
     const message = 'This request did not come from a Leeway page (its Origin is missing or foreign).';
     return withCommonHeaders(
       isApi ? NextResponse.json({ error: { code: 'forbidden', message } }, { status: 403 }) : new NextResponse(message, { status: 403 }),

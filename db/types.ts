@@ -214,6 +214,7 @@ export interface DB {
   attachment: AttachmentTable;
   sign_in_failure: SignInFailureTable;
   portfolio_revaluation: PortfolioRevaluationTable;
+  api_key: ApiKeyTable;
 }
 
 /** A request to re-value every case whose stored figures come from an older engine (a job). */
@@ -229,6 +230,24 @@ export interface PortfolioRevaluationTable {
   error: string | null;
   created_at: Generated<Timestamp>;
   finished_at: Timestamp | null;
+}
+
+/** An organisation API key: its secret is kept only as a SHA-256 hash; it acts through its own user row. */
+export interface ApiKeyTable {
+  id: Generated<string>;
+  organization_id: string;
+  /** The user row the key acts as (no password, no membership). */
+  actor_id: string;
+  created_by: string | null;
+  name: string;
+  role: 'analyst' | 'reviewer' | 'viewer';
+  /** The first characters of the key, shown so people can tell keys apart. */
+  prefix: string;
+  secret_hash: string;
+  created_at: Timestamp;
+  expires_at: Timestamp | null;
+  last_used_at: Timestamp | null;
+  revoked_at: Timestamp | null;
 }
 
 export type OrganizationSettings = Selectable<OrganizationSettingsTable>;

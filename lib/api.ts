@@ -2,8 +2,11 @@
  * Every route handler is wrapped once, so authentication, parsing and error mapping cannot be
  * forgotten:
  *   export const PATCH = withAuth(handler, { permission: { settings: ['update'] } });
- * The wrapper refuses a state-changing request from a foreign origin (403, lib/same-origin.ts),
- * refuses path ids that cannot be ids (404), checks the session and role (lib/dal.ts), parses
+ * The wrapper refuses a credential in the URL (400), refuses a state-changing request from a
+ * foreign origin unless it carries an API key (403, lib/same-origin.ts), refuses path ids that
+ * cannot be ids (404), authenticates by `Authorization: Bearer <key>` when the header is there
+ * (lib/api-keys/; the session cookie is then ignored) and by the session otherwise (lib/dal.ts),
+ * checks the role, parses
  * the JSON body with the route's zod schema when one is given (not JSON → 415, malformed → 400,
  * NUL characters, unpaired surrogates or nesting past MAX_JSON_DEPTH → 400, invalid fields →
  * 422), awaits the params and maps every error to the one error shape
@@ -11,7 +14,9 @@
  */
 import { NextResponse, type NextRequest } from 'next/server';
 import type { z } from 'zod';
-import { requirePermission, requireUser, type Member } from './dal';
+import { bearerToken, credentialInUrl } from './api-keys/bearer';
+import { authenticateApiKey } from './api-keys/authenticate';
+import { requireRole, requireUser, type Member } from './dal';
 import { AppError, toErrorBody } from './errors';
 import { readJson } from './request-body';
 import { isSameOrigin, SAFE_METHODS } from './same-origin';
@@ -47,12 +52,17 @@ export function withAuth<P = Record<string, never>, S extends z.ZodType | undefi
 ) {
   return async (request: NextRequest, route: { params: Promise<P> }): Promise<Response> => {
     try {
-      if (!SAFE_METHODS.has(request.method) && !isSameOrigin(request.headers))
+      if (credentialInUrl(request.nextUrl))
+        throw new AppError('bad_request', 'Send an API key only in the Authorization header ("Authorization: Bearer <key>"), never in the URL.');
+      const key = bearerToken(request.headers);
+      // A browser never adds an Authorization header on its own, so a keyed request is not a forgery risk.
+      if (key === null && !SAFE_METHODS.has(request.method) && !isSameOrigin(request.headers))
         throw new AppError('forbidden', 'This request did not come from a Leeway page (its Origin is missing or foreign).');
       const params = await route.params;
       for (const value of Object.values(params ?? {}))
         if (typeof value !== 'string' || !ID_PATTERN.test(value)) throw new AppError('not_found', 'There is no such record.');
-      const member = options.permission ? await requirePermission(options.permission) : await requireUser();
+      const signedIn = key === null ? await requireUser() : await authenticateApiKey(key);
+      const member = options.permission ? requireRole(signedIn, options.permission) : signedIn;
       const body = options.body ? options.body.parse(await readJson(request)) : undefined;
       return await handler({ request, member, params, body: body as Body<S> });
     } catch (error) {

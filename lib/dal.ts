@@ -30,6 +30,8 @@ export interface Member extends Viewer {
   orgId: string;
   orgName: string;
   role: RoleName;
+  /** Set when the request authenticated with an organisation API key (lib/api-keys/). */
+  apiKeyId?: string;
 }
 
 /** The signed-in user, or null. Resolves the organisation from the session (or the first membership). */
@@ -69,7 +71,11 @@ export async function requireUser(): Promise<Member> {
 
 /** A member whose role grants every action asked for, or an AppError (401 / 403). */
 export async function requirePermission(permission: Permission): Promise<Member> {
-  const member = await requireUser();
+  return requireRole(await requireUser(), permission);
+}
+
+/** The member itself when its role grants every action asked for; 403 otherwise. */
+export function requireRole(member: Member, permission: Permission): Member {
   if (!roleAllows(member.role, permission)) throw new AppError('forbidden', 'Your role does not allow this.');
   return member;
 }

@@ -14,6 +14,7 @@ export const statements = {
   review: ['read', 'comment', 'decide'],
   boardPack: ['read', 'generate'],
   settings: ['read', 'update'],
+  apiKey: ['create', 'read', 'revoke'],
 } as const;
 
 export const ac = createAccessControl(statements);
@@ -28,6 +29,7 @@ export const roles = {
     review: ['read', 'comment'],
     boardPack: ['read', 'generate'],
     settings: ['read', 'update'],
+    apiKey: ['create', 'read', 'revoke'],
   }),
   analyst: ac.newRole({
     project: ['create', 'read', 'update', 'delete'],

@@ -13,6 +13,7 @@ import * as m0007 from './0007_safe_by_default';
 import * as m0008 from './0008_withdrawn_submissions';
 import * as m0009 from './0009_written_recommendations';
 import * as m0010 from './0010_portfolio_revaluations';
+import * as m0011 from './0011_api_keys';
 
 export const migrations: Record<string, Migration> = {
   '0001_auth_tables': m0001,
@@ -25,4 +26,5 @@ export const migrations: Record<string, Migration> = {
   '0008_withdrawn_submissions': m0008,
   '0009_written_recommendations': m0009,
   '0010_portfolio_revaluations': m0010,
+  '0011_api_keys': m0011,
 };

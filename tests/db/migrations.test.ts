@@ -22,6 +22,7 @@ describe('migrations', () => {
     const up = await tables();
     expect(up).toEqual([
       'account',
+      'api_key',
       'attachment',
       'audit_log',
       'board_pack',

@@ -166,6 +166,20 @@ const declared = {
     created_at: 'not null',
     finished_at: 'nullable',
   },
+  api_key: {
+    id: 'not null',
+    organization_id: 'not null',
+    actor_id: 'not null',
+    created_by: 'nullable',
+    name: 'not null',
+    role: 'not null',
+    prefix: 'not null',
+    secret_hash: 'not null',
+    created_at: 'not null',
+    expires_at: 'nullable',
+    last_used_at: 'nullable',
+    revoked_at: 'nullable',
+  },
 } satisfies Schema;
 
 describe('db/types.ts', () => {

@@ -59,6 +59,9 @@ const routes: [string, string][] = [
   ['GET', '/api/v1/volatility/simulations/:id'],
   ['DELETE', '/api/v1/volatility/simulations/:id'],
   ['GET', '/api/v1/organisations/:id/settings'],
+  ['GET', '/api/v1/api-keys'],
+  ['POST', '/api/v1/api-keys'],
+  ['DELETE', '/api/v1/api-keys/:id'],
 ];
 
 // Path ids an attacker tries; each is already percent-encoded as it goes on the wire.

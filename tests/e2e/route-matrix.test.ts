@@ -16,6 +16,7 @@ import { join, relative, sep } from 'node:path';
 import type { APIRequestContext, BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
+import { createApiKey } from '@/db/queries/api-keys';
 import { closeBrowser, newContext, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
 
@@ -87,6 +88,9 @@ const matrix: [Method, string, Role[], Probe?][] = [
   ['GET', '/api/v1/organisations/:organisation/settings', ALL],
   ['POST', '/api/v1/portfolio/revaluations', BUILDERS],
   ['GET', '/api/v1/portfolio/revaluations/:revaluation', ALL],
+  ['GET', '/api/v1/api-keys', ['admin']],
+  ['POST', '/api/v1/api-keys', ['admin'], { json: { name: 5 }, status: 422 }],
+  ['DELETE', '/api/v1/api-keys/:apiKey', ['admin']],
 ];
 
 const emails: Record<Role, string> = {
@@ -128,6 +132,7 @@ const filePlaceholders: Record<string, string> = {
   simulation: 'simulationId',
   organisation: 'orgId',
   revaluation: 'revaluationId',
+  apiKey: 'keyId',
 };
 
 const fill = (path: string) => path.replace(/:(\w+)/g, (_, key: string) => ids[key]!);
@@ -203,6 +208,19 @@ beforeAll(async () => {
       .returning('id')
       .executeTakeFirstOrThrow()
   ).id;
+  const admin = await db.selectFrom('user').select(['id', 'name']).where('email', '=', emails.admin).executeTakeFirstOrThrow();
+  ids.apiKey = (
+    await createApiKey(db, {
+      orgId: org.id,
+      createdBy: admin.id,
+      creatorName: admin.name,
+      name: 'Matrix key',
+      role: 'viewer',
+      prefix: 'lwk_matrix00',
+      secretHash: `matrix-${randomUUID()}`,
+      expiresAt: null,
+    })
+  ).id;
   outsiderMemberId = (
     await db
       .selectFrom('member')
@@ -217,6 +235,10 @@ afterAll(async () => {
   await db.deleteFrom('attachment').where('id', '=', ids.attachment!).execute();
   await db.deleteFrom('volatility_simulation').where('id', '=', ids.simulation!).execute();
   await db.deleteFrom('portfolio_revaluation').where('id', '=', ids.revaluation!).execute();
+  await db
+    .deleteFrom('user')
+    .where('id', '=', (await db.selectFrom('api_key').select('actor_id').where('id', '=', ids.apiKey!).executeTakeFirstOrThrow()).actor_id)
+    .execute();
   await db.updateTable('member').set({ role: 'admin' }).where('id', '=', outsiderMemberId).execute();
   for (const c of contexts) await c.close();
   await closeBrowser();

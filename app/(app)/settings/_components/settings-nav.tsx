@@ -6,6 +6,7 @@ import { usePathname } from 'next/navigation';
 const links = [
   { href: '/settings', label: 'Organisation defaults' },
   { href: '/settings/members', label: 'Members' },
+  { href: '/settings/api-keys', label: 'API keys' },
 ];
 
 export function SettingsNav() {
