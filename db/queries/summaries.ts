@@ -57,6 +57,11 @@ export interface Approval {
   caseId: string;
   caseName: string;
   caseVersion: number;
+  staticNpv: number;
+  optionPremium: number;
+  /** The premium's two parts (the engine's premiumSplit); null when the approved run has no split. */
+  betterPlan: number | null;
+  flexibility: number | null;
   expandedNpv: number;
   decidedAt: Date;
 }
@@ -74,6 +79,10 @@ async function latestApprovals(db: Database, orgId: string): Promise<Map<string,
       'case_snapshot.case_name as caseName',
       'case_snapshot.case_version as caseVersion',
       'case_snapshot.decided_at as decidedAt',
+      sql<number>`(case_snapshot.result->>'staticNpv')::float8`.as('staticNpv'),
+      sql<number>`(case_snapshot.result->>'optionPremium')::float8`.as('optionPremium'),
+      sql<number | null>`(case_snapshot.result->'premiumSplit'->>'betterPlan')::float8`.as('betterPlan'),
+      sql<number | null>`(case_snapshot.result->'premiumSplit'->>'uncertainty')::float8`.as('flexibility'),
       sql<number>`(case_snapshot.result->>'expandedNpv')::float8`.as('expandedNpv'),
     ])
     .where('case_snapshot.organization_id', '=', orgId)

@@ -6,6 +6,7 @@
  * figure clipped.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import Papa from 'papaparse';
 import { db } from '@/db';
 import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
@@ -135,4 +136,30 @@ describe('the portfolio and project pages', () => {
     expect(clipped).toEqual([]);
     await analyst.context.close();
   }, 120_000);
+
+  it('exports each project’s approved figures as CSV and XLSX, equal to the approved snapshot', async () => {
+    const executive = await signedInPage('executive@kestrelbay.example');
+    const csv = await executive.page.request.get('/api/v1/portfolio.csv');
+    expect(csv.status()).toBe(200);
+    expect(csv.headers()['content-type']).toMatch(/^text\/csv/);
+    const rows = Papa.parse<Record<string, string>>(await csv.text(), { header: true, skipEmptyLines: true }).data;
+    const plantRow = rows.find((r) => r.Project === 'Phased bio-resin plant')!;
+    const snapshot = await db
+      .selectFrom('case_snapshot')
+      .innerJoin('case', 'case.id', 'case_snapshot.case_id')
+      .select(['case_snapshot.result', 'case_snapshot.case_version', 'case_snapshot.case_name'])
+      .where('case.project_id', '=', plant.projectId)
+      .where('case_snapshot.status', '=', 'approved')
+      .orderBy('case_snapshot.decided_at', 'desc')
+      .executeTakeFirstOrThrow();
+    const result = snapshot.result as { staticNpv: number; optionPremium: number; expandedNpv: number };
+    expect(plantRow).toMatchObject({ Approval: 'approved', 'Approved case': snapshot.case_name, 'Approved version': String(snapshot.case_version) });
+    // Exported to 4 decimals.
+    expect(Math.abs(Number(plantRow['Static NPV']) - result.staticNpv)).toBeLessThanOrEqual(5e-5);
+    expect(Math.abs(Number(plantRow['Expanded NPV']) - result.expandedNpv)).toBeLessThanOrEqual(5e-5);
+    expect(Math.abs(Number(plantRow['Option premium']) - result.optionPremium)).toBeLessThanOrEqual(5e-5);
+    const xlsx = await executive.page.request.get('/api/v1/portfolio.xlsx');
+    expect(xlsx.status()).toBe(200);
+    expect(xlsx.headers()['content-type']).toContain('spreadsheetml');
+  });
 });

@@ -74,9 +74,19 @@ export function PortfolioView({ canCreate }: { canCreate: boolean }) {
         />
       </div>
       <section aria-labelledby="portfolio-table">
-        <h2 id="portfolio-table" className="mb-3">
-          Projects
-        </h2>
+        <div className="mb-3 flex flex-wrap items-baseline justify-between gap-3">
+          <h2 id="portfolio-table">Projects</h2>
+          <p className="text-caption text-ink-soft">
+            Approved figures per project:{' '}
+            <a href="/api/v1/portfolio.csv" className="text-tide-600 underline" download>
+              CSV
+            </a>{' '}
+            ·{' '}
+            <a href="/api/v1/portfolio.xlsx" className="text-tide-600 underline" download>
+              Workbook
+            </a>
+          </p>
+        </div>
         <PortfolioTable projects={projects} />
       </section>
       {valued.length > 0 ? (

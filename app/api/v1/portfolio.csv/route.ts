@@ -1,0 +1,20 @@
+// GET /api/v1/portfolio.csv – one row per project with its approved version's figures
+import { db } from '@/db';
+import { listProjectSummaries } from '@/db/queries/summaries';
+import { withAuth } from '@/lib/api';
+import { portfolioCsv } from '@/lib/spreadsheets/portfolio-export';
+
+export const dynamic = 'force-dynamic';
+export const runtime = 'nodejs';
+
+export const GET = withAuth(
+  async ({ member }) =>
+    new Response(portfolioCsv(await listProjectSummaries(db, { orgId: member.orgId })), {
+      headers: {
+        'content-type': 'text/csv; charset=utf-8',
+        'content-disposition': 'attachment; filename="Leeway portfolio.csv"',
+        'cache-control': 'no-store',
+      },
+    }),
+  { permission: { project: ['read'] } },
+);

@@ -1,0 +1,16 @@
+// GET /api/v1/portfolio.xlsx – the portfolio's approved figures as a workbook, with the cautions
+import { VALUATION_CAUTION } from '@/components/valuation-caution';
+import { db } from '@/db';
+import { listProjectSummaries } from '@/db/queries/summaries';
+import { withAuth } from '@/lib/api';
+import { portfolioWorkbook } from '@/lib/spreadsheets/portfolio-export';
+import { xlsxResponse } from '@/lib/spreadsheets/xlsx-response';
+
+export const dynamic = 'force-dynamic';
+export const runtime = 'nodejs';
+
+export const GET = withAuth(
+  async ({ member }) =>
+    xlsxResponse(await portfolioWorkbook(await listProjectSummaries(db, { orgId: member.orgId }), member.orgName, VALUATION_CAUTION), 'Leeway portfolio.xlsx'),
+  { permission: { project: ['read'] } },
+);
