@@ -1,7 +1,7 @@
 import next from 'eslint-config-next';
 
 const config = [
-  { ignores: ['.next/**', 'node_modules/**', '.data/**', 'next-env.d.ts'] },
+  { ignores: ['.next/**', 'node_modules/**', '.data/**', 'next-env.d.ts', 'types/leeway-api.d.ts'] },
   ...next,
   {
     rules: {

@@ -14,7 +14,7 @@ import { hasBearer } from '@/lib/api-keys/bearer';
 import { isSameOrigin, SAFE_METHODS } from '@/lib/same-origin';
 import { commonSecurityHeaders, contentSecurityPolicy } from '@/lib/security-headers';
 
-const APP_PAGES = ['/portfolio', '/projects', '/review', '/settings', '/welcome'];
+const APP_PAGES = ['/portfolio', '/projects', '/review', '/settings', '/welcome', '/api-reference'];
 
 function withCommonHeaders(response: NextResponse): NextResponse {
   for (const [name, value] of Object.entries(commonSecurityHeaders(process.env.APP_URL ?? ''))) response.headers.set(name, value);

@@ -1,7 +1,7 @@
 /**
  * Every route handler is wrapped once, so authentication, parsing and error mapping cannot be
  * forgotten:
- *   export const PATCH = withAuth(handler, { permission: { settings: ['update'] } });
+ *   export const PATCH = withAuth(handler, operations.updateSettings);
  * The wrapper refuses a credential in the URL (400), refuses a state-changing request from a
  * foreign origin unless it carries an API key (403, lib/same-origin.ts), refuses path ids that
  * cannot be ids (404), authenticates by `Authorization: Bearer <key>` when the header is there
@@ -20,12 +20,10 @@ import { requireRole, requireUser, type Member } from './dal';
 import { AppError, toErrorBody } from './errors';
 import { readJson } from './request-body';
 import { isSameOrigin, SAFE_METHODS } from './same-origin';
-import type { Permission } from './permissions';
+import type { Operation } from './openapi/operation';
 
-interface Options<S extends z.ZodType | undefined> {
-  permission?: Permission;
-  body?: S;
-}
+/** The route's operation (lib/openapi/operations.ts): its permission and body schema are enforced here. */
+type Options<S extends z.ZodType | undefined> = Omit<Operation, 'body'> & { body?: S };
 
 interface Context<P, B> {
   request: NextRequest;
@@ -48,7 +46,7 @@ const ID_PATTERN = /^[A-Za-z0-9_-]{1,100}$/;
 
 export function withAuth<P = Record<string, never>, S extends z.ZodType | undefined = undefined>(
   handler: (ctx: Context<P, Body<S>>) => Promise<Response>,
-  options: Options<S> = {},
+  options: Options<S>,
 ) {
   return async (request: NextRequest, route: { params: Promise<P> }): Promise<Response> => {
     try {

@@ -1,3 +1,4 @@
+import Link from 'next/link';
 import { redirect } from 'next/navigation';
 import type { ReactNode } from 'react';
 import { NavLinks } from '@/components/nav-links';
@@ -33,6 +34,11 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
           <p className="text-caption text-ink-muted">
             {viewer.email}
             {viewer.role ? ` · ${roleLabels[viewer.role]}` : ''}
+          </p>
+          <p className="mt-3">
+            <Link href="/api-reference" className="text-caption text-tide-600 hover:underline">
+              API reference
+            </Link>
           </p>
           <div className="mt-3">
             <SignOutButton />

@@ -26,5 +26,10 @@ export const caseInputSchema = z.object({
   options: z.array(optionTemplateSchema).max(12).default([]),
 });
 
+/** An edit of a stored case: its inputs and the version the edit was based on (an older one is refused, 409). */
+export const caseSaveSchema = caseInputSchema.extend({ version: z.number().int().min(1, 'Send the version the edit was based on.') });
+
+export const caseDuplicateSchema = z.object({ name: z.string().trim().min(1, 'Give the copy a name.').max(120) });
+
 export type CaseSettings = z.infer<typeof caseSettingsSchema>;
 export type CaseInput = z.input<typeof caseInputSchema>;

@@ -61,6 +61,7 @@ const routes: [string, string][] = [
   ['GET', '/api/v1/organisations/:id/settings'],
   ['GET', '/api/v1/portfolio.csv'],
   ['GET', '/api/v1/portfolio.xlsx'],
+  ['GET', '/api/v1/openapi.json'],
   ['GET', '/api/v1/api-keys'],
   ['POST', '/api/v1/api-keys'],
   ['DELETE', '/api/v1/api-keys/:id'],

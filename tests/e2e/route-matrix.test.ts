@@ -90,6 +90,7 @@ const matrix: [Method, string, Role[], Probe?][] = [
   ['GET', '/api/v1/portfolio/revaluations/:revaluation', ALL],
   ['GET', '/api/v1/portfolio.csv', ALL],
   ['GET', '/api/v1/portfolio.xlsx', ALL],
+  ['GET', '/api/v1/openapi.json', ALL],
   ['GET', '/api/v1/api-keys', ['admin']],
   ['POST', '/api/v1/api-keys', ['admin'], { json: { name: 5 }, status: 422 }],
   ['DELETE', '/api/v1/api-keys/:apiKey', ['admin']],

@@ -42,6 +42,9 @@ const matrix: Record<string, Cell> = {
   'boardPack:generate': row(Y, N, Y, N),
   'settings:read': row(Y, Y, Y, Y),
   'settings:update': row(Y, N, N, N),
+  'apiKey:create': row(Y, N, N, N),
+  'apiKey:read': row(Y, N, N, N),
+  'apiKey:revoke': row(Y, N, N, N),
 };
 
 describe('permission matrix', () => {

@@ -2,13 +2,10 @@
 import { NextResponse } from 'next/server';
 import { createKey, listKeys } from '@/lib/api-keys/manage';
 import { withAuth } from '@/lib/api';
-import { apiKeyCreateSchema } from '@/lib/validations/api-key';
+import { operations } from '@/lib/openapi/operations';
 
 export const dynamic = 'force-dynamic';
 
-export const GET = withAuth(async ({ member }) => NextResponse.json({ apiKeys: await listKeys(member) }), { permission: { apiKey: ['read'] } });
+export const GET = withAuth(async ({ member }) => NextResponse.json({ apiKeys: await listKeys(member) }), operations.listApiKeys);
 
-export const POST = withAuth(async ({ member, body }) => NextResponse.json(await createKey(member, body), { status: 201 }), {
-  permission: { apiKey: ['create'] },
-  body: apiKeyCreateSchema,
-});
+export const POST = withAuth(async ({ member, body }) => NextResponse.json(await createKey(member, body), { status: 201 }), operations.createApiKey);

@@ -2,6 +2,7 @@
 import { db } from '@/db';
 import { listProjectSummaries } from '@/db/queries/summaries';
 import { withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
 import { portfolioCsv } from '@/lib/spreadsheets/portfolio-export';
 
 export const dynamic = 'force-dynamic';
@@ -16,5 +17,5 @@ export const GET = withAuth(
         'cache-control': 'no-store',
       },
     }),
-  { permission: { project: ['read'] } },
+  operations.portfolioCsv,
 );

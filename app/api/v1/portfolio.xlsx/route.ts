@@ -3,6 +3,7 @@ import { VALUATION_CAUTION } from '@/components/valuation-caution';
 import { db } from '@/db';
 import { listProjectSummaries } from '@/db/queries/summaries';
 import { withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
 import { portfolioWorkbook } from '@/lib/spreadsheets/portfolio-export';
 import { xlsxResponse } from '@/lib/spreadsheets/xlsx-response';
 
@@ -12,5 +13,5 @@ export const runtime = 'nodejs';
 export const GET = withAuth(
   async ({ member }) =>
     xlsxResponse(await portfolioWorkbook(await listProjectSummaries(db, { orgId: member.orgId }), member.orgName, VALUATION_CAUTION), 'Leeway portfolio.xlsx'),
-  { permission: { project: ['read'] } },
+  operations.portfolioXlsx,
 );

@@ -1,16 +1,15 @@
 // POST /api/v1/volatility/history – annualised volatility of log returns from an uploaded CSV or XLSX, or JSON { series }
 import { NextResponse } from 'next/server';
-import { z } from 'zod';
 import { readJson, withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
+import { historyJsonSchema } from '@/lib/validations/volatility';
 import { AppError } from '@/lib/errors';
 import { inspectUpload, MAX_UPLOAD_BYTES } from '@/lib/uploads/inspect';
-import { estimateFromHistory, HistoryError, historySeriesSchema, type HistoryPoint } from '@/lib/volatility/history';
+import { estimateFromHistory, HistoryError, type HistoryPoint } from '@/lib/volatility/history';
 import { readCsvSeries, readXlsxSeries } from '@/lib/volatility/read-series';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
-
-const jsonSchema = z.object({ series: historySeriesSchema });
 
 async function seriesFrom(request: Request): Promise<{ series: HistoryPoint[]; source: string }> {
   const type = request.headers.get('content-type') ?? '';
@@ -27,19 +26,16 @@ async function seriesFrom(request: Request): Promise<{ series: HistoryPoint[]; s
     const series = kind === 'csv' ? readCsvSeries(new TextDecoder().decode(bytes)) : await readXlsxSeries(bytes);
     return { series, source: file.name };
   }
-  return { series: jsonSchema.parse(await readJson(request)).series, source: 'series sent as JSON' };
+  return { series: historyJsonSchema.parse(await readJson(request)).series, source: 'series sent as JSON' };
 }
 
-export const POST = withAuth(
-  async ({ request }) => {
-    try {
-      const { series, source } = await seriesFrom(request);
-      const estimate = estimateFromHistory(series);
-      return NextResponse.json({ source, ...estimate });
-    } catch (error) {
-      if (error instanceof HistoryError) throw new AppError('unprocessable', error.message, { series: [error.message] });
-      throw error;
-    }
-  },
-  { permission: { case: ['update'] } },
-);
+export const POST = withAuth(async ({ request }) => {
+  try {
+    const { series, source } = await seriesFrom(request);
+    const estimate = estimateFromHistory(series);
+    return NextResponse.json({ source, ...estimate });
+  } catch (error) {
+    if (error instanceof HistoryError) throw new AppError('unprocessable', error.message, { series: [error.message] });
+    throw error;
+  }
+}, operations.volatilityFromHistory);

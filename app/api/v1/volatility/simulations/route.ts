@@ -1,44 +1,38 @@
 // POST /api/v1/volatility/simulations – start a Monte Carlo volatility estimate for a case (answers its id at once)
 import { NextResponse } from 'next/server';
-import { z } from 'zod';
 import { db } from '@/db';
 import { findCase } from '@/db/queries/cases';
 import { withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
 import type { CashFlowSchedule } from '@/lib/cash-flows';
 import { AppError } from '@/lib/errors';
-import { simulationSpecSchema } from '@/lib/volatility/monte-carlo';
 import { startSimulation } from '@/lib/volatility/simulation-jobs';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
-const startSchema = z.object({ caseId: z.string().min(1).max(64), spec: simulationSpecSchema });
-
-export const POST = withAuth(
-  async ({ member, body }) => {
-    const found = await findCase(db, { orgId: member.orgId, caseId: body.caseId });
-    if (!found) throw new AppError('not_found', 'No such case in your organisation.');
-    const schedule = found.cash_flows as CashFlowSchedule;
-    if (schedule.rows.length < 3)
-      throw new AppError('unprocessable', 'The cash flows need year 0 and at least two more years for a Monte Carlo estimate.', {
-        caseId: ['Add years to the cash flows.'],
-      });
-    const id = await startSimulation({
-      orgId: member.orgId,
-      caseId: found.id,
-      userId: member.userId,
-      schedule,
-      spec: body.spec,
-      audit: (simulation) => ({
-        orgId: member.orgId,
-        actorId: member.userId,
-        action: 'volatility.simulate',
-        subjectType: 'case',
-        subjectId: found.id,
-        detail: { name: found.name, simulation, paths: body.spec.paths, seed: body.spec.seed },
-      }),
+export const POST = withAuth(async ({ member, body }) => {
+  const found = await findCase(db, { orgId: member.orgId, caseId: body.caseId });
+  if (!found) throw new AppError('not_found', 'No such case in your organisation.');
+  const schedule = found.cash_flows as CashFlowSchedule;
+  if (schedule.rows.length < 3)
+    throw new AppError('unprocessable', 'The cash flows need year 0 and at least two more years for a Monte Carlo estimate.', {
+      caseId: ['Add years to the cash flows.'],
     });
-    return NextResponse.json({ id, status: 'running' }, { status: 202 });
-  },
-  { permission: { case: ['update'] }, body: startSchema },
-);
+  const id = await startSimulation({
+    orgId: member.orgId,
+    caseId: found.id,
+    userId: member.userId,
+    schedule,
+    spec: body.spec,
+    audit: (simulation) => ({
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'volatility.simulate',
+      subjectType: 'case',
+      subjectId: found.id,
+      detail: { name: found.name, simulation, paths: body.spec.paths, seed: body.spec.seed },
+    }),
+  });
+  return NextResponse.json({ id, status: 'running' }, { status: 202 });
+}, operations.startSimulation);

@@ -6,6 +6,7 @@ import { addAttachment, listAttachments } from '@/db/queries/attachments';
 import { recordAudit } from '@/db/queries/audit';
 import { findCase } from '@/db/queries/cases';
 import { requireMediaType, withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
 import { AppError } from '@/lib/errors';
 import { inspectUpload, MAX_UPLOAD_BYTES } from '@/lib/uploads/inspect';
 
@@ -15,57 +16,51 @@ export const runtime = 'nodejs';
 type Params = { caseId: string };
 const missing = () => new AppError('not_found', 'No such case in your organisation.');
 
-export const GET = withAuth<Params>(
-  async ({ member, params }) => {
-    if (!(await findCase(db, { orgId: member.orgId, caseId: params.caseId }))) throw missing();
-    const rows = await listAttachments(db, { orgId: member.orgId, caseId: params.caseId });
-    return NextResponse.json({
-      attachments: rows.map((r) => ({ id: r.id, filename: r.filename, kind: r.kind, size: r.size, uploadedBy: r.uploaded_by_name, uploadedAt: r.created_at })),
-    });
-  },
-  { permission: { case: ['read'] } },
-);
+export const GET = withAuth<Params>(async ({ member, params }) => {
+  if (!(await findCase(db, { orgId: member.orgId, caseId: params.caseId }))) throw missing();
+  const rows = await listAttachments(db, { orgId: member.orgId, caseId: params.caseId });
+  return NextResponse.json({
+    attachments: rows.map((r) => ({ id: r.id, filename: r.filename, kind: r.kind, size: r.size, uploadedBy: r.uploaded_by_name, uploadedAt: r.created_at })),
+  });
+}, operations.listAttachments);
 
-export const POST = withAuth<Params>(
-  async ({ member, params, request }) => {
-    const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
-    if (!found) throw missing();
-    requireMediaType(request, ['multipart/form-data']);
-    if (Number(request.headers.get('content-length') ?? '0') > MAX_UPLOAD_BYTES + 64 * 1024)
-      throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
-    const form = await request.formData().catch(() => {
-      throw new AppError('bad_request', 'The upload could not be read.');
+export const POST = withAuth<Params>(async ({ member, params, request }) => {
+  const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
+  if (!found) throw missing();
+  requireMediaType(request, ['multipart/form-data']);
+  if (Number(request.headers.get('content-length') ?? '0') > MAX_UPLOAD_BYTES + 64 * 1024)
+    throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
+  const form = await request.formData().catch(() => {
+    throw new AppError('bad_request', 'The upload could not be read.');
+  });
+  const file = form.get('file');
+  if (!(file instanceof File)) throw new AppError('unprocessable', 'Attach the document as a file named “file”.', { file: ['Choose a file.'] });
+  const data = Buffer.from(await file.arrayBuffer());
+  const kind = inspectUpload(file.name, data, ['pdf', 'xlsx', 'csv', 'png']);
+  const filename = file.name.replace(/[\\/\u0000-\u001f]/g, '_').slice(0, 200);
+  // The change and its audit entry commit together or not at all.
+  const made = await db.transaction().execute(async (trx) => {
+    const made = await addAttachment(trx, {
+      orgId: member.orgId,
+      caseId: found.id,
+      filename,
+      kind,
+      data,
+      sha256: createHash('sha256').update(data).digest('hex'),
+      uploadedBy: member.userId,
     });
-    const file = form.get('file');
-    if (!(file instanceof File)) throw new AppError('unprocessable', 'Attach the document as a file named “file”.', { file: ['Choose a file.'] });
-    const data = Buffer.from(await file.arrayBuffer());
-    const kind = inspectUpload(file.name, data, ['pdf', 'xlsx', 'csv', 'png']);
-    const filename = file.name.replace(/[\\/\u0000-\u001f]/g, '_').slice(0, 200);
-    // The change and its audit entry commit together or not at all.
-    const made = await db.transaction().execute(async (trx) => {
-      const made = await addAttachment(trx, {
-        orgId: member.orgId,
-        caseId: found.id,
-        filename,
-        kind,
-        data,
-        sha256: createHash('sha256').update(data).digest('hex'),
-        uploadedBy: member.userId,
-      });
-      await recordAudit(trx, {
-        orgId: member.orgId,
-        actorId: member.userId,
-        action: 'case.attach',
-        subjectType: 'case',
-        subjectId: found.id,
-        detail: { name: found.name, file: filename, size: data.length },
-      });
-      return made;
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.attach',
+      subjectType: 'case',
+      subjectId: found.id,
+      detail: { name: found.name, file: filename, size: data.length },
     });
-    return NextResponse.json(
-      { attachment: { id: made.id, filename: made.filename, kind: made.kind, size: made.size, uploadedBy: member.name, uploadedAt: made.created_at } },
-      { status: 201 },
-    );
-  },
-  { permission: { case: ['update'] } },
-);
+    return made;
+  });
+  return NextResponse.json(
+    { attachment: { id: made.id, filename: made.filename, kind: made.kind, size: made.size, uploadedBy: member.name, uploadedAt: made.created_at } },
+    { status: 201 },
+  );
+}, operations.addAttachment);

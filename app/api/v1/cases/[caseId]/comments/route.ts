@@ -1,52 +1,42 @@
 // GET /api/v1/cases/{id}/comments – the review discussion; POST – comment on a section of the case
 import { NextResponse } from 'next/server';
-import { z } from 'zod';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { findCase } from '@/db/queries/cases';
-import { addComment, commentSections, listComments } from '@/db/queries/reviews';
+import { addComment, listComments } from '@/db/queries/reviews';
 import { withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
 import { AppError } from '@/lib/errors';
 
 export const dynamic = 'force-dynamic';
 
 const missing = () => new AppError('not_found', 'No such case in your organisation.');
-const commentSchema = z.object({
-  section: z.string().refine((s) => (commentSections as readonly string[]).includes(s) || /^option:.{1,64}$/.test(s), 'Choose a section of the case.'),
-  body: z.string().trim().min(1, 'Write a comment.').max(4000),
-});
 
-export const GET = withAuth<{ caseId: string }>(
-  async ({ member, params }) => {
-    if (!(await findCase(db, { orgId: member.orgId, caseId: params.caseId }))) throw missing();
-    const comments = await listComments(db, { orgId: member.orgId, caseId: params.caseId });
-    return NextResponse.json({
-      comments: comments.map((c) => ({ id: c.id, section: c.section, body: c.body, author: c.author, createdAt: c.created_at, snapshotId: c.snapshot_id })),
-    });
-  },
-  { permission: { case: ['read'] } },
-);
+export const GET = withAuth<{ caseId: string }>(async ({ member, params }) => {
+  if (!(await findCase(db, { orgId: member.orgId, caseId: params.caseId }))) throw missing();
+  const comments = await listComments(db, { orgId: member.orgId, caseId: params.caseId });
+  return NextResponse.json({
+    comments: comments.map((c) => ({ id: c.id, section: c.section, body: c.body, author: c.author, createdAt: c.created_at, snapshotId: c.snapshot_id })),
+  });
+}, operations.listComments);
 
-export const POST = withAuth<{ caseId: string }, typeof commentSchema>(
-  async ({ member, params, body }) => {
-    // The change and its audit entry commit together or not at all.
-    const made = await db.transaction().execute(async (trx) => {
-      const made = await addComment(trx, { orgId: member.orgId, caseId: params.caseId, authorId: member.userId, section: body.section, body: body.body });
-      if (!made) throw missing();
-      await recordAudit(trx, {
-        orgId: member.orgId,
-        actorId: member.userId,
-        action: 'case.comment',
-        subjectType: 'case',
-        subjectId: params.caseId,
-        detail: { section: body.section },
-      });
-      return made;
+export const POST = withAuth<{ caseId: string }, typeof operations.addComment.body>(async ({ member, params, body }) => {
+  // The change and its audit entry commit together or not at all.
+  const made = await db.transaction().execute(async (trx) => {
+    const made = await addComment(trx, { orgId: member.orgId, caseId: params.caseId, authorId: member.userId, section: body.section, body: body.body });
+    if (!made) throw missing();
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.comment',
+      subjectType: 'case',
+      subjectId: params.caseId,
+      detail: { section: body.section },
     });
-    return NextResponse.json(
-      { comment: { id: made.id, section: made.section, body: made.body, author: member.name, createdAt: made.created_at } },
-      { status: 201 },
-    );
-  },
-  { permission: { review: ['comment'] }, body: commentSchema },
-);
+    return made;
+  });
+  return NextResponse.json(
+    { comment: { id: made.id, section: made.section, body: made.body, author: member.name, createdAt: made.created_at } },
+    { status: 201 },
+  );
+}, operations.addComment);

@@ -4,6 +4,7 @@ import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { findCase, startRevision } from '@/db/queries/cases';
 import { withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
 import { presentCase } from '@/lib/case-response';
 import { AppError } from '@/lib/errors';
 import { statusLabels } from '@/lib/review/transitions';
@@ -11,27 +12,24 @@ import { statusLabels } from '@/lib/review/transitions';
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
-export const POST = withAuth<{ caseId: string }>(
-  async ({ member, params }) => {
-    // The change and its audit entry commit together or not at all.
-    const revised = await db.transaction().execute(async (trx) => {
-      const revised = await startRevision(trx, { orgId: member.orgId, caseId: params.caseId });
-      if (!revised) {
-        const found = await findCase(trx, { orgId: member.orgId, caseId: params.caseId });
-        if (!found) throw new AppError('not_found', 'No such case in your organisation.');
-        throw new AppError('conflict', `Only an approved case is revised; this one is ${statusLabels[found.status].toLowerCase()} and can be edited as it is.`);
-      }
-      await recordAudit(trx, {
-        orgId: member.orgId,
-        actorId: member.userId,
-        action: 'case.revise',
-        subjectType: 'case',
-        subjectId: revised.id,
-        detail: { name: revised.name, version: revised.version },
-      });
-      return revised;
+export const POST = withAuth<{ caseId: string }>(async ({ member, params }) => {
+  // The change and its audit entry commit together or not at all.
+  const revised = await db.transaction().execute(async (trx) => {
+    const revised = await startRevision(trx, { orgId: member.orgId, caseId: params.caseId });
+    if (!revised) {
+      const found = await findCase(trx, { orgId: member.orgId, caseId: params.caseId });
+      if (!found) throw new AppError('not_found', 'No such case in your organisation.');
+      throw new AppError('conflict', `Only an approved case is revised; this one is ${statusLabels[found.status].toLowerCase()} and can be edited as it is.`);
+    }
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.revise',
+      subjectType: 'case',
+      subjectId: revised.id,
+      detail: { name: revised.name, version: revised.version },
     });
-    return NextResponse.json({ case: presentCase(revised) }, { status: 201 });
-  },
-  { permission: { case: ['update'] } },
-);
+    return revised;
+  });
+  return NextResponse.json({ case: presentCase(revised) }, { status: 201 });
+}, operations.reviseCase);

@@ -5,37 +5,35 @@ import { db } from '@/db';
 import { findCase } from '@/db/queries/cases';
 import { listSnapshots } from '@/db/queries/reviews';
 import { withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
 import { AppError } from '@/lib/errors';
 import { versionChanges } from '@/lib/review/version-changes';
 
 export const dynamic = 'force-dynamic';
 
-export const GET = withAuth<{ caseId: string }>(
-  async ({ member, params }) => {
-    const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
-    if (!found) throw new AppError('not_found', 'No such case in your organisation.');
-    const snapshots = await listSnapshots(db, { orgId: member.orgId, caseId: found.id });
-    return NextResponse.json({
-      status: found.status,
-      changes: await versionChanges(member.orgId, found.id),
-      snapshots: snapshots.map((s) => ({
-        id: s.id,
-        caseVersion: s.case_version,
-        caseName: s.case_name,
-        status: s.status,
-        submittedAt: s.submitted_at,
-        submittedBy: s.submitted_by_name,
-        // Only whoever submitted a version may withdraw it (the panel offers it to them alone).
-        submittedByYou: s.submitted_by === member.userId,
-        decidedAt: s.decided_at,
-        decidedBy: s.decided_by_name,
-        decisionReason: s.decision_reason,
-        recommendation: s.recommendation,
-        engineVersion: s.engine_version,
-        inputHash: s.input_hash,
-        expandedNpv: s.expanded_npv,
-      })),
-    });
-  },
-  { permission: { case: ['read'] } },
-);
+export const GET = withAuth<{ caseId: string }>(async ({ member, params }) => {
+  const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
+  if (!found) throw new AppError('not_found', 'No such case in your organisation.');
+  const snapshots = await listSnapshots(db, { orgId: member.orgId, caseId: found.id });
+  return NextResponse.json({
+    status: found.status,
+    changes: await versionChanges(member.orgId, found.id),
+    snapshots: snapshots.map((s) => ({
+      id: s.id,
+      caseVersion: s.case_version,
+      caseName: s.case_name,
+      status: s.status,
+      submittedAt: s.submitted_at,
+      submittedBy: s.submitted_by_name,
+      // Only whoever submitted a version may withdraw it (the panel offers it to them alone).
+      submittedByYou: s.submitted_by === member.userId,
+      decidedAt: s.decided_at,
+      decidedBy: s.decided_by_name,
+      decisionReason: s.decision_reason,
+      recommendation: s.recommendation,
+      engineVersion: s.engine_version,
+      inputHash: s.input_hash,
+      expandedNpv: s.expanded_npv,
+    })),
+  });
+}, operations.listSnapshots);

@@ -4,6 +4,7 @@ import { db } from '@/db';
 import { findCase } from '@/db/queries/cases';
 import { listValuationRuns } from '@/db/queries/valuation-runs';
 import { withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
 import { AppError } from '@/lib/errors';
 import { valueAndStore } from '@/lib/store-valuation';
 
@@ -17,46 +18,40 @@ function summary(result: { value: number; staticNpv: number; expandedNpv: number
   return { value: result.value, staticNpv: result.staticNpv, expandedNpv: result.expandedNpv, optionPremium: result.optionPremium };
 }
 
-export const POST = withAuth<Params>(
-  async ({ member, params, request }) => {
-    const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
-    if (!stored) throw missing();
-    const { model, warnings, result, inputHash, run } = await valueAndStore(stored, member, { owner: member.userId, signal: request.signal });
-    return NextResponse.json(
-      {
-        run: {
-          id: run.id,
-          caseVersion: run.case_version,
-          inputHash,
-          engineVersion: run.engine_version,
-          createdAt: run.created_at,
-          warnings,
-          input: model,
-          result,
-        },
+export const POST = withAuth<Params>(async ({ member, params, request }) => {
+  const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
+  if (!stored) throw missing();
+  const { model, warnings, result, inputHash, run } = await valueAndStore(stored, member, { owner: member.userId, signal: request.signal });
+  return NextResponse.json(
+    {
+      run: {
+        id: run.id,
+        caseVersion: run.case_version,
+        inputHash,
+        engineVersion: run.engine_version,
+        createdAt: run.created_at,
+        warnings,
+        input: model,
+        result,
       },
-      { status: 201 },
-    );
-  },
-  { permission: { case: ['update'] } },
-);
+    },
+    { status: 201 },
+  );
+}, operations.valueCase);
 
-export const GET = withAuth<Params>(
-  async ({ member, params }) => {
-    if (!(await findCase(db, { orgId: member.orgId, caseId: params.caseId }))) throw missing();
-    const runs = await listValuationRuns(db, { orgId: member.orgId, caseId: params.caseId });
-    return NextResponse.json({
-      runs: runs.map((r) => ({
-        id: r.id,
-        caseVersion: r.case_version,
-        inputHash: r.input_hash,
-        engineVersion: r.engine_version,
-        createdAt: r.created_at,
-        createdBy: r.created_by_name,
-        volatilitySource: r.volatility_source,
-        ...summary(r.result as never),
-      })),
-    });
-  },
-  { permission: { case: ['read'] } },
-);
+export const GET = withAuth<Params>(async ({ member, params }) => {
+  if (!(await findCase(db, { orgId: member.orgId, caseId: params.caseId }))) throw missing();
+  const runs = await listValuationRuns(db, { orgId: member.orgId, caseId: params.caseId });
+  return NextResponse.json({
+    runs: runs.map((r) => ({
+      id: r.id,
+      caseVersion: r.case_version,
+      inputHash: r.input_hash,
+      engineVersion: r.engine_version,
+      createdAt: r.created_at,
+      createdBy: r.created_by_name,
+      volatilitySource: r.volatility_source,
+      ...summary(r.result as never),
+    })),
+  });
+}, operations.listCaseValuations);

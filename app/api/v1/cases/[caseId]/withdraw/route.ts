@@ -4,6 +4,7 @@ import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { withdrawSubmission } from '@/db/queries/reviews';
 import { withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
 import { AppError } from '@/lib/errors';
 import { loadCaseRef, refOf } from '@/lib/review/case-ref';
 import { notifyWithdrawn } from '@/lib/review/notify';
@@ -12,25 +13,22 @@ import { presentSnapshot } from '@/lib/review/present';
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
-export const POST = withAuth<{ caseId: string }>(
-  async ({ member, params }) => {
-    const ref = await loadCaseRef(member.orgId, params.caseId);
-    // The withdrawal, its audit entry and the reviewers' e-mail commit together or not at all.
-    const snapshot = await db.transaction().execute(async (trx) => {
-      const outcome = await withdrawSubmission(trx, { orgId: member.orgId, caseId: ref.id, role: member.role, userId: member.userId });
-      if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
-      await recordAudit(trx, {
-        orgId: member.orgId,
-        actorId: member.userId,
-        action: 'case.withdraw',
-        subjectType: 'case',
-        subjectId: outcome.value.case_id,
-        detail: { name: outcome.value.case_name, snapshot: outcome.value.id },
-      });
-      await notifyWithdrawn(trx, refOf(ref, (outcome.value.result as { expandedNpv: number }).expandedNpv), member.name);
-      return outcome.value;
+export const POST = withAuth<{ caseId: string }>(async ({ member, params }) => {
+  const ref = await loadCaseRef(member.orgId, params.caseId);
+  // The withdrawal, its audit entry and the reviewers' e-mail commit together or not at all.
+  const snapshot = await db.transaction().execute(async (trx) => {
+    const outcome = await withdrawSubmission(trx, { orgId: member.orgId, caseId: ref.id, role: member.role, userId: member.userId });
+    if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.withdraw',
+      subjectType: 'case',
+      subjectId: outcome.value.case_id,
+      detail: { name: outcome.value.case_name, snapshot: outcome.value.id },
     });
-    return NextResponse.json({ snapshot: presentSnapshot(snapshot) });
-  },
-  { permission: { case: ['submit'] } },
-);
+    await notifyWithdrawn(trx, refOf(ref, (outcome.value.result as { expandedNpv: number }).expandedNpv), member.name);
+    return outcome.value;
+  });
+  return NextResponse.json({ snapshot: presentSnapshot(snapshot) });
+}, operations.withdrawCase);

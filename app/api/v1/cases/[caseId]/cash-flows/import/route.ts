@@ -4,6 +4,7 @@ import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { findCase, saveCase } from '@/db/queries/cases';
 import { requireMediaType, withAuth } from '@/lib/api';
+import { operations } from '@/lib/openapi/operations';
 import { presentCase } from '@/lib/case-response';
 import { analyseCashFlows, type CashFlowSchedule } from '@/lib/cash-flows';
 import { AppError } from '@/lib/errors';
@@ -13,55 +14,52 @@ import { inspectUpload, MAX_UPLOAD_BYTES } from '@/lib/uploads/inspect';
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
-export const POST = withAuth<{ caseId: string }>(
-  async ({ member, params, request }) => {
-    const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
-    if (!stored) throw new AppError('not_found', 'No such case in your organisation.');
-    requireMediaType(request, ['multipart/form-data']);
-    if (Number(request.headers.get('content-length') ?? '0') > MAX_UPLOAD_BYTES + 64 * 1024)
-      throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
-    const form = await request.formData().catch(() => {
-      throw new AppError('bad_request', 'The upload could not be read.');
+export const POST = withAuth<{ caseId: string }>(async ({ member, params, request }) => {
+  const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
+  if (!stored) throw new AppError('not_found', 'No such case in your organisation.');
+  requireMediaType(request, ['multipart/form-data']);
+  if (Number(request.headers.get('content-length') ?? '0') > MAX_UPLOAD_BYTES + 64 * 1024)
+    throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
+  const form = await request.formData().catch(() => {
+    throw new AppError('bad_request', 'The upload could not be read.');
+  });
+  const file = form.get('file');
+  if (!(file instanceof File)) throw new AppError('unprocessable', 'Attach the workbook as a file named “file”.', { file: ['Choose an XLSX file.'] });
+  const bytes = new Uint8Array(await file.arrayBuffer());
+  inspectUpload(file.name, bytes, ['xlsx']);
+  const read = await readCashFlowWorkbook(bytes);
+  if (!read.ok)
+    throw new AppError('unprocessable', `The workbook has ${read.problems.length} problem${read.problems.length > 1 ? 's' : ''}; nothing was imported.`, {
+      file: read.problems,
     });
-    const file = form.get('file');
-    if (!(file instanceof File)) throw new AppError('unprocessable', 'Attach the workbook as a file named “file”.', { file: ['Choose an XLSX file.'] });
-    const bytes = new Uint8Array(await file.arrayBuffer());
-    inspectUpload(file.name, bytes, ['xlsx']);
-    const read = await readCashFlowWorkbook(bytes);
-    if (!read.ok)
-      throw new AppError('unprocessable', `The workbook has ${read.problems.length} problem${read.problems.length > 1 ? 's' : ''}; nothing was imported.`, {
-        file: read.problems,
-      });
-    // The case keeps its own timing convention; the workbook brings years, amounts and the WACC.
-    const cashFlows: CashFlowSchedule = { ...(stored.cash_flows as CashFlowSchedule), rows: read.input.rows, wacc: read.input.wacc };
-    const analysis = analyseCashFlows(cashFlows);
-    if (form.get('confirm') !== 'true') return NextResponse.json({ preview: { cashFlows, analysis } });
+  // The case keeps its own timing convention; the workbook brings years, amounts and the WACC.
+  const cashFlows: CashFlowSchedule = { ...(stored.cash_flows as CashFlowSchedule), rows: read.input.rows, wacc: read.input.wacc };
+  const analysis = analyseCashFlows(cashFlows);
+  if (form.get('confirm') !== 'true') return NextResponse.json({ preview: { cashFlows, analysis } });
 
-    const version = Number(form.get('version'));
-    if (!Number.isInteger(version) || version < 1)
-      throw new AppError('unprocessable', 'Send the version the import was previewed on.', { version: ['Required to confirm.'] });
-    // The change and its audit entry commit together or not at all.
-    const saved = await db.transaction().execute(async (trx) => {
-      const saved = await saveCase(trx, {
-        orgId: member.orgId,
-        caseId: stored.id,
-        expectedVersion: version,
-        content: { name: stored.name, cashFlows, settings: stored.settings, options: stored.options },
-      });
-      if (!saved.ok && saved.reason === 'in_review')
-        throw new AppError('conflict', 'This case is in review and cannot be edited until a reviewer returns it. Nothing was imported.');
-      if (!saved.ok) throw new AppError('conflict', 'This case was saved by someone else meanwhile; reload it and import again. Nothing was imported.');
-      await recordAudit(trx, {
-        orgId: member.orgId,
-        actorId: member.userId,
-        action: 'case.import',
-        subjectType: 'case',
-        subjectId: stored.id,
-        detail: { name: stored.name, file: file.name, years: read.input.rows.length, version: saved.row.version },
-      });
-      return saved;
+  const version = Number(form.get('version'));
+  if (!Number.isInteger(version) || version < 1)
+    throw new AppError('unprocessable', 'Send the version the import was previewed on.', { version: ['Required to confirm.'] });
+  // The change and its audit entry commit together or not at all.
+  const saved = await db.transaction().execute(async (trx) => {
+    const saved = await saveCase(trx, {
+      orgId: member.orgId,
+      caseId: stored.id,
+      expectedVersion: version,
+      content: { name: stored.name, cashFlows, settings: stored.settings, options: stored.options },
     });
-    return NextResponse.json({ case: presentCase(saved.row) });
-  },
-  { permission: { case: ['update'] } },
-);
+    if (!saved.ok && saved.reason === 'in_review')
+      throw new AppError('conflict', 'This case is in review and cannot be edited until a reviewer returns it. Nothing was imported.');
+    if (!saved.ok) throw new AppError('conflict', 'This case was saved by someone else meanwhile; reload it and import again. Nothing was imported.');
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.import',
+      subjectType: 'case',
+      subjectId: stored.id,
+      detail: { name: stored.name, file: file.name, years: read.input.rows.length, version: saved.row.version },
+    });
+    return saved;
+  });
+  return NextResponse.json({ case: presentCase(saved.row) });
+}, operations.importCashFlows);

@@ -1,0 +1,361 @@
+/**
+ * The shapes of the API's answers, as zod schemas with component ids: lib/openapi/operations.ts
+ * names one per status of every operation, and the OpenAPI document is generated from them.
+ * Output objects render with `additionalProperties: false`, so an answer that grows a field the
+ * document does not name fails tests/e2e/openapi-conformance.test.ts. Where an answer carries
+ * one of the engine's own structures (a model, a result), the headline fields are named and the
+ * rest is described by docs/engine.md (a loose object).
+ */
+import { z } from 'zod';
+import { cashFlowScheduleSchema } from '../cash-flows';
+import { caseSettingsSchema } from '../validations/case';
+import { optionTemplateSchema } from '@/lattice';
+
+const id = z.string().meta({ description: 'An opaque identifier.' });
+const dateTime = z.string().meta({ format: 'date-time', description: 'An ISO 8601 instant (UTC).' });
+const money = z.number().meta({ description: "An amount in the project's currency and units." });
+const nullableName = z.string().nullable().meta({ description: 'A person, or an API key as "API key <name> (created by …)"; null when deleted.' });
+
+export const errorSchema = z
+  .object({
+    error: z.object({
+      code: z.enum([
+        'bad_request',
+        'unauthorized',
+        'forbidden',
+        'not_found',
+        'conflict',
+        'too_large',
+        'unsupported_media_type',
+        'unprocessable',
+        'rate_limited',
+        'unavailable',
+        'internal',
+      ]),
+      message: z.string().meta({ description: 'A sentence for people: what is wrong and what to do.' }),
+      fields: z.record(z.string(), z.array(z.string())).optional().meta({ description: 'Messages per input field (422), by dotted path.' }),
+    }),
+  })
+  .meta({ id: 'Error', description: 'Every error answer has this shape.' });
+
+export const projectSchema = z
+  .object({
+    id,
+    name: z.string(),
+    description: z.string(),
+    currency: z.string().meta({ description: 'ISO 4217 code.' }),
+    status: z.enum(['active', 'archived']),
+    ownerId: z.string().nullable(),
+    createdAt: dateTime,
+    updatedAt: dateTime,
+  })
+  .meta({ id: 'Project' });
+
+const headlineSchema = z
+  .object({
+    runId: id,
+    caseId: id,
+    caseName: z.string(),
+    caseVersion: z.int(),
+    currentVersion: z.int(),
+    engineVersion: z.string(),
+    staticNpv: money,
+    optionPremium: money,
+    expandedNpv: money,
+    valuedAt: dateTime,
+  })
+  .meta({ id: 'Headline', description: "A case's latest stored valuation run, in figures." });
+
+const approvalSchema = z
+  .object({
+    snapshotId: id,
+    caseId: id,
+    caseName: z.string(),
+    caseVersion: z.int(),
+    staticNpv: money,
+    optionPremium: money,
+    betterPlan: money.nullable(),
+    flexibility: money.nullable(),
+    expandedNpv: money,
+    decidedAt: dateTime,
+  })
+  .meta({ id: 'Approval', description: 'The version of a project last approved, and its figures.' });
+
+export const projectSummarySchema = z
+  .object({
+    id,
+    name: z.string(),
+    description: z.string(),
+    currency: z.string(),
+    status: z.enum(['active', 'archived']),
+    ownerName: z.string().nullable(),
+    caseCount: z.int(),
+    updatedAt: dateTime,
+    latest: headlineSchema.nullable(),
+    approved: approvalSchema.nullable(),
+    inReview: z.int(),
+  })
+  .meta({ id: 'ProjectSummary' });
+
+const caseStatus = z.enum(['draft', 'in_review', 'approved', 'returned']);
+
+export const caseSchema = z
+  .object({
+    id,
+    projectId: id,
+    name: z.string(),
+    version: z.int().meta({ description: 'Send it back with an edit: an edit based on an older version is refused (409).' }),
+    status: caseStatus,
+    cashFlows: cashFlowScheduleSchema,
+    settings: caseSettingsSchema,
+    options: z.array(optionTemplateSchema),
+    createdAt: dateTime,
+    updatedAt: dateTime,
+  })
+  .meta({ id: 'Case' });
+
+export const snapshotSchema = z
+  .object({
+    id,
+    caseId: id,
+    caseVersion: z.int(),
+    caseName: z.string(),
+    status: z.enum(['in_review', 'approved', 'returned', 'withdrawn']),
+    engineVersion: z.string(),
+    inputHash: z.string(),
+    submittedAt: dateTime,
+    decidedAt: dateTime.nullable(),
+    decisionReason: z.string().nullable(),
+    recommendation: z.string().nullable(),
+  })
+  .meta({ id: 'Snapshot', description: 'A submitted version, frozen: its inputs, figures and decision.' });
+
+/** One of the engine's results: the headline figures named, the rest as docs/engine.md describes. */
+export const valuationResultSchema = z
+  .looseObject({
+    value: money.meta({ description: 'Present value of the project at time 0 (V0).' }),
+    staticNpv: money,
+    optionPremium: money,
+    expandedNpv: money,
+  })
+  .meta({ id: 'ValuationResult', description: "The engine's result (docs/engine.md): figures, rights, exercise boundaries, convergence." });
+
+const comparisonRowSchema = z
+  .object({
+    group: z.enum(['Valuation', 'Options', 'Assumptions', 'Cash flows']),
+    label: z.string(),
+    values: z.array(z.string().nullable()).meta({ description: 'Formatted for people, one per case; null where a case has no such value.' }),
+    numbers: z.array(z.number().nullable()).optional().meta({ description: 'The raw numbers where the row is numeric.' }),
+    differs: z.boolean(),
+  })
+  .meta({ id: 'ComparisonRow' });
+
+export const settingsSchemaOut = z
+  .object({
+    currency: z.string(),
+    riskFreeRate: z.number().meta({ description: 'Continuously compounded, as a fraction a year.' }),
+    wacc: z.number().meta({ description: 'As a fraction a year.' }),
+    fiscalYearStartMonth: z.int().min(1).max(12),
+  })
+  .meta({ id: 'Settings', description: "The organisation's defaults for new projects and cases." });
+
+export const apiKeySchema = z
+  .object({
+    id,
+    name: z.string(),
+    role: z.enum(['analyst', 'reviewer', 'viewer']),
+    prefix: z.string().meta({ description: 'The first characters of the key, to tell keys apart.' }),
+    createdAt: dateTime,
+    createdBy: z.string().nullable(),
+    expiresAt: dateTime.nullable(),
+    lastUsedAt: dateTime.nullable(),
+    revokedAt: dateTime.nullable(),
+  })
+  .meta({ id: 'ApiKey' });
+
+export const apiKeyCreatedSchema = z
+  .object({
+    id,
+    name: z.string(),
+    role: z.enum(['analyst', 'reviewer', 'viewer']),
+    prefix: z.string(),
+    key: z.string().meta({ description: 'The secret, shown this once: Leeway keeps only its hash.' }),
+    createdAt: dateTime,
+    expiresAt: dateTime.nullable(),
+  })
+  .meta({ id: 'ApiKeyCreated' });
+
+export const commentSchemaOut = z
+  .object({
+    id,
+    section: z.string(),
+    body: z.string(),
+    author: nullableName,
+    createdAt: dateTime,
+    snapshotId: id.nullable().optional(),
+  })
+  .meta({ id: 'Comment' });
+
+export const attachmentSchema = z
+  .object({
+    id,
+    filename: z.string(),
+    kind: z.enum(['pdf', 'xlsx', 'csv', 'png']),
+    size: z.int().meta({ description: 'Bytes.' }),
+    uploadedBy: nullableName,
+    uploadedAt: dateTime,
+  })
+  .meta({ id: 'Attachment' });
+
+export const activitySchema = z
+  .object({
+    id: z.union([z.string(), z.int()]),
+    action: z.string().meta({ description: 'What was done, such as project.create or case.approve.' }),
+    subjectType: z.string(),
+    subjectId: z.string().nullable(),
+    detail: z.record(z.string(), z.unknown()),
+    actor: nullableName,
+    at: dateTime,
+  })
+  .meta({ id: 'ActivityEntry' });
+
+export const runSummarySchema = z
+  .object({
+    id,
+    caseVersion: z.int(),
+    inputHash: z.string(),
+    engineVersion: z.string(),
+    createdAt: dateTime,
+    createdBy: nullableName,
+    volatilitySource: z.unknown().nullable(),
+    value: money,
+    staticNpv: money,
+    expandedNpv: money,
+    optionPremium: money,
+  })
+  .meta({ id: 'ValuationRunSummary' });
+
+export const storedRunSchema = z
+  .object({
+    id,
+    caseVersion: z.int(),
+    inputHash: z.string(),
+    engineVersion: z.string(),
+    createdAt: dateTime,
+    warnings: z.array(z.unknown()),
+    input: z.looseObject({}).meta({ description: 'The engine model the case compiles to (docs/engine.md).' }),
+    result: valuationResultSchema,
+  })
+  .meta({ id: 'ValuationRun' });
+
+export const snapshotListingSchema = z.object({
+  status: caseStatus,
+  changes: z
+    .object({
+      sinceReturned: z.object({ caseVersion: z.int(), decidedAt: dateTime, rows: z.array(comparisonRowSchema) }).nullable(),
+      sameAsApproved: z.object({ caseVersion: z.int(), decidedAt: dateTime }).nullable(),
+    })
+    .nullable()
+    .meta({ description: 'For a version in review: what changed since the version last returned, or the approved version it equals.' }),
+  snapshots: z.array(
+    z.object({
+      id,
+      caseVersion: z.int(),
+      caseName: z.string(),
+      status: z.enum(['in_review', 'approved', 'returned', 'withdrawn']),
+      submittedAt: dateTime,
+      submittedBy: nullableName,
+      submittedByYou: z.boolean(),
+      decidedAt: dateTime.nullable(),
+      decidedBy: nullableName,
+      decisionReason: z.string().nullable(),
+      recommendation: z.string().nullable(),
+      engineVersion: z.string(),
+      inputHash: z.string(),
+      expandedNpv: money.nullable(),
+    }),
+  ),
+});
+
+export const reviewQueueItemSchema = z
+  .object({
+    caseId: id,
+    caseName: z.string(),
+    status: caseStatus,
+    projectId: id,
+    projectName: z.string(),
+    currency: z.string(),
+    snapshotId: id,
+    submittedAt: dateTime,
+    decidedAt: dateTime.nullable(),
+    submittedBy: nullableName,
+    staticNpv: money,
+    expandedNpv: money,
+  })
+  .meta({ id: 'ReviewQueueItem' });
+
+export const comparisonSchema = z
+  .object({
+    cases: z.array(
+      z.object({
+        id,
+        projectId: id,
+        projectName: z.string(),
+        caseName: z.string(),
+        currency: z.string(),
+        status: caseStatus,
+        valuedAt: dateTime.nullable(),
+        figuresVersion: z.int().nullable().meta({ description: 'The case version the figures are of.' }),
+        version: z.int(),
+        staticNpv: money.nullable(),
+        optionPremium: money.nullable(),
+        expandedNpv: money.nullable(),
+      }),
+    ),
+    rows: z.array(comparisonRowSchema),
+  })
+  .meta({ id: 'Comparison', description: 'Two to four cases side by side, one row per input or figure.' });
+
+export const jobStartedSchema = z.object({ id, status: z.literal('running') });
+
+export const revaluationSchema = z
+  .object({
+    id,
+    status: z.enum(['running', 'done', 'failed']),
+    total: z.int().nullable(),
+    done: z.int(),
+    failed: z.int(),
+    error: z.string().nullable(),
+    createdAt: dateTime,
+    finishedAt: dateTime.nullable(),
+  })
+  .meta({ id: 'PortfolioRevaluation' });
+
+export const simulationSchema = z
+  .object({
+    id,
+    caseId: id,
+    status: z.enum(['running', 'done', 'failed', 'cancelled']),
+    progress: z.number().nullable(),
+    spec: z.unknown(),
+    result: z.unknown().nullable(),
+    error: z.string().nullable(),
+    createdAt: dateTime,
+    finishedAt: dateTime.nullable(),
+  })
+  .meta({ id: 'VolatilitySimulation' });
+
+export const historyEstimateSchema = z
+  .looseObject({
+    source: z.string(),
+    volatility: z.number().meta({ description: 'Annualised, as a fraction.' }),
+    interval: z.tuple([z.number(), z.number()]),
+    confidence: z.number(),
+    observations: z.int(),
+    warnings: z.array(z.string()),
+  })
+  .meta({ id: 'HistoryEstimate' });
+
+export const importPreviewSchema = z.object({
+  preview: z.object({ cashFlows: z.looseObject({}), analysis: z.looseObject({}) }),
+});
