@@ -39,8 +39,12 @@ export interface SwitchResult {
   exerciseTiming: { t: Years; probability: Probability }[];
   /** Exercise region per step where it is used, from the mode where the right is first available. */
   boundary: BoundaryPoint[];
-  /** Every compiled path of the right (from mode → to mode) with its own boundary. */
-  paths: SwitchPath[];
+  /**
+   * Every compiled path of the right (from mode → to mode) with its own boundary; only when asked
+   * for (`ValueOptions.paths`): a right usable from several modes repeats its boundary per mode,
+   * which was two thirds of a 500-step answer while nothing but the primary one is read.
+   */
+  paths?: SwitchPath[];
 }
 
 export interface TreeSummary {

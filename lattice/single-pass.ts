@@ -25,6 +25,8 @@ export interface PassOptions {
   valueOnly?: boolean;
   /** Return the node grid for steps 0..gridSteps. */
   gridSteps?: number;
+  /** Return every path of each right with its boundary (`SwitchResult.paths`). */
+  paths?: boolean;
 }
 
 /**
@@ -84,11 +86,14 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
       profile.byStep.forEach((probability, i) => {
         if (probability > 1e-15) timing.push({ t: i * plan.dt, probability });
       });
-      const paths = own.map((k) => ({
-        from: compiled.modes[compiled.switches[k]!.from]!.id,
-        to: compiled.modes[compiled.switches[k]!.to]!.id,
-        boundary: boundaryOf(k),
-      }));
+      const boundary = primary === undefined ? [] : boundaryOf(primary);
+      const paths = options.paths
+        ? own.map((k) => ({
+            from: compiled.modes[compiled.switches[k]!.from]!.id,
+            to: compiled.modes[compiled.switches[k]!.to]!.id,
+            boundary: k === primary ? boundary : boundaryOf(k),
+          }))
+        : undefined;
       switches.push({
         id: right.id,
         kind: right.kind,
@@ -96,8 +101,8 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
         incremental: null,
         exerciseProbability: profile.probability,
         exerciseTiming: timing,
-        boundary: primary === undefined ? [] : paths[own.indexOf(primary)]!.boundary,
-        paths,
+        boundary,
+        ...(paths ? { paths } : {}),
       });
     });
   }

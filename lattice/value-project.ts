@@ -22,6 +22,8 @@ export interface ValueOptions {
    * the grid would hold more than NODE_BUDGET (node × mode) cells.
    */
   grid?: boolean | { steps: number };
+  /** Return every path of each right with its own boundary (`switches[].paths`); off by default. */
+  paths?: boolean;
 }
 
 /** Expanded NPV of a variant model, or null when the variant is refused (e.g. p leaves (0,1)). */
@@ -252,7 +254,7 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
         },
       ]);
   }
-  const pass = singlePass(model, compiled, { gridSteps });
+  const pass = singlePass(model, compiled, { gridSteps, paths: options.paths === true });
   const warnings: string[] = [];
   let convergence: Convergence | null = null;
   let sensitivities: Sensitivity[] | null = null;

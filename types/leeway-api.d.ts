@@ -265,7 +265,7 @@ export interface paths {
         put?: never;
         /**
          * Value an engine model (nothing is stored)
-         * @description The body is the engine model of docs/engine.md. `?extras=false` skips convergence and the premium split (one lattice pass).
+         * @description The body is the engine model of docs/engine.md. `?extras=false` skips convergence and the premium split (one lattice pass); `?paths=true` adds each right's boundary from every mode it can be used from.
          *
          *     Roles: Admin, Analyst, Reviewer, Executive (read-only).
          */
@@ -3277,6 +3277,8 @@ export interface operations {
             query?: {
                 /** @description false: one lattice pass, no extras. */
                 extras?: "true" | "false";
+                /** @description true: each right's boundary from every mode it can be used from (switches[].paths). */
+                paths?: "true" | "false";
             };
             header?: never;
             path?: never;

@@ -224,10 +224,14 @@ export const operations = {
     method: 'post',
     path: '/api/v1/valuations',
     summary: 'Value an engine model (nothing is stored)',
-    description: 'The body is the engine model of docs/engine.md. `?extras=false` skips convergence and the premium split (one lattice pass).',
+    description:
+      "The body is the engine model of docs/engine.md. `?extras=false` skips convergence and the premium split (one lattice pass); `?paths=true` adds each right's boundary from every mode it can be used from.",
     tag: 'Valuations',
     permission: { project: ['read'] },
-    query: z.object({ extras: z.enum(['true', 'false']).optional().meta({ description: 'false: one lattice pass, no extras.' }) }),
+    query: z.object({
+      extras: z.enum(['true', 'false']).optional().meta({ description: 'false: one lattice pass, no extras.' }),
+      paths: z.enum(['true', 'false']).optional().meta({ description: "true: each right's boundary from every mode it can be used from (switches[].paths)." }),
+    }),
     otherBody: { contentType: 'application/json', description: 'An engine model.', schema: projectModelSchema },
     answers: { 200: { description: 'The result.', schema: s.valuationResultSchema } },
   },

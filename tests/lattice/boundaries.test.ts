@@ -109,4 +109,22 @@ describe('exercise boundaries', () => {
       expect(errors.filter(([, e]) => e > 0.03)).toEqual([]);
     }
   });
+
+  it("gives each right's boundary from every mode only when asked, the primary one the same either way", () => {
+    const plant = demoPortfolio.find((p) => p.name === 'Phased bio-resin plant')!.cases[0]!;
+    const { model } = caseToModel(plant);
+    const lean = valueProject(model, { extras: false });
+    const full = valueProject(model, { extras: false, paths: true });
+    expect(lean.switches.every((s) => s.paths === undefined)).toBe(true);
+    expect(full.expandedNpv).toBe(lean.expandedNpv);
+    for (const [k, s] of full.switches.entries()) {
+      expect(s.boundary).toEqual(lean.switches[k]!.boundary);
+      expect(s.paths!.length).toBeGreaterThanOrEqual(1);
+      // The primary path's boundary is the right's own boundary (when the right has boundary points at all).
+      if (s.boundary.length > 0) expect(s.paths!.some((p) => JSON.stringify(p.boundary) === JSON.stringify(s.boundary))).toBe(true);
+    }
+    // Abandonment can be used from several modes: its other paths are there.
+    const abandon = full.switches.find((s) => s.kind === 'abandon')!;
+    expect(abandon.paths!.length).toBeGreaterThan(1);
+  });
 });
