@@ -108,6 +108,8 @@ export interface ValuationRunTable {
   created_at: Timestamp;
   /** How the case's volatility was obtained when it was valued (null before this was recorded). */
   volatility_source: ColumnType<{ method: string; note: string } | null, string | null | undefined, string | null>;
+  /** SHA-256 of the result in canonical JSON (lib/model-hash.ts); null for runs stored before it was kept. */
+  result_hash: ColumnType<string | null, string | null | undefined, never>;
 }
 
 export type CaseStatus = 'draft' | 'in_review' | 'approved' | 'returned';

@@ -12,7 +12,7 @@ import { createProject } from '@/db/queries/projects';
 import { recordValuationRun } from '@/db/queries/valuation-runs';
 import { valueProject } from '@/lattice';
 import { caseToModel } from '@/lib/case-model';
-import { hashModel } from '@/lib/model-hash';
+import { hashModel, hashResult } from '@/lib/model-hash';
 import { decideCase, submitCase, type FrozenValuation } from '@/db/queries/reviews';
 import { pageSizes } from '@/lib/board-pack/data';
 import { boardPackData, saveBoardPack } from '@/lib/board-pack/records';
@@ -46,6 +46,7 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; re
         input: model,
         inputHash: hashModel(model),
         result,
+        resultHash: hashResult(result),
         engineVersion: result.engineVersion,
         createdBy: args.analystId,
         volatilitySource: input.settings.volatilitySource ?? null,

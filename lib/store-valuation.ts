@@ -13,7 +13,7 @@ import { valueStoredCase } from './value-case';
 
 export async function valueAndStore(stored: Case, actor: { orgId: string; userId: string }, run: RunOptions = {}) {
   const valuation = await valueStoredCase(stored, undefined, run);
-  const { model, result, inputHash } = valuation;
+  const { model, result, inputHash, resultHash } = valuation;
   const saved = await db.transaction().execute(async (trx) => {
     const saved = await recordValuationRun(trx, {
       orgId: actor.orgId,
@@ -22,6 +22,7 @@ export async function valueAndStore(stored: Case, actor: { orgId: string; userId
       input: model,
       inputHash,
       result,
+      resultHash,
       engineVersion: result.engineVersion,
       createdBy: actor.userId,
       volatilitySource: (stored.settings as CaseInput['settings']).volatilitySource ?? null,

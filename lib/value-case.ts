@@ -8,7 +8,7 @@ import type { ValuationResult, ValueOptions } from '@/lattice';
 import { caseToModel } from './case-model';
 import { EngineRefusal, valueInWorker, type RunOptions } from './engine/pool';
 import { AppError } from './errors';
-import { hashModel } from './model-hash';
+import { hashModel, hashResult } from './model-hash';
 import type { CaseInput } from './validations/case';
 
 export interface CaseValuation {
@@ -17,6 +17,7 @@ export interface CaseValuation {
   warnings: string[];
   result: ValuationResult;
   inputHash: string;
+  resultHash: string;
 }
 
 export async function valueStoredCase(stored: Case, options?: ValueOptions, run?: RunOptions): Promise<CaseValuation> {
@@ -24,7 +25,7 @@ export async function valueStoredCase(stored: Case, options?: ValueOptions, run?
   const { model, warnings } = caseToModel(inputs);
   try {
     const result = await valueInWorker(model, options, run);
-    return { inputs, model, warnings, result, inputHash: hashModel(model) };
+    return { inputs, model, warnings, result, inputHash: hashModel(model), resultHash: hashResult(result) };
   } catch (error) {
     if (error instanceof EngineRefusal) throw new AppError('unprocessable', `The case cannot be valued: ${error.issues[0]?.message}`);
     throw error;

@@ -14,6 +14,7 @@ import * as m0008 from './0008_withdrawn_submissions';
 import * as m0009 from './0009_written_recommendations';
 import * as m0010 from './0010_portfolio_revaluations';
 import * as m0011 from './0011_api_keys';
+import * as m0012 from './0012_result_hashes';
 
 export const migrations: Record<string, Migration> = {
   '0001_auth_tables': m0001,
@@ -27,4 +28,5 @@ export const migrations: Record<string, Migration> = {
   '0009_written_recommendations': m0009,
   '0010_portfolio_revaluations': m0010,
   '0011_api_keys': m0011,
+  '0012_result_hashes': m0012,
 };

@@ -254,6 +254,28 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/cases/{caseId}/valuations/{runId}/rerun": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Re-run a stored run: does today's engine reproduce it?
+         * @description Values the run’s stored model again with the current engine and compares result hashes (SHA-256 of canonical JSON). Nothing is stored. When the hashes differ, `moved` lists the figures that changed and `partsThatDiffer` the parts of the result.
+         *
+         *     Roles: Admin, Analyst, Reviewer.
+         */
+        post: operations["rerunValuation"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/valuations": {
         parameters: {
             query?: never;
@@ -1169,6 +1191,8 @@ export interface components {
             /** @description A person, or an API key as "API key <name> (created by …)"; null when deleted. */
             createdBy: string | null;
             volatilitySource: unknown | null;
+            /** @description SHA-256 of the result in canonical JSON (RFC 8785). */
+            resultHash: string;
             /** @description An amount in the project's currency and units. */
             value: number;
             /** @description An amount in the project's currency and units. */
@@ -1177,6 +1201,25 @@ export interface components {
             expandedNpv: number;
             /** @description An amount in the project's currency and units. */
             optionPremium: number;
+        };
+        RerunOutcome: {
+            /** @description An opaque identifier. */
+            runId: string;
+            caseVersion: number;
+            storedEngineVersion: string;
+            /** @description The engine that ran it now. */
+            engineVersion: string;
+            storedHash: string;
+            resultHash: string;
+            /** @description True when the hashes are identical: the same figures to the last bit. */
+            reproduced: boolean;
+            moved: {
+                figure: string;
+                stored: number | null;
+                now: number | null;
+                change: number | null;
+            }[];
+            partsThatDiffer: string[];
         };
         ComparisonRow: {
             /** @enum {string} */
@@ -3223,6 +3266,76 @@ export interface operations {
                     "application/json": {
                         run: components["schemas"]["ValuationRun"];
                     };
+                };
+            };
+            /** @description No session and no API key, or a key that is wrong, revoked or expired. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The caller's role does not allow this. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description No such record in the caller's organisation. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Too many requests from this key, or too many estimates at once; see Retry-After. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Any other error, in the same shape. */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+        };
+    };
+    rerunValuation: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description An id from an earlier answer. */
+                caseId: string;
+                /** @description An id from an earlier answer. */
+                runId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Whether the run reproduces, and what moved. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["RerunOutcome"];
                 };
             };
             /** @description No session and no API key, or a key that is wrong, revoked or expired. */

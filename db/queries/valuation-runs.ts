@@ -11,6 +11,8 @@ export async function recordValuationRun(
     input: unknown;
     inputHash: string;
     result: unknown;
+    /** lib/model-hash.ts hashResult(result). */
+    resultHash: string;
     engineVersion: string;
     createdBy: string;
     /** How the case's volatility was obtained (method and the note that states its inputs). */
@@ -26,6 +28,7 @@ export async function recordValuationRun(
       input: JSON.stringify(args.input),
       input_hash: args.inputHash,
       result: JSON.stringify(args.result),
+      result_hash: args.resultHash,
       engine_version: args.engineVersion,
       created_by: args.createdBy,
       volatility_source: args.volatilitySource ? JSON.stringify(args.volatilitySource) : null,
@@ -46,12 +49,24 @@ export async function listValuationRuns(db: Database, { orgId, caseId }: { orgId
       'valuation_run.created_at',
       'valuation_run.result',
       'valuation_run.volatility_source',
+      'valuation_run.result_hash',
       'user.name as created_by_name',
     ])
     .where('valuation_run.organization_id', '=', orgId)
     .where('valuation_run.case_id', '=', caseId)
     .orderBy('valuation_run.created_at', 'desc')
     .execute();
+}
+
+/** One stored run of a case, with the model it valued. */
+export async function findValuationRun(db: Database, { orgId, caseId, runId }: { orgId: string; caseId: string; runId: string }) {
+  return db
+    .selectFrom('valuation_run')
+    .select(['id', 'case_version', 'input', 'result', 'result_hash', 'engine_version', 'created_at'])
+    .where('organization_id', '=', orgId)
+    .where('case_id', '=', caseId)
+    .where('id', '=', runId)
+    .executeTakeFirst();
 }
 
 /** Cases of the organisation whose latest stored run was computed by an engine other than `engineVersion`. */

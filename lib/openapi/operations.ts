@@ -220,6 +220,16 @@ export const operations = {
     permission: { case: ['read'] },
     answers: { 200: { description: 'The runs, in figures.', schema: z.object({ runs: z.array(s.runSummarySchema) }) } },
   },
+  rerunValuation: {
+    method: 'post',
+    path: '/api/v1/cases/{caseId}/valuations/{runId}/rerun',
+    summary: "Re-run a stored run: does today's engine reproduce it?",
+    description:
+      'Values the run’s stored model again with the current engine and compares result hashes (SHA-256 of canonical JSON). Nothing is stored. When the hashes differ, `moved` lists the figures that changed and `partsThatDiffer` the parts of the result.',
+    tag: 'Valuations',
+    permission: { review: ['read'] },
+    answers: { 200: { description: 'Whether the run reproduces, and what moved.', schema: s.rerunSchema } },
+  },
   valueModel: {
     method: 'post',
     path: '/api/v1/valuations',

@@ -228,6 +228,7 @@ export const runSummarySchema = z
     createdAt: dateTime,
     createdBy: nullableName,
     volatilitySource: z.unknown().nullable(),
+    resultHash: z.string().meta({ description: 'SHA-256 of the result in canonical JSON (RFC 8785).' }),
     value: money,
     staticNpv: money,
     expandedNpv: money,
@@ -359,3 +360,17 @@ export const historyEstimateSchema = z
 export const importPreviewSchema = z.object({
   preview: z.object({ cashFlows: z.looseObject({}), analysis: z.looseObject({}) }),
 });
+
+export const rerunSchema = z
+  .object({
+    runId: id,
+    caseVersion: z.int(),
+    storedEngineVersion: z.string(),
+    engineVersion: z.string().meta({ description: 'The engine that ran it now.' }),
+    storedHash: z.string(),
+    resultHash: z.string(),
+    reproduced: z.boolean().meta({ description: 'True when the hashes are identical: the same figures to the last bit.' }),
+    moved: z.array(z.object({ figure: z.string(), stored: z.number().nullable(), now: z.number().nullable(), change: z.number().nullable() })),
+    partsThatDiffer: z.array(z.string()),
+  })
+  .meta({ id: 'RerunOutcome' });

@@ -128,6 +128,7 @@ const declared = {
     created_by: 'nullable',
     created_at: 'not null',
     volatility_source: 'nullable',
+    result_hash: 'nullable',
   },
   volatility_simulation: {
     id: 'not null',

@@ -23,6 +23,7 @@ function run(caseId: string, expandedNpv: number) {
     caseVersion: 1,
     input: {},
     inputHash: 'x',
+    resultHash: 'x',
     result: { value: expandedNpv, staticNpv: 1, expandedNpv, optionPremium: expandedNpv - 1 },
     engineVersion: 'test',
     createdBy: analyst,

@@ -174,6 +174,8 @@ describe('the API through its typed client', () => {
     const run = ok(await analyst.POST('/api/v1/cases/{caseId}/valuations', { params: { path: otherPath } })).run;
     const result = ok(await viewer.POST('/api/v1/valuations', { params: { query: { extras: 'false' } }, body: run.input as never }));
     expect(result.expandedNpv).toBeCloseTo(run.result.expandedNpv, 6);
+    const rerun = ok(await reviewer.POST('/api/v1/cases/{caseId}/valuations/{runId}/rerun', { params: { path: { caseId: other.id, runId: run.id } } }));
+    expect(rerun.reproduced).toBe(true);
 
     // Volatility: from a history, and a Monte Carlo estimate started, read and cancelled.
     const series = Array.from({ length: 30 }, (_, k) => ({

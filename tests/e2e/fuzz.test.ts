@@ -40,6 +40,7 @@ const routes: [string, string][] = [
   ['GET', '/api/v1/cases/:id/board-pack'],
   ['POST', '/api/v1/cases/:id/valuations'],
   ['GET', '/api/v1/cases/:id/valuations'],
+  ['POST', '/api/v1/cases/:id/valuations/:id/rerun'],
   ['GET', '/api/v1/cases/:id/attachments'],
   ['POST', '/api/v1/cases/:id/attachments'],
   ['GET', '/api/v1/cases/:id/comments'],
@@ -117,7 +118,7 @@ describe(`fuzzing every API route (seed ${SEED})`, () => {
         for (const who of [analyst, anonymous]) {
           // A bad id where there is one (or a real case id with a bad query), and a bad body for writes.
           const id = template.includes(':id') ? pick([...badIds, realCase]) : '';
-          const path = template.replace(':id', id) + (method === 'GET' ? pick(['', ...badQueries]) : '');
+          const path = template.replaceAll(':id', id) + (method === 'GET' ? pick(['', ...badQueries]) : '');
           const body = method === 'GET' || method === 'DELETE' ? undefined : pick(badBodies);
           const answer = await who.fetch(path, {
             method,

@@ -68,6 +68,7 @@ const matrix: [Method, string, Role[], Probe?][] = [
   ['GET', '/api/v1/cases/:case/board-pack', ALL],
   ['POST', '/api/v1/cases/:case/valuations', BUILDERS],
   ['GET', '/api/v1/cases/:case/valuations', ALL],
+  ['POST', '/api/v1/cases/:case/valuations/:run/rerun', ['admin', 'analyst', 'reviewer']],
   ['GET', '/api/v1/cases/:case/attachments', ALL],
   ['POST', '/api/v1/cases/:case/attachments', BUILDERS, { text: 'not multipart', status: 415 }],
   ['GET', '/api/v1/cases/:case/comments', ALL],
@@ -136,6 +137,7 @@ const filePlaceholders: Record<string, string> = {
   organisation: 'orgId',
   revaluation: 'revaluationId',
   apiKey: 'keyId',
+  run: 'runId',
 };
 
 const fill = (path: string) => path.replace(/:(\w+)/g, (_, key: string) => ids[key]!);
@@ -211,6 +213,7 @@ beforeAll(async () => {
       .returning('id')
       .executeTakeFirstOrThrow()
   ).id;
+  ids.run = (await db.selectFrom('valuation_run').select('id').where('case_id', '=', ids.case).orderBy('created_at', 'desc').executeTakeFirstOrThrow()).id;
   const admin = await db.selectFrom('user').select(['id', 'name']).where('email', '=', emails.admin).executeTakeFirstOrThrow();
   ids.apiKey = (
     await createApiKey(db, {

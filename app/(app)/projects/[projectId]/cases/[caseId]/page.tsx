@@ -27,6 +27,7 @@ export default async function CasePage({ params }: { params: Promise<{ projectId
         canSubmit: roleAllows(member.role, { case: ['submit'] }),
         canDecide: roleAllows(member.role, { review: ['decide'] }),
         canComment: roleAllows(member.role, { review: ['comment'] }),
+        canRerun: roleAllows(member.role, { review: ['read'] }),
       }}
     />
   );

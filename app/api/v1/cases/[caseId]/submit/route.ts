@@ -48,6 +48,7 @@ export const POST = withAuth<{ caseId: string }, typeof operations.submitCase.bo
       input: valuation.model,
       inputHash: valuation.inputHash,
       result: valuation.result,
+      resultHash: valuation.resultHash,
       engineVersion: valuation.result.engineVersion,
       createdBy: member.userId,
       volatilitySource: valuation.inputs.settings.volatilitySource ?? null,

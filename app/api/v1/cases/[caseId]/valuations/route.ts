@@ -6,6 +6,7 @@ import { listValuationRuns } from '@/db/queries/valuation-runs';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import { AppError } from '@/lib/errors';
+import { hashResult } from '@/lib/model-hash';
 import { valueAndStore } from '@/lib/store-valuation';
 
 export const dynamic = 'force-dynamic';
@@ -51,6 +52,7 @@ export const GET = withAuth<Params>(async ({ member, params }) => {
       createdAt: r.created_at,
       createdBy: r.created_by_name,
       volatilitySource: r.volatility_source,
+      resultHash: r.result_hash ?? hashResult(r.result),
       ...summary(r.result as never),
     })),
   });

@@ -28,6 +28,7 @@ import { LatticeSection } from './lattice-section';
 import { LatticeSettingsSection } from './lattice-settings-section';
 import { OptionCards } from './option-cards';
 import { ResultsSection } from './results-section';
+import { StoredRuns } from './stored-runs';
 import { ReviewPanel, type ReviewRights } from './review-panel';
 
 interface Props {
@@ -408,22 +409,27 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
             {
               id: 'results',
               label: 'Results',
-              content: result ? (
-                <ResultsSection result={result} currency={currency} />
-              ) : 'problem' in built || valuation.issues ? (
-                <div role="alert" className="rounded-card border border-brick-500 bg-brick-100 px-5 py-4 text-brick-700">
-                  <p className="font-medium">The engine cannot value this case as it stands.</p>
-                  <p className="mt-1">
-                    {'problem' in built
-                      ? built.problem
-                      : valuation.issues!.map((i) => issueInWords(i.message, (draft.options ?? []) as OptionTemplate[])).join('; ')}
-                  </p>
-                  <p className="mt-2 text-caption">
-                    Change the figure it names (Uncertainty holds the steps; Flexibility the options) and the results appear here at once.
-                  </p>
+              content: (
+                <div className="flex flex-col gap-6">
+                  {result ? (
+                    <ResultsSection result={result} currency={currency} />
+                  ) : 'problem' in built || valuation.issues ? (
+                    <div role="alert" className="rounded-card border border-brick-500 bg-brick-100 px-5 py-4 text-brick-700">
+                      <p className="font-medium">The engine cannot value this case as it stands.</p>
+                      <p className="mt-1">
+                        {'problem' in built
+                          ? built.problem
+                          : valuation.issues!.map((i) => issueInWords(i.message, (draft.options ?? []) as OptionTemplate[])).join('; ')}
+                      </p>
+                      <p className="mt-2 text-caption">
+                        Change the figure it names (Uncertainty holds the steps; Flexibility the options) and the results appear here at once.
+                      </p>
+                    </div>
+                  ) : (
+                    <LoadingBlock label="Valuing the case" lines={5} />
+                  )}
+                  <StoredRuns caseId={caseId} currency={currency} canRerun={rights.canRerun} />
                 </div>
-              ) : (
-                <LoadingBlock label="Valuing the case" lines={5} />
               ),
             },
             {

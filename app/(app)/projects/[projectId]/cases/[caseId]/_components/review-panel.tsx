@@ -21,6 +21,8 @@ export interface ReviewRights {
   canSubmit: boolean;
   canDecide: boolean;
   canComment: boolean;
+  /** May re-run stored runs (model validation is a reviewer's job as much as an analyst's). */
+  canRerun: boolean;
 }
 
 interface Snapshot {
