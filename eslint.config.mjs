@@ -1,5 +1,27 @@
 import next from 'eslint-config-next';
 
+/**
+ * The layers, enforced: each folder may import only what sits below it.
+ *   lattice/ ← db/ ← lib/ ← components/ ← app/      (migrations/ import nothing of the app)
+ * lattice/ is the engine and knows nothing of the app; db/ holds the queries and knows nothing
+ * of the services; lib/ never reaches up into components; components/ never reach the database.
+ * Relative paths are caught as well as the `@/` alias.
+ */
+const layer = (files, forbidden, why) => ({
+  files,
+  rules: {
+    'no-restricted-imports': [
+      'error',
+      {
+        patterns: forbidden.map((dir) => ({
+          group: [`@/${dir}`, `@/${dir}/*`, `../${dir}`, `../${dir}/*`, `../../${dir}`, `../../${dir}/*`, `../../../${dir}/*`],
+          message: `${why} (eslint.config.mjs, the layers).`,
+        })),
+      },
+    ],
+  },
+});
+
 const config = [
   { ignores: ['.next/**', 'node_modules/**', '.data/**', 'next-env.d.ts', 'types/leeway-api.d.ts'] },
   ...next,
@@ -8,6 +30,11 @@ const config = [
       '@typescript-eslint/no-explicit-any': 'off',
     },
   },
+  layer(['lattice/**'], ['lib', 'db', 'components', 'app', 'demo'], 'The engine imports nothing of the app'),
+  layer(['db/**'], ['lib', 'components', 'app', 'demo'], 'db/ imports nothing of the services or the pages: pass rules in from lib/'),
+  layer(['migrations/**'], ['lib', 'db', 'components', 'app', 'demo', 'lattice'], 'A migration is frozen in time and imports nothing of the app'),
+  layer(['lib/**'], ['components', 'app'], 'lib/ does not reach up into components/ or pages'),
+  layer(['components/**'], ['db', 'app'], 'components/ never reach the database: take data from lib/ or props'),
 ];
 
 export default config;

@@ -2,11 +2,7 @@
 
 import Link from 'next/link';
 import { usePathname } from 'next/navigation';
-
-export interface NavItem {
-  href: string;
-  label: string;
-}
+import type { NavItem } from '@/lib/navigation';
 
 export function NavLinks({ items }: { items: NavItem[] }) {
   const pathname = usePathname();

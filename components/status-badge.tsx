@@ -1,5 +1,4 @@
-import type { CaseStatus, SnapshotStatus } from '@/db/types';
-import { statusLabels } from '@/lib/review/transitions';
+import { statusLabels, type CaseStatus, type SnapshotStatus } from '@/lib/review/transitions';
 
 /** A case's or a snapshot's review status in words, with a tone that never carries the meaning alone. */
 export function StatusBadge({ status }: { status: CaseStatus | SnapshotStatus }) {

@@ -8,7 +8,7 @@
  */
 import { Kysely, PostgresDialect } from 'kysely';
 import pg from 'pg';
-import { databaseUrl } from '@/lib/env';
+import { databaseUrl } from './url';
 import type { DB } from './types';
 
 declare global {

@@ -17,6 +17,7 @@ import { decideCase, submitCase, type FrozenValuation } from '@/db/queries/revie
 import { pageSizes } from '@/lib/board-pack/data';
 import { boardPackData, saveBoardPack } from '@/lib/board-pack/records';
 import { renderBoardPack } from '@/lib/board-pack/render';
+import { checkTransition } from '@/lib/review/transitions';
 import { demoPortfolio } from './portfolio';
 
 export async function seedPortfolio(args: { orgId: string; analystId: string; reviewerId?: string; currency: string }): Promise<string[]> {
@@ -97,7 +98,7 @@ async function seedReview(args: {
     const outcome = await submitCase(trx, {
       orgId: args.orgId,
       caseId: args.caseId,
-      role: 'analyst',
+      allowed: (status) => checkTransition('analyst', 'submit', status),
       userId: args.analystId,
       caseVersion: 1,
       frozen: args.frozen,
@@ -115,7 +116,12 @@ async function seedReview(args: {
   });
   if (args.outcome !== 'approved') return;
   const approved = await db.transaction().execute(async (trx) => {
-    const outcome = await decideCase(trx, { orgId: args.orgId, caseId: args.caseId, role: 'reviewer', userId: args.reviewerId, action: 'approve' });
+    const outcome = await decideCase(trx, {
+      orgId: args.orgId,
+      caseId: args.caseId,
+      allowed: (status) => checkTransition('reviewer', 'approve', status),
+      userId: args.reviewerId,
+    });
     if (!outcome.ok) throw new Error(`seed: could not approve ${args.caseName}: ${outcome.message}`);
     await recordAudit(trx, {
       orgId: args.orgId,

@@ -1,6 +1,10 @@
 /** The main navigation, filtered by what the role may do (the server still checks every page). */
-import type { NavItem } from '@/components/nav-links';
 import { roleAllows, type Permission, type RoleName } from './permissions';
+
+export interface NavItem {
+  href: string;
+  label: string;
+}
 
 const items: (NavItem & { needs: Permission })[] = [
   { href: '/portfolio', label: 'Portfolio', needs: { project: ['read'] } },

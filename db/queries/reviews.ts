@@ -1,14 +1,16 @@
 /**
  * The review workflow's data: snapshots frozen at submission, decisions, comments and the review
  * queue. Every status change locks the case row (SELECT … FOR UPDATE) inside the caller's
- * transaction and checks the status machine there, so two reviewers acting at once cannot both
- * win: the second sees the first one's status and gets a conflict.
+ * transaction and asks the caller's status machine (lib/review/transitions.ts, passed in as
+ * `allowed`) about the status it finds there, so two reviewers acting at once cannot both win:
+ * the second sees the first one's status and gets a conflict.
  */
 import { sql, type Transaction } from 'kysely';
-import type { RoleName } from '@/lib/permissions';
-import { checkTransition, type ReviewAction } from '@/lib/review/transitions';
 import type { Database } from '../index';
 import type { CaseSnapshot, CaseStatus, DB } from '../types';
+
+/** The status machine's answer for the locked case's status: the status to move to, or why not. */
+export type StatusCheck = (status: CaseStatus) => { ok: true; to: CaseStatus } | { ok: false; code: 'forbidden' | 'conflict'; message: string };
 
 export type ReviewOutcome<T> = { ok: true; value: T } | { ok: false; code: 'not_found' | 'forbidden' | 'conflict'; message: string };
 
@@ -41,11 +43,11 @@ export interface FrozenValuation {
  */
 export async function submitCase(
   trx: Transaction<DB>,
-  args: { orgId: string; caseId: string; role: RoleName; userId: string; caseVersion: number; frozen: FrozenValuation; recommendation: string },
+  args: { orgId: string; caseId: string; allowed: StatusCheck; userId: string; caseVersion: number; frozen: FrozenValuation; recommendation: string },
 ): Promise<ReviewOutcome<CaseSnapshot>> {
   const row = await lockCase(trx, args.orgId, args.caseId);
   if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
-  const check = checkTransition(args.role, 'submit', row.status);
+  const check = args.allowed(row.status);
   if (!check.ok) return check;
   if (row.version !== args.caseVersion)
     return { ok: false, code: 'conflict', message: 'The case was saved again while it was being valued; submit it once more.' };
@@ -87,11 +89,11 @@ export async function submitCase(
 /** Approves or returns the case's snapshot under review. */
 export async function decideCase(
   trx: Transaction<DB>,
-  args: { orgId: string; caseId: string; role: RoleName; userId: string; action: Extract<ReviewAction, 'approve' | 'return'>; reason?: string },
+  args: { orgId: string; caseId: string; allowed: StatusCheck; userId: string; reason?: string },
 ): Promise<ReviewOutcome<CaseSnapshot>> {
   const row = await lockCase(trx, args.orgId, args.caseId);
   if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
-  const check = checkTransition(args.role, args.action, row.status);
+  const check = args.allowed(row.status);
   if (!check.ok) return check;
   const waiting = await waitingSnapshot(trx, args.orgId, row.id);
   if (!waiting) return { ok: false, code: 'conflict', message: 'There is no snapshot waiting for a decision.' };
@@ -121,11 +123,11 @@ export async function decideCase(
  */
 export async function withdrawSubmission(
   trx: Transaction<DB>,
-  args: { orgId: string; caseId: string; role: RoleName; userId: string },
+  args: { orgId: string; caseId: string; allowed: StatusCheck; userId: string },
 ): Promise<ReviewOutcome<CaseSnapshot>> {
   const row = await lockCase(trx, args.orgId, args.caseId);
   if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
-  const check = checkTransition(args.role, 'withdraw', row.status);
+  const check = args.allowed(row.status);
   if (!check.ok) return check;
   const waiting = await waitingSnapshot(trx, args.orgId, row.id);
   if (!waiting) return { ok: false, code: 'conflict', message: 'There is no submission waiting for review.' };

@@ -9,7 +9,7 @@
 import { Circle, Document, G, Line, Page, Rect, StyleSheet, Svg, Text, View } from '@react-pdf/renderer';
 import type { ReactNode } from 'react';
 import type { Sensitivity, ValuationResult } from '@/lattice';
-import { VALUATION_CAUTION } from '@/components/valuation-caution';
+import { VALUATION_CAUTION } from '@/lib/caution';
 import { analyseCashFlows } from '../cash-flows';
 import { layoutLatticeTree } from '../charts/lattice-tree';
 import { layoutNpvComparison } from '../charts/npv-comparison';

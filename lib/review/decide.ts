@@ -12,12 +12,19 @@ import type { Member } from '../dal';
 import { AppError } from '../errors';
 import { loadCaseRef, refOf } from './case-ref';
 import { notifyDecided } from './notify';
+import { checkTransition } from './transitions';
 
 export async function decide(member: Member, caseId: string, action: 'approve' | 'return', reason?: string) {
   const ref = await loadCaseRef(member.orgId, caseId);
   // The decision, its audit entry and its e-mail commit together or not at all.
   const snapshot = await db.transaction().execute(async (trx) => {
-    const outcome = await decideCase(trx, { orgId: member.orgId, caseId: ref.id, role: member.role, userId: member.userId, action, reason });
+    const outcome = await decideCase(trx, {
+      orgId: member.orgId,
+      caseId: ref.id,
+      allowed: (status) => checkTransition(member.role, action, status),
+      userId: member.userId,
+      reason,
+    });
     if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
     await recordAudit(trx, {
       orgId: member.orgId,

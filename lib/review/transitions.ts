@@ -18,6 +18,8 @@
  * snapshot and its board pack as they are; a case in review cannot be edited.
  */
 import type { CaseStatus, SnapshotStatus } from '@/db/types';
+
+export type { CaseStatus, SnapshotStatus };
 import { roleAllows, type Permission, type RoleName } from '../permissions';
 
 export type ReviewAction = 'submit' | 'approve' | 'return' | 'withdraw';

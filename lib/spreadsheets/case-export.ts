@@ -5,7 +5,7 @@
  * spreadsheet would read as a formula is neutralised (lib/spreadsheet-safe.ts).
  */
 import ExcelJS from 'exceljs';
-import { VALUATION_CAUTION } from '@/components/valuation-caution';
+import { VALUATION_CAUTION } from '@/lib/caution';
 import type { ValuationResult } from '@/lattice';
 import { decisionRule } from '../decision-rules';
 import { formatDateTime } from '../format';

@@ -3,6 +3,7 @@
  * app: the app's own database role cannot rewrite or remove audit entries or snapshots, a
  * snapshot takes exactly one decision, and nobody decides on their own submission.
  */
+import { checkTransition } from '@/lib/review/transitions';
 import { sql } from 'kysely';
 import { describe, expect, it } from 'vitest';
 import { db } from '@/db';
@@ -25,16 +26,24 @@ describe('append-only records', () => {
     const project = await createProject(db, { orgId: kestrel, ownerId: analyst, name: `Append-only plant ${Math.random()}`, currency: 'EUR' });
     const c = (await createCase(db, { orgId: kestrel, projectId: project.id, createdBy: analyst, content: minimalCase }))!;
     const frozen = { inputs: {}, model: {}, result: { expandedNpv: 1 }, engineVersion: 'test', inputHash: 'h' };
-    const submitted = await db
-      .transaction()
-      .execute((trx) =>
-        submitCase(trx, { orgId: kestrel, caseId: c.id, role: 'analyst', userId: analyst, caseVersion: c.version, frozen, recommendation: 'Proceed (test).' }),
-      );
+    const submitted = await db.transaction().execute((trx) =>
+      submitCase(trx, {
+        orgId: kestrel,
+        caseId: c.id,
+        allowed: (status) => checkTransition('analyst', 'submit', status),
+        userId: analyst,
+        caseVersion: c.version,
+        frozen,
+        recommendation: 'Proceed (test).',
+      }),
+    );
     expect(submitted.ok).toBe(true);
     if (!submitted.ok) return;
     expect(submitted.value.project_name).toBeTruthy();
     // The submitter, even holding a reviewer's role, cannot decide.
-    const own = await db.transaction().execute((trx) => decideCase(trx, { orgId: kestrel, caseId: c.id, role: 'admin', userId: analyst, action: 'approve' }));
+    const own = await db
+      .transaction()
+      .execute((trx) => decideCase(trx, { orgId: kestrel, caseId: c.id, allowed: (status) => checkTransition('admin', 'approve', status), userId: analyst }));
     expect(own).toMatchObject({ ok: false, code: 'forbidden' });
     // Nor by writing the row directly: the database's own constraint refuses it.
     await expect(sql`update case_snapshot set status = 'approved', decided_by = submitted_by where id = ${submitted.value.id}`.execute(db)).rejects.toThrow(
@@ -48,7 +57,9 @@ describe('append-only records', () => {
     ).rejects.toThrow(/frozen/);
     const decided = await db
       .transaction()
-      .execute((trx) => decideCase(trx, { orgId: kestrel, caseId: c.id, role: 'reviewer', userId: reviewer, action: 'approve' }));
+      .execute((trx) =>
+        decideCase(trx, { orgId: kestrel, caseId: c.id, allowed: (status) => checkTransition('reviewer', 'approve', status), userId: reviewer }),
+      );
     expect(decided.ok).toBe(true);
     await expect(
       sql`update case_snapshot set status = 'returned', decision_reason = 'changed my mind' where id = ${submitted.value.id}`.execute(db),

@@ -3,6 +3,7 @@
  * reviewers approving at once (exactly one wins), a snapshot that stays byte-identical when the
  * case is edited afterwards, and a case in review that cannot be saved.
  */
+import { checkTransition } from '@/lib/review/transitions';
 import { sql } from 'kysely';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
@@ -25,11 +26,21 @@ async function freshCase() {
 }
 
 const submit = (caseId: string, caseVersion = 1) =>
+  db.transaction().execute((trx) =>
+    submitCase(trx, {
+      orgId: kestrel,
+      caseId,
+      allowed: (status) => checkTransition('analyst', 'submit', status),
+      userId: analyst,
+      caseVersion,
+      frozen,
+      recommendation: 'Proceed (test).',
+    }),
+  );
+const approve = (caseId: string) =>
   db
     .transaction()
-    .execute((trx) => submitCase(trx, { orgId: kestrel, caseId, role: 'analyst', userId: analyst, caseVersion, frozen, recommendation: 'Proceed (test).' }));
-const approve = (caseId: string) =>
-  db.transaction().execute((trx) => decideCase(trx, { orgId: kestrel, caseId, role: 'reviewer', userId: reviewer, action: 'approve' }));
+    .execute((trx) => decideCase(trx, { orgId: kestrel, caseId, allowed: (status) => checkTransition('reviewer', 'approve', status), userId: reviewer }));
 
 beforeAll(async () => {
   ({ kestrel, harrow, analyst, reviewer } = await seededDemo());
@@ -39,11 +50,15 @@ describe('review workflow', () => {
   it('goes draft → in review → returned → (saved: draft) → in review → approved', async () => {
     const c = await freshCase();
     expect((await submit(c.id)).ok).toBe(true);
-    const returned = await db
-      .transaction()
-      .execute((trx) =>
-        decideCase(trx, { orgId: kestrel, caseId: c.id, role: 'reviewer', userId: reviewer, action: 'return', reason: 'Justify the volatility.' }),
-      );
+    const returned = await db.transaction().execute((trx) =>
+      decideCase(trx, {
+        orgId: kestrel,
+        caseId: c.id,
+        allowed: (status) => checkTransition('reviewer', 'return', status),
+        userId: reviewer,
+        reason: 'Justify the volatility.',
+      }),
+    );
     expect(returned).toMatchObject({ ok: true, value: { status: 'returned', decision_reason: 'Justify the volatility.' } });
     const saved = await saveCase(db, { orgId: kestrel, caseId: c.id, expectedVersion: 1, content: { ...content, name: 'Review case, revised' } });
     expect(saved).toMatchObject({ ok: true, row: { status: 'draft', version: 2 } });
@@ -56,19 +71,31 @@ describe('review workflow', () => {
   it('refuses the wrong role, a stale version, and another organisation', async () => {
     const c = await freshCase();
     expect(
-      await db
-        .transaction()
-        .execute((trx) =>
-          submitCase(trx, { orgId: kestrel, caseId: c.id, role: 'reviewer', userId: reviewer, caseVersion: 1, frozen, recommendation: 'Proceed (test).' }),
-        ),
+      await db.transaction().execute((trx) =>
+        submitCase(trx, {
+          orgId: kestrel,
+          caseId: c.id,
+          allowed: (status) => checkTransition('reviewer', 'submit', status),
+          userId: reviewer,
+          caseVersion: 1,
+          frozen,
+          recommendation: 'Proceed (test).',
+        }),
+      ),
     ).toMatchObject({ ok: false, code: 'forbidden' });
     expect(await submit(c.id, 7)).toMatchObject({ ok: false, code: 'conflict' });
     expect(
-      await db
-        .transaction()
-        .execute((trx) =>
-          submitCase(trx, { orgId: harrow, caseId: c.id, role: 'analyst', userId: analyst, caseVersion: 1, frozen, recommendation: 'Proceed (test).' }),
-        ),
+      await db.transaction().execute((trx) =>
+        submitCase(trx, {
+          orgId: harrow,
+          caseId: c.id,
+          allowed: (status) => checkTransition('analyst', 'submit', status),
+          userId: analyst,
+          caseVersion: 1,
+          frozen,
+          recommendation: 'Proceed (test).',
+        }),
+      ),
     ).toMatchObject({
       ok: false,
       code: 'not_found',

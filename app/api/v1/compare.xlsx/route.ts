@@ -1,6 +1,6 @@
 // GET /api/v1/compare.xlsx?cases=a,b[,c,d] – the comparison as a workbook, with the cautions
 import ExcelJS from 'exceljs';
-import { VALUATION_CAUTION } from '@/components/valuation-caution';
+import { VALUATION_CAUTION } from '@/lib/caution';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import { compareCases } from '@/lib/comparison';

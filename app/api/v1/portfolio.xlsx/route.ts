@@ -1,5 +1,5 @@
 // GET /api/v1/portfolio.xlsx – the portfolio's approved figures as a workbook, with the cautions
-import { VALUATION_CAUTION } from '@/components/valuation-caution';
+import { VALUATION_CAUTION } from '@/lib/caution';
 import { db } from '@/db';
 import { listProjectSummaries } from '@/db/queries/summaries';
 import { withAuth } from '@/lib/api';

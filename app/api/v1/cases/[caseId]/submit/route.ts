@@ -26,7 +26,7 @@ export const POST = withAuth<{ caseId: string }, typeof operations.submitCase.bo
     const outcome = await submitCase(trx, {
       orgId: member.orgId,
       caseId: stored.id,
-      role: member.role,
+      allowed: (status) => checkTransition(member.role, 'submit', status),
       userId: member.userId,
       caseVersion: stored.version,
       frozen: {

@@ -1,4 +1,5 @@
 // POST /api/v1/cases/{id}/withdraw – the submitter takes back their submission before a decision; the case is a draft again and the reviewers are told
+import { checkTransition } from '@/lib/review/transitions';
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
@@ -17,7 +18,12 @@ export const POST = withAuth<{ caseId: string }>(async ({ member, params }) => {
   const ref = await loadCaseRef(member.orgId, params.caseId);
   // The withdrawal, its audit entry and the reviewers' e-mail commit together or not at all.
   const snapshot = await db.transaction().execute(async (trx) => {
-    const outcome = await withdrawSubmission(trx, { orgId: member.orgId, caseId: ref.id, role: member.role, userId: member.userId });
+    const outcome = await withdrawSubmission(trx, {
+      orgId: member.orgId,
+      caseId: ref.id,
+      allowed: (status) => checkTransition(member.role, 'withdraw', status),
+      userId: member.userId,
+    });
     if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
     await recordAudit(trx, {
       orgId: member.orgId,
