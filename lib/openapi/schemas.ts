@@ -219,13 +219,12 @@ export const activitySchema = z
   })
   .meta({ id: 'ActivityEntry' });
 
+/** What every stored run says of itself: which version of the case, which model, which engine, when. */
+const runFields = { id, caseVersion: z.int(), inputHash: z.string(), engineVersion: z.string(), createdAt: dateTime };
+
 export const runSummarySchema = z
   .object({
-    id,
-    caseVersion: z.int(),
-    inputHash: z.string(),
-    engineVersion: z.string(),
-    createdAt: dateTime,
+    ...runFields,
     createdBy: nullableName,
     volatilitySource: z.unknown().nullable(),
     resultHash: z.string().meta({ description: 'SHA-256 of the result in canonical JSON (RFC 8785).' }),
@@ -238,11 +237,7 @@ export const runSummarySchema = z
 
 export const storedRunSchema = z
   .object({
-    id,
-    caseVersion: z.int(),
-    inputHash: z.string(),
-    engineVersion: z.string(),
-    createdAt: dateTime,
+    ...runFields,
     warnings: z.array(z.unknown()),
     input: z.looseObject({}).meta({ description: 'The engine model the case compiles to (docs/engine.md).' }),
     result: valuationResultSchema,

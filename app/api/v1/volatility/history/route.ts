@@ -2,9 +2,10 @@
 import { NextResponse } from 'next/server';
 import { readJson, withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
+import { readUploadForm } from '@/lib/uploads/read-form';
 import { historyJsonSchema } from '@/lib/validations/volatility';
 import { AppError } from '@/lib/errors';
-import { inspectUpload, MAX_UPLOAD_BYTES } from '@/lib/uploads/inspect';
+import { inspectUpload } from '@/lib/uploads/inspect';
 import { estimateFromHistory, HistoryError, type HistoryPoint } from '@/lib/volatility/history';
 import { readCsvSeries, readXlsxSeries } from '@/lib/volatility/read-series';
 
@@ -14,14 +15,7 @@ export const runtime = 'nodejs';
 async function seriesFrom(request: Request): Promise<{ series: HistoryPoint[]; source: string }> {
   const type = request.headers.get('content-type') ?? '';
   if (type.startsWith('multipart/form-data')) {
-    if (Number(request.headers.get('content-length') ?? '0') > MAX_UPLOAD_BYTES + 64 * 1024)
-      throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
-    const form = await request.formData().catch(() => {
-      throw new AppError('bad_request', 'The upload could not be read.');
-    });
-    const file = form.get('file');
-    if (!(file instanceof File)) throw new AppError('unprocessable', 'Attach the history as a file named “file”.', { file: ['Choose a CSV or XLSX file.'] });
-    const bytes = new Uint8Array(await file.arrayBuffer());
+    const { file, bytes } = await readUploadForm(request, { what: 'the history', choose: 'Choose a CSV or XLSX file.' });
     const kind = inspectUpload(file.name, bytes, ['csv', 'xlsx']);
     const series = kind === 'csv' ? readCsvSeries(new TextDecoder().decode(bytes)) : await readXlsxSeries(bytes);
     return { series, source: file.name };

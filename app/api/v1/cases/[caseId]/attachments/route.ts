@@ -5,10 +5,11 @@ import { db } from '@/db';
 import { addAttachment, listAttachments } from '@/db/queries/attachments';
 import { recordAudit } from '@/db/queries/audit';
 import { findCase } from '@/db/queries/cases';
-import { requireMediaType, withAuth } from '@/lib/api';
+import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
+import { readUploadForm } from '@/lib/uploads/read-form';
 import { AppError } from '@/lib/errors';
-import { inspectUpload, MAX_UPLOAD_BYTES } from '@/lib/uploads/inspect';
+import { inspectUpload } from '@/lib/uploads/inspect';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -27,15 +28,8 @@ export const GET = withAuth<Params>(async ({ member, params }) => {
 export const POST = withAuth<Params>(async ({ member, params, request }) => {
   const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
   if (!found) throw missing();
-  requireMediaType(request, ['multipart/form-data']);
-  if (Number(request.headers.get('content-length') ?? '0') > MAX_UPLOAD_BYTES + 64 * 1024)
-    throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
-  const form = await request.formData().catch(() => {
-    throw new AppError('bad_request', 'The upload could not be read.');
-  });
-  const file = form.get('file');
-  if (!(file instanceof File)) throw new AppError('unprocessable', 'Attach the document as a file named “file”.', { file: ['Choose a file.'] });
-  const data = Buffer.from(await file.arrayBuffer());
+  const { file, bytes } = await readUploadForm(request, { what: 'the document', choose: 'Choose a file.' });
+  const data = Buffer.from(bytes);
   const kind = inspectUpload(file.name, data, ['pdf', 'xlsx', 'csv', 'png']);
   const filename = file.name.replace(/[\\/\u0000-\u001f]/g, '_').slice(0, 200);
   // The change and its audit entry commit together or not at all.

@@ -3,13 +3,14 @@ import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { findCase, saveCase } from '@/db/queries/cases';
-import { requireMediaType, withAuth } from '@/lib/api';
+import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
+import { readUploadForm } from '@/lib/uploads/read-form';
 import { presentCase } from '@/lib/case-response';
 import { analyseCashFlows, type CashFlowSchedule } from '@/lib/cash-flows';
 import { AppError } from '@/lib/errors';
 import { readCashFlowWorkbook } from '@/lib/spreadsheets/cash-flow-workbook';
-import { inspectUpload, MAX_UPLOAD_BYTES } from '@/lib/uploads/inspect';
+import { inspectUpload } from '@/lib/uploads/inspect';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -17,15 +18,7 @@ export const runtime = 'nodejs';
 export const POST = withAuth<{ caseId: string }>(async ({ member, params, request }) => {
   const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
   if (!stored) throw new AppError('not_found', 'No such case in your organisation.');
-  requireMediaType(request, ['multipart/form-data']);
-  if (Number(request.headers.get('content-length') ?? '0') > MAX_UPLOAD_BYTES + 64 * 1024)
-    throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
-  const form = await request.formData().catch(() => {
-    throw new AppError('bad_request', 'The upload could not be read.');
-  });
-  const file = form.get('file');
-  if (!(file instanceof File)) throw new AppError('unprocessable', 'Attach the workbook as a file named “file”.', { file: ['Choose an XLSX file.'] });
-  const bytes = new Uint8Array(await file.arrayBuffer());
+  const { form, file, bytes } = await readUploadForm(request, { what: 'the workbook', choose: 'Choose an XLSX file.' });
   inspectUpload(file.name, bytes, ['xlsx']);
   const read = await readCashFlowWorkbook(bytes);
   if (!read.ok)
