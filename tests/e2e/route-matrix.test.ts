@@ -11,12 +11,11 @@
  * organisation differs (404).
  */
 import { randomUUID } from 'node:crypto';
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join, relative, sep } from 'node:path';
 import type { APIRequestContext, BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { createApiKey } from '@/db/queries/api-keys';
+import { routeExports } from '../support/route-files';
 import { closeBrowser, newContext, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
 
@@ -110,23 +109,10 @@ const ids: Record<string, string> = {};
 let outsiderMemberId = '';
 
 /** The route files on disk, as "METHOD /api/v1/…" with each [param] written :param. */
-function routesOnDisk(): string[] {
-  const root = join(process.cwd(), 'app', 'api', 'v1');
-  const found: string[] = [];
-  const walk = (dir: string) => {
-    for (const name of readdirSync(dir)) {
-      const path = join(dir, name);
-      if (statSync(path).isDirectory()) walk(path);
-      else if (name === 'route.ts') {
-        const url = '/api/v1/' + relative(root, dir).split(sep).join('/');
-        for (const [, method] of readFileSync(path, 'utf8').matchAll(/export const (GET|POST|PATCH|PUT|DELETE)\b/g))
-          found.push(`${method} ${url.replace(/\/$/, '').replace(/\[(\w+)\]/g, ':$1')}`);
-      }
-    }
-  };
-  walk(root);
-  return found.sort();
-}
+const routesOnDisk = () =>
+  routeExports()
+    .map((r) => `${r.method} ${r.url.replace(/\[(\w+)\]/g, ':$1')}`)
+    .sort();
 
 /** The matrix's path written the way the route files name their parameters. */
 const filePlaceholders: Record<string, string> = {

@@ -6,42 +6,22 @@
  * other than the one that runs. The document itself is a valid OpenAPI 3.1 document
  * (@seriousme/openapi-schema-validator, the OpenAPI Initiative's published JSON Schema).
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join, relative, sep } from 'node:path';
 import { Validator } from '@seriousme/openapi-schema-validator';
 import { describe, expect, it } from 'vitest';
 import { openApiDocument } from '@/lib/openapi/document';
 import { operations } from '@/lib/openapi/operations';
-
-function routeExports(): string[] {
-  const root = join(process.cwd(), 'app', 'api', 'v1');
-  const found: string[] = [];
-  const walk = (dir: string) => {
-    for (const name of readdirSync(dir)) {
-      const path = join(dir, name);
-      if (statSync(path).isDirectory()) walk(path);
-      else if (name === 'route.ts') {
-        const url = '/api/v1/' + relative(root, dir).split(sep).join('/');
-        const text = readFileSync(path, 'utf8');
-        const exports = [...text.matchAll(/export const (GET|POST|PATCH|PUT|DELETE)\b/g)];
-        exports.forEach((m, k) => {
-          const block = text.slice(m.index, exports[k + 1]?.index ?? text.length);
-          const used = [...block.matchAll(/operations\.(\w+),?\s*\)/g)].map((u) => u[1]);
-          found.push(`${m[1]} ${url.replace(/\/$/, '').replace(/\[(\w+)\]/g, '{$1}')} → ${used.join(',') || 'no operation'}`);
-        });
-      }
-    }
-  };
-  walk(root);
-  return found.sort();
-}
+import { routeExports } from '../support/route-files';
 
 describe('the OpenAPI operations', () => {
   it('match the route files one to one', () => {
     const declared = Object.entries(operations)
       .map(([name, op]) => `${op.method.toUpperCase()} ${op.path} → ${name}`)
       .sort();
-    expect(routeExports()).toEqual(declared);
+    const onDisk = routeExports().map(({ method, url, text }) => {
+      const used = [...text.matchAll(/operations\.(\w+),?\s*\)/g)].map((u) => u[1]);
+      return `${method} ${url.replace(/\[(\w+)\]/g, '{$1}')} → ${used.join(',') || 'no operation'}`;
+    });
+    expect(onDisk.sort()).toEqual(declared);
   });
 
   it('make a valid OpenAPI 3.1 document with every operation, both ways to authenticate and the error shape', async () => {
