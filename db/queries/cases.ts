@@ -33,6 +33,9 @@ export async function createCase(db: Database, args: { orgId: string; projectId:
     .executeTakeFirstOrThrow();
 }
 
+/** What every lookup of a case that is not there (or is another organisation's) answers. */
+export const NO_SUCH_CASE = 'No such case in your organisation.';
+
 export async function findCase(db: Database, { orgId, caseId }: { orgId: string; caseId: string }): Promise<Case | undefined> {
   return db.selectFrom('case').selectAll().where('organization_id', '=', orgId).where('id', '=', caseId).executeTakeFirst();
 }

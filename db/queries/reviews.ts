@@ -7,6 +7,7 @@
  */
 import { sql, type Transaction } from 'kysely';
 import type { Database } from '../index';
+import { NO_SUCH_CASE } from './cases';
 import type { CaseSnapshot, CaseStatus, DB } from '../types';
 
 /** The status machine's answer for the locked case's status: the status to move to, or why not. */
@@ -46,7 +47,7 @@ export async function submitCase(
   args: { orgId: string; caseId: string; allowed: StatusCheck; userId: string; caseVersion: number; frozen: FrozenValuation; recommendation: string },
 ): Promise<ReviewOutcome<CaseSnapshot>> {
   const row = await lockCase(trx, args.orgId, args.caseId);
-  if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
+  if (!row) return { ok: false, code: 'not_found', message: NO_SUCH_CASE };
   const check = args.allowed(row.status);
   if (!check.ok) return check;
   if (row.version !== args.caseVersion)
@@ -92,7 +93,7 @@ export async function decideCase(
   args: { orgId: string; caseId: string; allowed: StatusCheck; userId: string; reason?: string },
 ): Promise<ReviewOutcome<CaseSnapshot>> {
   const row = await lockCase(trx, args.orgId, args.caseId);
-  if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
+  if (!row) return { ok: false, code: 'not_found', message: NO_SUCH_CASE };
   const check = args.allowed(row.status);
   if (!check.ok) return check;
   const waiting = await waitingSnapshot(trx, args.orgId, row.id);
@@ -126,7 +127,7 @@ export async function withdrawSubmission(
   args: { orgId: string; caseId: string; allowed: StatusCheck; userId: string },
 ): Promise<ReviewOutcome<CaseSnapshot>> {
   const row = await lockCase(trx, args.orgId, args.caseId);
-  if (!row) return { ok: false, code: 'not_found', message: 'No such case in your organisation.' };
+  if (!row) return { ok: false, code: 'not_found', message: NO_SUCH_CASE };
   const check = args.allowed(row.status);
   if (!check.ok) return check;
   const waiting = await waitingSnapshot(trx, args.orgId, row.id);

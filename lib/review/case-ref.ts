@@ -1,7 +1,7 @@
 /** A case with its project, as the review routes and e-mails name it; scoped by organisation. */
 import 'server-only';
 import { db } from '@/db';
-import { AppError } from '../errors';
+import { missingCase } from '../cases/require-case';
 
 export async function loadCaseRef(orgId: string, caseId: string) {
   const row = await db
@@ -12,7 +12,7 @@ export async function loadCaseRef(orgId: string, caseId: string) {
     .where('case.organization_id', '=', orgId)
     .where('case.id', '=', caseId)
     .executeTakeFirst();
-  if (!row) throw new AppError('not_found', 'No such case in your organisation.');
+  if (!row) throw missingCase();
   return row;
 }
 

@@ -7,15 +7,14 @@ import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import { presentCase } from '@/lib/case-response';
 import { AppError } from '@/lib/errors';
+import { missingCase, requireCase } from '@/lib/cases/require-case';
 
 export const dynamic = 'force-dynamic';
 
 type Params = { caseId: string };
-const missing = () => new AppError('not_found', 'No such case in your organisation.');
 
 export const GET = withAuth<Params>(async ({ member, params }) => {
-  const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
-  if (!found) throw missing();
+  const found = await requireCase(db, member.orgId, params.caseId);
   return NextResponse.json({ case: presentCase(found) });
 }, operations.getCase);
 
@@ -24,7 +23,7 @@ export const PATCH = withAuth<Params, typeof operations.updateCase.body>(async (
   // The change and its audit entry commit together or not at all.
   const saved = await db.transaction().execute(async (trx) => {
     const saved = await saveCase(trx, { orgId: member.orgId, caseId: params.caseId, expectedVersion: version, content });
-    if (!saved.ok && saved.reason === 'not_found') throw missing();
+    if (!saved.ok && saved.reason === 'not_found') throw missingCase();
     if (!saved.ok && saved.reason === 'in_review')
       throw new AppError('conflict', 'This case is in review and cannot be edited until a reviewer returns it. Nothing was changed.');
     if (!saved.ok && saved.reason === 'approved')
@@ -67,7 +66,7 @@ export const DELETE = withAuth<Params>(async ({ member, params }) => {
           'conflict',
           'This case has been submitted for review, so its record is kept: it cannot be deleted. Duplicate it to start a new version.',
         );
-      throw missing();
+      throw missingCase();
     }
     await recordAudit(trx, {
       orgId: member.orgId,

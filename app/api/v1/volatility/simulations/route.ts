@@ -1,19 +1,18 @@
 // POST /api/v1/volatility/simulations – start a Monte Carlo volatility estimate for a case (answers its id at once)
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
-import { findCase } from '@/db/queries/cases';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import type { CashFlowSchedule } from '@/lib/cash-flows';
 import { AppError } from '@/lib/errors';
 import { startSimulation } from '@/lib/volatility/simulation-jobs';
+import { requireCase } from '@/lib/cases/require-case';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 export const POST = withAuth(async ({ member, body }) => {
-  const found = await findCase(db, { orgId: member.orgId, caseId: body.caseId });
-  if (!found) throw new AppError('not_found', 'No such case in your organisation.');
+  const found = await requireCase(db, member.orgId, body.caseId);
   const schedule = found.cash_flows as CashFlowSchedule;
   if (schedule.rows.length < 3)
     throw new AppError('unprocessable', 'The cash flows need year 0 and at least two more years for a Monte Carlo estimate.', {

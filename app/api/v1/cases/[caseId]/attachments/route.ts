@@ -4,21 +4,19 @@ import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { addAttachment, listAttachments } from '@/db/queries/attachments';
 import { recordAudit } from '@/db/queries/audit';
-import { findCase } from '@/db/queries/cases';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import { readUploadForm } from '@/lib/uploads/read-form';
-import { AppError } from '@/lib/errors';
 import { inspectUpload } from '@/lib/uploads/inspect';
+import { requireCase } from '@/lib/cases/require-case';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 type Params = { caseId: string };
-const missing = () => new AppError('not_found', 'No such case in your organisation.');
 
 export const GET = withAuth<Params>(async ({ member, params }) => {
-  if (!(await findCase(db, { orgId: member.orgId, caseId: params.caseId }))) throw missing();
+  await requireCase(db, member.orgId, params.caseId);
   const rows = await listAttachments(db, { orgId: member.orgId, caseId: params.caseId });
   return NextResponse.json({
     attachments: rows.map((r) => ({ id: r.id, filename: r.filename, kind: r.kind, size: r.size, uploadedBy: r.uploaded_by_name, uploadedAt: r.created_at })),
@@ -26,8 +24,7 @@ export const GET = withAuth<Params>(async ({ member, params }) => {
 }, operations.listAttachments);
 
 export const POST = withAuth<Params>(async ({ member, params, request }) => {
-  const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
-  if (!found) throw missing();
+  const found = await requireCase(db, member.orgId, params.caseId);
   const { file, bytes } = await readUploadForm(request, { what: 'the document', choose: 'Choose a file.' });
   const data = Buffer.from(bytes);
   const kind = inspectUpload(file.name, data, ['pdf', 'xlsx', 'csv', 'png']);

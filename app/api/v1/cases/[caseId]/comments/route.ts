@@ -2,18 +2,15 @@
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
-import { findCase } from '@/db/queries/cases';
 import { addComment, listComments } from '@/db/queries/reviews';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
-import { AppError } from '@/lib/errors';
+import { missingCase, requireCase } from '@/lib/cases/require-case';
 
 export const dynamic = 'force-dynamic';
 
-const missing = () => new AppError('not_found', 'No such case in your organisation.');
-
 export const GET = withAuth<{ caseId: string }>(async ({ member, params }) => {
-  if (!(await findCase(db, { orgId: member.orgId, caseId: params.caseId }))) throw missing();
+  await requireCase(db, member.orgId, params.caseId);
   const comments = await listComments(db, { orgId: member.orgId, caseId: params.caseId });
   return NextResponse.json({
     comments: comments.map((c) => ({ id: c.id, section: c.section, body: c.body, author: c.author, createdAt: c.created_at, snapshotId: c.snapshot_id })),
@@ -24,7 +21,7 @@ export const POST = withAuth<{ caseId: string }, typeof operations.addComment.bo
   // The change and its audit entry commit together or not at all.
   const made = await db.transaction().execute(async (trx) => {
     const made = await addComment(trx, { orgId: member.orgId, caseId: params.caseId, authorId: member.userId, section: body.section, body: body.body });
-    if (!made) throw missing();
+    if (!made) throw missingCase();
     await recordAudit(trx, {
       orgId: member.orgId,
       actorId: member.userId,

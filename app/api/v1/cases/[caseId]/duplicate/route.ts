@@ -6,7 +6,7 @@ import { duplicateCase } from '@/db/queries/cases';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import { presentCase } from '@/lib/case-response';
-import { AppError } from '@/lib/errors';
+import { missingCase } from '@/lib/cases/require-case';
 
 export const dynamic = 'force-dynamic';
 
@@ -14,7 +14,7 @@ export const POST = withAuth<{ caseId: string }, typeof operations.duplicateCase
   // The change and its audit entry commit together or not at all.
   const copy = await db.transaction().execute(async (trx) => {
     const copy = await duplicateCase(trx, { orgId: member.orgId, caseId: params.caseId, name: body.name, createdBy: member.userId });
-    if (!copy) throw new AppError('not_found', 'No such case in your organisation.');
+    if (!copy) throw missingCase();
     await recordAudit(trx, {
       orgId: member.orgId,
       actorId: member.userId,

@@ -2,12 +2,13 @@
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
-import { findCase, startRevision } from '@/db/queries/cases';
+import { startRevision } from '@/db/queries/cases';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import { presentCase } from '@/lib/case-response';
 import { AppError } from '@/lib/errors';
 import { statusLabels } from '@/lib/review/transitions';
+import { requireCase } from '@/lib/cases/require-case';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -17,8 +18,7 @@ export const POST = withAuth<{ caseId: string }>(async ({ member, params }) => {
   const revised = await db.transaction().execute(async (trx) => {
     const revised = await startRevision(trx, { orgId: member.orgId, caseId: params.caseId });
     if (!revised) {
-      const found = await findCase(trx, { orgId: member.orgId, caseId: params.caseId });
-      if (!found) throw new AppError('not_found', 'No such case in your organisation.');
+      const found = await requireCase(trx, member.orgId, params.caseId);
       throw new AppError('conflict', `Only an approved case is revised; this one is ${statusLabels[found.status].toLowerCase()} and can be edited as it is.`);
     }
     await recordAudit(trx, {

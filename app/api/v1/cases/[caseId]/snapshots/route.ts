@@ -2,18 +2,16 @@
 // submission in review what changed since the version last returned and whether the same inputs were approved before
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
-import { findCase } from '@/db/queries/cases';
 import { listSnapshots } from '@/db/queries/reviews';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
-import { AppError } from '@/lib/errors';
 import { versionChanges } from '@/lib/review/version-changes';
+import { requireCase } from '@/lib/cases/require-case';
 
 export const dynamic = 'force-dynamic';
 
 export const GET = withAuth<{ caseId: string }>(async ({ member, params }) => {
-  const found = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
-  if (!found) throw new AppError('not_found', 'No such case in your organisation.');
+  const found = await requireCase(db, member.orgId, params.caseId);
   const snapshots = await listSnapshots(db, { orgId: member.orgId, caseId: found.id });
   return NextResponse.json({
     status: found.status,

@@ -1,27 +1,24 @@
 // POST /api/v1/cases/{id}/valuations – value the stored case and keep the run; GET – its runs, newest first
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
-import { findCase } from '@/db/queries/cases';
 import { listValuationRuns } from '@/db/queries/valuation-runs';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
-import { AppError } from '@/lib/errors';
 import { hashResult } from '@/lib/model-hash';
 import { valueAndStore } from '@/lib/store-valuation';
+import { requireCase } from '@/lib/cases/require-case';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 type Params = { caseId: string };
-const missing = () => new AppError('not_found', 'No such case in your organisation.');
 
 function summary(result: { value: number; staticNpv: number; expandedNpv: number; optionPremium: number }) {
   return { value: result.value, staticNpv: result.staticNpv, expandedNpv: result.expandedNpv, optionPremium: result.optionPremium };
 }
 
 export const POST = withAuth<Params>(async ({ member, params, request }) => {
-  const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
-  if (!stored) throw missing();
+  const stored = await requireCase(db, member.orgId, params.caseId);
   const { model, warnings, result, inputHash, run } = await valueAndStore(stored, member, { owner: member.userId, signal: request.signal });
   return NextResponse.json(
     {
@@ -41,7 +38,7 @@ export const POST = withAuth<Params>(async ({ member, params, request }) => {
 }, operations.valueCase);
 
 export const GET = withAuth<Params>(async ({ member, params }) => {
-  if (!(await findCase(db, { orgId: member.orgId, caseId: params.caseId }))) throw missing();
+  await requireCase(db, member.orgId, params.caseId);
   const runs = await listValuationRuns(db, { orgId: member.orgId, caseId: params.caseId });
   return NextResponse.json({
     runs: runs.map((r) => ({

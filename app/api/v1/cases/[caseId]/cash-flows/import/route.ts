@@ -2,7 +2,7 @@
 import { NextResponse } from 'next/server';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
-import { findCase, saveCase } from '@/db/queries/cases';
+import { saveCase } from '@/db/queries/cases';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import { readUploadForm } from '@/lib/uploads/read-form';
@@ -11,13 +11,13 @@ import { analyseCashFlows, type CashFlowSchedule } from '@/lib/cash-flows';
 import { AppError } from '@/lib/errors';
 import { readCashFlowWorkbook } from '@/lib/spreadsheets/cash-flow-workbook';
 import { inspectUpload } from '@/lib/uploads/inspect';
+import { requireCase } from '@/lib/cases/require-case';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 export const POST = withAuth<{ caseId: string }>(async ({ member, params, request }) => {
-  const stored = await findCase(db, { orgId: member.orgId, caseId: params.caseId });
-  if (!stored) throw new AppError('not_found', 'No such case in your organisation.');
+  const stored = await requireCase(db, member.orgId, params.caseId);
   const { form, file, bytes } = await readUploadForm(request, { what: 'the workbook', choose: 'Choose an XLSX file.' });
   inspectUpload(file.name, bytes, ['xlsx']);
   const read = await readCashFlowWorkbook(bytes);
