@@ -1,22 +1,15 @@
 /**
- * Leeway's visual identity, defined once: a calm ink-and-paper base, one tide-teal action
- * colour, and signal colours that never carry meaning alone (labels always accompany them).
+ * Leeway's visual identity: the colours come from lib/palette.ts (charts and the board pack read
+ * the same values), the type scale and spacing are defined here.
  */
 import type { Config } from 'tailwindcss';
+import { palette } from './lib/palette';
 
 const config: Config = {
   content: ['./app/**/*.{ts,tsx}', './components/**/*.{ts,tsx}'],
   theme: {
     extend: {
-      colors: {
-        ink: { DEFAULT: '#16232d', soft: '#3c4b57', muted: '#66737d' },
-        paper: { DEFAULT: '#f6f4ef', raised: '#ffffff', sunk: '#ece8df' },
-        line: { DEFAULT: '#d9d3c7', strong: '#b9b1a2' },
-        tide: { 50: '#e9f4f4', 100: '#cfe7e8', 300: '#7fbcc0', 500: '#23727a', 600: '#1c5f66', 700: '#164c52' },
-        ember: { 100: '#f7e3d6', 500: '#b9622f', 700: '#8a4520' },
-        moss: { 100: '#dcebdc', 500: '#3f7a4b', 700: '#2d5a36' },
-        brick: { 100: '#f5dcd6', 500: '#ad3f2b', 700: '#83301f' },
-      },
+      colors: palette,
       fontFamily: {
         sans: ['"Work Sans"', 'system-ui', 'sans-serif'],
       },

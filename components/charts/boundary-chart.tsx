@@ -5,8 +5,8 @@ import type { SwitchResult } from '@/lattice';
 import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
+import { palette, seriesStrong } from '@/lib/palette';
 
-const strokes = ['#23727a', '#b9622f', '#3f7a4b', '#ad3f2b', '#5b4a8a', '#8a7a20'];
 const dashes = ['', '6 3', '2 3', '8 3 2 3', '1 2', '10 4'];
 
 /**
@@ -38,7 +38,7 @@ export function BoundaryChart({ switches, v0, horizon, currency }: { switches: S
       <svg width={width} height={height} role="img" aria-label={series.map((x) => x.rule.text).join(' ')}>
         {y.ticks(5).map((t) => (
           <g key={t}>
-            <line x1={margin.left} x2={width - margin.right} y1={y(t)} y2={y(t)} stroke="#ece8df" />
+            <line x1={margin.left} x2={width - margin.right} y1={y(t)} y2={y(t)} stroke={palette.paper.sunk} />
             <text x={margin.left - 8} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
               {formatMoney(t, undefined, 0)}
             </text>
@@ -52,17 +52,23 @@ export function BoundaryChart({ switches, v0, horizon, currency }: { switches: S
         <text x={(margin.left + width - margin.right) / 2} y={height - 4} textAnchor="middle" className="fill-ink-muted text-caption">
           years
         </text>
-        <line x1={margin.left} x2={width - margin.right} y1={y(v0)} y2={y(v0)} stroke="#66737d" strokeDasharray="3 3" />
+        <line x1={margin.left} x2={width - margin.right} y1={y(v0)} y2={y(v0)} stroke={palette.ink.muted} strokeDasharray="3 3" />
         <text x={margin.left + 4} y={y(v0) - 4} className="fill-ink-muted text-caption">
           V₀ today {formatMoney(v0)}
         </text>
         {series.map(({ s, k, points }) => (
           <g key={s.id}>
             {points.length > 1 ? (
-              <path d={path(points) ?? ''} fill="none" stroke={strokes[k % strokes.length]} strokeWidth="2" strokeDasharray={dashes[k % dashes.length]} />
+              <path
+                d={path(points) ?? ''}
+                fill="none"
+                stroke={seriesStrong[k % seriesStrong.length]}
+                strokeWidth="2"
+                strokeDasharray={dashes[k % dashes.length]}
+              />
             ) : null}
             {/* A right open at a single date has a point, not a line. */}
-            {points.length < 3 ? points.map((p) => <circle key={p.t} cx={x(p.t)} cy={y(p.v)} r="4" fill={strokes[k % strokes.length]} />) : null}
+            {points.length < 3 ? points.map((p) => <circle key={p.t} cx={x(p.t)} cy={y(p.v)} r="4" fill={seriesStrong[k % seriesStrong.length]} />) : null}
           </g>
         ))}
       </svg>
@@ -70,7 +76,7 @@ export function BoundaryChart({ switches, v0, horizon, currency }: { switches: S
         {series.map(({ s, k, rule }) => (
           <li key={s.id} className="flex items-start gap-2">
             <svg width="28" height="10" aria-hidden className="mt-1 shrink-0">
-              <line x1="0" x2="28" y1="5" y2="5" stroke={strokes[k % strokes.length]} strokeWidth="2" strokeDasharray={dashes[k % dashes.length]} />
+              <line x1="0" x2="28" y1="5" y2="5" stroke={seriesStrong[k % seriesStrong.length]} strokeWidth="2" strokeDasharray={dashes[k % dashes.length]} />
             </svg>
             {rule.text}
           </li>

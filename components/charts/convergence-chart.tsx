@@ -5,6 +5,7 @@ import type { Convergence } from '@/lattice';
 import { tickDigits } from '@/lib/charts/tick-digits';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
+import { palette } from '@/lib/palette';
 
 /** The expanded NPV as steps grow, with the engine's error band around the case's own value and the extrapolated value. */
 export function ConvergenceChart({ convergence, currency }: { convergence: Convergence; currency: string }) {
@@ -38,8 +39,14 @@ export function ConvergenceChart({ convergence, currency }: { convergence: Conve
         role="img"
         aria-label={`Expanded NPV at ${points.map((p) => `${p.steps} steps ${formatMoney(p.value, currency)}`).join(', ')}; extrapolated ${formatMoney(extrapolated, currency)}`}
       >
-        <rect x={margin.left} width={width - margin.left - margin.right} y={y(band.high)} height={Math.max(1, y(band.low) - y(band.high))} fill="#e9f4f4" />
-        <line x1={margin.left} x2={width - margin.right} y1={y(extrapolated)} y2={y(extrapolated)} stroke="#23727a" strokeDasharray="4 3" />
+        <rect
+          x={margin.left}
+          width={width - margin.left - margin.right}
+          y={y(band.high)}
+          height={Math.max(1, y(band.low) - y(band.high))}
+          fill={palette.tide[50]}
+        />
+        <line x1={margin.left} x2={width - margin.right} y1={y(extrapolated)} y2={y(extrapolated)} stroke={palette.tide[500]} strokeDasharray="4 3" />
         <text x={width - margin.right} y={y(extrapolated) - 6} textAnchor="end" className="fill-tide-700 text-caption">
           extrapolated {formatMoney(extrapolated, currency, 2)}
         </text>
@@ -48,10 +55,10 @@ export function ConvergenceChart({ convergence, currency }: { convergence: Conve
             {formatMoney(t, undefined, digits)}
           </text>
         ))}
-        {path ? <path d={path} fill="none" stroke="#16232d" strokeWidth="1.5" /> : null}
+        {path ? <path d={path} fill="none" stroke={palette.ink.DEFAULT} strokeWidth="1.5" /> : null}
         {points.map((p) => (
           <g key={p.steps}>
-            <circle cx={x(p.steps)} cy={y(p.value)} r="4" fill="#16232d" />
+            <circle cx={x(p.steps)} cy={y(p.value)} r="4" fill={palette.ink.DEFAULT} />
             <text x={x(p.steps)} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-soft text-caption">
               {p.steps}
             </text>

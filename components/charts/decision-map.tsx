@@ -4,6 +4,7 @@ import { scaleLinear, scaleLog } from 'd3';
 import type { NodeGrid } from '@/lattice';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
+import { palette } from '@/lib/palette';
 
 /**
  * The decision map of one mode over the whole lattice: every node placed by time and project
@@ -25,7 +26,7 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
     .range([height - margin.bottom, margin.top]);
   const cellWidth = Math.max(1.5, (width - margin.left - margin.right) / grid.steps.length);
   const cellHeight = Math.max(1.5, (height - margin.top - margin.bottom) / Math.max(1, grid.steps.length));
-  const fillOf = (d: string | null) => (d === null ? '#f6f4ef' : fills[order.indexOf(d) % fills.length]!);
+  const fillOf = (d: string | null) => (d === null ? palette.paper.DEFAULT : fills[order.indexOf(d) % fills.length]!);
   const seen = new Set<string>();
   for (const s of grid.steps) for (const d of s.modes[mode]?.decision ?? []) if (d) seen.add(d);
   return (
@@ -47,7 +48,7 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
                 width={cellWidth}
                 height={cellHeight}
                 fill={fillOf(d)}
-                stroke={d ? 'none' : '#d9d3c7'}
+                stroke={d ? 'none' : palette.line.DEFAULT}
                 strokeWidth="0.3"
               />
             );

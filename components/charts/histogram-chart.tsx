@@ -3,6 +3,7 @@
 import { scaleLinear } from 'd3';
 import { formatPercent } from '@/lib/format';
 import { useWidth } from './use-width';
+import { palette } from '@/lib/palette';
 
 /** A histogram of simulated returns (bins of z = ln of the year-1 value over today's), in counts of paths. */
 export function HistogramChart({ bins, label }: { bins: { from: number; to: number; count: number }[]; label: string }) {
@@ -20,7 +21,7 @@ export function HistogramChart({ bins, label }: { bins: { from: number; to: numb
     <div ref={ref} className="w-full">
       <svg width={width} height={height} role="img" aria-label={label}>
         {bins.map((b) => (
-          <rect key={b.from} x={x(b.from)} width={Math.max(1, x(b.to) - x(b.from) - 1)} y={y(b.count)} height={y(0) - y(b.count)} fill="#23727a" />
+          <rect key={b.from} x={x(b.from)} width={Math.max(1, x(b.to) - x(b.from) - 1)} y={y(b.count)} height={y(0) - y(b.count)} fill={palette.tide[500]} />
         ))}
         {x.ticks(5).map((t) => (
           <text key={t} x={x(t)} y={height - 6} textAnchor="middle" className="figures fill-ink-muted text-caption">

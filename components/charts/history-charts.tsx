@@ -3,6 +3,7 @@
 import { extent, line, max, scaleLinear, scaleUtc } from 'd3';
 import { formatPercent } from '@/lib/format';
 import { useWidth } from './use-width';
+import { palette } from '@/lib/palette';
 
 interface Point {
   date: string;
@@ -40,13 +41,13 @@ export function HistoryCharts({ series, returns }: { series: Point[]; returns: P
       <svg width={width} height={height} role="img" aria-label={`The series: ${series.length} values from ${series[0]?.date} to ${series.at(-1)?.date}`}>
         {y.ticks(4).map((t) => (
           <g key={t}>
-            <line x1={margin.left} x2={width - margin.right} y1={y(t)} y2={y(t)} stroke="#ece8df" />
+            <line x1={margin.left} x2={width - margin.right} y1={y(t)} y2={y(t)} stroke={palette.paper.sunk} />
             <text x={margin.left - 6} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
               {t.toLocaleString('en-GB')}
             </text>
           </g>
         ))}
-        {path ? <path d={path} fill="none" stroke="#16232d" strokeWidth="1.3" /> : null}
+        {path ? <path d={path} fill="none" stroke={palette.ink.DEFAULT} strokeWidth="1.3" /> : null}
         {axis.map((t) => (
           <text key={+t} x={x(t)} y={height - 8} textAnchor="middle" className="fill-ink-muted text-caption">
             {t.getUTCFullYear()}-{String(t.getUTCMonth() + 1).padStart(2, '0')}
@@ -56,7 +57,7 @@ export function HistoryCharts({ series, returns }: { series: Point[]; returns: P
       <svg width={width} height={height} role="img" aria-label={`Log returns, between ${formatPercent(-r)} and ${formatPercent(r)}`}>
         {yr.ticks(4).map((t) => (
           <g key={t}>
-            <line x1={margin.left} x2={width - margin.right} y1={yr(t)} y2={yr(t)} stroke={t === 0 ? '#66737d' : '#ece8df'} />
+            <line x1={margin.left} x2={width - margin.right} y1={yr(t)} y2={yr(t)} stroke={t === 0 ? palette.ink.muted : palette.paper.sunk} />
             <text x={margin.left - 6} y={yr(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
               {formatPercent(t, 0)}
             </text>
@@ -69,7 +70,7 @@ export function HistoryCharts({ series, returns }: { series: Point[]; returns: P
             width={barWidth}
             y={Math.min(yr(0), yr(p.value))}
             height={Math.abs(yr(p.value) - yr(0))}
-            fill={p.value >= 0 ? '#23727a' : '#b9622f'}
+            fill={p.value >= 0 ? palette.tide[500] : palette.ember[500]}
           />
         ))}
       </svg>

@@ -4,6 +4,7 @@ import { layoutNpvComparison, type NpvPair } from '@/lib/charts/npv-comparison';
 import { wrapLabel } from '@/lib/charts/wrap-label';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
+import { palette } from '@/lib/palette';
 
 /**
  * NPV without flexibility (hollow ring) and with it (filled dot), one row per project or case;
@@ -19,13 +20,13 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
         <span className="font-semibold uppercase tracking-wide">{title}</span>
         <span className="inline-flex items-center gap-1.5">
           <svg width="12" height="12" aria-hidden>
-            <circle cx="6" cy="6" r="4.5" fill="white" stroke="#3c4b57" strokeWidth="1.5" />
+            <circle cx="6" cy="6" r="4.5" fill="white" stroke={palette.ink.soft} strokeWidth="1.5" />
           </svg>
           Static NPV (no flexibility)
         </span>
         <span className="inline-flex items-center gap-1.5">
           <svg width="12" height="12" aria-hidden>
-            <circle cx="6" cy="6" r="5" fill="#23727a" />
+            <circle cx="6" cy="6" r="5" fill={palette.tide[500]} />
           </svg>
           Expanded NPV (with flexibility)
         </span>
@@ -38,13 +39,20 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
       >
         {layout.ticks.map((t) => (
           <g key={t.value}>
-            <line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke="#ece8df" />
+            <line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} />
             <text x={t.x} y={layout.height - layout.margin.bottom + 16} textAnchor="middle" className="fill-ink-muted text-caption figures">
               {formatMoney(t.value, undefined, Math.abs(t.value) < 10 && t.value % 1 !== 0 ? 1 : 0)}
             </text>
           </g>
         ))}
-        <line x1={layout.zeroX} x2={layout.zeroX} y1={layout.margin.top - 4} y2={layout.height - layout.margin.bottom} stroke="#66737d" strokeDasharray="3 3" />
+        <line
+          x1={layout.zeroX}
+          x2={layout.zeroX}
+          y1={layout.margin.top - 4}
+          y2={layout.height - layout.margin.bottom}
+          stroke={palette.ink.muted}
+          strokeDasharray="3 3"
+        />
         {layout.rows.map((r) => (
           <g key={r.id}>
             <text x={layout.margin.left - 12} y={r.y} textAnchor="end" className="fill-ink text-body">
@@ -54,9 +62,9 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
                 </tspan>
               ))}
             </text>
-            <line x1={r.staticX} x2={r.expandedX} y1={r.y} y2={r.y} stroke="#7fbcc0" strokeWidth="6" strokeLinecap="round" />
-            <circle cx={r.staticX} cy={r.y} r="6" fill="white" stroke="#3c4b57" strokeWidth="2" />
-            <circle cx={r.expandedX} cy={r.y} r="6.5" fill="#23727a" />
+            <line x1={r.staticX} x2={r.expandedX} y1={r.y} y2={r.y} stroke={palette.tide[300]} strokeWidth="6" strokeLinecap="round" />
+            <circle cx={r.staticX} cy={r.y} r="6" fill="white" stroke={palette.ink.soft} strokeWidth="2" />
+            <circle cx={r.expandedX} cy={r.y} r="6.5" fill={palette.tide[500]} />
             <text x={Math.max(r.staticX, r.expandedX) + 12} y={r.y} dy="0.35em" className="fill-ink-soft text-caption figures">
               {formatMoney(r.staticNpv)} → {formatMoney(r.expandedNpv)}
             </text>

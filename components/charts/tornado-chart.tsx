@@ -5,6 +5,7 @@ import { wrapLabel } from '@/lib/charts/wrap-label';
 import { formatMoney, formatPercent } from '@/lib/format';
 import type { Sensitivity } from '@/lattice';
 import { useWidth } from './use-width';
+import { palette } from '@/lib/palette';
 
 /** How an input's move reads for people: money for V0, percentages for rates, ±10 % for costs. */
 export function describeBump(s: Sensitivity, side: 'low' | 'high'): string {
@@ -32,7 +33,7 @@ export function TornadoChart({ sensitivities, base, currency }: { sensitivities:
       <svg width={layout.width} height={layout.height} role="img" aria-label={`Sensitivity of expanded NPV (${currency}); base ${formatMoney(base)}`}>
         {layout.ticks.map((t) => (
           <g key={t.value}>
-            <line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke="#ece8df" />
+            <line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} />
             <text x={t.x} y={layout.height - layout.margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
               {formatMoney(t.value, undefined, 0)}
             </text>
@@ -48,7 +49,7 @@ export function TornadoChart({ sensitivities, base, currency }: { sensitivities:
                   y={r.y}
                   width={Math.max(1, Math.abs(x - layout.baseX))}
                   height={r.bandHeight}
-                  fill={side === 'low' ? '#b9b1a2' : '#23727a'}
+                  fill={side === 'low' ? palette.line.strong : palette.tide[500]}
                   rx="2"
                 />
               </g>
@@ -68,7 +69,14 @@ export function TornadoChart({ sensitivities, base, currency }: { sensitivities:
             </g>
           );
         })}
-        <line x1={layout.baseX} x2={layout.baseX} y1={layout.margin.top - 4} y2={layout.height - layout.margin.bottom} stroke="#16232d" strokeWidth="1.5" />
+        <line
+          x1={layout.baseX}
+          x2={layout.baseX}
+          y1={layout.margin.top - 4}
+          y2={layout.height - layout.margin.bottom}
+          stroke={palette.ink.DEFAULT}
+          strokeWidth="1.5"
+        />
       </svg>
       <p className="mt-1 flex flex-wrap gap-4 text-caption text-ink-soft">
         <span className="inline-flex items-center gap-1.5">

@@ -5,6 +5,7 @@ import { wrapLabel } from '@/lib/charts/wrap-label';
 import { formatChange, formatMoney } from '@/lib/format';
 import type { ValuationResult } from '@/lattice';
 import { useWidth } from './use-width';
+import { palette } from '@/lib/palette';
 
 /** Lines of label under each bar. */
 const LABEL_LINES = 4;
@@ -25,15 +26,15 @@ export function WaterfallChart({ result, currency }: { result: ValuationResult; 
       >
         {layout.ticks.map((t) => (
           <g key={t.value}>
-            <line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={t.y} y2={t.y} stroke="#ece8df" />
+            <line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={t.y} y2={t.y} stroke={palette.paper.sunk} />
             <text x={layout.margin.left - 8} y={t.y} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
               {formatMoney(t.value, undefined, 0)}
             </text>
           </g>
         ))}
-        <line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={layout.zeroY} y2={layout.zeroY} stroke="#66737d" />
+        <line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={layout.zeroY} y2={layout.zeroY} stroke={palette.ink.muted} />
         {layout.bars.map((b, k) => {
-          const fill = b.kind === 'total' ? '#16232d' : b.value >= 0 ? '#23727a' : '#ad3f2b';
+          const fill = b.kind === 'total' ? palette.ink.DEFAULT : b.value >= 0 ? palette.tide[500] : palette.brick[500];
           const next = layout.bars[k + 1];
           return (
             <g key={b.key}>
@@ -44,7 +45,7 @@ export function WaterfallChart({ result, currency }: { result: ValuationResult; 
                   x2={next.x}
                   y1={b.to >= b.from ? b.y : b.y + b.height}
                   y2={b.to >= b.from ? b.y : b.y + b.height}
-                  stroke="#b9b1a2"
+                  stroke={palette.line.strong}
                   strokeDasharray="2 2"
                 />
               ) : null}

@@ -24,13 +24,14 @@ import { premiumSplitText } from '../premium-split';
 import { describeOption } from '../option-words';
 import type { BoardPackData, RecordEvent } from './data';
 import { pdfText } from './text';
+import { palette, seriesFill } from '@/lib/palette';
 
-const ink = '#16232d';
-const soft = '#3c4b57';
-const muted = '#66737d';
-const line = '#d9d3c7';
-const tide = '#23727a';
-const brick = '#ad3f2b';
+const ink = palette.ink.DEFAULT;
+const soft = palette.ink.soft;
+const muted = palette.ink.muted;
+const line = palette.line.DEFAULT;
+const tide = palette.tide[500];
+const brick = palette.brick[500];
 
 const styles = StyleSheet.create({
   page: { fontFamily: 'Work Sans', fontSize: 10, color: ink, paddingTop: 48, paddingBottom: 64, paddingHorizontal: 48 },
@@ -45,14 +46,14 @@ const styles = StyleSheet.create({
   lead: { lineHeight: 1.4, fontSize: 11, color: soft, marginTop: 6 },
   tiles: { flexDirection: 'row', gap: 10, marginTop: 18 },
   tile: { flex: 1, borderWidth: 1, borderColor: line, borderRadius: 4, padding: 10 },
-  tileStrong: { flex: 1, borderWidth: 1.5, borderColor: tide, borderRadius: 4, padding: 10, backgroundColor: '#e9f4f4' },
+  tileStrong: { flex: 1, borderWidth: 1.5, borderColor: tide, borderRadius: 4, padding: 10, backgroundColor: palette.tide[50] },
   tileLabel: { fontSize: 8, color: muted, textTransform: 'uppercase', letterSpacing: 0.6 },
   tileValue: { fontSize: 16, fontWeight: 600, marginTop: 3 },
-  caution: { lineHeight: 1.4, marginTop: 14, padding: 10, backgroundColor: '#ece8df', fontSize: 8.5, color: soft, borderRadius: 3 },
-  demo: { lineHeight: 1.4, marginTop: 10, padding: 6, backgroundColor: '#f7e3d6', color: '#8a4520', fontSize: 8.5, borderRadius: 3 },
+  caution: { lineHeight: 1.4, marginTop: 14, padding: 10, backgroundColor: palette.paper.sunk, fontSize: 8.5, color: soft, borderRadius: 3 },
+  demo: { lineHeight: 1.4, marginTop: 10, padding: 6, backgroundColor: palette.ember[100], color: palette.ember[700], fontSize: 8.5, borderRadius: 3 },
   table: { borderWidth: 1, borderColor: line, borderRadius: 3, marginTop: 6 },
   row: { flexDirection: 'row', borderBottomWidth: 1, borderBottomColor: line },
-  head: { backgroundColor: '#ece8df' },
+  head: { backgroundColor: palette.paper.sunk },
   cell: { padding: 4, fontSize: 8.5 },
   num: { textAlign: 'right' },
   rule: { fontSize: 10, lineHeight: 1.4, marginBottom: 5, paddingLeft: 8, borderLeftWidth: 2, borderLeftColor: tide },
@@ -152,7 +153,7 @@ function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
     <Svg width={layout.width} height={layout.height}>
       {layout.ticks.map((t) => (
         <G key={t.value}>
-          <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke="#ece8df" strokeWidth={1} />
+          <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} strokeWidth={1} />
           <SvgText x={t.x} y={layout.height - layout.margin.bottom + 12} anchor="middle" color={muted}>
             {money(t.value, undefined, 0)}
           </SvgText>
@@ -172,8 +173,8 @@ function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
           {text}
         </SvgText>
       ))}
-      <Line x1={row.staticX} x2={row.expandedX} y1={row.y} y2={row.y} stroke="#7fbcc0" strokeWidth={6} />
-      <Circle cx={row.staticX} cy={row.y} r={5} fill="#ffffff" stroke={soft} strokeWidth={1.5} />
+      <Line x1={row.staticX} x2={row.expandedX} y1={row.y} y2={row.y} stroke={palette.tide[300]} strokeWidth={6} />
+      <Circle cx={row.staticX} cy={row.y} r={5} fill={palette.paper.raised} stroke={soft} strokeWidth={1.5} />
       <Circle cx={row.expandedX} cy={row.y} r={5.5} fill={tide} />
       <SvgText x={row.staticX} y={row.y - 10} anchor="middle">{`static ${money(r.staticNpv)}`}</SvgText>
       <SvgText x={row.expandedX} y={row.y + 17} anchor="middle" color={tide} bold>
@@ -190,7 +191,7 @@ function WaterfallPdf({ data, width }: { data: BoardPackData; width: number }) {
     <Svg width={layout.width} height={layout.height}>
       {layout.ticks.map((t) => (
         <G key={t.value}>
-          <Line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={t.y} y2={t.y} stroke="#ece8df" strokeWidth={1} />
+          <Line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={t.y} y2={t.y} stroke={palette.paper.sunk} strokeWidth={1} />
           <SvgText x={layout.margin.left - 6} y={t.y + 3} anchor="end" color={muted}>
             {money(t.value, undefined, 0)}
           </SvgText>
@@ -224,7 +225,7 @@ function TornadoPdf({ data, width }: { data: BoardPackData; width: number }) {
     <Svg width={layout.width} height={layout.height}>
       {layout.ticks.map((t) => (
         <G key={t.value}>
-          <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke="#ece8df" strokeWidth={1} />
+          <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} strokeWidth={1} />
           <SvgText x={t.x} y={layout.height - layout.margin.bottom + 12} anchor="middle" color={muted}>
             {money(t.value, undefined, 0)}
           </SvgText>
@@ -249,7 +250,7 @@ function TornadoPdf({ data, width }: { data: BoardPackData; width: number }) {
                 {text}
               </SvgText>
             ))}
-            {bar(row.lowX, '#b9b1a2')}
+            {bar(row.lowX, palette.line.strong)}
             {bar(row.highX, tide)}
             <SvgText x={layout.width - layout.margin.right + 4} y={row.y + row.bandHeight / 2 + 3}>
               {figures(s)}
@@ -285,11 +286,19 @@ function LatticePdf({ data, width }: { data: BoardPackData; width: number }) {
   const { grid, startMode } = data.excerpt;
   const layout = layoutLatticeTree(grid, startMode, Math.min(4, grid.steps.length - 1));
   const scale = Math.min(1, width / layout.width);
-  const fills = ['#cfe7e8', '#f7e3d6', '#dcebdc', '#f5dcd6'];
+  const fills = seriesFill;
   const diagram = (
     <Svg width={layout.width * scale} height={layout.height * scale} viewBox={`0 0 ${layout.width} ${layout.height}`}>
       {layout.edges.map((e) => (
-        <Line key={`${e.from.step}:${e.from.node}-${e.to.node}`} x1={e.from.x + 112} y1={e.from.y} x2={e.to.x} y2={e.to.y} stroke="#b9b1a2" strokeWidth={1} />
+        <Line
+          key={`${e.from.step}:${e.from.node}-${e.to.node}`}
+          x1={e.from.x + 112}
+          y1={e.from.y}
+          x2={e.to.x}
+          y2={e.to.y}
+          stroke={palette.line.strong}
+          strokeWidth={1}
+        />
       ))}
       {layout.nodes.map((n) => (
         <G key={`${n.step}:${n.node}`}>
@@ -299,8 +308,8 @@ function LatticePdf({ data, width }: { data: BoardPackData; width: number }) {
             width={112}
             height={52}
             rx={5}
-            fill={n.decision ? fills[layout.decisions.indexOf(n.decision) % fills.length] : '#ffffff'}
-            stroke="#b9b1a2"
+            fill={n.decision ? fills[layout.decisions.indexOf(n.decision) % fills.length] : palette.paper.raised}
+            stroke={palette.line.strong}
             strokeWidth={1}
           />
           <SvgText x={n.x + 8} y={n.y - 10} size={10}>{`V ${money(n.underlying)}`}</SvgText>

@@ -26,7 +26,7 @@ export default async function ApiKeysPage() {
   const keys = await listKeys(member);
   return (
     <>
-      <PageHeader title="Settings" lead={`Keys that let ${member.orgName}'s own systems read and write through the API.`} />
+      <PageHeader title="Settings" lead={`Keys that let the systems of ${member.orgName} read and write through the API.`} />
       <SettingsNav />
       <section aria-labelledby="create-key-heading" className="mb-10">
         <h2 id="create-key-heading" className="mb-1">

@@ -10,10 +10,10 @@ import { NODE_BUDGET, type ProjectModel, type ValuationResult } from '@/lattice'
 import { firstUse, levelOf, type LatticeWindow } from '@/lib/charts/lattice-window';
 import { modeLabel } from '@/lib/mode-words';
 import { useNodeExplanation, useValuation } from '@/lib/engine/use-engine';
-import { decisionFills, LatticeTree } from './lattice-tree';
+import { LatticeTree } from './lattice-tree';
 import { NodeInspector } from './node-inspector';
+import { seriesFill, seriesStrong } from '@/lib/palette';
 
-const strongFills = ['#23727a', '#b9622f', '#3f7a4b', '#ad3f2b', '#5b4a8a', '#8a7a20'];
 /** Most steps one window shows: beyond that the node text would be too small to read. */
 const MAX_WINDOW_STEPS = 8;
 /** Levels each side of the band's centre: seven nodes a column, legible without zooming out. */
@@ -162,7 +162,7 @@ export function LatticeSection({ model, modes, startMode, result, currency }: Pr
                 <span
                   aria-hidden
                   className="inline-block h-3 w-4 rounded-sm border border-line-strong"
-                  style={{ background: decisionFills[k % decisionFills.length] }}
+                  style={{ background: seriesFill[k % seriesFill.length] }}
                 />{' '}
                 ▶ {d}
               </li>
@@ -188,7 +188,7 @@ export function LatticeSection({ model, modes, startMode, result, currency }: Pr
         {whole && grid ? (
           <>
             <p className="mb-3 text-caption text-ink-muted">Every node of the lattice by time and project value, filled by the decision taken in this mode.</p>
-            <DecisionMap grid={grid} mode={activeMode} fills={strongFills} order={order} />
+            <DecisionMap grid={grid} mode={activeMode} fills={seriesStrong} order={order} />
           </>
         ) : (
           <p className="text-caption text-ink-muted">

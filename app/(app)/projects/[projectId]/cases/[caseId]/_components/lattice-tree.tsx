@@ -6,9 +6,7 @@ import type { NodeGrid } from '@/lattice';
 import { NODE_HEIGHT, NODE_WIDTH } from '@/lib/charts/lattice-tree';
 import { layoutLatticeWindow, type LatticeWindow } from '@/lib/charts/lattice-window';
 import { formatNumber } from '@/lib/format';
-
-/** Fills for decisions, in order; continuing is always white. The decision's name is printed on the node too. */
-export const decisionFills = ['#cfe7e8', '#f7e3d6', '#dcebdc', '#f5dcd6', '#e6e0f2', '#f2ecc9'];
+import { palette, seriesFill } from '@/lib/palette';
 
 interface Props {
   grid: NodeGrid;
@@ -63,7 +61,7 @@ export function LatticeTree({ grid, mode, frame, selected, onSelect, decisionOrd
   }, [layout.width, layout.height, viewHeight, frame.from, frame.steps, frame.centre]);
 
   const zoomBy = (k: number) => svgRef.current && zoomRef.current && select(svgRef.current).call(zoomRef.current.scaleBy, k);
-  const fillOf = (decision: string | null) => (decision === null ? '#ffffff' : decisionFills[decisionOrder.indexOf(decision) % decisionFills.length]);
+  const fillOf = (decision: string | null) => (decision === null ? palette.paper.raised : seriesFill[decisionOrder.indexOf(decision) % seriesFill.length]);
 
   return (
     <div className="relative rounded-card border border-line bg-paper-raised">
@@ -85,7 +83,14 @@ export function LatticeTree({ grid, mode, frame, selected, onSelect, decisionOrd
       >
         <g ref={layerRef}>
           {layout.edges.map((e) => (
-            <line key={`${e.from.step}:${e.from.node}-${e.to.node}`} x1={e.from.x + NODE_WIDTH} y1={e.from.y} x2={e.to.x} y2={e.to.y} stroke="#b9b1a2" />
+            <line
+              key={`${e.from.step}:${e.from.node}-${e.to.node}`}
+              x1={e.from.x + NODE_WIDTH}
+              y1={e.from.y}
+              x2={e.to.x}
+              y2={e.to.y}
+              stroke={palette.line.strong}
+            />
           ))}
           {layout.nodes.map((n) => {
             const isSelected = selected?.step === n.step && selected.node === n.node;
@@ -111,7 +116,7 @@ export function LatticeTree({ grid, mode, frame, selected, onSelect, decisionOrd
                   height={NODE_HEIGHT}
                   rx="6"
                   fill={fillOf(n.decision)}
-                  stroke={isSelected ? '#16232d' : '#b9b1a2'}
+                  stroke={isSelected ? palette.ink.DEFAULT : palette.line.strong}
                   strokeWidth={isSelected ? 2.5 : 1}
                 />
                 <text x="8" y="16" className="figures fill-ink-soft text-[11px]">

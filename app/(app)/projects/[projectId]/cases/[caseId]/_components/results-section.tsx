@@ -11,6 +11,7 @@ import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney, formatPercent } from '@/lib/format';
 import { premiumSplitText } from '@/lib/premium-split';
 import { optionTypeLabels, type OptionType } from '@/lib/option-form';
+import { palette } from '@/lib/palette';
 
 /**
  * Probability of first exercise per year (summed over the steps of each year), as small bars;
@@ -31,7 +32,7 @@ function TimingBars({ s }: { s: SwitchResult }) {
     <div className="flex items-start gap-2">
       <svg width={entries.length * 9} height="24" aria-hidden className="shrink-0">
         {entries.map(([year, p], k) => (
-          <rect key={year} x={k * 9} y={24 - (p / max) * 22} width="7" height={Math.max(1, (p / max) * 22)} fill="#23727a">
+          <rect key={year} x={k * 9} y={24 - (p / max) * 22} width="7" height={Math.max(1, (p / max) * 22)} fill={palette.tide[500]}>
             <title>{`year ${year}–${year + 1}: ${formatPercent(p)}`}</title>
           </rect>
         ))}
