@@ -217,6 +217,7 @@ export interface DB {
   sign_in_failure: SignInFailureTable;
   portfolio_revaluation: PortfolioRevaluationTable;
   api_key: ApiKeyTable;
+  case_observation: CaseObservationTable;
 }
 
 /** A request to re-value every case whose stored figures come from an older engine (a job). */
@@ -250,6 +251,20 @@ export interface ApiKeyTable {
   expires_at: Timestamp | null;
   last_used_at: Timestamp | null;
   revoked_at: Timestamp | null;
+}
+
+/** A dated observation of a followed case's project value V (after its approval). */
+export interface CaseObservationTable {
+  id: Generated<string>;
+  organization_id: string;
+  case_id: string;
+  /** A calendar date, YYYY-MM-DD (db/queries/observations.ts reads it as text, never as a Date at local midnight). */
+  observed_on: ColumnType<string, string, string>;
+  value: number;
+  note: Generated<string>;
+  source: Generated<string>;
+  recorded_by: string | null;
+  created_at: Timestamp;
 }
 
 export type OrganizationSettings = Selectable<OrganizationSettingsTable>;

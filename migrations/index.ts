@@ -15,6 +15,7 @@ import * as m0009 from './0009_written_recommendations';
 import * as m0010 from './0010_portfolio_revaluations';
 import * as m0011 from './0011_api_keys';
 import * as m0012 from './0012_result_hashes';
+import * as m0013 from './0013_observations';
 
 export const migrations: Record<string, Migration> = {
   '0001_auth_tables': m0001,
@@ -29,4 +30,5 @@ export const migrations: Record<string, Migration> = {
   '0010_portfolio_revaluations': m0010,
   '0011_api_keys': m0011,
   '0012_result_hashes': m0012,
+  '0013_observations': m0013,
 };

@@ -27,6 +27,7 @@ describe('migrations', () => {
       'audit_log',
       'board_pack',
       'case',
+      'case_observation',
       'case_snapshot',
       'invitation',
       'member',

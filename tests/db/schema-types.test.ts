@@ -167,6 +167,17 @@ const declared = {
     created_at: 'not null',
     finished_at: 'nullable',
   },
+  case_observation: {
+    id: 'not null',
+    organization_id: 'not null',
+    case_id: 'not null',
+    observed_on: 'not null',
+    value: 'not null',
+    note: 'not null',
+    source: 'not null',
+    recorded_by: 'nullable',
+    created_at: 'not null',
+  },
   api_key: {
     id: 'not null',
     organization_id: 'not null',

@@ -1,0 +1,43 @@
+/** Dated observations of a followed case's project value, per organisation. */
+import { sql } from 'kysely';
+import type { Database } from '../index';
+
+export async function addObservation(
+  db: Database,
+  args: { orgId: string; caseId: string; observedOn: string; value: number; note: string; source: string; recordedBy: string },
+) {
+  return db
+    .insertInto('case_observation')
+    .values({
+      organization_id: args.orgId,
+      case_id: args.caseId,
+      observed_on: args.observedOn,
+      value: args.value,
+      note: args.note,
+      source: args.source,
+      recorded_by: args.recordedBy,
+    })
+    .returning(['id'])
+    .executeTakeFirstOrThrow();
+}
+
+/** The case's observations, oldest date first (the latest is the last). */
+export async function listObservations(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
+  return db
+    .selectFrom('case_observation')
+    .leftJoin('user', 'user.id', 'case_observation.recorded_by')
+    .select([
+      'case_observation.id',
+      sql<string>`case_observation.observed_on::text`.as('observedOn'),
+      'case_observation.value',
+      'case_observation.note',
+      'case_observation.source',
+      'case_observation.created_at as recordedAt',
+      'user.name as recordedBy',
+    ])
+    .where('case_observation.organization_id', '=', orgId)
+    .where('case_observation.case_id', '=', caseId)
+    .orderBy('case_observation.observed_on')
+    .orderBy('case_observation.created_at')
+    .execute();
+}
