@@ -446,6 +446,50 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/cases/{caseId}/observations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Record the project's value on a date after approval
+         * @description The value is in the case’s currency and units. Refused: a date before the approval of the version followed, in the future, or beyond the model’s horizon (422, the rule named).
+         *
+         *     Roles: Admin, Analyst.
+         */
+        post: operations["addObservation"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/cases/{caseId}/watch": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Where each approved right stands now
+         * @description At the latest observation (or the approval, without one): per right its status, critical value, side and distance, and the re-valued expanded NPV.
+         *
+         *     Roles: Admin, Analyst, Reviewer, Executive (read-only).
+         */
+        get: operations["watchCase"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/cases/{caseId}/board-pack": {
         parameters: {
             query?: never;
@@ -1290,6 +1334,51 @@ export interface components {
             staticNpv: number;
             /** @description An amount in the project's currency and units. */
             expandedNpv: number;
+        };
+        Watch: {
+            followed: {
+                /** @description An opaque identifier. */
+                snapshotId: string;
+                caseVersion: number;
+                /** @description YYYY-MM-DD: the approval of the version followed. */
+                valuationDate: string;
+            };
+            /** @description YYYY-MM-DD: the latest observation, or the valuation date. */
+            asOf: string;
+            /** @description The project value V at that date. */
+            value: number;
+            rights: {
+                id: string;
+                name: string;
+                /** @enum {string} */
+                status: "in_region" | "near" | "outside" | "window_not_open" | "window_closed";
+                critical: number | null;
+                side: ("above" | "below" | "between" | "anywhere") | null;
+                /** @description critical ÷ V − 1. */
+                distanceRatio: number | null;
+                /** @description ln(critical ÷ V) ÷ σ: standard deviations of ln V over a year. */
+                distanceSd: number | null;
+                windowOpensAt: string | null;
+                windowClosesAt: string | null;
+            }[];
+            observations: {
+                /** @description An opaque identifier. */
+                id: string;
+                observedOn: string;
+                /** @description An amount in the project's currency and units. */
+                value: number;
+                note: string;
+                source: string;
+                /**
+                 * Format: date-time
+                 * @description An ISO 8601 instant (UTC).
+                 */
+                recordedAt: string;
+                /** @description A person, or an API key as "API key <name> (created by …)"; null when deleted. */
+                recordedBy: string | null;
+            }[];
+            /** @description The approved model re-valued from that date with V. */
+            revaluedExpandedNpv: number | null;
         };
         Attachment: {
             /** @description An opaque identifier. */
@@ -4285,6 +4374,166 @@ export interface operations {
             };
             /** @description The input is not valid; `fields` says where. */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Too many requests from this key, or too many estimates at once; see Retry-After. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Any other error, in the same shape. */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+        };
+    };
+    addObservation: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description An id from an earlier answer. */
+                caseId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    date: string;
+                    value: number;
+                    /** @default  */
+                    note?: string;
+                    /** @default  */
+                    source?: string;
+                };
+            };
+        };
+        responses: {
+            /** @description Recorded. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        observation: {
+                            id: string;
+                        };
+                    };
+                };
+            };
+            /** @description No session and no API key, or a key that is wrong, revoked or expired. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The caller's role does not allow this. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description No such record in the caller's organisation. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The input is not valid; `fields` says where. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Too many requests from this key, or too many estimates at once; see Retry-After. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Any other error, in the same shape. */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+        };
+    };
+    watchCase: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description An id from an earlier answer. */
+                caseId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The rights and the observations. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Watch"];
+                };
+            };
+            /** @description No session and no API key, or a key that is wrong, revoked or expired. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The caller's role does not allow this. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description No such record in the caller's organisation. */
+            404: {
                 headers: {
                     [name: string]: unknown;
                 };

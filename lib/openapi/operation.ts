@@ -8,7 +8,8 @@ import type { Permission } from '../permissions';
 
 export type Method = 'get' | 'post' | 'patch' | 'delete';
 
-export type Tag = 'Projects' | 'Cases' | 'Valuations' | 'Review' | 'Volatility' | 'Documents' | 'Portfolio' | 'Settings' | 'API keys' | 'Reference';
+export type Tag =
+  'Projects' | 'Cases' | 'Valuations' | 'Review' | 'Follow-through' | 'Volatility' | 'Documents' | 'Portfolio' | 'Settings' | 'API keys' | 'Reference';
 
 export interface Answer {
   description: string;

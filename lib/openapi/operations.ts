@@ -10,6 +10,7 @@ import { caseDuplicateSchema, caseInputSchema, caseSaveSchema } from '../validat
 import { projectCreateSchema, projectUpdateSchema } from '../validations/project';
 import { commentSchema, returnSchema, submitSchema } from '../validations/review';
 import { settingsSchema } from '../validations/settings';
+import { observationSchema } from '../validations/observation';
 import { historyJsonSchema, simulationStartSchema } from '../validations/volatility';
 import type { Operation } from './operation';
 import * as s from './schemas';
@@ -319,6 +320,28 @@ export const operations = {
     answers: {
       200: { description: 'Cases with their latest snapshot, oldest submission first.', schema: z.object({ cases: z.array(s.reviewQueueItemSchema) }) },
     },
+  },
+  addObservation: {
+    method: 'post',
+    path: '/api/v1/cases/{caseId}/observations',
+    summary: "Record the project's value on a date after approval",
+    description:
+      'The value is in the case’s currency and units. Refused: a date before the approval of the version followed, in the future, or beyond the model’s horizon (422, the rule named).',
+    tag: 'Follow-through',
+    permission: { case: ['update'] },
+    body: observationSchema,
+    example: { date: '2027-03-31', value: 118.5, note: 'Updated DCF after the first quarter', source: 'updated DCF' },
+    answers: { 201: { description: 'Recorded.', schema: z.object({ observation: z.object({ id: z.string() }) }) } },
+  },
+  watchCase: {
+    method: 'get',
+    path: '/api/v1/cases/{caseId}/watch',
+    summary: 'Where each approved right stands now',
+    description:
+      'At the latest observation (or the approval, without one): per right its status, critical value, side and distance, and the re-valued expanded NPV.',
+    tag: 'Follow-through',
+    permission: { case: ['read'] },
+    answers: { 200: { description: 'The rights and the observations.', schema: s.watchSchema } },
   },
   boardPack: {
     method: 'get',

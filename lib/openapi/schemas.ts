@@ -369,3 +369,32 @@ export const rerunSchema = z
     partsThatDiffer: z.array(z.string()),
   })
   .meta({ id: 'RerunOutcome' });
+
+export const watchSchema = z
+  .object({
+    followed: z.object({
+      snapshotId: id,
+      caseVersion: z.int(),
+      valuationDate: z.string().meta({ description: 'YYYY-MM-DD: the approval of the version followed.' }),
+    }),
+    asOf: z.string().meta({ description: 'YYYY-MM-DD: the latest observation, or the valuation date.' }),
+    value: money.meta({ description: 'The project value V at that date.' }),
+    rights: z.array(
+      z.object({
+        id: z.string(),
+        name: z.string(),
+        status: z.enum(['in_region', 'near', 'outside', 'window_not_open', 'window_closed']),
+        critical: money.nullable(),
+        side: z.enum(['above', 'below', 'between', 'anywhere']).nullable(),
+        distanceRatio: z.number().nullable().meta({ description: 'critical ÷ V − 1.' }),
+        distanceSd: z.number().nullable().meta({ description: 'ln(critical ÷ V) ÷ σ: standard deviations of ln V over a year.' }),
+        windowOpensAt: z.string().nullable(),
+        windowClosesAt: z.string().nullable(),
+      }),
+    ),
+    observations: z.array(
+      z.object({ id, observedOn: z.string(), value: money, note: z.string(), source: z.string(), recordedAt: dateTime, recordedBy: nullableName }),
+    ),
+    revaluedExpandedNpv: money.nullable().meta({ description: 'The approved model re-valued from that date with V.' }),
+  })
+  .meta({ id: 'Watch' });

@@ -109,6 +109,17 @@ describe('the API through its typed client', () => {
       parseAs: 'arrayBuffer',
     });
     expect(Buffer.from(ok(pack)).subarray(0, 5).toString()).toBe('%PDF-');
+    // Follow-through: the analyst's key records today's value; the viewer's key reads where each right stands.
+    const today = new Date().toISOString().slice(0, 10);
+    ok(
+      await analyst.POST('/api/v1/cases/{caseId}/observations', {
+        params: { path: { caseId: made.id } },
+        body: { date: today, value: 120, source: 'updated DCF' },
+      }),
+    );
+    const watch = ok(await viewer.GET('/api/v1/cases/{caseId}/watch', { params: { path: { caseId: made.id } } }));
+    expect(watch.asOf).toBe(today);
+    expect(watch.rights.map((r) => r.name)).toEqual(['Second line']);
     // The record says who did it: the keys, each under its creator's name.
     const activity = ok(await viewer.GET('/api/v1/projects/{projectId}/activity', { params: { path: { projectId: ids.project } } })).activity;
     expect(activity.find((a) => a.action === 'case.approve')?.actor).toMatch(/^API key Typed client reviewer .* \(created by .+\)$/);

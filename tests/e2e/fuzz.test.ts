@@ -38,6 +38,8 @@ const routes: [string, string][] = [
   ['POST', '/api/v1/cases/:id/return'],
   ['POST', '/api/v1/cases/:id/withdraw'],
   ['GET', '/api/v1/cases/:id/board-pack'],
+  ['GET', '/api/v1/cases/:id/watch'],
+  ['POST', '/api/v1/cases/:id/observations'],
   ['POST', '/api/v1/cases/:id/valuations'],
   ['GET', '/api/v1/cases/:id/valuations'],
   ['POST', '/api/v1/cases/:id/valuations/:id/rerun'],

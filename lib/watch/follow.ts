@@ -1,0 +1,96 @@
+/**
+ * Following an approved case: record what the project is worth now, and say where each right
+ * stands. The model followed is the latest approved snapshot; its valuation date is the day it
+ * was approved, and dates become years after it at 365.25 days a year (the lattice's unit).
+ */
+import 'server-only';
+import { db } from '@/db';
+import { recordAudit } from '@/db/queries/audit';
+import { addObservation, listObservations } from '@/db/queries/observations';
+import { latestApprovedSnapshot } from '@/db/queries/reviews';
+import type { ProjectModel, ValuationResult } from '@/lattice';
+import { requireCase } from '../cases/require-case';
+import type { Member } from '../dal';
+import { valueInWorker } from '../engine/pool';
+import { AppError } from '../errors';
+import type { ObservationInput } from '../validations/observation';
+import { ClockError, modelAt } from './clock';
+import { rightStatuses } from './status';
+
+const DAY_MS = 86_400_000;
+const YEAR_DAYS = 365.25;
+
+const dateOf = (d: Date) => d.toISOString().slice(0, 10);
+const yearsBetween = (from: string, to: string) => (Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / DAY_MS / YEAR_DAYS;
+const dateAfter = (from: string, years: number) => dateOf(new Date(Date.parse(`${from}T00:00:00Z`) + Math.round(years * YEAR_DAYS) * DAY_MS));
+
+async function followed(orgId: string, caseId: string) {
+  await requireCase(db, orgId, caseId);
+  const snapshot = await latestApprovedSnapshot(db, { orgId, caseId });
+  if (!snapshot?.decided_at) throw new AppError('conflict', 'This case has no approved version to follow yet: its rights are watched from their approval.');
+  return { snapshot, valuationDate: dateOf(snapshot.decided_at), model: snapshot.model as ProjectModel, result: snapshot.result as ValuationResult };
+}
+
+export async function recordObservation(member: Member, caseId: string, input: ObservationInput) {
+  const { valuationDate, model } = await followed(member.orgId, caseId);
+  const refuse = (message: string) => new AppError('unprocessable', message, { date: [message] });
+  if (input.date < valuationDate) throw refuse(`The date is before ${valuationDate}, when the version followed was approved.`);
+  if (input.date > dateOf(new Date())) throw refuse('The date is in the future: record what is known today.');
+  if (yearsBetween(valuationDate, input.date) >= model.horizon)
+    throw refuse(`The date is beyond the model's horizon (${dateAfter(valuationDate, model.horizon)}): no right is left to follow.`);
+  return db.transaction().execute(async (trx) => {
+    const made = await addObservation(trx, {
+      orgId: member.orgId,
+      caseId,
+      observedOn: input.date,
+      value: input.value,
+      note: input.note,
+      source: input.source,
+      recordedBy: member.userId,
+    });
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.observe',
+      subjectType: 'case',
+      subjectId: caseId,
+      detail: { date: input.date, value: input.value, source: input.source },
+    });
+    return made;
+  });
+}
+
+export async function watchCase(member: Member, caseId: string, signal?: AbortSignal) {
+  const { snapshot, valuationDate, model, result } = await followed(member.orgId, caseId);
+  const observations = await listObservations(db, { orgId: member.orgId, caseId });
+  const latest = observations.at(-1);
+  const asOf = latest?.observedOn ?? valuationDate;
+  const t = yearsBetween(valuationDate, asOf);
+  const value = latest?.value ?? model.underlying.value;
+  const rights = rightStatuses({
+    options: model.options ?? [],
+    switches: result.switches,
+    horizon: model.horizon,
+    volatility: model.underlying.volatility,
+    t,
+    value,
+  }).map((r) => ({
+    ...r,
+    windowOpensAt: r.windowOpensAt === null ? null : dateAfter(valuationDate, r.windowOpensAt),
+    windowClosesAt: r.windowClosesAt === null ? null : dateAfter(valuationDate, r.windowClosesAt),
+  }));
+  let revaluedExpandedNpv: number | null = null;
+  try {
+    revaluedExpandedNpv = (await valueInWorker(modelAt(model, t, value).model, { extras: false }, { owner: member.userId, signal })).expandedNpv;
+  } catch (error) {
+    if (!(error instanceof ClockError)) throw error;
+  }
+  return {
+    followed: { snapshotId: snapshot.id, caseVersion: snapshot.case_version, valuationDate },
+    asOf,
+    value,
+    rights,
+    observations,
+    revaluedExpandedNpv,
+  };
+}
