@@ -1342,7 +1342,25 @@ export interface components {
                 caseVersion: number;
                 /** @description YYYY-MM-DD: the approval of the version followed. */
                 valuationDate: string;
+                /** @description Years after the valuation date. */
+                horizon: number;
+                /** @description V at the valuation date. */
+                value: number;
             };
+            /** @description The approved rights with their boundaries (years after the valuation date), for charts. */
+            switches: {
+                id: string;
+                kind: string;
+                exerciseProbability: number;
+                boundary: {
+                    t: number;
+                    critical: number | null;
+                    /** @enum {string} */
+                    side: "above" | "below" | "between" | "anywhere";
+                    low: number | null;
+                    high: number | null;
+                }[];
+            }[];
             /** @description YYYY-MM-DD: the latest observation, or the valuation date. */
             asOf: string;
             /** @description The project value V at that date. */

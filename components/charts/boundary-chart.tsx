@@ -1,6 +1,6 @@
 'use client';
 
-import { line, scaleLinear } from 'd3';
+import { area, line, scaleLinear } from 'd3';
 import type { SwitchResult } from '@/lattice';
 import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney } from '@/lib/format';
@@ -12,9 +12,25 @@ const dashes = ['', '6 3', '2 3', '8 3 2 3', '1 2', '10 4'];
 /**
  * The exercise boundary over time: for each right, the critical project value at each step
  * where it is used, on the side the engine reports (lib/decision-rules.ts). Lines differ by
- * dash as well as colour, and are named in the legend.
+ * dash as well as colour, and are named in the legend. Following a case, it also shades each
+ * right's region (the side where it is used) and draws the observed values over time.
  */
-export function BoundaryChart({ switches, v0, horizon, currency }: { switches: SwitchResult[]; v0: number; horizon: number; currency: string }) {
+export function BoundaryChart({
+  switches,
+  v0,
+  horizon,
+  currency,
+  observed,
+  v0Label = 'V₀ today',
+}: {
+  switches: SwitchResult[];
+  v0: number;
+  horizon: number;
+  currency: string;
+  /** Observed project values, in years after the valuation date. */
+  observed?: { t: number; v: number }[];
+  v0Label?: string;
+}) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const height = 280;
   const margin = { top: 16, right: 24, bottom: 36, left: 64 };
@@ -22,7 +38,10 @@ export function BoundaryChart({ switches, v0, horizon, currency }: { switches: S
     const rule = decisionRule(s, currency);
     return { s, k, rule, points: rule.points.map((p) => ({ t: p.t, v: p.threshold })) };
   });
-  const values = series.flatMap((x) => x.points.map((p) => p.v)).concat(v0);
+  const values = series
+    .flatMap((x) => x.points.map((p) => p.v))
+    .concat(v0)
+    .concat((observed ?? []).map((o) => o.v));
   const x = scaleLinear()
     .domain([0, horizon])
     .range([margin.left, width - margin.right]);
@@ -54,8 +73,33 @@ export function BoundaryChart({ switches, v0, horizon, currency }: { switches: S
         </text>
         <line x1={margin.left} x2={width - margin.right} y1={y(v0)} y2={y(v0)} stroke={palette.ink.muted} strokeDasharray="3 3" />
         <text x={margin.left + 4} y={y(v0) - 4} className="fill-ink-muted text-caption">
-          V₀ today {formatMoney(v0)}
+          {v0Label} {formatMoney(v0)}
         </text>
+        {observed
+          ? series.map(({ s, k, rule, points }) =>
+              points.length > 1 && (rule.side === 'above' || rule.side === 'below') ? (
+                <path
+                  key={`${s.id}-region`}
+                  d={
+                    area<{ t: number; v: number }>()
+                      .x((p) => x(p.t))
+                      .y0((p) => y(p.v))
+                      .y1(rule.side === 'above' ? margin.top : height - margin.bottom)(points) ?? ''
+                  }
+                  fill={seriesStrong[k % seriesStrong.length]}
+                  opacity={0.08}
+                />
+              ) : null,
+            )
+          : null}
+        {observed && observed.length > 0 ? (
+          <g>
+            <path d={path(observed) ?? ''} fill="none" stroke={palette.ink.DEFAULT} strokeWidth="1.5" />
+            {observed.map((o, k) => (
+              <circle key={k} cx={x(o.t)} cy={y(o.v)} r="4" fill={palette.ink.DEFAULT} />
+            ))}
+          </g>
+        ) : null}
         {series.map(({ s, k, points }) => (
           <g key={s.id}>
             {points.length > 1 ? (
@@ -73,6 +117,14 @@ export function BoundaryChart({ switches, v0, horizon, currency }: { switches: S
         ))}
       </svg>
       <ul className="mt-2 flex flex-col gap-1 text-caption text-ink-soft">
+        {observed && observed.length > 0 ? (
+          <li className="flex items-start gap-2">
+            <svg width="28" height="10" aria-hidden className="mt-1 shrink-0">
+              <circle cx="14" cy="5" r="4" fill={palette.ink.DEFAULT} />
+            </svg>
+            The project value as observed; each right&rsquo;s shaded side is where it is used.
+          </li>
+        ) : null}
         {series.map(({ s, k, rule }) => (
           <li key={s.id} className="flex items-start gap-2">
             <svg width="28" height="10" aria-hidden className="mt-1 shrink-0">

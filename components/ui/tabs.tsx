@@ -6,11 +6,18 @@ export interface Tab {
   id: string;
   label: string;
   content: ReactNode;
+  /** Render the content only once the tab has been opened (for a panel that fetches or computes on mount). */
+  lazy?: boolean;
 }
 
 /** Tabs with the WAI-ARIA keyboard model: arrow keys move between tabs, Home and End jump. */
 export function Tabs({ tabs, initial }: { tabs: Tab[]; initial?: string }) {
-  const [active, setActive] = useState(initial ?? tabs[0]?.id);
+  const [active, setActiveState] = useState(initial ?? tabs[0]?.id);
+  const [opened, setOpened] = useState(() => new Set([initial ?? tabs[0]?.id]));
+  const setActive = (id: string | undefined) => {
+    setActiveState(id);
+    if (id !== undefined && !opened.has(id)) setOpened(new Set([...opened, id]));
+  };
   const base = useId();
   const refs = useRef<(HTMLButtonElement | null)[]>([]);
   const onKey = (event: KeyboardEvent, index: number) => {
@@ -58,7 +65,7 @@ export function Tabs({ tabs, initial }: { tabs: Tab[]; initial?: string }) {
       </div>
       {tabs.map((tab) => (
         <div key={tab.id} role="tabpanel" id={`${base}-panel-${tab.id}`} aria-labelledby={`${base}-tab-${tab.id}`} hidden={active !== tab.id} className="pt-4">
-          {tab.content}
+          {!tab.lazy || opened.has(tab.id) ? tab.content : null}
         </div>
       ))}
     </div>

@@ -376,7 +376,27 @@ export const watchSchema = z
       snapshotId: id,
       caseVersion: z.int(),
       valuationDate: z.string().meta({ description: 'YYYY-MM-DD: the approval of the version followed.' }),
+      horizon: z.number().meta({ description: 'Years after the valuation date.' }),
+      value: money.meta({ description: 'V at the valuation date.' }),
     }),
+    switches: z
+      .array(
+        z.object({
+          id: z.string(),
+          kind: z.string(),
+          exerciseProbability: z.number(),
+          boundary: z.array(
+            z.object({
+              t: z.number(),
+              critical: money.nullable(),
+              side: z.enum(['above', 'below', 'between', 'anywhere']),
+              low: money.nullable(),
+              high: money.nullable(),
+            }),
+          ),
+        }),
+      )
+      .meta({ description: 'The approved rights with their boundaries (years after the valuation date), for charts.' }),
     asOf: z.string().meta({ description: 'YYYY-MM-DD: the latest observation, or the valuation date.' }),
     value: money.meta({ description: 'The project value V at that date.' }),
     rights: z.array(

@@ -86,7 +86,9 @@ export async function watchCase(member: Member, caseId: string, signal?: AbortSi
     if (!(error instanceof ClockError)) throw error;
   }
   return {
-    followed: { snapshotId: snapshot.id, caseVersion: snapshot.case_version, valuationDate },
+    followed: { snapshotId: snapshot.id, caseVersion: snapshot.case_version, valuationDate, horizon: model.horizon, value: model.underlying.value },
+    // The approved rights with their boundaries, for the chart of observed values against them.
+    switches: result.switches.map((s) => ({ id: s.id, kind: s.kind, exerciseProbability: s.exerciseProbability, boundary: s.boundary })),
     asOf,
     value,
     rights,

@@ -77,4 +77,21 @@ describe('following an approved case', () => {
     const draft = await demoCase('Staged pilot line', 'Base case');
     expect((await viewer.get(`/api/v1/cases/${draft.caseId}/watch`)).status()).toBe(409);
   }, 120_000);
+
+  it('records a value in the browser, typed key by key, and shows the status and the chart', async () => {
+    const { page } = await signedInPage('analyst@kestrelbay.example');
+    await page.goto(plant.url);
+    await page.getByRole('tab', { name: 'Watch' }).click();
+    await expect.poll(() => page.getByRole('heading', { name: /^Where each right stands on/ }).isVisible(), { timeout: 60_000 }).toBe(true);
+    await page.getByLabel('Value (EUR)').pressSequentially('131.5');
+    await page.getByLabel('Source').pressSequentially('offer received');
+    await page.getByRole('button', { name: 'Record' }).click();
+    await expect.poll(() => page.getByRole('cell', { name: 'offer received' }).isVisible(), { timeout: 60_000 }).toBe(true);
+    expect(await page.getByRole('cell', { name: 'EUR 131.5' }).first().isVisible()).toBe(true);
+    // The status column speaks in words for every right, and the chart is drawn with the observed values.
+    const statuses = await page.getByRole('table', { name: 'Where each right stands' }).getByRole('row').count();
+    expect(statuses).toBeGreaterThanOrEqual(3);
+    expect(await page.getByText('The project value as observed', { exact: false }).isVisible()).toBe(true);
+    await page.screenshot({ path: '.data/watch.png', fullPage: true });
+  }, 120_000);
 });

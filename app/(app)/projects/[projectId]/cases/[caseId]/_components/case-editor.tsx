@@ -29,6 +29,7 @@ import { LatticeSettingsSection } from './lattice-settings-section';
 import { OptionCards } from './option-cards';
 import { ResultsSection } from './results-section';
 import { StoredRuns } from './stored-runs';
+import { WatchPanel } from './watch-panel';
 import { ReviewPanel, type ReviewRights } from './review-panel';
 
 interface Props {
@@ -446,6 +447,12 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
               id: 'documents',
               label: 'Documents',
               content: <AttachmentsPanel caseId={caseId} canEdit={canEdit} />,
+            },
+            {
+              id: 'watch',
+              label: 'Watch',
+              lazy: true,
+              content: <WatchPanel caseId={caseId} currency={currency} canRecord={canEdit} />,
             },
             {
               id: 'review',

@@ -1,0 +1,215 @@
+'use client';
+
+import { useState, type FormEvent } from 'react';
+import useSWR from 'swr';
+import { BoundaryChart } from '@/components/charts/boundary-chart';
+import { EmptyState } from '@/components/empty-state';
+import { LoadError, LoadingBlock } from '@/components/load-state';
+import { Button } from '@/components/ui/button';
+import { Input } from '@/components/ui/input';
+import { Table, Td, Th, Tr } from '@/components/ui/table';
+import { useToast } from '@/components/ui/toast';
+import { ValuationCaution } from '@/components/valuation-caution';
+import type { SwitchResult } from '@/lattice';
+import { ApiError, getJson, sendJson } from '@/lib/api-client';
+import { formatMoney, formatNumber, formatPercent } from '@/lib/format';
+import { readNumberText } from '@/lib/number-text';
+import type { RightStatus } from '@/lib/watch/status';
+
+interface Watch {
+  followed: { caseVersion: number; valuationDate: string; horizon: number; value: number };
+  switches: SwitchResult[];
+  asOf: string;
+  value: number;
+  revaluedExpandedNpv: number | null;
+  rights: {
+    id: string;
+    name: string;
+    status: RightStatus;
+    critical: number | null;
+    distanceRatio: number | null;
+    distanceSd: number | null;
+    windowOpensAt: string | null;
+    windowClosesAt: string | null;
+  }[];
+  observations: { id: string; observedOn: string; value: number; note: string; source: string; recordedBy: string | null }[];
+}
+
+const statusWords: Record<RightStatus, string> = {
+  in_region: 'Use it now: in its region',
+  near: 'Near its boundary (within 1 σ)',
+  outside: 'Outside its region',
+  window_not_open: 'Window not open yet',
+  window_closed: 'Window closed',
+};
+
+const statusTone: Record<RightStatus, string> = {
+  in_region: 'bg-tide-100 text-tide-700',
+  near: 'bg-ember-100 text-ember-700',
+  outside: 'bg-paper-sunk text-ink-soft',
+  window_not_open: 'bg-paper-sunk text-ink-soft',
+  window_closed: 'bg-paper-sunk text-ink-muted',
+};
+
+const yearsAfter = (from: string, to: string) => (Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / 86_400_000 / 365.25;
+const today = () => new Date().toISOString().slice(0, 10);
+
+/** Following the approved version: the project's value as observed, and where each right stands. */
+export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; currency: string; canRecord: boolean }) {
+  const toast = useToast();
+  const watch = useSWR<Watch>(`/api/v1/cases/${caseId}/watch`, getJson, { revalidateOnFocus: false });
+  const [form, setForm] = useState({ date: today(), value: '', source: '', note: '' });
+  const [problems, setProblems] = useState<Record<string, string>>({});
+  const [busy, setBusy] = useState(false);
+
+  if (watch.isLoading) return <LoadingBlock label="Loading where the rights stand" lines={5} />;
+  if (watch.error instanceof ApiError && watch.error.status === 409)
+    return (
+      <EmptyState title="Nothing to follow yet">
+        Watching starts when a version is approved: from then on, record the project&rsquo;s value as it becomes known and Leeway says where each right stands.
+      </EmptyState>
+    );
+  if (watch.error || !watch.data) return <LoadError message={watch.error?.message ?? 'No answer from the server.'} onRetry={() => watch.mutate()} />;
+  const w = watch.data;
+
+  const submit = async (event: FormEvent) => {
+    event.preventDefault();
+    const value = readNumberText(form.value);
+    if (!value.ok) return setProblems({ value: value.message });
+    setBusy(true);
+    setProblems({});
+    try {
+      await sendJson('POST', `/api/v1/cases/${caseId}/observations`, { date: form.date, value: value.value, source: form.source, note: form.note });
+      toast(`Recorded ${formatMoney(value.value, currency)} on ${form.date}.`, 'success');
+      setForm({ ...form, value: '', note: '' });
+      await watch.mutate();
+    } catch (error) {
+      if (error instanceof ApiError) {
+        setProblems(Object.fromEntries(Object.entries(error.fields ?? {}).map(([k, v]) => [k, v[0]!])));
+        toast(error.message, 'error');
+      } else toast('The value could not be recorded; try again.', 'error');
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <div className="flex flex-col gap-6">
+      <section aria-labelledby="watch-rights" className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
+        <h3 id="watch-rights" className="text-body font-semibold">
+          Where each right stands on {w.asOf}
+        </h3>
+        <p className="mb-3 text-caption text-ink-muted">
+          Version {w.followed.caseVersion}, approved {w.followed.valuationDate}; project value {formatMoney(w.value, currency)}
+          {w.observations.length === 0 ? ' (as approved: no value recorded since)' : ''}.{' '}
+          {w.revaluedExpandedNpv !== null ? `Re-valued from that date, the expanded NPV is ${formatMoney(w.revaluedExpandedNpv, currency)}.` : ''}
+        </p>
+        <Table caption="Where each right stands">
+          <thead>
+            <tr>
+              <Th>Right</Th>
+              <Th>Status</Th>
+              <Th>Critical value</Th>
+              <Th>Distance</Th>
+              <Th>Window</Th>
+            </tr>
+          </thead>
+          <tbody>
+            {w.rights.map((r) => (
+              <Tr key={r.id}>
+                <Td>{r.name}</Td>
+                <Td>
+                  <span className={`rounded px-2 py-0.5 text-caption font-medium ${statusTone[r.status]}`}>{statusWords[r.status]}</span>
+                </Td>
+                <Td>{r.critical === null ? '–' : formatMoney(r.critical, currency)}</Td>
+                <Td>
+                  {r.distanceRatio === null || r.distanceSd === null
+                    ? '–'
+                    : r.status === 'in_region'
+                      ? 'reached'
+                      : `${r.distanceRatio > 0 ? '+' : ''}${formatPercent(r.distanceRatio)} (${formatNumber(Math.abs(r.distanceSd), 2)} σ)`}
+                </Td>
+                <Td>
+                  {r.windowOpensAt ?? '–'} to {r.windowClosesAt ?? '–'}
+                </Td>
+              </Tr>
+            ))}
+          </tbody>
+        </Table>
+      </section>
+      <section aria-labelledby="watch-chart" className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
+        <h3 id="watch-chart" className="mb-1 text-body font-semibold">
+          The project&rsquo;s value against each right&rsquo;s boundary
+        </h3>
+        <p className="mb-3 text-caption text-ink-muted">Years after the approval on {w.followed.valuationDate}.</p>
+        <BoundaryChart
+          switches={w.switches}
+          v0={w.followed.value}
+          v0Label="V at approval"
+          horizon={w.followed.horizon}
+          currency={currency}
+          observed={w.observations.map((o) => ({ t: yearsAfter(w.followed.valuationDate, o.observedOn), v: o.value }))}
+        />
+      </section>
+      {canRecord ? (
+        <section aria-labelledby="watch-record" className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
+          <h3 id="watch-record" className="mb-3 text-body font-semibold">
+            Record the project&rsquo;s value
+          </h3>
+          <form onSubmit={submit} noValidate className="flex flex-wrap items-start gap-4" aria-label="Record the project's value">
+            <Input label="Date" type="date" value={form.date} onChange={(e) => setForm({ ...form, date: e.target.value })} error={problems.date} />
+            <Input
+              label={`Value (${currency})`}
+              inputMode="decimal"
+              value={form.value}
+              onChange={(e) => setForm({ ...form, value: e.target.value })}
+              error={problems.value}
+            />
+            <Input
+              label="Source"
+              placeholder="updated DCF, offer received…"
+              value={form.source}
+              onChange={(e) => setForm({ ...form, source: e.target.value })}
+              error={problems.source}
+            />
+            <Input
+              label="Note"
+              className="min-w-64 flex-1"
+              value={form.note}
+              onChange={(e) => setForm({ ...form, note: e.target.value })}
+              error={problems.note}
+            />
+            <Button type="submit" busy={busy} className="mt-5">
+              Record
+            </Button>
+          </form>
+        </section>
+      ) : null}
+      {w.observations.length > 0 ? (
+        <Table caption="Recorded values">
+          <thead>
+            <tr>
+              <Th>Date</Th>
+              <Th>Value</Th>
+              <Th>Source</Th>
+              <Th>Note</Th>
+              <Th>By</Th>
+            </tr>
+          </thead>
+          <tbody>
+            {[...w.observations].reverse().map((o) => (
+              <Tr key={o.id}>
+                <Td>{o.observedOn}</Td>
+                <Td>{formatMoney(o.value, currency)}</Td>
+                <Td>{o.source || '–'}</Td>
+                <Td>{o.note || '–'}</Td>
+                <Td>{o.recordedBy ?? '–'}</Td>
+              </Tr>
+            ))}
+          </tbody>
+        </Table>
+      ) : null}
+      <ValuationCaution />
+    </div>
+  );
+}
