@@ -6,7 +6,7 @@
 import 'server-only';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
-import { addObservation, listObservations } from '@/db/queries/observations';
+import { addObservation, latestObservations, listFollowedSnapshots, listObservations } from '@/db/queries/observations';
 import { latestApprovedSnapshot } from '@/db/queries/reviews';
 import type { ProjectModel, ValuationResult } from '@/lattice';
 import { requireCase } from '../cases/require-case';
@@ -15,7 +15,7 @@ import { valueInWorker } from '../engine/pool';
 import { AppError } from '../errors';
 import type { ObservationInput } from '../validations/observation';
 import { ClockError, modelAt } from './clock';
-import { rightStatuses } from './status';
+import { rightStatuses, type RightWatch } from './status';
 
 const DAY_MS = 86_400_000;
 const YEAR_DAYS = 365.25;
@@ -23,6 +23,49 @@ const YEAR_DAYS = 365.25;
 const dateOf = (d: Date) => d.toISOString().slice(0, 10);
 const yearsBetween = (from: string, to: string) => (Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / DAY_MS / YEAR_DAYS;
 const dateAfter = (from: string, years: number) => dateOf(new Date(Date.parse(`${from}T00:00:00Z`) + Math.round(years * YEAR_DAYS) * DAY_MS));
+
+interface Standing {
+  revaluedExpandedNpv: number | null;
+  rights: RightWatch[];
+}
+
+/**
+ * Where each right stands at (t, V): the boundary read from the approved run, and the model's own
+ * answer at that point — the approved model re-valued from t with V, whose decision at its root
+ * says which right (if any) to use now. That answer decides `in_region` (a value beyond the
+ * approved lattice's nodes at that date has no boundary to read, but still has a decision).
+ */
+async function standing(
+  model: ProjectModel,
+  result: ValuationResult,
+  t: number,
+  value: number,
+  run: { owner: string; signal?: AbortSignal },
+): Promise<Standing> {
+  const rights = rightStatuses({
+    options: model.options ?? [],
+    switches: result.switches,
+    horizon: model.horizon,
+    volatility: model.underlying.volatility,
+    t,
+    value,
+  });
+  let now: ValuationResult;
+  try {
+    now = await valueInWorker(modelAt(model, t, value).model, { extras: false, grid: { steps: 0 } }, run);
+  } catch (error) {
+    if (error instanceof ClockError) return { revaluedExpandedNpv: null, rights };
+    throw error;
+  }
+  const usedNow = now.grid?.steps[0]?.modes[now.startMode]?.decision[0] ?? null;
+  const open = (r: RightWatch) => r.status === 'in_region' || r.status === 'near' || r.status === 'outside';
+  return {
+    revaluedExpandedNpv: now.expandedNpv,
+    rights: rights.map((r): RightWatch =>
+      !open(r) ? r : r.id === usedNow ? { ...r, status: 'in_region' } : r.status === 'in_region' ? { ...r, status: 'near' } : r,
+    ),
+  };
+}
 
 async function followed(orgId: string, caseId: string) {
   await requireCase(db, orgId, caseId);
@@ -67,24 +110,13 @@ export async function watchCase(member: Member, caseId: string, signal?: AbortSi
   const asOf = latest?.observedOn ?? valuationDate;
   const t = yearsBetween(valuationDate, asOf);
   const value = latest?.value ?? model.underlying.value;
-  const rights = rightStatuses({
-    options: model.options ?? [],
-    switches: result.switches,
-    horizon: model.horizon,
-    volatility: model.underlying.volatility,
-    t,
-    value,
-  }).map((r) => ({
+  const now = await standing(model, result, t, value, { owner: member.userId, signal });
+  const revaluedExpandedNpv = now.revaluedExpandedNpv;
+  const rights = now.rights.map((r) => ({
     ...r,
     windowOpensAt: r.windowOpensAt === null ? null : dateAfter(valuationDate, r.windowOpensAt),
     windowClosesAt: r.windowClosesAt === null ? null : dateAfter(valuationDate, r.windowClosesAt),
   }));
-  let revaluedExpandedNpv: number | null = null;
-  try {
-    revaluedExpandedNpv = (await valueInWorker(modelAt(model, t, value).model, { extras: false }, { owner: member.userId, signal })).expandedNpv;
-  } catch (error) {
-    if (!(error instanceof ClockError)) throw error;
-  }
   return {
     followed: { snapshotId: snapshot.id, caseVersion: snapshot.case_version, valuationDate, horizon: model.horizon, value: model.underlying.value },
     // The approved rights with their boundaries, for the chart of observed values against them.
@@ -95,4 +127,29 @@ export async function watchCase(member: Member, caseId: string, signal?: AbortSi
     observations,
     revaluedExpandedNpv,
   };
+}
+
+/**
+ * Every approved right across the organisation's active projects that is in its region or near
+ * its boundary at its case's latest observation (or at approval): the portfolio's watch list.
+ */
+export async function watchList(member: Member) {
+  const orgId = member.orgId;
+  const [followedCases, observed] = await Promise.all([listFollowedSnapshots(db, { orgId }), latestObservations(db, { orgId })]);
+  const latest = new Map(observed.map((o) => [o.caseId, o]));
+  const lists = await Promise.all(
+    followedCases.map(async (f) => {
+      if (!f.decidedAt) return [];
+      const model = f.model as ProjectModel;
+      const valuationDate = dateOf(f.decidedAt);
+      const observation = latest.get(f.caseId);
+      const asOf = observation?.observedOn ?? valuationDate;
+      const value = observation?.value ?? model.underlying.value;
+      const { rights } = await standing(model, f.result as ValuationResult, yearsBetween(valuationDate, asOf), value, { owner: member.userId });
+      return rights
+        .filter((r) => r.status === 'in_region' || r.status === 'near')
+        .map((r) => ({ ...r, caseId: f.caseId, caseName: f.caseName, projectId: f.projectId, projectName: f.projectName, currency: f.currency, asOf, value }));
+    }),
+  );
+  return lists.flat();
 }

@@ -46,7 +46,10 @@ export function boundaryAt(
   const exact = points.find((p) => Math.abs(p.t - t) < 1e-9);
   if (exact) return exact;
   const after = points.findIndex((p) => p.t > t);
-  if (after <= 0) return null;
+  // Before the first step where it is used, by less than a step: the lattice cannot locate a
+  // boundary at a date with one node (the valuation date), so the next step's stands for it.
+  if (after === 0) return points[0]!.t - t <= 1.5 * spacing ? points[0]! : null;
+  if (after < 0) return null;
   const a = points[after - 1]!;
   const b = points[after]!;
   // Two steps apart or more: the right is not used between them, so not at t either.

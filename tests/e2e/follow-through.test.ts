@@ -94,4 +94,39 @@ describe('following an approved case', () => {
     expect(await page.getByText('The project value as observed', { exact: false }).isVisible()).toBe(true);
     await page.screenshot({ path: '.data/watch.png', fullPage: true });
   }, 120_000);
+
+  it("lists a right in its region on the portfolio's watch list, for an executive", async () => {
+    const name = `Watched kiln ${Date.now().toString(36)}`;
+    const project = (await (await analyst.post('/api/v1/projects', { data: { name, description: 'Invented for a test' } })).json()).project;
+    const rows = [0, 1, 2, 3, 4].map((year) => ({
+      year,
+      revenue: year ? 60 : 0,
+      operatingCost: year ? 20 : 0,
+      capex: year ? 0 : 90,
+      tax: year ? 5 : 0,
+      workingCapital: 0,
+    }));
+    const made = await analyst.post(`/api/v1/projects/${project.id}/cases`, {
+      data: {
+        name: 'Base case',
+        cashFlows: { wacc: 0.09, rows },
+        settings: { volatility: 0.3, riskFreeRate: 0.03, steps: 48 },
+        options: [{ type: 'expand', id: 'Second kiln', factor: 0.5, cost: 70, window: { kind: 'american', from: 0, to: 3 } }],
+      },
+    });
+    expect(made.status()).toBe(201);
+    const caseId = (await made.json()).case.id;
+    expect((await analyst.post(`/api/v1/cases/${caseId}/submit`, { data: { recommendation: 'Build one kiln; watch for the second.' } })).status()).toBe(201);
+    const reviewer = (await signedInPage('reviewer@kestrelbay.example')).page.request;
+    expect((await reviewer.post(`/api/v1/cases/${caseId}/approve`)).status()).toBe(200);
+    // Far above any expansion boundary: the model says expand now.
+    expect((await analyst.post(`/api/v1/cases/${caseId}/observations`, { data: { date: day(0), value: 2000, source: 'offer received' } })).status()).toBe(201);
+    const watch = await (await viewer.get(`/api/v1/cases/${caseId}/watch`, { timeout: 60_000 })).json();
+    expect(watch.rights[0]).toMatchObject({ name: 'Second kiln', status: 'in_region' });
+    const executive = await signedInPage('executive@kestrelbay.example');
+    await executive.page.goto('/portfolio');
+    const row = executive.page.getByRole('table', { name: 'Rights to act on' }).getByRole('row', { name: new RegExp(name) });
+    await expect.poll(() => row.isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(await row.getByText('Use it now').isVisible()).toBe(true);
+  }, 120_000);
 });

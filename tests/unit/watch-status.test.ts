@@ -31,6 +31,8 @@ describe('where each right stands', () => {
     expect(boundaryAt(switches[0]!.boundary, 1.025)!.critical).toBeCloseTo(149, 12);
     expect(boundaryAt(switches[0]!.boundary, 1.2)).toBeNull();
     expect(boundaryAt(switches[0]!.boundary, 0.9)).toBeNull();
+    // Less than a step before the first point (as the valuation date is before step 1): that point.
+    expect(boundaryAt(switches[0]!.boundary, 0.98)!.critical).toBe(150);
   });
 
   it('says in_region, near and outside by the side and one standard deviation', () => {

@@ -5,6 +5,8 @@ import { ValuationCaution } from '@/components/valuation-caution';
 import { guardPage } from '@/lib/page-guard';
 import { roleAllows } from '@/lib/permissions';
 import { PortfolioView } from './_components/portfolio-view';
+import { WatchList } from './_components/watch-list';
+import { watchList } from '@/lib/watch/follow';
 
 export const metadata: Metadata = { title: 'Portfolio' };
 
@@ -15,6 +17,9 @@ export default async function PortfolioPage() {
     <>
       <PageHeader title="Portfolio" lead={`Static and expanded NPV of the projects at ${member.orgName}, side by side.`} />
       <PortfolioView canCreate={roleAllows(member.role, { project: ['create'] })} />
+      <div className="mt-8">
+        <WatchList rows={await watchList(member)} />
+      </div>
       <div className="mt-8">
         <ValuationCaution />
       </div>
