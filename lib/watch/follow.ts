@@ -137,19 +137,35 @@ export async function watchList(member: Member) {
   const orgId = member.orgId;
   const [followedCases, observed] = await Promise.all([listFollowedSnapshots(db, { orgId }), latestObservations(db, { orgId })]);
   const latest = new Map(observed.map((o) => [o.caseId, o]));
-  const lists = await Promise.all(
-    followedCases.map(async (f) => {
-      if (!f.decidedAt) return [];
-      const model = f.model as ProjectModel;
-      const valuationDate = dateOf(f.decidedAt);
-      const observation = latest.get(f.caseId);
-      const asOf = observation?.observedOn ?? valuationDate;
-      const value = observation?.value ?? model.underlying.value;
-      const { rights } = await standing(model, f.result as ValuationResult, yearsBetween(valuationDate, asOf), value, { owner: member.userId });
-      return rights
-        .filter((r) => r.status === 'in_region' || r.status === 'near')
-        .map((r) => ({ ...r, caseId: f.caseId, caseName: f.caseName, projectId: f.projectId, projectName: f.projectName, currency: f.currency, asOf, value }));
-    }),
-  );
-  return lists.flat();
+  const rows = [];
+  // One case after another: the engine takes at most a few jobs per person at once, and a busy
+  // engine must not take the portfolio page down with it.
+  for (const f of followedCases) {
+    if (!f.decidedAt) continue;
+    const model = f.model as ProjectModel;
+    const result = f.result as ValuationResult;
+    const valuationDate = dateOf(f.decidedAt);
+    const observation = latest.get(f.caseId);
+    const asOf = observation?.observedOn ?? valuationDate;
+    const value = observation?.value ?? model.underlying.value;
+    const t = yearsBetween(valuationDate, asOf);
+    let rights: RightWatch[];
+    try {
+      rights = (await standing(model, result, t, value, { owner: member.userId })).rights;
+    } catch {
+      // The engine is busy: the boundary's reading alone (lib/watch/status.ts).
+      rights = rightStatuses({
+        options: model.options ?? [],
+        switches: result.switches,
+        horizon: model.horizon,
+        volatility: model.underlying.volatility,
+        t,
+        value,
+      });
+    }
+    for (const r of rights)
+      if (r.status === 'in_region' || r.status === 'near')
+        rows.push({ ...r, caseId: f.caseId, caseName: f.caseName, projectId: f.projectId, projectName: f.projectName, currency: f.currency, asOf, value });
+  }
+  return rows;
 }

@@ -1,7 +1,8 @@
 import Link from 'next/link';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
-import { formatMoney, formatNumber, formatPercent } from '@/lib/format';
+import { formatMoney } from '@/lib/format';
 import type { watchList } from '@/lib/watch/follow';
+import { distanceWords, statusWords } from '@/lib/watch/status-words';
 
 type Row = Awaited<ReturnType<typeof watchList>>[number];
 
@@ -41,16 +42,12 @@ export function WatchList({ rows }: { rows: Row[] }) {
                   </Link>
                 </Td>
                 <Td>{r.name}</Td>
-                <Td>{r.status === 'in_region' ? 'Use it now: in its region' : 'Near its boundary'}</Td>
+                <Td>{statusWords[r.status]}</Td>
                 <Td>
                   {formatMoney(r.value, r.currency)} <span className="text-caption text-ink-muted">({r.asOf})</span>
                 </Td>
                 <Td>{r.critical === null ? '–' : formatMoney(r.critical, r.currency)}</Td>
-                <Td>
-                  {r.status === 'in_region' || r.distanceRatio === null || r.distanceSd === null
-                    ? 'reached'
-                    : `${r.distanceRatio > 0 ? '+' : ''}${formatPercent(r.distanceRatio)} (${formatNumber(Math.abs(r.distanceSd), 2)} σ)`}
-                </Td>
+                <Td>{distanceWords(r)}</Td>
               </Tr>
             ))}
           </tbody>

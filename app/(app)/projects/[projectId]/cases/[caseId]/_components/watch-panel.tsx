@@ -12,9 +12,10 @@ import { useToast } from '@/components/ui/toast';
 import { ValuationCaution } from '@/components/valuation-caution';
 import type { SwitchResult } from '@/lattice';
 import { ApiError, getJson, sendJson } from '@/lib/api-client';
-import { formatMoney, formatNumber, formatPercent } from '@/lib/format';
+import { formatMoney } from '@/lib/format';
 import { readNumberText } from '@/lib/number-text';
 import type { RightStatus } from '@/lib/watch/status';
+import { distanceWords, statusWords } from '@/lib/watch/status-words';
 
 interface Watch {
   followed: { caseVersion: number; valuationDate: string; horizon: number; value: number };
@@ -34,14 +35,6 @@ interface Watch {
   }[];
   observations: { id: string; observedOn: string; value: number; note: string; source: string; recordedBy: string | null }[];
 }
-
-const statusWords: Record<RightStatus, string> = {
-  in_region: 'Use it now: in its region',
-  near: 'Near its boundary (within 1 σ)',
-  outside: 'Outside its region',
-  window_not_open: 'Window not open yet',
-  window_closed: 'Window closed',
-};
 
 const statusTone: Record<RightStatus, string> = {
   in_region: 'bg-tide-100 text-tide-700',
@@ -122,13 +115,7 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
                   <span className={`rounded px-2 py-0.5 text-caption font-medium ${statusTone[r.status]}`}>{statusWords[r.status]}</span>
                 </Td>
                 <Td>{r.critical === null ? '–' : formatMoney(r.critical, currency)}</Td>
-                <Td>
-                  {r.distanceRatio === null || r.distanceSd === null
-                    ? '–'
-                    : r.status === 'in_region'
-                      ? 'reached'
-                      : `${r.distanceRatio > 0 ? '+' : ''}${formatPercent(r.distanceRatio)} (${formatNumber(Math.abs(r.distanceSd), 2)} σ)`}
-                </Td>
+                <Td>{distanceWords(r)}</Td>
                 <Td>
                   {r.windowOpensAt ?? '–'} to {r.windowClosesAt ?? '–'}
                 </Td>
