@@ -15,14 +15,13 @@ import { valueInWorker } from '../engine/pool';
 import { AppError } from '../errors';
 import type { ObservationInput } from '../validations/observation';
 import { ClockError, modelAt } from './clock';
+import { dateAfter, dateOf, yearsBetween } from './dates';
 import { rightStatuses, type RightWatch } from './status';
 
-const DAY_MS = 86_400_000;
-const YEAR_DAYS = 365.25;
-
-const dateOf = (d: Date) => d.toISOString().slice(0, 10);
-const yearsBetween = (from: string, to: string) => (Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / DAY_MS / YEAR_DAYS;
-const dateAfter = (from: string, years: number) => dateOf(new Date(Date.parse(`${from}T00:00:00Z`) + Math.round(years * YEAR_DAYS) * DAY_MS));
+/** Where each right stands by the approved run's boundary alone (lib/watch/status.ts). */
+function boundaryReading(model: ProjectModel, result: ValuationResult, t: number, value: number): RightWatch[] {
+  return rightStatuses({ options: model.options ?? [], switches: result.switches, horizon: model.horizon, volatility: model.underlying.volatility, t, value });
+}
 
 interface Standing {
   revaluedExpandedNpv: number | null;
@@ -42,14 +41,7 @@ async function standing(
   value: number,
   run: { owner: string; signal?: AbortSignal },
 ): Promise<Standing> {
-  const rights = rightStatuses({
-    options: model.options ?? [],
-    switches: result.switches,
-    horizon: model.horizon,
-    volatility: model.underlying.volatility,
-    t,
-    value,
-  });
+  const rights = boundaryReading(model, result, t, value);
   let now: ValuationResult;
   try {
     now = await valueInWorker(modelAt(model, t, value).model, { extras: false, grid: { steps: 0 } }, run);
@@ -154,14 +146,7 @@ export async function watchList(member: Member) {
       rights = (await standing(model, result, t, value, { owner: member.userId })).rights;
     } catch {
       // The engine is busy: the boundary's reading alone (lib/watch/status.ts).
-      rights = rightStatuses({
-        options: model.options ?? [],
-        switches: result.switches,
-        horizon: model.horizon,
-        volatility: model.underlying.volatility,
-        t,
-        value,
-      });
+      rights = boundaryReading(model, result, t, value);
     }
     for (const r of rights)
       if (r.status === 'in_region' || r.status === 'near')

@@ -17,6 +17,18 @@ beforeAll(async () => {
   plant = await demoCase('Phased bio-resin plant', 'Base case');
 });
 
+/** The project's latest approved snapshot, whichever of its cases it was (other tests approve cases too). */
+function latestApproval(projectId: string) {
+  return db
+    .selectFrom('case_snapshot')
+    .innerJoin('case', 'case.id', 'case_snapshot.case_id')
+    .select(['case_snapshot.case_id', 'case_snapshot.result', 'case_snapshot.case_version', 'case_snapshot.case_name'])
+    .where('case.project_id', '=', projectId)
+    .where('case_snapshot.status', '=', 'approved')
+    .orderBy('case_snapshot.decided_at', 'desc')
+    .executeTakeFirstOrThrow();
+}
+
 afterAll(async () => {
   await closeBrowser();
   await db.destroy();
@@ -28,15 +40,7 @@ describe('the portfolio and project pages', () => {
     await executive.page.goto('/portfolio');
     const row = executive.page.getByRole('row', { name: /Phased bio-resin plant/ });
     await expect.poll(() => row.getByText('Approved').isVisible(), { timeout: 30_000 }).toBe(true);
-    // The project's latest approval, whichever of its cases it was (other tests approve cases too).
-    const approved = await db
-      .selectFrom('case_snapshot')
-      .innerJoin('case', 'case.id', 'case_snapshot.case_id')
-      .select(['case_snapshot.case_id', 'case_snapshot.case_version', 'case_snapshot.case_name'])
-      .where('case.project_id', '=', plant.projectId)
-      .where('case_snapshot.status', '=', 'approved')
-      .orderBy('case_snapshot.decided_at', 'desc')
-      .executeTakeFirstOrThrow();
+    const approved = await latestApproval(plant.projectId);
     expect(await row.textContent()).toContain(`${approved.case_name} v${approved.case_version}`);
     const link = row.getByRole('link', { name: /^Board pack of Phased bio-resin plant/ });
     const href = await link.getAttribute('href');
@@ -144,14 +148,7 @@ describe('the portfolio and project pages', () => {
     expect(csv.headers()['content-type']).toMatch(/^text\/csv/);
     const rows = Papa.parse<Record<string, string>>(await csv.text(), { header: true, skipEmptyLines: true }).data;
     const plantRow = rows.find((r) => r.Project === 'Phased bio-resin plant')!;
-    const snapshot = await db
-      .selectFrom('case_snapshot')
-      .innerJoin('case', 'case.id', 'case_snapshot.case_id')
-      .select(['case_snapshot.result', 'case_snapshot.case_version', 'case_snapshot.case_name'])
-      .where('case.project_id', '=', plant.projectId)
-      .where('case_snapshot.status', '=', 'approved')
-      .orderBy('case_snapshot.decided_at', 'desc')
-      .executeTakeFirstOrThrow();
+    const snapshot = await latestApproval(plant.projectId);
     const result = snapshot.result as { staticNpv: number; optionPremium: number; expandedNpv: number };
     expect(plantRow).toMatchObject({ Approval: 'approved', 'Approved case': snapshot.case_name, 'Approved version': String(snapshot.case_version) });
     // Exported to 4 decimals.

@@ -15,6 +15,7 @@ import { ApiError, getJson, sendJson } from '@/lib/api-client';
 import { formatMoney } from '@/lib/format';
 import { readNumberText } from '@/lib/number-text';
 import type { RightStatus } from '@/lib/watch/status';
+import { dateOf, yearsBetween } from '@/lib/watch/dates';
 import { distanceWords, statusWords } from '@/lib/watch/status-words';
 
 interface Watch {
@@ -44,8 +45,7 @@ const statusTone: Record<RightStatus, string> = {
   window_closed: 'bg-paper-sunk text-ink-muted',
 };
 
-const yearsAfter = (from: string, to: string) => (Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / 86_400_000 / 365.25;
-const today = () => new Date().toISOString().slice(0, 10);
+const today = () => dateOf(new Date());
 
 /** Following the approved version: the project's value as observed, and where each right stands. */
 export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; currency: string; canRecord: boolean }) {
@@ -135,7 +135,7 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
           v0Label="V at approval"
           horizon={w.followed.horizon}
           currency={currency}
-          observed={w.observations.map((o) => ({ t: yearsAfter(w.followed.valuationDate, o.observedOn), v: o.value }))}
+          observed={w.observations.map((o) => ({ t: yearsBetween(w.followed.valuationDate, o.observedOn), v: o.value }))}
         />
       </section>
       {canRecord ? (
