@@ -33,7 +33,11 @@ const server = new SMTPServer({
           attachments: parsed.attachments.map((a) => ({ filename: a.filename ?? '', contentType: a.contentType, size: a.size })),
         };
         await fs.mkdir(dir, { recursive: true });
-        await fs.writeFile(path.join(dir, `${id}.json`), JSON.stringify(mail, null, 2));
+        // Written aside and renamed into place (atomic on one file system): a reader — the local
+        // inbox, the e2e tests — never sees a message half written.
+        const file = path.join(dir, `${id}.json`);
+        await fs.writeFile(`${file}.partial`, JSON.stringify(mail, null, 2));
+        await fs.rename(`${file}.partial`, file);
         callback();
       })
       .catch((error) => callback(error));

@@ -13,7 +13,10 @@ export async function waitForMail(to: string, subject: RegExp, timeoutMs = 15_00
     } catch {
       // nothing yet
     }
-    for (const name of names.sort().reverse()) {
+    for (const name of names
+      .filter((n) => n.endsWith('.json'))
+      .sort()
+      .reverse()) {
       const mail = JSON.parse(await fs.readFile(path.join(E2E_MAIL_DIR, name), 'utf8')) as StoredMail;
       if (mail.to.includes(to.toLowerCase()) && subject.test(mail.subject)) return mail;
     }
