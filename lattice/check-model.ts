@@ -134,6 +134,7 @@ export function prepareModel(input: unknown): { model: ProjectModel; compiled: C
     refuse('options', 'cannot be combined with modes and switches: give either option templates or your own modes and switches');
   if (!model.modes && (model.start !== undefined || model.switches !== undefined))
     refuse(model.start !== undefined ? 'start' : 'switches', 'needs modes to be given');
+  if (model.exercised?.length && !usesTemplates) refuse('exercised', 'names option templates: give options to mark some as used');
   checkFieldsInTime(model);
   const compiled = usesTemplates ? compileTemplates(model) : compileRaw(model);
   checkNoMoneyPump(compiled, model);

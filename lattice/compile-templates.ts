@@ -145,7 +145,30 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
   }
 
   const operatingBase: State = { phase: 'operating', paid: 0, exercised: 0, switched: -1 };
-  const startState: State = deferAt >= 0 ? { ...operatingBase, phase: 'waiting' } : stage ? { ...operatingBase, phase: 'staging' } : operatingBase;
+  const startState: State = usedBefore(deferAt >= 0 ? { ...operatingBase, phase: 'waiting' } : stage ? { ...operatingBase, phase: 'staging' } : operatingBase);
+
+  /**
+   * The state the rights used before the valuation date (`model.exercised`) left: an investment
+   * made, scale changes made, a switch in force, or the project closed. Stage payments are not
+   * named here: a followed model drops the payments made (lib/watch/clock.ts).
+   */
+  function usedBefore(first: State): State {
+    let s = first;
+    for (const [n, name] of (model.exercised ?? []).entries()) {
+      const k = ids.indexOf(name);
+      const field = `exercised[${n}]`;
+      if (k < 0) refuse(field, `names no option template ("${name}")`);
+      const o = options[k]!;
+      if (o.type === 'stage') refuse(field, 'cannot name a stage option: give only the payments still to make');
+      if (s.phase === 'closed') refuse(field, 'follows an abandonment: nothing is left to use');
+      if (o.type === 'defer') s = { ...s, phase: 'operating' };
+      else if (s.phase !== 'operating') refuse(field, `needs the project operating: name the defer option "${ids[deferAt]}" as used first`);
+      else if (o.type === 'abandon') s = { ...s, phase: 'closed', exercised: 0, switched: -1 };
+      else if (o.type === 'switch') s = { ...s, switched: k };
+      else s = { ...s, exercised: s.exercised | (1 << k) };
+    }
+    return s;
+  }
 
   const modes: CompiledMode[] = [];
   const indexOf = new Map<string, number>();

@@ -120,6 +120,11 @@ export const projectModelSchema = z.strictObject({
   start: id.optional(),
   switches: z.array(switchSchema).optional(),
   options: z.array(optionTemplateSchema).max(12).optional(),
+  /**
+   * Ids of option templates already used before the valuation date (a followed case's recorded
+   * decisions): the tree starts in the mode they made (docs/engine.md §10).
+   */
+  exercised: z.array(id).max(12).optional(),
 });
 
 export type Cost = z.infer<typeof costSchema>;

@@ -3707,6 +3707,7 @@ export interface operations {
                             at: number;
                         };
                     })[];
+                    exercised?: string[];
                 };
             };
         };
