@@ -50,6 +50,8 @@ export interface OrganizationSettingsTable {
   risk_free_rate: Generated<number>;
   wacc: Generated<number>;
   fiscal_year_start_month: Generated<number>;
+  /** How many days before a followed right's window closes its alert goes out. */
+  alert_days_before_close: Generated<number>;
   updated_at: Timestamp;
   updated_by: string | null;
 }
@@ -218,6 +220,9 @@ export interface DB {
   portfolio_revaluation: PortfolioRevaluationTable;
   api_key: ApiKeyTable;
   case_observation: CaseObservationTable;
+  right_decision: RightDecisionTable;
+  right_standing: RightStandingTable;
+  watch_alert: WatchAlertTable;
 }
 
 /** A request to re-value every case whose stored figures come from an older engine (a job). */
@@ -264,6 +269,48 @@ export interface CaseObservationTable {
   note: Generated<string>;
   source: Generated<string>;
   recorded_by: string | null;
+  created_at: Timestamp;
+}
+
+export type RightDecisionKind = 'exercised' | 'declined' | 'postponed';
+
+/** A decision recorded on a right of an approved version: used, given up, or not now. */
+export interface RightDecisionTable {
+  id: Generated<string>;
+  organization_id: string;
+  case_id: string;
+  snapshot_id: string;
+  right_id: string;
+  decision: RightDecisionKind;
+  /** A calendar date, YYYY-MM-DD (read as text, like observed_on). */
+  decided_on: ColumnType<string, string, string>;
+  reason: string;
+  recorded_by: string | null;
+  created_at: Timestamp;
+}
+
+/** The last standing seen for a followed right: a change from it is what an alert announces. */
+export interface RightStandingTable {
+  snapshot_id: string;
+  right_id: string;
+  status: string;
+  as_of: ColumnType<string, string, string>;
+  updated_at: Timestamp;
+}
+
+export type WatchAlertKind = 'in_region' | 'near' | 'window_opened' | 'window_closing';
+
+/** One change in a followed right's standing, announced once (mail and the notifications page). */
+export interface WatchAlertTable {
+  id: Generated<string>;
+  organization_id: string;
+  case_id: string;
+  snapshot_id: string;
+  right_id: string;
+  kind: WatchAlertKind;
+  change_key: string;
+  message: string;
+  as_of: ColumnType<string, string, string>;
   created_at: Timestamp;
 }
 

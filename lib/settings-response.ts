@@ -2,5 +2,11 @@
 import type { OrganizationSettings } from '@/db/types';
 
 export function presentSettings(s: OrganizationSettings) {
-  return { currency: s.currency, riskFreeRate: s.risk_free_rate, wacc: s.wacc, fiscalYearStartMonth: s.fiscal_year_start_month };
+  return {
+    currency: s.currency,
+    riskFreeRate: s.risk_free_rate,
+    wacc: s.wacc,
+    fiscalYearStartMonth: s.fiscal_year_start_month,
+    alertDaysBeforeClose: s.alert_days_before_close,
+  };
 }

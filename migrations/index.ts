@@ -16,6 +16,7 @@ import * as m0010 from './0010_portfolio_revaluations';
 import * as m0011 from './0011_api_keys';
 import * as m0012 from './0012_result_hashes';
 import * as m0013 from './0013_observations';
+import * as m0014 from './0014_decisions_and_alerts';
 
 export const migrations: Record<string, Migration> = {
   '0001_auth_tables': m0001,
@@ -31,4 +32,5 @@ export const migrations: Record<string, Migration> = {
   '0011_api_keys': m0011,
   '0012_result_hashes': m0012,
   '0013_observations': m0013,
+  '0014_decisions_and_alerts': m0014,
 };

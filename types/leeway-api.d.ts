@@ -468,6 +468,28 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/cases/{caseId}/rights/{rightId}/decisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Record that a followed right was exercised, declined or postponed
+         * @description Exercised and declined are final: from that date the watched model starts in the mode the decision made, and the right leaves the watch. Refused: an unknown right (404), a second final decision on a right (409), a date out of order, before approval, in the future or beyond the horizon (422).
+         *
+         *     Roles: Admin, Analyst.
+         */
+        post: operations["recordRightDecision"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/cases/{caseId}/watch": {
         parameters: {
             query?: never;
@@ -1369,7 +1391,7 @@ export interface components {
                 id: string;
                 name: string;
                 /** @enum {string} */
-                status: "in_region" | "near" | "outside" | "window_not_open" | "window_closed";
+                status: "in_region" | "near" | "outside" | "window_not_open" | "window_closed" | "exercised" | "declined";
                 critical: number | null;
                 side: ("above" | "below" | "between" | "anywhere") | null;
                 /** @description critical ÷ V − 1. */
@@ -1395,7 +1417,23 @@ export interface components {
                 /** @description A person, or an API key as "API key <name> (created by …)"; null when deleted. */
                 recordedBy: string | null;
             }[];
-            /** @description The approved model re-valued from that date with V. */
+            decisions: {
+                /** @description An opaque identifier. */
+                id: string;
+                rightId: string;
+                /** @enum {string} */
+                decision: "exercised" | "declined" | "postponed";
+                decidedOn: string;
+                reason: string;
+                /**
+                 * Format: date-time
+                 * @description An ISO 8601 instant (UTC).
+                 */
+                recordedAt: string;
+                /** @description A person, or an API key as "API key <name> (created by …)"; null when deleted. */
+                recordedBy: string | null;
+            }[];
+            /** @description The approved model re-valued from that date with V, starting in the mode the recorded decisions made. */
             revaluedExpandedNpv: number | null;
         };
         Attachment: {
@@ -1492,6 +1530,8 @@ export interface components {
             /** @description As a fraction a year. */
             wacc: number;
             fiscalYearStartMonth: number;
+            /** @description How many days before a followed right's window closes its alert goes out. */
+            alertDaysBeforeClose: number;
         };
         ApiKey: {
             /** @description An opaque identifier. */
@@ -4512,6 +4552,99 @@ export interface operations {
             };
         };
     };
+    recordRightDecision: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description An id from an earlier answer. */
+                caseId: string;
+                /** @description An id from an earlier answer. */
+                rightId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    /** @enum {string} */
+                    decision: "exercised" | "declined" | "postponed";
+                    /** @description YYYY-MM-DD; today when absent. */
+                    date?: string;
+                    reason: string;
+                };
+            };
+        };
+        responses: {
+            /** @description Recorded. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        decision: {
+                            id: string;
+                        };
+                    };
+                };
+            };
+            /** @description No session and no API key, or a key that is wrong, revoked or expired. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The caller's role does not allow this. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description No such record in the caller's organisation. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The input is not valid; `fields` says where. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Too many requests from this key, or too many estimates at once; see Retry-After. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Any other error, in the same shape. */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+        };
+    };
     watchCase: {
         parameters: {
             query?: never;
@@ -5756,6 +5889,7 @@ export interface operations {
                     riskFreeRate: number;
                     wacc: number;
                     fiscalYearStartMonth: number;
+                    alertDaysBeforeClose?: number;
                 };
             };
         };

@@ -44,38 +44,25 @@ export async function listObservations(db: Database, { orgId, caseId }: { orgId:
 
 /** The latest approved snapshot of every case of the organisation, with its project: the models followed. */
 export async function listFollowedSnapshots(db: Database, { orgId }: { orgId: string }) {
-  return db
+  const rows = await db
     .selectFrom('case_snapshot')
     .innerJoin('case', 'case.id', 'case_snapshot.case_id')
     .innerJoin('project', 'project.id', 'case.project_id')
     .distinctOn('case_snapshot.case_id')
-    .select([
-      'case_snapshot.case_id as caseId',
-      'case_snapshot.case_name as caseName',
-      'case_snapshot.model',
-      'case_snapshot.result',
-      'case_snapshot.decided_at as decidedAt',
-      'project.id as projectId',
-      'project.name as projectName',
-      'project.currency',
-    ])
+    .selectAll('case_snapshot')
+    .select(['project.id as projectId', 'project.name as projectName', 'project.currency as projectCurrency'])
     .where('case_snapshot.organization_id', '=', orgId)
     .where('case_snapshot.status', '=', 'approved')
     .where('project.status', '=', 'active')
     .orderBy('case_snapshot.case_id')
     .orderBy('case_snapshot.decided_at', 'desc')
     .execute();
-}
-
-/** The latest observation of every case of the organisation that has one. */
-export async function latestObservations(db: Database, { orgId }: { orgId: string }) {
-  return db
-    .selectFrom('case_observation')
-    .distinctOn('case_id')
-    .select(['case_id as caseId', sql<string>`observed_on::text`.as('observedOn'), 'value'])
-    .where('organization_id', '=', orgId)
-    .orderBy('case_id')
-    .orderBy('observed_on', 'desc')
-    .orderBy('created_at', 'desc')
-    .execute();
+  return rows.map(({ projectId, projectName, projectCurrency, ...snapshot }) => ({
+    caseId: snapshot.case_id,
+    caseName: snapshot.case_name,
+    projectId,
+    projectName,
+    currency: snapshot.currency ?? projectCurrency,
+    snapshot,
+  }));
 }

@@ -7,7 +7,16 @@ import type { OrganizationSettings } from '../types';
 export async function findSettings(db: Database, { orgId }: { orgId: string }): Promise<OrganizationSettings> {
   const row = await db.selectFrom('organization_settings').selectAll().where('organization_id', '=', orgId).executeTakeFirst();
   return (
-    row ?? { organization_id: orgId, currency: 'EUR', risk_free_rate: 0.03, wacc: 0.08, fiscal_year_start_month: 1, updated_at: new Date(0), updated_by: null }
+    row ?? {
+      organization_id: orgId,
+      currency: 'EUR',
+      risk_free_rate: 0.03,
+      wacc: 0.08,
+      fiscal_year_start_month: 1,
+      alert_days_before_close: 30,
+      updated_at: new Date(0),
+      updated_by: null,
+    }
   );
 }
 
@@ -16,6 +25,8 @@ export interface SettingsChange {
   riskFreeRate: number;
   wacc: number;
   fiscalYearStartMonth: number;
+  /** Absent: left as it is. */
+  alertDaysBeforeClose?: number;
 }
 
 export async function updateSettings(
@@ -30,6 +41,7 @@ export async function updateSettings(
       risk_free_rate: change.riskFreeRate,
       wacc: change.wacc,
       fiscal_year_start_month: change.fiscalYearStartMonth,
+      ...(change.alertDaysBeforeClose !== undefined ? { alert_days_before_close: change.alertDaysBeforeClose } : {}),
       updated_by: userId,
     })
     .onConflict((c) =>
@@ -38,6 +50,7 @@ export async function updateSettings(
         risk_free_rate: change.riskFreeRate,
         wacc: change.wacc,
         fiscal_year_start_month: change.fiscalYearStartMonth,
+        ...(change.alertDaysBeforeClose !== undefined ? { alert_days_before_close: change.alertDaysBeforeClose } : {}),
         updated_by: userId,
         updated_at: new Date(),
       }),

@@ -11,6 +11,7 @@ import { projectCreateSchema, projectUpdateSchema } from '../validations/project
 import { commentSchema, returnSchema, submitSchema } from '../validations/review';
 import { settingsSchema } from '../validations/settings';
 import { observationSchema } from '../validations/observation';
+import { rightDecisionSchema } from '../validations/right-decision';
 import { historyJsonSchema, simulationStartSchema } from '../validations/volatility';
 import type { Operation } from './operation';
 import * as s from './schemas';
@@ -333,6 +334,18 @@ export const operations = {
     example: { date: '2027-03-31', value: 118.5, note: 'Updated DCF after the first quarter', source: 'updated DCF' },
     answers: { 201: { description: 'Recorded.', schema: z.object({ observation: z.object({ id: z.string() }) }) } },
   },
+  recordRightDecision: {
+    method: 'post',
+    path: '/api/v1/cases/{caseId}/rights/{rightId}/decisions',
+    summary: 'Record that a followed right was exercised, declined or postponed',
+    description:
+      'Exercised and declined are final: from that date the watched model starts in the mode the decision made, and the right leaves the watch. Refused: an unknown right (404), a second final decision on a right (409), a date out of order, before approval, in the future or beyond the horizon (422).',
+    tag: 'Follow-through',
+    permission: { case: ['update'] },
+    body: rightDecisionSchema,
+    example: { decision: 'postponed', date: '2027-04-15', reason: 'The offtake contract is not signed yet; the committee looks again in June.' },
+    answers: { 201: { description: 'Recorded.', schema: z.object({ decision: z.object({ id: z.string() }) }) } },
+  },
   watchCase: {
     method: 'get',
     path: '/api/v1/cases/{caseId}/watch',
@@ -493,7 +506,7 @@ export const operations = {
     tag: 'Settings',
     permission: { settings: ['update'] },
     body: settingsSchema,
-    example: { currency: 'EUR', riskFreeRate: 0.031, wacc: 0.085, fiscalYearStartMonth: 1 },
+    example: { currency: 'EUR', riskFreeRate: 0.031, wacc: 0.085, fiscalYearStartMonth: 1, alertDaysBeforeClose: 30 },
     answers: { 200: { description: 'The defaults as saved.', schema: z.object({ settings: s.settingsSchemaOut }) } },
   },
   getOrganisationSettings: {

@@ -156,6 +156,7 @@ export const settingsSchemaOut = z
     riskFreeRate: z.number().meta({ description: 'Continuously compounded, as a fraction a year.' }),
     wacc: z.number().meta({ description: 'As a fraction a year.' }),
     fiscalYearStartMonth: z.int().min(1).max(12),
+    alertDaysBeforeClose: z.int().min(1).max(365).meta({ description: "How many days before a followed right's window closes its alert goes out." }),
   })
   .meta({ id: 'Settings', description: "The organisation's defaults for new projects and cases." });
 
@@ -403,7 +404,7 @@ export const watchSchema = z
       z.object({
         id: z.string(),
         name: z.string(),
-        status: z.enum(['in_region', 'near', 'outside', 'window_not_open', 'window_closed']),
+        status: z.enum(['in_region', 'near', 'outside', 'window_not_open', 'window_closed', 'exercised', 'declined']),
         critical: money.nullable(),
         side: z.enum(['above', 'below', 'between', 'anywhere']).nullable(),
         distanceRatio: z.number().nullable().meta({ description: 'critical ÷ V − 1.' }),
@@ -415,6 +416,19 @@ export const watchSchema = z
     observations: z.array(
       z.object({ id, observedOn: z.string(), value: money, note: z.string(), source: z.string(), recordedAt: dateTime, recordedBy: nullableName }),
     ),
-    revaluedExpandedNpv: money.nullable().meta({ description: 'The approved model re-valued from that date with V.' }),
+    decisions: z.array(
+      z.object({
+        id,
+        rightId: z.string(),
+        decision: z.enum(['exercised', 'declined', 'postponed']),
+        decidedOn: z.string(),
+        reason: z.string(),
+        recordedAt: dateTime,
+        recordedBy: nullableName,
+      }),
+    ),
+    revaluedExpandedNpv: money
+      .nullable()
+      .meta({ description: 'The approved model re-valued from that date with V, starting in the mode the recorded decisions made.' }),
   })
   .meta({ id: 'Watch' });

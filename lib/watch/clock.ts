@@ -15,14 +15,26 @@
  * - the tree keeps its step length, so T − t is cut into round(N·(T − t)/T) steps.
  * Rights whose windows have all passed are removed and named in `closed`; a right to invest
  * (defer) whose window has passed cannot be followed and is refused.
+ *
+ * Decisions the team recorded (`used`) change the model from their date: a right declined is
+ * removed; a right exercised is named in the model's `exercised` list so the tree starts in the
+ * mode it made (a stage right exercised on t has its payment at t made). A switch in force can be
+ * switched back only while its window is open. Every right keeps its approved id, so the
+ * re-valued rights read against the approved ones.
  */
-import type { Cost, ExerciseWindow, OptionTemplate, ProjectModel, SwitchInput } from '@/lattice';
+import { templateIds, type Cost, type ExerciseWindow, type OptionTemplate, type ProjectModel, type SwitchInput } from '@/lattice';
 
 export class ClockError extends Error {
   constructor(message: string) {
     super(message);
     this.name = 'ClockError';
   }
+}
+
+/** Rights the team used or gave up on or before the date, by id. */
+export interface UsedRights {
+  exercised: string[];
+  declined: string[];
 }
 
 export interface ModelAt {
@@ -57,6 +69,23 @@ export function costFrom(cost: Cost, t: number): Cost {
 
 function nameOf(o: OptionTemplate): string {
   return o.id ?? o.type;
+}
+
+/**
+ * A right already used, seen from t: its effect stays (the mode it made) and its own window no
+ * longer matters, except a switch's, which is the window for switching back. A window that has
+ * passed becomes a single date at the horizon, where switching back earns nothing.
+ */
+function usedTemplateFrom(o: OptionTemplate, t: number, horizon: number): OptionTemplate {
+  const atEnd: ExerciseWindow = { kind: 'european', at: horizon };
+  switch (o.type) {
+    case 'switch':
+      return { ...o, cost: costFrom(o.cost, t), backCost: costFrom(o.backCost, t), window: (o.window ? windowFrom(o.window, t) : null) ?? atEnd };
+    case 'stage':
+      throw new ClockError('A stage right is followed payment by payment, not as one right used.');
+    default:
+      return { ...o, window: atEnd };
+  }
 }
 
 function templateFrom(o: OptionTemplate, t: number): OptionTemplate | null {
@@ -95,16 +124,29 @@ function switchFrom(s: SwitchInput, t: number): SwitchInput | null {
   return window ? { ...s, window, cost: costFrom(s.cost, t) } : null;
 }
 
-export function modelAt(model: ProjectModel, t: number, observedValue: number): ModelAt {
+export function modelAt(model: ProjectModel, t: number, observedValue: number, used: UsedRights = { exercised: [], declined: [] }): ModelAt {
   if (!(t >= 0)) throw new ClockError('The date is before the valuation date.');
   if (!(t < model.horizon)) throw new ClockError('The date is at or beyond the model’s horizon: no right is left to follow.');
   if (!(observedValue > 0)) throw new ClockError('The observed value must be above 0.');
   const horizon = model.horizon - t;
   const closed: string[] = [];
-  const options = (model.options ?? []).flatMap((o) => {
+  const ids = templateIds(model.options ?? []);
+  const exercised: string[] = [];
+  const options = (model.options ?? []).flatMap((o, k): OptionTemplate[] => {
+    const id = ids[k]!;
+    if (used.declined.includes(id)) return [];
+    if (used.exercised.includes(id) && o.type === 'stage') {
+      // The payment due on t was made: only later ones are left.
+      const payments = o.payments.filter((p) => p.at > t).map((p) => ({ at: p.at - t, amount: p.amount }));
+      return payments.length === 0 ? [] : [{ ...o, id, payments }];
+    }
+    if (used.exercised.includes(id)) {
+      exercised.push(id);
+      return [{ ...usedTemplateFrom(o, t, horizon), id }];
+    }
     const shifted = templateFrom(o, t);
     if (!shifted) closed.push(nameOf(o));
-    return shifted ? [shifted] : [];
+    return shifted ? [{ ...shifted, id }] : [];
   });
   const switches = (model.switches ?? []).flatMap((s) => {
     const shifted = switchFrom(s, t);
@@ -134,6 +176,7 @@ export function modelAt(model: ProjectModel, t: number, observedValue: number): 
     steps: Math.max(1, Math.round((model.steps * horizon) / model.horizon)),
     ...(model.investment !== undefined ? { investment: t > 0 ? 0 : model.investment } : {}),
     ...(model.options ? { options } : {}),
+    ...(exercised.length > 0 ? { exercised } : {}),
     ...(model.switches ? { switches } : {}),
   };
   return { model: shifted, closed };

@@ -8,6 +8,8 @@ export const statusWords: Record<RightStatus, string> = {
   outside: 'Outside its region',
   window_not_open: 'Window not open yet',
   window_closed: 'Window closed',
+  exercised: 'Exercised (recorded)',
+  declined: 'Declined (recorded)',
 };
 
 /** How far V must move to reach the boundary: "+12.0 % (0.38 σ)", or "reached". */

@@ -6,9 +6,9 @@
  * template. Distances: the move V must make to reach the boundary, as a fraction of V and in
  * standard deviations of ln V over the next year (σ).
  */
-import type { BoundaryPoint, ExerciseWindow, OptionTemplate, SwitchResult } from '@/lattice';
+import { templateIds, type BoundaryPoint, type ExerciseWindow, type OptionTemplate, type SwitchResult } from '@/lattice';
 
-export type RightStatus = 'in_region' | 'near' | 'outside' | 'window_not_open' | 'window_closed';
+export type RightStatus = 'in_region' | 'near' | 'outside' | 'window_not_open' | 'window_closed' | 'exercised' | 'declined';
 
 export interface RightWatch {
   id: string;
@@ -68,9 +68,10 @@ export function rightStatuses(args: {
   value: number;
 }): RightWatch[] {
   const { options, switches, horizon, volatility, t, value } = args;
+  const ids = templateIds(options);
   return options.map((o, k) => {
-    const right = switches[k];
-    const id = right?.id ?? o.id ?? `${o.type}-${k + 1}`;
+    const id = ids[k]!;
+    const right = switches.find((s) => s.id === id);
     const window = windowAt(o, horizon, t);
     const base = { id, name: o.id ?? id, windowOpensAt: window.opensAt, windowClosesAt: window.closesAt };
     const none = { critical: null, side: null, distanceRatio: null, distanceSd: null };

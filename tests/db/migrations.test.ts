@@ -37,12 +37,15 @@ describe('migrations', () => {
       'project',
       'rateLimit',
       'review_comment',
+      'right_decision',
+      'right_standing',
       'session',
       'sign_in_failure',
       'user',
       'valuation_run',
       'verification',
       'volatility_simulation',
+      'watch_alert',
     ]);
     const all = await m.getMigrations();
     for (let k = 0; k < all.length; k++) assertMigrated(await m.migrateDown());

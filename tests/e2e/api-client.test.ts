@@ -120,6 +120,15 @@ describe('the API through its typed client', () => {
     const watch = ok(await viewer.GET('/api/v1/cases/{caseId}/watch', { params: { path: { caseId: made.id } } }));
     expect(watch.asOf).toBe(today);
     expect(watch.rights.map((r) => r.name)).toEqual(['Second line']);
+    // The analyst's key records a decision on it; the viewer's key reads it back.
+    ok(
+      await analyst.POST('/api/v1/cases/{caseId}/rights/{rightId}/decisions', {
+        params: { path: { caseId: made.id, rightId: 'Second line' } },
+        body: { decision: 'postponed', date: today, reason: 'The offtake contract is not signed yet.' },
+      }),
+    );
+    const after = ok(await viewer.GET('/api/v1/cases/{caseId}/watch', { params: { path: { caseId: made.id } } }));
+    expect(after.decisions.map((d) => [d.rightId, d.decision])).toEqual([['Second line', 'postponed']]);
     // The record says who did it: the keys, each under its creator's name.
     const activity = ok(await viewer.GET('/api/v1/projects/{projectId}/activity', { params: { path: { projectId: ids.project } } })).activity;
     expect(activity.find((a) => a.action === 'case.approve')?.actor).toMatch(/^API key Typed client reviewer .* \(created by .+\)$/);

@@ -67,6 +67,12 @@ const matrix: [Method, string, Role[], Probe?][] = [
   ['GET', '/api/v1/cases/:case/board-pack', ALL],
   ['GET', '/api/v1/cases/:case/watch', ALL],
   ['POST', '/api/v1/cases/:case/observations', BUILDERS, { json: { date: 5 }, status: 422, valid: { date: '2026-12-01', value: 100 } }],
+  [
+    'POST',
+    '/api/v1/cases/:case/rights/:right/decisions',
+    BUILDERS,
+    { json: { decision: 'used' }, status: 422, valid: { decision: 'postponed', reason: 'Not yours to decide.' } },
+  ],
   ['POST', '/api/v1/cases/:case/valuations', BUILDERS],
   ['GET', '/api/v1/cases/:case/valuations', ALL],
   ['POST', '/api/v1/cases/:case/valuations/:run/rerun', ['admin', 'analyst', 'reviewer']],
@@ -126,6 +132,7 @@ const filePlaceholders: Record<string, string> = {
   revaluation: 'revaluationId',
   apiKey: 'keyId',
   run: 'runId',
+  right: 'rightId',
 };
 
 const fill = (path: string) => path.replace(/:(\w+)/g, (_, key: string) => ids[key]!);
@@ -156,6 +163,7 @@ beforeAll(async () => {
   // The approved demo case, so its board pack exists; an attachment and a finished simulation on it, and a finished re-valuation.
   const approved = await demoCase('Phased bio-resin plant', 'Base case');
   ids.case = approved.caseId;
+  ids.right = encodeURIComponent('Phase 2');
   ids.project = approved.projectId;
   ids.secondCase = (await demoCase('Phased bio-resin plant', 'Volatile demand')).caseId;
   const org = await db.selectFrom('organization').select('id').where('slug', '=', 'kestrel-bay-materials').executeTakeFirstOrThrow();

@@ -75,6 +75,30 @@ describe('the clock of a followed decision', () => {
     expect(checked.length).toBeGreaterThanOrEqual(3);
   });
 
+  it('starts in the mode a recorded decision made: the value is the approved lattice’s in that mode, and a declined right is gone', () => {
+    const grid = valueProject(model, { extras: false, grid: true });
+    for (const step of [36, 60]) {
+      const at = grid.grid!.steps[step]!;
+      for (const j of [0, Math.floor(step / 2), step]) {
+        const v = at.underlying[j]!;
+        for (const [used, mode] of [
+          [['Second line'], 'operating+Second line'],
+          [['Halve'], 'operating+Halve'],
+          [['Second line', 'Halve'], 'operating+Second line+Halve'],
+        ] as const) {
+          const fresh = valueProject(modelAt(model, at.t, v, { exercised: [...used], declined: [] }).model, { extras: false });
+          expect(fresh.startMode).toBe(mode);
+          const expected = at.modes[mode]!.value[j]!;
+          expect(Math.abs(fresh.value - expected) / Math.max(1, Math.abs(expected)), `step ${step}, node ${j}, ${mode}`).toBeLessThan(1e-9);
+        }
+        // Declining the sale: the same as a model that never had it.
+        const declined = valueProject(modelAt(model, at.t, v, { exercised: [], declined: ['Sell'] }).model, { extras: false });
+        const without = valueProject(modelAt({ ...model, options: model.options!.filter((o) => o.id !== 'Sell') }, at.t, v).model, { extras: false });
+        expect(declined.value).toBe(without.value);
+      }
+    }
+  });
+
   it('writes the same model as one built by hand for t = 1.5', () => {
     const { model: later, closed } = modelAt(model, 1.5, 130);
     expect(closed).toEqual(['Early add-on']);

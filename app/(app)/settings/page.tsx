@@ -24,6 +24,7 @@ export default async function SettingsPage() {
           riskFreeRate: settings.risk_free_rate,
           wacc: settings.wacc,
           fiscalYearStartMonth: settings.fiscal_year_start_month,
+          alertDaysBeforeClose: settings.alert_days_before_close,
         }}
       />
       {settings.updated_by ? <p className="mt-6 text-caption text-ink-muted">Last saved {formatDateTime(settings.updated_at)}.</p> : null}

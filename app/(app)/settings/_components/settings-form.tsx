@@ -15,6 +15,7 @@ interface SettingsFields {
   riskFreeRate: string;
   wacc: string;
   fiscalYearStartMonth: string;
+  alertDaysBeforeClose: string;
 }
 
 const percentToFraction = (v: string) => (v.trim() === '' ? NaN : Number(v) / 100);
@@ -25,6 +26,7 @@ function toInput(fields: SettingsFields) {
     riskFreeRate: percentToFraction(fields.riskFreeRate),
     wacc: percentToFraction(fields.wacc),
     fiscalYearStartMonth: Number(fields.fiscalYearStartMonth),
+    alertDaysBeforeClose: fields.alertDaysBeforeClose.trim() === '' ? NaN : Number(fields.alertDaysBeforeClose),
   };
 }
 
@@ -46,6 +48,7 @@ export function SettingsForm({ initial }: { initial: SettingsInput }) {
     riskFreeRate: (initial.riskFreeRate * 100).toFixed(2),
     wacc: (initial.wacc * 100).toFixed(2),
     fiscalYearStartMonth: String(initial.fiscalYearStartMonth),
+    alertDaysBeforeClose: String(initial.alertDaysBeforeClose ?? 30),
   };
   const form = useForm<SettingsFields>({ resolver, defaultValues: defaults });
   // register() fills uncontrolled fields only after hydration; defaultValue puts the saved
@@ -84,6 +87,15 @@ export function SettingsForm({ initial }: { initial: SettingsInput }) {
         hint="Default discount rate for cash flows"
         error={errors.wacc?.message}
         {...field('wacc')}
+      />
+      <Input
+        label="Alert before a window closes (days)"
+        type="number"
+        step="1"
+        inputMode="numeric"
+        hint="For approved rights being followed"
+        error={errors.alertDaysBeforeClose?.message}
+        {...field('alertDaysBeforeClose')}
       />
       <div className="sm:col-span-2">
         <Button type="submit" busy={isSubmitting}>

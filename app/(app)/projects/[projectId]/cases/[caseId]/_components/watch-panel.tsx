@@ -43,6 +43,8 @@ const statusTone: Record<RightStatus, string> = {
   outside: 'bg-paper-sunk text-ink-soft',
   window_not_open: 'bg-paper-sunk text-ink-soft',
   window_closed: 'bg-paper-sunk text-ink-muted',
+  exercised: 'bg-tide-100 text-tide-700',
+  declined: 'bg-paper-sunk text-ink-muted',
 };
 
 const today = () => dateOf(new Date());
