@@ -6,6 +6,7 @@
  * abandon), a hub that may wait (defer with a cost that grows), a pilot line funded in stages,
  * and an older line that can be mothballed and restarted. Each has two cases.
  */
+import type { DemoFollow } from './seed-follow';
 import type { CashFlowYear } from '@/lib/cash-flows';
 import type { CaseInput } from '@/lib/validations/case';
 
@@ -15,6 +16,8 @@ export interface DemoProject {
   cases: CaseInput[];
   /** Where a case stands in the review workflow once seeded (the others stay drafts). */
   reviews?: { caseIndex: number; outcome: 'approved' | 'in_review'; recommendation: string }[];
+  /** The approved case followed since an approval in the past (demo/seed-follow.ts). */
+  follow?: DemoFollow;
 }
 
 /** A yearly schedule from parallel columns (year 0 first), so the figures read like a spreadsheet. */
@@ -157,6 +160,22 @@ export const demoPortfolio: DemoProject[] = [
           'Approve phase 1 now. On its own the plan does not pay back (static NPV below zero), but the right to add phase 2 and the sale option carry it: commit to phase 2 only if the plant is worth more than the boundary in years 2–4, and sell if it falls below its boundary. (Invented demo text.)',
       },
     ],
+    follow: {
+      approvedDaysAgo: 800,
+      observations: [
+        { daysAgo: 700, ofApproved: 1.03, note: 'First full quarter: output on plan. (Invented demo figure.)', source: 'updated DCF' },
+        { daysAgo: 520, ofApproved: 1.08, note: 'Two offtake contracts signed at higher prices. (Invented demo figure.)', source: 'updated DCF' },
+        { daysAgo: 300, ofApproved: 1.12, note: 'Listed resin producers re-rated upwards. (Invented demo figure.)', source: 'market comparables' },
+        { daysAgo: 120, ofApproved: 1.15, note: 'Demand ahead of plan for a third quarter. (Invented demo figure.)', source: 'updated DCF' },
+      ],
+      near: {
+        right: 'Phase 2',
+        daysAgo: 12,
+        sd: -0.45,
+        note: 'Phase 2 now open: indicative interest from a second offtaker; value per the updated DCF. (Invented demo figure.)',
+        source: 'updated DCF',
+      },
+    },
   },
   {
     name: 'Cold-storage hub',

@@ -18,6 +18,7 @@ import { pageSizes } from '@/lib/board-pack/data';
 import { boardPackData, saveBoardPack } from '@/lib/board-pack/records';
 import { renderBoardPack } from '@/lib/board-pack/render';
 import { checkTransition } from '@/lib/review/transitions';
+import { historyOf, seedFollow } from './seed-follow';
 import { demoPortfolio } from './portfolio';
 
 export async function seedPortfolio(args: { orgId: string; analystId: string; reviewerId?: string; currency: string }): Promise<string[]> {
@@ -26,6 +27,8 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; re
   for (const demo of demoPortfolio) {
     const exists = await db.selectFrom('project').select('id').where('organization_id', '=', args.orgId).where('name', '=', demo.name).executeTakeFirst();
     if (exists) continue;
+    // A followed project's history began in the past (demo/seed-follow.ts); the others' now.
+    const history = demo.follow ? historyOf(demo.follow) : undefined;
     const project = await createProject(db, {
       orgId: args.orgId,
       ownerId: args.analystId,
@@ -33,11 +36,26 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; re
       description: demo.description,
       currency: args.currency,
     });
-    await recordAudit(db, { ...actor, action: 'project.create', subjectType: 'project', subjectId: project.id, detail: { name: demo.name } });
+    await recordAudit(db, {
+      ...actor,
+      at: history?.built,
+      action: 'project.create',
+      subjectType: 'project',
+      subjectId: project.id,
+      detail: { name: demo.name },
+    });
+    const approved: { caseId: string; snapshotId: string }[] = [];
     for (const [index, input] of demo.cases.entries()) {
       const made = await createCase(db, { orgId: args.orgId, projectId: project.id, createdBy: args.analystId, content: { options: [], ...input } });
       if (!made) throw new Error(`seed: the project ${demo.name} vanished while seeding`);
-      await recordAudit(db, { ...actor, action: 'case.create', subjectType: 'case', subjectId: made.id, detail: { name: input.name, projectId: project.id } });
+      await recordAudit(db, {
+        ...actor,
+        at: history?.built,
+        action: 'case.create',
+        subjectType: 'case',
+        subjectId: made.id,
+        detail: { name: input.name, projectId: project.id },
+      });
       const { model } = caseToModel(input);
       const result = valueProject(model);
       const run = await recordValuationRun(db, {
@@ -54,6 +72,7 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; re
       });
       await recordAudit(db, {
         ...actor,
+        at: history?.built,
         action: 'case.value',
         subjectType: 'case',
         subjectId: made.id,
@@ -67,8 +86,8 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; re
         },
       });
       const review = demo.reviews?.find((r) => r.caseIndex === index);
-      if (review && args.reviewerId)
-        await seedReview({
+      if (review && args.reviewerId) {
+        const snapshotId = await seedReview({
           ...args,
           reviewerId: args.reviewerId,
           caseId: made.id,
@@ -76,14 +95,23 @@ export async function seedPortfolio(args: { orgId: string; analystId: string; re
           outcome: review.outcome,
           recommendation: review.recommendation,
           frozen: { inputs: input, model, result, engineVersion: result.engineVersion, inputHash: hashModel(model) },
+          history,
         });
+        if (snapshotId) approved.push({ caseId: made.id, snapshotId });
+      }
     }
+    // Followed since an approval in the past (demo/seed-follow.ts), then the packs are rendered,
+    // so they carry the approval date every other page shows.
+    if (demo.follow && approved[0])
+      await seedFollow({ orgId: args.orgId, analystId: args.analystId, projectId: project.id, caseId: approved[0].caseId, follow: demo.follow });
+    for (const { snapshotId } of approved)
+      for (const size of pageSizes) await saveBoardPack(args.orgId, snapshotId, size, await renderBoardPack(await boardPackData(args.orgId, snapshotId, size)));
     created.push(demo.name);
   }
   return created;
 }
 
-/** Submits a seeded case as the analyst and, for an approved one, approves it as the reviewer and stores its board pack. */
+/** Submits a seeded case as the analyst and, for an approved one, approves it as the reviewer; the approved snapshot's id. */
 async function seedReview(args: {
   orgId: string;
   analystId: string;
@@ -93,6 +121,7 @@ async function seedReview(args: {
   outcome: 'approved' | 'in_review';
   recommendation: string;
   frozen: FrozenValuation;
+  history?: { submitted: Date; approved: Date };
 }) {
   await db.transaction().execute(async (trx) => {
     const outcome = await submitCase(trx, {
@@ -103,29 +132,33 @@ async function seedReview(args: {
       caseVersion: 1,
       frozen: args.frozen,
       recommendation: args.recommendation,
+      at: args.history?.submitted,
     });
     if (!outcome.ok) throw new Error(`seed: could not submit ${args.caseName}: ${outcome.message}`);
     await recordAudit(trx, {
       orgId: args.orgId,
       actorId: args.analystId,
+      at: args.history?.submitted,
       action: 'case.submit',
       subjectType: 'case',
       subjectId: args.caseId,
       detail: { name: args.caseName, snapshot: outcome.value.id },
     });
   });
-  if (args.outcome !== 'approved') return;
+  if (args.outcome !== 'approved') return null;
   const approved = await db.transaction().execute(async (trx) => {
     const outcome = await decideCase(trx, {
       orgId: args.orgId,
       caseId: args.caseId,
       allowed: (status) => checkTransition('reviewer', 'approve', status),
       userId: args.reviewerId,
+      at: args.history?.approved,
     });
     if (!outcome.ok) throw new Error(`seed: could not approve ${args.caseName}: ${outcome.message}`);
     await recordAudit(trx, {
       orgId: args.orgId,
       actorId: args.reviewerId,
+      at: args.history?.approved,
       action: 'case.approve',
       subjectType: 'case',
       subjectId: args.caseId,
@@ -133,6 +166,5 @@ async function seedReview(args: {
     });
     return outcome.value;
   });
-  // Both page sizes at approval, as the app does (lib/review/decide.ts).
-  for (const size of pageSizes) await saveBoardPack(args.orgId, approved.id, size, await renderBoardPack(await boardPackData(args.orgId, approved.id, size)));
+  return approved.id;
 }

@@ -44,6 +44,25 @@ export function errorResponse(error: unknown): NextResponse {
 /** Ids in paths are uuids or the auth library's random ids: anything else cannot name a record. */
 const ID_PATTERN = /^[A-Za-z0-9_-]{1,100}$/;
 
+/**
+ * Path parameters that are names a user chose, not ids: a right is named on its option card
+ * (the engine's ids, up to 64 characters, any script). Control characters never name anything.
+ */
+const NAME_PARAMS = new Set(['rightId']);
+const NAME_PATTERN = /^[^\p{Cc}]{1,64}$/u;
+
+/** A name parameter as written, percent-decoded when it still is encoded; null when it cannot be one. */
+function nameParam(value: string): string | null {
+  let name = value;
+  if (/%[0-9A-Fa-f]{2}/.test(value))
+    try {
+      name = decodeURIComponent(value);
+    } catch {
+      // Not an encoding after all (a name with a literal "%"): kept as written.
+    }
+  return NAME_PATTERN.test(name) && name.trim() === name ? name : null;
+}
+
 export function withAuth<P = Record<string, never>, S extends z.ZodType | undefined = undefined>(
   handler: (ctx: Context<P, Body<S>>) => Promise<Response>,
   options: Options<S>,
@@ -56,13 +75,16 @@ export function withAuth<P = Record<string, never>, S extends z.ZodType | undefi
       // A browser never adds an Authorization header on its own, so a keyed request is not a forgery risk.
       if (key === null && !SAFE_METHODS.has(request.method) && !isSameOrigin(request.headers))
         throw new AppError('forbidden', 'This request did not come from a Leeway page (its Origin is missing or foreign).');
-      const params = await route.params;
-      for (const value of Object.values(params ?? {}))
-        if (typeof value !== 'string' || !ID_PATTERN.test(value)) throw new AppError('not_found', 'There is no such record.');
+      const params = { ...(await route.params) } as Record<string, unknown>;
+      for (const [key, value] of Object.entries(params)) {
+        const name = NAME_PARAMS.has(key) && typeof value === 'string' ? nameParam(value) : null;
+        if (name !== null) params[key] = name;
+        else if (typeof value !== 'string' || !ID_PATTERN.test(value)) throw new AppError('not_found', 'There is no such record.');
+      }
       const signedIn = key === null ? await requireUser() : await authenticateApiKey(key);
       const member = options.permission ? requireRole(signedIn, options.permission) : signedIn;
       const body = options.body ? options.body.parse(await readJson(request)) : undefined;
-      return await handler({ request, member, params, body: body as Body<S> });
+      return await handler({ request, member, params: params as P, body: body as Body<S> });
     } catch (error) {
       return errorResponse(error);
     }

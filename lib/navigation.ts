@@ -11,6 +11,7 @@ const items: (NavItem & { needs: Permission })[] = [
   { href: '/projects', label: 'Projects', needs: { project: ['read'] } },
   { href: '/compare', label: 'Compare', needs: { case: ['read'] } },
   { href: '/review', label: 'Review', needs: { review: ['read'] } },
+  { href: '/alerts', label: 'Alerts', needs: { case: ['read'] } },
   { href: '/settings', label: 'Settings', needs: { settings: ['update'] } },
 ];
 

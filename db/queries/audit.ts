@@ -8,6 +8,8 @@ export interface AuditEvent {
   subjectType: string;
   subjectId?: string | null;
   detail?: Record<string, unknown>;
+  /** When it happened; now unless given (the demo seed writes a history that began in the past). */
+  at?: Date;
 }
 
 export async function recordAudit(db: Database, event: AuditEvent): Promise<void> {
@@ -20,6 +22,7 @@ export async function recordAudit(db: Database, event: AuditEvent): Promise<void
       subject_type: event.subjectType,
       subject_id: event.subjectId ?? null,
       detail: event.detail ?? {},
+      ...(event.at ? { created_at: event.at } : {}),
     })
     .execute();
 }

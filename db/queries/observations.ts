@@ -66,3 +66,16 @@ export async function listFollowedSnapshots(db: Database, { orgId }: { orgId: st
     snapshot,
   }));
 }
+
+/** Every case, across organisations, with an approved version in an active project: what the daily check looks at. */
+export async function listAllFollowedCases(db: Database) {
+  return db
+    .selectFrom('case_snapshot')
+    .innerJoin('case', 'case.id', 'case_snapshot.case_id')
+    .innerJoin('project', 'project.id', 'case.project_id')
+    .select(['case_snapshot.organization_id as orgId', 'case_snapshot.case_id as caseId'])
+    .distinct()
+    .where('case_snapshot.status', '=', 'approved')
+    .where('project.status', '=', 'active')
+    .execute();
+}

@@ -44,7 +44,17 @@ export interface FrozenValuation {
  */
 export async function submitCase(
   trx: Transaction<DB>,
-  args: { orgId: string; caseId: string; allowed: StatusCheck; userId: string; caseVersion: number; frozen: FrozenValuation; recommendation: string },
+  args: {
+    orgId: string;
+    caseId: string;
+    allowed: StatusCheck;
+    userId: string;
+    caseVersion: number;
+    frozen: FrozenValuation;
+    recommendation: string;
+    /** When it was submitted; now unless given (the demo seed's history). */
+    at?: Date;
+  },
 ): Promise<ReviewOutcome<CaseSnapshot>> {
   const row = await lockCase(trx, args.orgId, args.caseId);
   if (!row) return { ok: false, code: 'not_found', message: NO_SUCH_CASE };
@@ -80,6 +90,7 @@ export async function submitCase(
       organization_is_demo: names.metadata?.includes('"demo":true') ?? false,
       submitted_by_name: submitter?.name ?? null,
       recommendation: args.recommendation,
+      ...(args.at ? { submitted_at: args.at } : {}),
     })
     .returningAll()
     .executeTakeFirstOrThrow();
@@ -90,7 +101,14 @@ export async function submitCase(
 /** Approves or returns the case's snapshot under review. */
 export async function decideCase(
   trx: Transaction<DB>,
-  args: { orgId: string; caseId: string; allowed: StatusCheck; userId: string; reason?: string },
+  args: {
+    orgId: string;
+    caseId: string;
+    allowed: StatusCheck;
+    userId: string;
+    reason?: string;
+    /** When it was decided; now unless given (the demo seed's history). */ at?: Date;
+  },
 ): Promise<ReviewOutcome<CaseSnapshot>> {
   const row = await lockCase(trx, args.orgId, args.caseId);
   if (!row) return { ok: false, code: 'not_found', message: NO_SUCH_CASE };
@@ -108,7 +126,7 @@ export async function decideCase(
       status: check.to as 'approved' | 'returned',
       decided_by: args.userId,
       decided_by_name: decider?.name ?? null,
-      decided_at: new Date(),
+      decided_at: args.at ?? new Date(),
       decision_reason: args.reason ?? null,
     })
     .where('id', '=', waiting.id)

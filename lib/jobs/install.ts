@@ -8,7 +8,16 @@ import { databaseUrl } from '../env';
 import { QUEUE_POLICIES, QUEUES, type QueueName } from './queues';
 
 // A dead-letter queue must exist before the queue that names it.
-const ORDER: QueueName[] = [QUEUES.simulationGaveUp, QUEUES.simulation, QUEUES.boardPack, QUEUES.mail, QUEUES.revaluationGaveUp, QUEUES.revaluation];
+const ORDER: QueueName[] = [
+  QUEUES.simulationGaveUp,
+  QUEUES.simulation,
+  QUEUES.boardPack,
+  QUEUES.mail,
+  QUEUES.revaluationGaveUp,
+  QUEUES.revaluation,
+  QUEUES.watchCheck,
+  QUEUES.watchDaily,
+];
 
 export async function installQueues(connectionString = databaseUrl()): Promise<void> {
   const boss = new PgBoss({ connectionString, max: 1, supervise: false, schedule: false });

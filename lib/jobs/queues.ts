@@ -19,7 +19,12 @@ export const QUEUES = {
   simulationGaveUp: 'volatility-simulation-gave-up',
   revaluation: 'portfolio-revaluation',
   revaluationGaveUp: 'portfolio-revaluation-gave-up',
+  watchCheck: 'watch-check',
+  watchDaily: 'watch-daily',
 } as const;
+
+/** When the daily check of every followed case runs (cron, UTC). */
+export const WATCH_DAILY_CRON = process.env.WATCH_DAILY_CRON ?? '0 6 * * *';
 
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
 
@@ -59,6 +64,11 @@ export interface RevaluationJob {
   userId: string;
 }
 
+export interface WatchCheckJob {
+  orgId: string;
+  caseId: string;
+}
+
 export interface JobData {
   [QUEUES.mail]: MailJob;
   [QUEUES.boardPack]: BoardPackJob;
@@ -66,6 +76,8 @@ export interface JobData {
   [QUEUES.simulationGaveUp]: SimulationJob;
   [QUEUES.revaluation]: RevaluationJob;
   [QUEUES.revaluationGaveUp]: RevaluationJob;
+  [QUEUES.watchCheck]: WatchCheckJob;
+  [QUEUES.watchDaily]: Record<string, never>;
 }
 
 /**
@@ -97,4 +109,7 @@ export const QUEUE_POLICIES: Record<QueueName, PgBoss.Queue> = {
     deadLetter: QUEUES.revaluationGaveUp,
   },
   [QUEUES.revaluationGaveUp]: { name: QUEUES.revaluationGaveUp, retryLimit: 5, retryDelay: 5, retryBackoff: true, expireInSeconds: 60 },
+  // A check announces each change once (unique alert keys), so running it again is safe.
+  [QUEUES.watchCheck]: { name: QUEUES.watchCheck, retryLimit: 3, retryDelay: 10, retryBackoff: true, expireInSeconds: 300 },
+  [QUEUES.watchDaily]: { name: QUEUES.watchDaily, retryLimit: 2, retryDelay: 60, retryBackoff: true, expireInSeconds: 300 },
 };

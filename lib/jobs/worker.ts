@@ -6,8 +6,9 @@
  */
 import PgBoss from 'pg-boss';
 import { databaseUrl } from '../env';
+import { checkEveryWatch, checkWatch } from './check-watch';
 import { deliverMail } from './deliver-mail';
-import { QUEUES, type JobData, type QueueName } from './queues';
+import { QUEUES, WATCH_DAILY_CRON, type JobData, type QueueName } from './queues';
 import { renderBoardPacks } from './render-board-packs';
 import { markRevaluationGaveUp, revaluePortfolio } from './revalue-portfolio';
 import { markSimulationGaveUp, runSimulation, stopAllSimulations } from './run-simulation';
@@ -22,6 +23,8 @@ const CONCURRENCY: Record<QueueName, number> = {
   [QUEUES.simulationGaveUp]: 1,
   [QUEUES.revaluation]: 1,
   [QUEUES.revaluationGaveUp]: 1,
+  [QUEUES.watchCheck]: 1,
+  [QUEUES.watchDaily]: 1,
 };
 
 const HANDLERS: { [Q in QueueName]: (data: JobData[Q]) => Promise<void> } = {
@@ -31,6 +34,8 @@ const HANDLERS: { [Q in QueueName]: (data: JobData[Q]) => Promise<void> } = {
   [QUEUES.simulationGaveUp]: markSimulationGaveUp,
   [QUEUES.revaluation]: revaluePortfolio,
   [QUEUES.revaluationGaveUp]: markRevaluationGaveUp,
+  [QUEUES.watchCheck]: checkWatch,
+  [QUEUES.watchDaily]: checkEveryWatch,
 };
 
 export interface RunningWorker {
@@ -45,11 +50,14 @@ export async function startWorker(): Promise<RunningWorker> {
     // How often a worker looks for jobs a dead worker left active past their deadline.
     maintenanceIntervalSeconds: seconds('JOB_MAINTENANCE_SECONDS', 30),
     migrate: false,
-    schedule: false,
+    // Cron schedules (the daily check of followed cases); with several workers pg-boss sends each
+    // scheduled job once.
+    schedule: true,
   });
   // Without a listener an 'error' event (a lost connection while PostgreSQL restarts) would end the process.
   boss.on('error', (error) => console.error('[leeway worker] queue:', error.message));
   await boss.start();
+  await boss.schedule(QUEUES.watchDaily, WATCH_DAILY_CRON, {}, { tz: 'UTC' });
   for (const queue of Object.keys(HANDLERS) as QueueName[]) {
     const handle = HANDLERS[queue] as (data: unknown) => Promise<void>;
     for (let k = 0; k < CONCURRENCY[queue]; k++)

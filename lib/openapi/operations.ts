@@ -351,7 +351,7 @@ export const operations = {
     path: '/api/v1/cases/{caseId}/watch',
     summary: 'Where each approved right stands now',
     description:
-      'At the latest observation (or the approval, without one): per right its status, critical value, side and distance, and the re-valued expanded NPV.',
+      'Today, with the latest observed value (or the approved one) and the decisions recorded: per right its status, critical value, side and distance, and the approved model re-valued from today.',
     tag: 'Follow-through',
     permission: { case: ['read'] },
     answers: { 200: { description: 'The rights and the observations.', schema: s.watchSchema } },

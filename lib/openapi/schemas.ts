@@ -398,8 +398,9 @@ export const watchSchema = z
         }),
       )
       .meta({ description: 'The approved rights with their boundaries (years after the valuation date), for charts.' }),
-    asOf: z.string().meta({ description: 'YYYY-MM-DD: the latest observation, or the valuation date.' }),
-    value: money.meta({ description: 'The project value V at that date.' }),
+    asOf: z.string().meta({ description: 'YYYY-MM-DD: today, the date the rights are read at (the clock has moved since approval).' }),
+    value: money.meta({ description: 'The project value V: the latest observed, or V at the valuation date.' }),
+    valueOn: z.string().meta({ description: 'YYYY-MM-DD: when that value was observed (the valuation date before any observation).' }),
     rights: z.array(
       z.object({
         id: z.string(),
@@ -427,6 +428,22 @@ export const watchSchema = z
         recordedBy: nullableName,
       }),
     ),
+    alerts: z
+      .array(
+        z.object({
+          id,
+          kind: z.enum(['in_region', 'near', 'window_opened', 'window_closing']),
+          rightId: z.string(),
+          message: z.string(),
+          asOf: z.string(),
+          createdAt: dateTime,
+          caseId: id,
+          caseName: z.string(),
+          projectId: id,
+          projectName: z.string(),
+        }),
+      )
+      .meta({ description: 'The alerts raised on this case, newest first (at most 50).' }),
     revaluedExpandedNpv: money
       .nullable()
       .meta({ description: 'The approved model re-valued from that date with V, starting in the mode the recorded decisions made.' }),

@@ -10,12 +10,15 @@ import { recordAudit } from '@/db/queries/audit';
 import { addObservation, listFollowedSnapshots, listObservations } from '@/db/queries/observations';
 import { addRightDecision, listRightDecisions, type RightDecisionRow } from '@/db/queries/right-decisions';
 import { latestApprovedSnapshot } from '@/db/queries/reviews';
+import { listAlerts } from '@/db/queries/watch-alerts';
 import type { CaseSnapshot } from '@/db/types';
 import { templateIds, type ProjectModel, type ValuationResult } from '@/lattice';
 import { requireCase } from '../cases/require-case';
 import type { Member } from '../dal';
 import { valueInWorker } from '../engine/pool';
 import { AppError } from '../errors';
+import { enqueue } from '../jobs/enqueue';
+import { QUEUES } from '../jobs/queues';
 import type { ObservationInput } from '../validations/observation';
 import type { RightDecisionInput } from '../validations/right-decision';
 import { ClockError, modelAt, type UsedRights } from './clock';
@@ -38,13 +41,14 @@ export interface Followed {
 }
 
 /**
- * Where the project stands: the latest date something was learnt or decided, the latest value
- * observed (V₀ before any), the rights used or given up, and whether the project has ended (an
- * abandonment used, or a stage payment declined).
+ * Where the project stands today: the clock has moved to today (a window that closed since the
+ * last observation is closed), V is the latest value observed (V₀ before any, dated `valueOn`),
+ * the rights used or given up, and whether the project has ended (an abandonment used, or a
+ * stage payment declined). Nothing is recorded in the future, so today is the latest date known.
  */
-export function positionOf(f: Followed) {
+export function positionOf(f: Followed, today = dateOf(new Date())) {
   const latest = f.observations.at(-1);
-  const dates = [f.valuationDate, latest?.observedOn ?? f.valuationDate, ...f.decisions.map((d) => d.decidedOn)];
+  const dates = [today, f.valuationDate, latest?.observedOn ?? f.valuationDate, ...f.decisions.map((d) => d.decidedOn)];
   const asOf = dates.reduce((a, b) => (b > a ? b : a));
   const used: UsedRights = { exercised: [], declined: [] };
   const recorded = new Map<string, 'exercised' | 'declined'>();
@@ -56,7 +60,8 @@ export function positionOf(f: Followed) {
   const options = f.model.options ?? [];
   const ids = templateIds(options);
   const ended = options.some((o, k) => (o.type === 'abandon' && used.exercised.includes(ids[k]!)) || (o.type === 'stage' && used.declined.includes(ids[k]!)));
-  return { asOf, t: yearsBetween(f.valuationDate, asOf), value: latest?.value ?? f.model.underlying.value, used, recorded, ended };
+  const valueOn = latest?.observedOn ?? f.valuationDate;
+  return { asOf, t: yearsBetween(f.valuationDate, asOf), value: latest?.value ?? f.model.underlying.value, valueOn, used, recorded, ended };
 }
 
 type Position = ReturnType<typeof positionOf>;
@@ -125,12 +130,13 @@ async function standing(f: Followed, at: Position, run: { owner: string; signal?
   };
 }
 
-async function loadFollowed(orgId: string, caseId: string): Promise<Followed> {
-  await requireCase(db, orgId, caseId);
+async function loadFollowed(orgId: string, caseId: string): Promise<Followed & { projectId: string }> {
+  const found = await requireCase(db, orgId, caseId);
   const snapshot = await latestApprovedSnapshot(db, { orgId, caseId });
   if (!snapshot?.decided_at) throw new AppError('conflict', 'This case has no approved version to follow yet: its rights are watched from their approval.');
   const [observations, decisions] = await Promise.all([listObservations(db, { orgId, caseId }), listRightDecisions(db, { orgId, snapshotId: snapshot.id })]);
   return {
+    projectId: found.project_id,
     snapshot,
     valuationDate: dateOf(snapshot.decided_at),
     model: snapshot.model as ProjectModel,
@@ -170,6 +176,8 @@ export async function recordObservation(member: Member, caseId: string, input: O
       subjectId: caseId,
       detail: { date: input.date, value: input.value, source: input.source },
     });
+    // The alerts' check, queued in the same transaction: it runs exactly when the value is recorded.
+    await enqueue(QUEUES.watchCheck, { orgId: member.orgId, caseId }, { executor: trx });
     return made;
   });
 }
@@ -225,20 +233,21 @@ export async function recordRightDecision(member: Member, caseId: string, rightI
       subjectId: caseId,
       detail: { right: rightId, decision: input.decision, date, reason: input.reason, caseVersion: f.snapshot.case_version },
     });
+    await enqueue(QUEUES.watchCheck, { orgId: member.orgId, caseId }, { executor: trx });
     return made;
   });
 }
 
 /** Where each right of a followed case stands now, with what it rests on. */
-export async function readWatch(f: Followed, run: { owner: string; signal?: AbortSignal }) {
-  const at = positionOf(f);
+export async function readWatch(f: Followed, run: { owner: string; signal?: AbortSignal }, today?: string) {
+  const at = positionOf(f, today);
   const now = await standing(f, at, run);
   const rights = now.rights.map((r) => ({
     ...r,
     windowOpensAt: r.windowOpensAt === null ? null : dateAfter(f.valuationDate, r.windowOpensAt),
     windowClosesAt: r.windowClosesAt === null ? null : dateAfter(f.valuationDate, r.windowClosesAt),
   }));
-  return { asOf: at.asOf, value: at.value, rights, revaluedExpandedNpv: now.revaluedExpandedNpv };
+  return { asOf: at.asOf, value: at.value, valueOn: at.valueOn, rights, revaluedExpandedNpv: now.revaluedExpandedNpv };
 }
 
 export async function watchCase(member: Member, caseId: string, signal?: AbortSignal) {
@@ -252,6 +261,7 @@ export async function watchCase(member: Member, caseId: string, signal?: AbortSi
     ...now,
     observations: f.observations,
     decisions: f.decisions,
+    alerts: await listAlerts(db, { orgId: member.orgId, caseId, limit: 50 }),
   };
 }
 
@@ -309,6 +319,7 @@ export async function watchList(member: Member) {
           currency: f.currency,
           asOf: at.asOf,
           value: at.value,
+          valueOn: at.valueOn,
         });
   }
   return rows;

@@ -44,6 +44,10 @@ export function boundaryAt(
   if (points.length === 0) return null;
   const spacing = points.length > 1 ? Math.min(...points.slice(1).map((p, k) => p.t - points[k]!.t)) : Infinity;
   const exact = points.find((p) => Math.abs(p.t - t) < 1e-9);
+  // The valuation date has one node, so a right used there is used "anywhere" with no critical
+  // value; the next step, if the right is used there too, locates the boundary it stands for.
+  const next = exact && exact.t < 1e-9 && exact.side === 'anywhere' ? points.find((p) => p.t > 1e-9) : undefined;
+  if (next && next.t <= 1.5 * spacing && next.critical !== null) return next;
   if (exact) return exact;
   const after = points.findIndex((p) => p.t > t);
   // Before the first step where it is used, by less than a step: the lattice cannot locate a

@@ -40,7 +40,7 @@ describe('inviting a member', () => {
     await page.waitForURL('**/accept-invitation/**');
     await page.getByRole('button', { name: 'Accept and continue' }).click();
     await page.waitForURL('**/portfolio');
-    expect(await navLabels(page)).toEqual(['Portfolio', 'Projects', 'Compare', 'Review']);
+    expect(await navLabels(page)).toEqual(['Portfolio', 'Projects', 'Compare', 'Review', 'Alerts']);
 
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL('**/sign-in');
@@ -55,7 +55,7 @@ describe('inviting a member', () => {
     await admin.page.getByLabel('Role of Robin Castell').selectOption('viewer');
     await expect.poll(() => admin.page.getByText('Role changed.').isVisible()).toBe(true);
     await page.goto('/portfolio');
-    expect(await navLabels(page)).toEqual(['Portfolio', 'Projects', 'Compare']);
+    expect(await navLabels(page)).toEqual(['Portfolio', 'Projects', 'Compare', 'Alerts']);
     await page.goto('/review');
     await expect.poll(() => page.getByRole('heading', { name: 'Your role cannot open this page' }).isVisible()).toBe(true);
 

@@ -9,10 +9,10 @@ afterAll(closeBrowser);
 
 describe('signing in by role', () => {
   it.each([
-    ['admin@kestrelbay.example', ['Portfolio', 'Projects', 'Compare', 'Review', 'Settings']],
-    ['analyst@kestrelbay.example', ['Portfolio', 'Projects', 'Compare', 'Review']],
-    ['reviewer@kestrelbay.example', ['Portfolio', 'Projects', 'Compare', 'Review']],
-    ['executive@kestrelbay.example', ['Portfolio', 'Projects', 'Compare']],
+    ['admin@kestrelbay.example', ['Portfolio', 'Projects', 'Compare', 'Review', 'Alerts', 'Settings']],
+    ['analyst@kestrelbay.example', ['Portfolio', 'Projects', 'Compare', 'Review', 'Alerts']],
+    ['reviewer@kestrelbay.example', ['Portfolio', 'Projects', 'Compare', 'Review', 'Alerts']],
+    ['executive@kestrelbay.example', ['Portfolio', 'Projects', 'Compare', 'Alerts']],
   ])('%s sees %j', async (email, expected) => {
     const { context, page } = await signedInPage(email);
     expect(await navLabels(page)).toEqual(expected);

@@ -33,6 +33,12 @@ describe('where each right stands', () => {
     expect(boundaryAt(switches[0]!.boundary, 0.9)).toBeNull();
     // Less than a step before the first point (as the valuation date is before step 1): that point.
     expect(boundaryAt(switches[0]!.boundary, 0.98)!.critical).toBe(150);
+    // Used at the valuation date's single node ("anywhere"): the next step's boundary stands for it;
+    // at a later date "anywhere" means every node uses it, and is kept.
+    const anywhere = { t: 0, side: 'anywhere' as const, critical: null, low: null, high: null };
+    expect(boundaryAt([anywhere, above(0.1, 120)], 0)).toMatchObject({ critical: 120, side: 'above' });
+    expect(boundaryAt([anywhere, above(0.3, 120)], 0)).toMatchObject({ critical: 120 });
+    expect(boundaryAt([{ ...anywhere, t: 1 }, above(1.1, 120)], 1)).toMatchObject({ side: 'anywhere', critical: null });
   });
 
   it('says in_region, near and outside by the side and one standard deviation', () => {

@@ -44,7 +44,7 @@ export function WatchList({ rows }: { rows: Row[] }) {
                 <Td>{r.name}</Td>
                 <Td>{statusWords[r.status]}</Td>
                 <Td>
-                  {formatMoney(r.value, r.currency)} <span className="text-caption text-ink-muted">({r.asOf})</span>
+                  {formatMoney(r.value, r.currency)} <span className="text-caption text-ink-muted">(observed {r.valueOn})</span>
                 </Td>
                 <Td>{r.critical === null ? '–' : formatMoney(r.critical, r.currency)}</Td>
                 <Td>{distanceWords(r)}</Td>

@@ -10,10 +10,17 @@ import { CaseEditor } from './_components/case-editor';
 
 export const metadata: Metadata = { title: 'Case' };
 
-export default async function CasePage({ params }: { params: Promise<{ projectId: string; caseId: string }> }) {
+export default async function CasePage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ projectId: string; caseId: string }>;
+  searchParams: Promise<{ tab?: string | string[] }>;
+}) {
   const member = await guardPage({ case: ['read'] });
   if (member === 'forbidden') return <Forbidden />;
   const { projectId, caseId } = await params;
+  const { tab } = await searchParams;
   const [project, found] = await Promise.all([findProject(db, { orgId: member.orgId, projectId }), findCase(db, { orgId: member.orgId, caseId })]);
   if (!project || !found || found.project_id !== project.id) notFound();
   return (
@@ -23,6 +30,7 @@ export default async function CasePage({ params }: { params: Promise<{ projectId
       projectName={project.name}
       currency={project.currency}
       canEdit={roleAllows(member.role, { case: ['update'] })}
+      initialTab={tab === 'watch' ? 'watch' : undefined}
       rights={{
         canSubmit: roleAllows(member.role, { case: ['submit'] }),
         canDecide: roleAllows(member.role, { review: ['decide'] }),

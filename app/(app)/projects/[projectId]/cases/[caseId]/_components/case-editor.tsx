@@ -39,6 +39,8 @@ interface Props {
   currency: string;
   canEdit: boolean;
   rights: ReviewRights;
+  /** The tab to open first (a link from an alert opens the Watch tab). */
+  initialTab?: string;
 }
 
 interface RunSummary {
@@ -71,7 +73,17 @@ function Headline({ label, value, strong, busy }: { label: string; value: string
   );
 }
 
-function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, rights, initial, reload }: Props & { initial: CaseJson; reload: () => void }) {
+function LoadedEditor({
+  caseId,
+  projectId,
+  projectName,
+  currency,
+  canEdit,
+  rights,
+  initial,
+  reload,
+  initialTab,
+}: Props & { initial: CaseJson; reload: () => void }) {
   const toast = useToast();
   const [draft, setDraft] = useState<CaseInput>(() => toInput(initial));
   const [version, setVersion] = useState(initial.version);
@@ -340,6 +352,7 @@ function LoadedEditor({ caseId, projectId, projectName, currency, canEdit, right
         </p>
 
         <Tabs
+          initial={initialTab}
           tabs={[
             {
               id: 'cash-flows',

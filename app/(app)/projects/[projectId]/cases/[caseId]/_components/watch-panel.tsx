@@ -23,6 +23,7 @@ interface Watch {
   switches: SwitchResult[];
   asOf: string;
   value: number;
+  valueOn: string;
   revaluedExpandedNpv: number | null;
   rights: {
     id: string;
@@ -96,8 +97,10 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
         </h3>
         <p className="mb-3 text-caption text-ink-muted">
           Version {w.followed.caseVersion}, approved {w.followed.valuationDate}; project value {formatMoney(w.value, currency)}
-          {w.observations.length === 0 ? ' (as approved: no value recorded since)' : ''}.{' '}
-          {w.revaluedExpandedNpv !== null ? `Re-valued from that date, the expanded NPV is ${formatMoney(w.revaluedExpandedNpv, currency)}.` : ''}
+          {w.observations.length === 0 ? ' (as approved: no value recorded since)' : ` (observed ${w.valueOn})`}.{' '}
+          {w.revaluedExpandedNpv !== null
+            ? `Re-valued from today with the decisions recorded, the expanded NPV is ${formatMoney(w.revaluedExpandedNpv, currency)}.`
+            : ''}
         </p>
         <Table caption="Where each right stands">
           <thead>
