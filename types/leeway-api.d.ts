@@ -468,6 +468,28 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/cases/{caseId}/observations/import": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Record a dated series of the project's value from a file
+         * @description A CSV or XLSX with dates (YYYY-MM-DD) in the first column and values in the second, a header row allowed (the reader of the volatility history). Each value follows the rules of a single observation; a refusal names its line or cell and records nothing (422).
+         *
+         *     Roles: Admin, Analyst.
+         */
+        post: operations["importObservations"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/cases/{caseId}/rights/{rightId}/decisions": {
         parameters: {
             query?: never;
@@ -499,7 +521,7 @@ export interface paths {
         };
         /**
          * Where each approved right stands now
-         * @description At the latest observation (or the approval, without one): per right its status, critical value, side and distance, and the re-valued expanded NPV.
+         * @description Today, with the latest observed value (or the approved one) and the decisions recorded: per right its status, critical value, side and distance, and the approved model re-valued from today.
          *
          *     Roles: Admin, Analyst, Reviewer, Executive (read-only).
          */
@@ -1383,10 +1405,12 @@ export interface components {
                     high: number | null;
                 }[];
             }[];
-            /** @description YYYY-MM-DD: the latest observation, or the valuation date. */
+            /** @description YYYY-MM-DD: today, the date the rights are read at (the clock has moved since approval). */
             asOf: string;
-            /** @description The project value V at that date. */
+            /** @description The project value V: the latest observed, or V at the valuation date. */
             value: number;
+            /** @description YYYY-MM-DD: when that value was observed (the valuation date before any observation). */
+            valueOn: string;
             rights: {
                 id: string;
                 name: string;
@@ -1432,6 +1456,27 @@ export interface components {
                 recordedAt: string;
                 /** @description A person, or an API key as "API key <name> (created by …)"; null when deleted. */
                 recordedBy: string | null;
+            }[];
+            /** @description The alerts raised on this case, newest first (at most 50). */
+            alerts: {
+                /** @description An opaque identifier. */
+                id: string;
+                /** @enum {string} */
+                kind: "in_region" | "near" | "window_opened" | "window_closing";
+                rightId: string;
+                message: string;
+                asOf: string;
+                /**
+                 * Format: date-time
+                 * @description An ISO 8601 instant (UTC).
+                 */
+                createdAt: string;
+                /** @description An opaque identifier. */
+                caseId: string;
+                caseName: string;
+                /** @description An opaque identifier. */
+                projectId: string;
+                projectName: string;
             }[];
             /** @description The approved model re-valued from that date with V, starting in the mode the recorded decisions made. */
             revaluedExpandedNpv: number | null;
@@ -4493,6 +4538,95 @@ export interface operations {
                         observation: {
                             id: string;
                         };
+                    };
+                };
+            };
+            /** @description No session and no API key, or a key that is wrong, revoked or expired. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The caller's role does not allow this. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description No such record in the caller's organisation. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The input is not valid; `fields` says where. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Too many requests from this key, or too many estimates at once; see Retry-After. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Any other error, in the same shape. */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+        };
+    };
+    importObservations: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description An id from an earlier answer. */
+                caseId: string;
+            };
+            cookie?: never;
+        };
+        /** @description The file (field "file"). */
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    file: string;
+                };
+            };
+        };
+        responses: {
+            /** @description Recorded: how many values and the dates they span. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        recorded: number;
+                        from: string;
+                        to: string;
                     };
                 };
             };

@@ -334,6 +334,26 @@ export const operations = {
     example: { date: '2027-03-31', value: 118.5, note: 'Updated DCF after the first quarter', source: 'updated DCF' },
     answers: { 201: { description: 'Recorded.', schema: z.object({ observation: z.object({ id: z.string() }) }) } },
   },
+  importObservations: {
+    method: 'post',
+    path: '/api/v1/cases/{caseId}/observations/import',
+    summary: "Record a dated series of the project's value from a file",
+    description:
+      'A CSV or XLSX with dates (YYYY-MM-DD) in the first column and values in the second, a header row allowed (the reader of the volatility history). Each value follows the rules of a single observation; a refusal names its line or cell and records nothing (422).',
+    tag: 'Follow-through',
+    permission: { case: ['update'] },
+    otherBody: {
+      contentType: 'multipart/form-data',
+      description: 'The file (field "file").',
+      schema: z.object({ file: z.string().meta({ format: 'binary' }) }),
+    },
+    answers: {
+      201: {
+        description: 'Recorded: how many values and the dates they span.',
+        schema: z.object({ recorded: z.int(), from: z.string(), to: z.string() }),
+      },
+    },
+  },
   recordRightDecision: {
     method: 'post',
     path: '/api/v1/cases/{caseId}/rights/{rightId}/decisions',

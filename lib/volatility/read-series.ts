@@ -10,8 +10,11 @@ import { HistoryError, MAX_OBSERVATIONS, type HistoryPoint } from './history';
 
 const isoDate = /^\d{4}-\d{2}-\d{2}$/;
 
-function toPoints(rows: { place: string; date: unknown; value: unknown }[]): HistoryPoint[] {
-  const points: HistoryPoint[] = [];
+/** A dated value with where it was read (`Line 7`, `History!B7`), so later checks can name it too. */
+export type PlacedPoint = HistoryPoint & { place: string };
+
+function toPoints(rows: { place: string; date: unknown; value: unknown }[]): PlacedPoint[] {
+  const points: PlacedPoint[] = [];
   rows.forEach((row, k) => {
     const dateText = row.date instanceof Date ? row.date.toISOString().slice(0, 10) : String(row.date ?? '').trim();
     const value = typeof row.value === 'number' ? row.value : numberOrNull(String(row.value ?? ''));
@@ -20,20 +23,20 @@ function toPoints(rows: { place: string; date: unknown; value: unknown }[]): His
     if (dateText === '' && (row.value === null || row.value === undefined || String(row.value).trim() === '')) return;
     if (!isoDate.test(dateText)) throw new HistoryError(`${row.place}: expected a date written YYYY-MM-DD, got “${dateText}”.`);
     if (value === null || !Number.isFinite(value)) throw new HistoryError(`${row.place}: expected a number, got “${String(row.value ?? '')}”.`);
-    points.push({ date: dateText, value });
+    points.push({ date: dateText, value, place: row.place });
   });
   if (points.length > MAX_OBSERVATIONS) throw new HistoryError(`At most ${MAX_OBSERVATIONS.toLocaleString('en-GB')} values.`);
   return points;
 }
 
-export function readCsvSeries(text: string): HistoryPoint[] {
+export function readCsvSeries(text: string): PlacedPoint[] {
   const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), { skipEmptyLines: true, delimiter: '' });
   const bad = parsed.errors.find((e) => e.type !== 'Delimiter');
   if (bad) throw new HistoryError(`Line ${(bad.row ?? 0) + 1}: ${bad.message}.`);
   return toPoints(parsed.data.map((cells, k) => ({ place: `Line ${k + 1}`, date: cells[0], value: cells[1] })));
 }
 
-export async function readXlsxSeries(bytes: Uint8Array): Promise<HistoryPoint[]> {
+export async function readXlsxSeries(bytes: Uint8Array): Promise<PlacedPoint[]> {
   const book = new ExcelJS.Workbook();
   try {
     await book.xlsx.load(bytes as never);

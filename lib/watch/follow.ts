@@ -20,6 +20,7 @@ import { AppError } from '../errors';
 import { enqueue } from '../jobs/enqueue';
 import { QUEUES } from '../jobs/queues';
 import type { ObservationInput } from '../validations/observation';
+import type { PlacedPoint } from '../volatility/read-series';
 import type { RightDecisionInput } from '../validations/right-decision';
 import { ClockError, modelAt, type UsedRights } from './clock';
 import { dateAfter, dateOf, yearsBetween } from './dates';
@@ -179,6 +180,38 @@ export async function recordObservation(member: Member, caseId: string, input: O
     // The alerts' check, queued in the same transaction: it runs exactly when the value is recorded.
     await enqueue(QUEUES.watchCheck, { orgId: member.orgId, caseId }, { executor: trx });
     return made;
+  });
+}
+
+/**
+ * Records a dated series of values read from a file (lib/watch/import-observations.ts), each
+ * under the rules of a single observation, all in one transaction; a refusal names its line.
+ */
+export async function recordObservationSeries(member: Member, caseId: string, points: PlacedPoint[], file: string) {
+  const f = await loadFollowed(member.orgId, caseId);
+  for (const p of points)
+    try {
+      checkFollowDate(f, p.date);
+    } catch (error) {
+      if (!(error instanceof AppError)) throw error;
+      const message = `${p.place}: ${error.message}`;
+      throw new AppError('unprocessable', message, { file: [message] });
+    }
+  const source = `uploaded ${file}`.slice(0, 200);
+  return db.transaction().execute(async (trx) => {
+    for (const p of points)
+      await addObservation(trx, { orgId: member.orgId, caseId, observedOn: p.date, value: p.value, note: '', source, recordedBy: member.userId });
+    const dates = points.map((p) => p.date).sort();
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.observe',
+      subjectType: 'case',
+      subjectId: caseId,
+      detail: { file, values: points.length, from: dates[0], to: dates.at(-1) },
+    });
+    await enqueue(QUEUES.watchCheck, { orgId: member.orgId, caseId }, { executor: trx });
+    return { recorded: points.length, from: dates[0]!, to: dates.at(-1)! };
   });
 }
 

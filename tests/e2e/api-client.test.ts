@@ -127,6 +127,11 @@ describe('the API through its typed client', () => {
         body: { decision: 'postponed', date: today, reason: 'The offtake contract is not signed yet.' },
       }),
     );
+    const series = new FormData();
+    series.append('file', new Blob([`date,value\n${today},121.5\n`], { type: 'text/csv' }), 'values.csv');
+    expect(
+      ok(await analyst.POST('/api/v1/cases/{caseId}/observations/import', { params: { path: { caseId: made.id } }, body: series as never, ...multipart })),
+    ).toEqual({ recorded: 1, from: today, to: today });
     const after = ok(await viewer.GET('/api/v1/cases/{caseId}/watch', { params: { path: { caseId: made.id } } }));
     expect(after.decisions.map((d) => [d.rightId, d.decision])).toEqual([['Second line', 'postponed']]);
     // The record says who did it: the keys, each under its creator's name.

@@ -243,13 +243,32 @@ describe('following an approved case', () => {
     await expect.poll(() => page.getByRole('heading', { name: /^Where each right stands on/ }).isVisible(), { timeout: 60_000 }).toBe(true);
     await page.getByLabel('Value (EUR)').pressSequentially('131.5');
     await page.getByLabel('Source').pressSequentially('offer received');
-    await page.getByRole('button', { name: 'Record' }).click();
+    await page.getByRole('button', { name: 'Record', exact: true }).click();
     await expect.poll(() => page.getByRole('cell', { name: 'offer received' }).isVisible(), { timeout: 60_000 }).toBe(true);
     expect(await page.getByRole('cell', { name: 'EUR 131.5' }).first().isVisible()).toBe(true);
     // The status column speaks in words for every right, and the chart is drawn with the observed values.
     const statuses = await page.getByRole('table', { name: 'Where each right stands' }).getByRole('row').count();
     expect(statuses).toBeGreaterThanOrEqual(3);
     expect(await page.getByText('The project value as observed', { exact: false }).isVisible()).toBe(true);
+    // A dated series from a file: a line before the approval is refused by its line, and nothing is recorded.
+    const count = async () =>
+      (await db.selectFrom('case_observation').select(db.fn.countAll().as('n')).where('case_id', '=', plant.caseId).executeTakeFirstOrThrow()).n;
+    const before = await count();
+    await page.getByLabel('A CSV or XLSX of dated values').setInputFiles({
+      name: 'values.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.from(`date,value\n${day(-3)},150\n2020-01-01,140\n`),
+    });
+    await expect.poll(() => page.getByText(/^Line 3: The date is before/).isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(await count()).toBe(before);
+    // A decision, typed key by key: postponing keeps the right watched, and the record shows it.
+    const decision = page.getByRole('form', { name: 'Record a decision' });
+    await decision.getByLabel('Right', { exact: true }).selectOption({ label: 'Phase 2' });
+    await decision.getByLabel('Decision', { exact: true }).selectOption('postponed');
+    await decision.getByLabel('Reason').pressSequentially('Second offtaker not signed yet; look again in June.');
+    await decision.getByRole('button', { name: 'Record decision' }).click();
+    const recorded = page.getByRole('table', { name: 'Decisions recorded' }).getByRole('cell', { name: 'Second offtaker not signed yet; look again in June.' });
+    await expect.poll(() => recorded.isVisible(), { timeout: 60_000 }).toBe(true);
     await page.screenshot({ path: '.data/watch.png', fullPage: true });
   }, 120_000);
 

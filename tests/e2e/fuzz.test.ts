@@ -40,6 +40,7 @@ const routes: [string, string][] = [
   ['GET', '/api/v1/cases/:id/board-pack'],
   ['GET', '/api/v1/cases/:id/watch'],
   ['POST', '/api/v1/cases/:id/observations'],
+  ['POST', '/api/v1/cases/:id/observations/import'],
   ['POST', '/api/v1/cases/:id/rights/:id/decisions'],
   ['POST', '/api/v1/cases/:id/valuations'],
   ['GET', '/api/v1/cases/:id/valuations'],

@@ -66,6 +66,7 @@ const matrix: [Method, string, Role[], Probe?][] = [
   ['POST', '/api/v1/cases/:case/return', ['reviewer'], { json: { reason: 5 }, status: 422, valid: { reason: 'Not yours to return.' } }],
   ['GET', '/api/v1/cases/:case/board-pack', ALL],
   ['GET', '/api/v1/cases/:case/watch', ALL],
+  ['POST', '/api/v1/cases/:case/observations/import', BUILDERS, { text: 'not multipart', status: 415 }],
   ['POST', '/api/v1/cases/:case/observations', BUILDERS, { json: { date: 5 }, status: 422, valid: { date: '2026-12-01', value: 100 } }],
   [
     'POST',

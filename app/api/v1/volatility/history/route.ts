@@ -17,8 +17,8 @@ async function seriesFrom(request: Request): Promise<{ series: HistoryPoint[]; s
   if (type.startsWith('multipart/form-data')) {
     const { file, bytes } = await readUploadForm(request, { what: 'the history', choose: 'Choose a CSV or XLSX file.' });
     const kind = inspectUpload(file.name, bytes, ['csv', 'xlsx']);
-    const series = kind === 'csv' ? readCsvSeries(new TextDecoder().decode(bytes)) : await readXlsxSeries(bytes);
-    return { series, source: file.name };
+    const placed = kind === 'csv' ? readCsvSeries(new TextDecoder().decode(bytes)) : await readXlsxSeries(bytes);
+    return { series: placed.map(({ date, value }) => ({ date, value })), source: file.name };
   }
   return { series: historyJsonSchema.parse(await readJson(request)).series, source: 'series sent as JSON' };
 }

@@ -17,6 +17,9 @@ import { readNumberText } from '@/lib/number-text';
 import type { RightStatus } from '@/lib/watch/status';
 import { dateOf, yearsBetween } from '@/lib/watch/dates';
 import { distanceWords, statusWords } from '@/lib/watch/status-words';
+import { WatchAlerts, type CaseAlert } from './watch-alerts';
+import { WatchDecisions, type RecordedDecision } from './watch-decisions';
+import { WatchImport } from './watch-import';
 
 interface Watch {
   followed: { caseVersion: number; valuationDate: string; horizon: number; value: number };
@@ -36,6 +39,8 @@ interface Watch {
     windowClosesAt: string | null;
   }[];
   observations: { id: string; observedOn: string; value: number; note: string; source: string; recordedBy: string | null }[];
+  decisions: RecordedDecision[];
+  alerts: CaseAlert[];
 }
 
 const statusTone: Record<RightStatus, string> = {
@@ -129,6 +134,8 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
           </tbody>
         </Table>
       </section>
+      <WatchDecisions caseId={caseId} rights={w.rights} decisions={w.decisions} canRecord={canRecord} onRecorded={() => watch.mutate()} />
+      <WatchAlerts alerts={w.alerts} />
       <section aria-labelledby="watch-chart" className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
         <h3 id="watch-chart" className="mb-1 text-body font-semibold">
           The project&rsquo;s value against each right&rsquo;s boundary
@@ -175,6 +182,7 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
               Record
             </Button>
           </form>
+          <WatchImport caseId={caseId} onRecorded={() => watch.mutate()} />
         </section>
       ) : null}
       {w.observations.length > 0 ? (

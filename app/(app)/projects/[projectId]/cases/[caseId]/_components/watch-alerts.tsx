@@ -1,0 +1,42 @@
+import { Table, Td, Th, Tr } from '@/components/ui/table';
+import { formatDateTime } from '@/lib/format';
+
+export interface CaseAlert {
+  id: string;
+  kind: 'in_region' | 'near' | 'window_opened' | 'window_closing';
+  message: string;
+  createdAt: string;
+}
+
+/** The alerts raised on this case, newest first (the same as on the Alerts page and by e-mail). */
+export function WatchAlerts({ alerts }: { alerts: CaseAlert[] }) {
+  return (
+    <section aria-labelledby="watch-alerts" className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
+      <h3 id="watch-alerts" className="mb-3 text-body font-semibold">
+        Alerts
+      </h3>
+      {alerts.length === 0 ? (
+        <p className="text-ink-soft">
+          No alert yet: one is raised when a right comes into its region or near its boundary, or its window opens or is about to close.
+        </p>
+      ) : (
+        <Table caption="Alerts on this case">
+          <thead>
+            <tr>
+              <Th>Raised</Th>
+              <Th>What changed</Th>
+            </tr>
+          </thead>
+          <tbody>
+            {alerts.map((a) => (
+              <Tr key={a.id}>
+                <Td className="whitespace-nowrap">{formatDateTime(a.createdAt)}</Td>
+                <Td>{a.message}</Td>
+              </Tr>
+            ))}
+          </tbody>
+        </Table>
+      )}
+    </section>
+  );
+}
