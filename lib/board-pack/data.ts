@@ -17,6 +17,13 @@ export interface RecordEvent {
   reason?: string;
 }
 
+export interface FollowThrough {
+  caseVersion: number;
+  approvedAt: string;
+  observations: { date: string; value: number; source: string }[];
+  decisions: { date: string; right: string; decision: string; reason: string; by: string }[];
+}
+
 export interface BoardPackData {
   pageSize: PageSize;
   organisation: string;
@@ -40,6 +47,12 @@ export interface BoardPackData {
   };
   /** Every submission of the case up to this one and what became of it, oldest first, ending with this approval. */
   record: RecordEvent[];
+  /**
+   * How the version approved before this one was followed until this submission: the values
+   * recorded and the decisions taken on its rights (only what was recorded by then, so the pack
+   * never changes). Absent for a first approval.
+   */
+  followThrough?: FollowThrough;
   /** The first steps of the lattice and the mode it starts in, for the diagram; computed from the snapshot's model. */
   excerpt?: { grid: NodeGrid; startMode: string };
 }

@@ -22,7 +22,7 @@ import { formatChange, formatDateTime, formatMoney, formatPercent } from '../for
 import { optionTypeLabels, type OptionType } from '../option-form';
 import { premiumSplitText } from '../premium-split';
 import { describeOption } from '../option-words';
-import type { BoardPackData, RecordEvent } from './data';
+import type { BoardPackData, FollowThrough, RecordEvent } from './data';
 import { pdfText } from './text';
 import { palette, seriesFill } from '@/lib/palette';
 
@@ -93,8 +93,9 @@ function Section({ data, title, children }: { data: BoardPackData; title: string
   );
 }
 
-function Table({ columns, rows, widths }: { columns: string[]; rows: string[][]; widths: number[] }) {
-  const numeric = (k: number) => k > 0;
+/** A table whose columns after the first hold figures (right-aligned), unless `textColumns` says otherwise. */
+function Table({ columns, rows, widths, textColumns = [] }: { columns: string[]; rows: string[][]; widths: number[]; textColumns?: number[] }) {
+  const numeric = (k: number) => k > 0 && !textColumns.includes(k);
   return (
     <View style={styles.table}>
       <View style={[styles.row, styles.head]}>
@@ -334,6 +335,45 @@ function LatticePdf({ data, width }: { data: BoardPackData; width: number }) {
   );
 }
 
+const decisionWords: Record<string, string> = { exercised: 'Exercised', declined: 'Declined', postponed: 'Postponed' };
+
+/** How the version approved before this one was followed: the values recorded and the decisions on its rights. */
+function FollowThroughSection({ data, followThrough: f }: { data: BoardPackData; followThrough: FollowThrough }) {
+  const currency = data.project.currency;
+  return (
+    <Section data={data} title={`Follow-through of version ${f.caseVersion}`}>
+      <Text style={styles.para}>
+        {pdfText(
+          `Version ${f.caseVersion} was approved on ${formatDateTime(f.approvedAt)}. Until this version was submitted, the team recorded ${f.observations.length} value${f.observations.length === 1 ? '' : 's'} of the project and ${f.decisions.length} decision${f.decisions.length === 1 ? '' : 's'} on its rights.`,
+        )}
+      </Text>
+      <Text style={styles.h3}>Decisions on the rights</Text>
+      {f.decisions.length === 0 ? (
+        <Text style={styles.para}>None recorded.</Text>
+      ) : (
+        <Table
+          columns={['Date', 'Right', 'Decision', 'Reason', 'By']}
+          widths={[13, 17, 12, 40, 18]}
+          textColumns={[1, 2, 3, 4]}
+          rows={f.decisions.map((d) => [d.date, d.right, decisionWords[d.decision] ?? d.decision, d.reason, d.by])}
+        />
+      )}
+      <Text style={styles.h3}>Values recorded</Text>
+      {f.observations.length === 0 ? (
+        <Text style={styles.para}>None recorded.</Text>
+      ) : (
+        <Table
+          columns={['Date', 'Project value', 'Source']}
+          widths={[20, 25, 55]}
+          textColumns={[2]}
+          rows={f.observations.map((o) => [o.date, money(o.value, currency), o.source || '–'])}
+        />
+      )}
+      <Text style={styles.caution}>{pdfText(VALUATION_CAUTION)}</Text>
+    </Section>
+  );
+}
+
 export function BoardPackDocument({ data }: { data: BoardPackData }) {
   const { project, snapshot } = data;
   const r = snapshot.result;
@@ -499,6 +539,8 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
           </Text>
         ))}
       </Section>
+
+      {data.followThrough ? <FollowThroughSection data={data} followThrough={data.followThrough} /> : null}
 
       <Section data={data} title="Methodology, limitations and approval">
         <Text style={styles.para}>

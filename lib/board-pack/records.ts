@@ -3,9 +3,10 @@
  * names in its record), and the stored PDFs, one per snapshot and page size.
  */
 import { createHash } from 'node:crypto';
+import { sql } from 'kysely';
 import { db } from '@/db';
 import { AppError } from '../errors';
-import type { BoardPackData, PageSize, RecordEvent } from './data';
+import type { BoardPackData, FollowThrough, PageSize, RecordEvent } from './data';
 
 /**
  * Everything the pack shows, from the approved snapshot alone: its frozen inputs and results and
@@ -46,7 +47,9 @@ export async function boardPackData(orgId: string, snapshotId: string, pageSize:
       },
     ];
   });
+  const followThrough = await followThroughBefore(orgId, row.case_id, row.id);
   return {
+    ...(followThrough ? { followThrough } : {}),
     pageSize,
     organisation: row.organization_name ?? '',
     isDemo: row.organization_is_demo ?? false,
@@ -67,6 +70,61 @@ export async function boardPackData(orgId: string, snapshotId: string, pageSize:
       recommendation: row.recommendation,
     },
     record,
+  };
+}
+
+/**
+ * The follow-through of the case's version approved before `snapshotId`: values and decisions
+ * recorded up to this snapshot's submission (compared in SQL, to the microsecond), so a pack
+ * rendered again later reads the same.
+ */
+async function followThroughBefore(orgId: string, caseId: string, snapshotId: string): Promise<FollowThrough | undefined> {
+  const submittedAt = sql<Date>`(select submitted_at from case_snapshot where id = ${snapshotId})`;
+  const previous = await db
+    .selectFrom('case_snapshot')
+    .select(['id', 'case_version', 'decided_at'])
+    .where('organization_id', '=', orgId)
+    .where('case_id', '=', caseId)
+    .where('status', '=', 'approved')
+    .where('id', '<>', snapshotId)
+    .where('decided_at', '<', submittedAt)
+    .orderBy('decided_at', 'desc')
+    .limit(1)
+    .executeTakeFirst();
+  if (!previous?.decided_at) return undefined;
+  const [observations, decisions] = await Promise.all([
+    db
+      .selectFrom('case_observation')
+      .select([sql<string>`observed_on::text`.as('date'), 'value', 'source'])
+      .where('organization_id', '=', orgId)
+      .where('case_id', '=', caseId)
+      .where('observed_on', '>=', sql<string>`${previous.decided_at}::date`)
+      .where('created_at', '<=', submittedAt)
+      .orderBy('observed_on')
+      .orderBy('created_at')
+      .execute(),
+    db
+      .selectFrom('right_decision')
+      .leftJoin('user', 'user.id', 'right_decision.recorded_by')
+      .select([
+        sql<string>`right_decision.decided_on::text`.as('date'),
+        'right_decision.right_id as right',
+        'right_decision.decision',
+        'right_decision.reason',
+        'user.name as by',
+      ])
+      .where('right_decision.organization_id', '=', orgId)
+      .where('right_decision.snapshot_id', '=', previous.id)
+      .where('right_decision.created_at', '<=', submittedAt)
+      .orderBy('right_decision.decided_on')
+      .orderBy('right_decision.created_at')
+      .execute(),
+  ]);
+  return {
+    caseVersion: previous.case_version,
+    approvedAt: new Date(previous.decided_at).toISOString(),
+    observations,
+    decisions: decisions.map((d) => ({ ...d, by: d.by ?? 'a former member' })),
   };
 }
 

@@ -14,6 +14,7 @@ import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
 import { E2E_MAIL_DIR } from './support/env';
 import { waitForMail } from './support/mail';
+import { pdfText } from '../support/pdf-text';
 
 type Request = Awaited<ReturnType<typeof signedInPage>>['page']['request'];
 let analyst: Request;
@@ -213,6 +214,18 @@ describe('following an approved case', () => {
       .orderBy('created_at')
       .execute();
     expect(audit.map((a) => (a.detail as { decision: string }).decision)).toEqual(['postponed', 'exercised']);
+    // The next approved version's board pack tells how this one was followed.
+    expect((await analyst.post(`/api/v1/cases/${fresh.caseId}/revisions`)).status()).toBeLessThan(300);
+    expect((await analyst.post(`/api/v1/cases/${fresh.caseId}/submit`, { data: { recommendation: 'Second kiln built; follow the sale.' } })).status()).toBe(
+      201,
+    );
+    expect((await reviewer.post(`/api/v1/cases/${fresh.caseId}/approve`)).status()).toBe(200);
+    const pack = await viewer.get(`/api/v1/cases/${fresh.caseId}/board-pack?size=A4`, { timeout: 120_000 });
+    expect(pack.status()).toBe(200);
+    const text = pdfText(await pack.body());
+    expect(text).toContain('Follow-through of version 1');
+    expect(text).toContain('Board approved the second kiln.');
+    expect(text).toContain('Not now; look again next quarter.');
     const outsider = (await signedInPage('owner@harrowfen.example')).page.request;
     expect(
       (await outsider.post(`/api/v1/cases/${fresh.caseId}/rights/Sell/decisions`, { data: { decision: 'declined', reason: 'Not yours.' } })).status(),

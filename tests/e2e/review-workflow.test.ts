@@ -5,10 +5,6 @@
  * pack; the executive downloads the pack, whose text holds the snapshot's figures exactly as the
  * app shows them. Another organisation gets 404 from every review route.
  */
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
@@ -16,6 +12,7 @@ import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney } from '@/lib/format';
 import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
+import { pdfText } from '../support/pdf-text';
 import { firstLink, waitForMail } from './support/mail';
 
 let caseId = '';
@@ -43,14 +40,6 @@ async function submitWithRecommendation(page: Page, text: string) {
   await page.getByRole('button', { name: 'Submit for review…' }).click();
   await page.getByLabel('Your recommendation to the committee').pressSequentially(text);
   await page.getByRole('dialog').getByRole('button', { name: 'Submit for review' }).click();
-}
-
-/** The page's text, as pdftotext reads it, with line breaks as spaces. */
-function pdfText(pdf: Buffer): string {
-  const dir = mkdtempSync(path.join(tmpdir(), 'leeway-pack-'));
-  const file = path.join(dir, 'pack.pdf');
-  writeFileSync(file, pdf);
-  return execFileSync('pdftotext', ['-layout', file, '-']).toString().replace(/\s+/g, ' ');
 }
 
 describe('review workflow', () => {
@@ -148,7 +137,7 @@ describe('review workflow', () => {
     const { readFileSync } = await import('node:fs');
     const pdf = readFileSync(file);
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
-    const text = pdfText(pdf);
+    const text = pdfText(pdf, { layout: true });
     const snapshot = await db.selectFrom('case_snapshot').select(['result', 'decided_at']).where('id', '=', snapshots[0].id).executeTakeFirstOrThrow();
     const result = snapshot.result as { staticNpv: number; optionPremium: number; expandedNpv: number; switches: never[] };
     for (const figure of [result.staticNpv, result.optionPremium, result.expandedNpv]) expect(text).toContain(formatMoney(figure, 'EUR'));

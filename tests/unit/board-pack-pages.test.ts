@@ -11,7 +11,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { demoBoardPackData, demoPlant } from '@/demo/board-pack-data';
-import type { BoardPackData, PageSize } from '@/lib/board-pack/data';
+import type { BoardPackData, FollowThrough, PageSize } from '@/lib/board-pack/data';
 import { renderBoardPack } from '@/lib/board-pack/render';
 
 interface Word {
@@ -58,7 +58,7 @@ function strained(pageSize: PageSize): BoardPackData {
   const { inputs } = demoPlant();
   const last = inputs.cashFlows.rows.at(-1)!;
   const rows = [...inputs.cashFlows.rows, ...[1, 2].map((k) => ({ ...last, year: last.year + k }))];
-  return demoBoardPackData(pageSize, {
+  const data = demoBoardPackData(pageSize, {
     projectName: 'Northern terminal expansion with a cold-chain platform for invented regional distributors',
     caseName: 'Downside demand scenario with delayed permits and a later second phase',
     inputs: {
@@ -67,6 +67,33 @@ function strained(pageSize: PageSize): BoardPackData {
       options: (inputs.options ?? []).map((o, k) => ({ ...o, id: `${o.id ?? `Option ${k + 1}`} under the framework agreement with the port`.slice(0, 64) })),
     },
   });
+  // A later version's pack, with a long follow-through of the version approved before (invented).
+  const followThrough: FollowThrough = {
+    caseVersion: 2,
+    approvedAt: '2025-03-01T10:00:00.000Z',
+    observations: Array.from({ length: 14 }, (_, k) => ({
+      date: k < 9 ? `2025-${String(k + 4).padStart(2, '0')}-15` : `2026-${String(k - 8).padStart(2, '0')}-15`,
+      value: 150 + 3 * k,
+      source: k % 2 ? 'updated DCF after the quarterly review of the framework agreement' : 'market comparables',
+    })),
+    decisions: [
+      {
+        date: '2025-06-02',
+        right: 'Phase 2 under the framework agreement with the port',
+        decision: 'postponed',
+        reason: 'The second offtaker has not signed; the committee looks again after the summer, when the permit for the second berth is expected.',
+        by: 'Priya Lindqvist',
+      },
+      {
+        date: '2025-11-20',
+        right: 'Phase 2 under the framework agreement with the port',
+        decision: 'exercised',
+        reason: 'Both offtakers signed; the board approved the second phase.',
+        by: 'Priya Lindqvist',
+      },
+    ],
+  };
+  return { ...data, followThrough };
 }
 
 const cases: [string, (size: PageSize) => BoardPackData][] = [
@@ -115,6 +142,12 @@ describe.each(cases)('the board pack of %s', (_, build) => {
       expect(text).toContain('Returned: “Justify the volatility before approval.”');
       expect(text).toContain('Withdrawn by the analyst');
       expect(text.match(/Submitted for review/g)).toHaveLength(3);
+      // A later version's pack says how the version approved before was followed.
+      if (data.followThrough) {
+        expect(text).toContain('Follow-through of version 2');
+        expect(text).toContain('Both offtakers signed;');
+        expect(text).toContain(`recorded ${data.followThrough.observations.length} values`);
+      } else expect(text).not.toContain('Follow-through');
     },
     60_000,
   );

@@ -55,8 +55,8 @@ describe('upload inspection', () => {
 describe('reading a series', () => {
   it('reads CSV with or without a header, with commas in numbers', () => {
     expect(readCsvSeries('date,value\n2024-01-02,"1,010.5"\n2024-01-03,1012\n')).toEqual([
-      { date: '2024-01-02', value: 1010.5 },
-      { date: '2024-01-03', value: 1012 },
+      { date: '2024-01-02', value: 1010.5, place: 'Line 2' },
+      { date: '2024-01-03', value: 1012, place: 'Line 3' },
     ]);
     expect(readCsvSeries('2024-01-02;10\n2024-01-03;11\n')).toHaveLength(2);
   });
@@ -73,8 +73,8 @@ describe('reading a series', () => {
       [new Date(Date.UTC(2024, 0, 3)), 11],
     ]);
     expect(await readXlsxSeries(good)).toEqual([
-      { date: '2024-01-02', value: 10 },
-      { date: '2024-01-03', value: 11 },
+      { date: '2024-01-02', value: 10, place: 'Prices!B2' },
+      { date: '2024-01-03', value: 11, place: 'Prices!B3' },
     ]);
     const bad = await workbook([
       ['Date', 'Price'],
