@@ -1390,6 +1390,11 @@ export interface components {
                 horizon: number;
                 /** @description V at the valuation date. */
                 value: number;
+                /** @description The approved version this one replaced as the model followed (its decisions stay on its record). */
+                replaces: {
+                    caseVersion: number;
+                    approvedOn: string;
+                } | null;
             };
             /** @description The approved rights with their boundaries (years after the valuation date), for charts. */
             switches: {

@@ -200,6 +200,20 @@ export async function latestApprovedSnapshot(db: Database, { orgId, caseId }: { 
     .executeTakeFirst();
 }
 
+/** The approved version before the latest: the one a new approval replaced, if any. */
+export async function previousApprovedSnapshot(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
+  return db
+    .selectFrom('case_snapshot')
+    .select(['id', 'case_version', 'decided_at'])
+    .where('organization_id', '=', orgId)
+    .where('case_id', '=', caseId)
+    .where('status', '=', 'approved')
+    .orderBy('decided_at', 'desc')
+    .offset(1)
+    .limit(1)
+    .executeTakeFirst();
+}
+
 /** Cases waiting for a decision, oldest submission first, with their headline figures. */
 export async function listReviewQueue(db: Database, { orgId, statuses = ['in_review'] }: { orgId: string; statuses?: CaseStatus[] }) {
   return (

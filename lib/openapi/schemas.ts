@@ -379,6 +379,10 @@ export const watchSchema = z
       valuationDate: z.string().meta({ description: 'YYYY-MM-DD: the approval of the version followed.' }),
       horizon: z.number().meta({ description: 'Years after the valuation date.' }),
       value: money.meta({ description: 'V at the valuation date.' }),
+      replaces: z
+        .object({ caseVersion: z.int(), approvedOn: z.string() })
+        .nullable()
+        .meta({ description: 'The approved version this one replaced as the model followed (its decisions stay on its record).' }),
     }),
     switches: z
       .array(

@@ -9,7 +9,7 @@ import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { addObservation, listFollowedSnapshots, listObservations } from '@/db/queries/observations';
 import { addRightDecision, listRightDecisions, type RightDecisionRow } from '@/db/queries/right-decisions';
-import { latestApprovedSnapshot } from '@/db/queries/reviews';
+import { latestApprovedSnapshot, previousApprovedSnapshot } from '@/db/queries/reviews';
 import { listAlerts } from '@/db/queries/watch-alerts';
 import type { CaseSnapshot } from '@/db/types';
 import { templateIds, type ProjectModel, type ValuationResult } from '@/lattice';
@@ -286,9 +286,17 @@ export async function readWatch(f: Followed, run: { owner: string; signal?: Abor
 export async function watchCase(member: Member, caseId: string, signal?: AbortSignal) {
   const f = await loadFollowed(member.orgId, caseId);
   const { model, result, snapshot, valuationDate } = f;
-  const now = await readWatch(f, { owner: member.userId, signal });
+  const [now, replaced] = await Promise.all([readWatch(f, { owner: member.userId, signal }), previousApprovedSnapshot(db, { orgId: member.orgId, caseId })]);
   return {
-    followed: { snapshotId: snapshot.id, caseVersion: snapshot.case_version, valuationDate, horizon: model.horizon, value: model.underlying.value },
+    followed: {
+      snapshotId: snapshot.id,
+      caseVersion: snapshot.case_version,
+      valuationDate,
+      horizon: model.horizon,
+      value: model.underlying.value,
+      // A later approval replaces the model followed; the one before keeps its decisions on its record.
+      replaces: replaced?.decided_at ? { caseVersion: replaced.case_version, approvedOn: dateOf(replaced.decided_at) } : null,
+    },
     // The approved rights with their boundaries, for the chart of observed values against them.
     switches: result.switches.map((s) => ({ id: s.id, kind: s.kind, exerciseProbability: s.exerciseProbability, boundary: s.boundary })),
     ...now,

@@ -223,6 +223,7 @@ describe('following an approved case', () => {
     const pack = await viewer.get(`/api/v1/cases/${fresh.caseId}/board-pack?size=A4`, { timeout: 120_000 });
     expect(pack.status()).toBe(200);
     const text = pdfText(await pack.body());
+    expect((await watchOf(fresh.caseId)).followed).toMatchObject({ caseVersion: 2, replaces: { caseVersion: 1, approvedOn: day(0) } });
     expect(text).toContain('Follow-through of version 1');
     expect(text).toContain('Board approved the second kiln.');
     expect(text).toContain('Not now; look again next quarter.');

@@ -22,7 +22,7 @@ import { WatchDecisions, type RecordedDecision } from './watch-decisions';
 import { WatchImport } from './watch-import';
 
 interface Watch {
-  followed: { caseVersion: number; valuationDate: string; horizon: number; value: number };
+  followed: { caseVersion: number; valuationDate: string; horizon: number; value: number; replaces: { caseVersion: number; approvedOn: string } | null };
   switches: SwitchResult[];
   asOf: string;
   value: number;
@@ -105,6 +105,9 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
           {w.observations.length === 0 ? ' (as approved: no value recorded since)' : ` (observed ${w.valueOn})`}.{' '}
           {w.revaluedExpandedNpv !== null
             ? `Re-valued from today with the decisions recorded, the expanded NPV is ${formatMoney(w.revaluedExpandedNpv, currency)}.`
+            : ''}
+          {w.followed.replaces
+            ? ` It replaces version ${w.followed.replaces.caseVersion} (approved ${w.followed.replaces.approvedOn}) as the model followed; that version's decisions stay on its record and in this version's board pack.`
             : ''}
         </p>
         <Table caption="Where each right stands">
