@@ -187,8 +187,10 @@ export async function recordObservation(member: Member, caseId: string, input: O
  * Records a dated series of values read from a file (lib/watch/import-observations.ts), each
  * under the rules of a single observation, all in one transaction; a refusal names its line.
  */
-export async function recordObservationSeries(member: Member, caseId: string, points: PlacedPoint[], file: string) {
+export async function recordObservationSeries(member: Member, caseId: string, upload: () => Promise<{ points: PlacedPoint[]; file: string }>) {
+  // The case first: another organisation's case is not there (404), whatever was sent.
   const f = await loadFollowed(member.orgId, caseId);
+  const { points, file } = await upload();
   for (const p of points)
     try {
       checkFollowDate(f, p.date);

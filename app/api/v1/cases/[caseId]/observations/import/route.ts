@@ -10,10 +10,12 @@ export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 export const POST = withAuth<{ caseId: string }>(async ({ member, params, request }) => {
-  const { file, bytes } = await readUploadForm(request, {
-    what: 'the dated values',
-    choose: 'Choose a CSV or XLSX file: dates in the first column, values in the second.',
+  const recorded = await recordObservationSeries(member, params.caseId, async () => {
+    const { file, bytes } = await readUploadForm(request, {
+      what: 'the dated values',
+      choose: 'Choose a CSV or XLSX file: dates in the first column, values in the second.',
+    });
+    return { points: await readObservationFile(file.name, bytes), file: file.name };
   });
-  const points = await readObservationFile(file.name, bytes);
-  return NextResponse.json(await recordObservationSeries(member, params.caseId, points, file.name), { status: 201 });
+  return NextResponse.json(recorded, { status: 201 });
 }, operations.importObservations);
