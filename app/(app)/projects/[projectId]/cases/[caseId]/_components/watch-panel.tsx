@@ -104,7 +104,9 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
           Version {w.followed.caseVersion}, approved {w.followed.valuationDate}; project value {formatMoney(w.value, currency)}
           {w.observations.length === 0 ? ' (as approved: no value recorded since)' : ` (observed ${w.valueOn})`}.{' '}
           {w.revaluedExpandedNpv !== null
-            ? `Re-valued from today with the decisions recorded, the expanded NPV is ${formatMoney(w.revaluedExpandedNpv, currency)}.`
+            ? w.asOf > w.followed.valuationDate
+              ? `Re-valued from today with the decisions recorded (the investment made at approval is sunk), the project with its rights is worth ${formatMoney(w.revaluedExpandedNpv, currency)}.`
+              : `Re-valued today with the decisions recorded, the expanded NPV is ${formatMoney(w.revaluedExpandedNpv, currency)}.`
             : ''}
           {w.followed.replaces
             ? ` It replaces version ${w.followed.replaces.caseVersion} (approved ${w.followed.replaces.approvedOn}) as the model followed; that version's decisions stay on its record and in this version's board pack.`
@@ -202,8 +204,8 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
           <tbody>
             {[...w.observations].reverse().map((o) => (
               <Tr key={o.id}>
-                <Td>{o.observedOn}</Td>
-                <Td>{formatMoney(o.value, currency)}</Td>
+                <Td className="whitespace-nowrap">{o.observedOn}</Td>
+                <Td className="whitespace-nowrap">{formatMoney(o.value, currency)}</Td>
                 <Td>{o.source || '–'}</Td>
                 <Td>{o.note || '–'}</Td>
                 <Td>{o.recordedBy ?? '–'}</Td>
