@@ -222,7 +222,7 @@ function cellsAt(steps: number, compiled: CompiledModel, extras: boolean): numbe
 
 /** The most steps a full valuation (extras included) of this model may use within the budget. */
 export function largestStepsWithinBudget(input: unknown): number {
-  const { model, compiled } = prepareModel(input);
+  const { compiled } = prepareModel(input);
   let low = 1;
   let high = MAX_STEPS;
   while (low < high) {

@@ -23,8 +23,6 @@ import { linkMail, queueMail } from './mail';
 import { ac, roles } from './permissions';
 import { clearFailures, recordFailure, secondsUntilAllowed } from './sign-in-backoff';
 
-const DAY = 24 * 60 * 60;
-
 /** The body field holding a new password, per auth endpoint. */
 const passwordFields: Record<string, string> = {
   '/sign-up/email': 'password',

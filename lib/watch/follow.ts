@@ -5,13 +5,14 @@
  * year (the lattice's unit).
  */
 import 'server-only';
+import type { Transaction } from 'kysely';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { addObservation, listFollowedSnapshots, listObservations } from '@/db/queries/observations';
 import { addRightDecision, listRightDecisions, type RightDecisionRow } from '@/db/queries/right-decisions';
 import { latestApprovedSnapshot, previousApprovedSnapshot } from '@/db/queries/reviews';
 import { listAlerts } from '@/db/queries/watch-alerts';
-import type { CaseSnapshot } from '@/db/types';
+import type { CaseSnapshot, DB } from '@/db/types';
 import { templateIds, type ProjectModel, type ValuationResult } from '@/lattice';
 import { requireCase } from '../cases/require-case';
 import type { Member } from '../dal';
@@ -156,6 +157,15 @@ function checkFollowDate(f: Followed, date: string) {
     throw refuse(`The date is beyond the model's horizon (${dateAfter(f.valuationDate, f.model.horizon)}): no right is left to follow.`);
 }
 
+/**
+ * The audit entry of a change to a followed case, and the check of its alerts, both in the
+ * change's transaction: the check runs exactly when the change is committed.
+ */
+async function recordFollowChange(trx: Transaction<DB>, member: Member, caseId: string, action: string, detail: Record<string, unknown>) {
+  await recordAudit(trx, { orgId: member.orgId, actorId: member.userId, action, subjectType: 'case', subjectId: caseId, detail });
+  await enqueue(QUEUES.watchCheck, { orgId: member.orgId, caseId }, { executor: trx });
+}
+
 export async function recordObservation(member: Member, caseId: string, input: ObservationInput) {
   const f = await loadFollowed(member.orgId, caseId);
   checkFollowDate(f, input.date);
@@ -169,16 +179,7 @@ export async function recordObservation(member: Member, caseId: string, input: O
       source: input.source,
       recordedBy: member.userId,
     });
-    await recordAudit(trx, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.observe',
-      subjectType: 'case',
-      subjectId: caseId,
-      detail: { date: input.date, value: input.value, source: input.source },
-    });
-    // The alerts' check, queued in the same transaction: it runs exactly when the value is recorded.
-    await enqueue(QUEUES.watchCheck, { orgId: member.orgId, caseId }, { executor: trx });
+    await recordFollowChange(trx, member, caseId, 'case.observe', { date: input.date, value: input.value, source: input.source });
     return made;
   });
 }
@@ -204,15 +205,7 @@ export async function recordObservationSeries(member: Member, caseId: string, up
     for (const p of points)
       await addObservation(trx, { orgId: member.orgId, caseId, observedOn: p.date, value: p.value, note: '', source, recordedBy: member.userId });
     const dates = points.map((p) => p.date).sort();
-    await recordAudit(trx, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.observe',
-      subjectType: 'case',
-      subjectId: caseId,
-      detail: { file, values: points.length, from: dates[0], to: dates.at(-1) },
-    });
-    await enqueue(QUEUES.watchCheck, { orgId: member.orgId, caseId }, { executor: trx });
+    await recordFollowChange(trx, member, caseId, 'case.observe', { file, values: points.length, from: dates[0], to: dates.at(-1) });
     return { recorded: points.length, from: dates[0]!, to: dates.at(-1)! };
   });
 }
@@ -260,15 +253,13 @@ export async function recordRightDecision(member: Member, caseId: string, rightI
       reason: input.reason,
       recordedBy: member.userId,
     });
-    await recordAudit(trx, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.decide_right',
-      subjectType: 'case',
-      subjectId: caseId,
-      detail: { right: rightId, decision: input.decision, date, reason: input.reason, caseVersion: f.snapshot.case_version },
+    await recordFollowChange(trx, member, caseId, 'case.decide_right', {
+      right: rightId,
+      decision: input.decision,
+      date,
+      reason: input.reason,
+      caseVersion: f.snapshot.case_version,
     });
-    await enqueue(QUEUES.watchCheck, { orgId: member.orgId, caseId }, { executor: trx });
     return made;
   });
 }

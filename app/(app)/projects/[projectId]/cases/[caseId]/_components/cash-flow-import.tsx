@@ -1,7 +1,6 @@
 'use client';
 
 import { useRef, useState } from 'react';
-import { FormProblem } from '@/components/form-problem';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
 import { useToast } from '@/components/ui/toast';
