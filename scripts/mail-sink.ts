@@ -44,7 +44,11 @@ const server = new SMTPServer({
   },
 });
 
-server.on('error', (error) => console.error('[mail-sink]', error.message));
+server.on('error', (error) => {
+  console.error('[mail-sink]', error.message);
+  // Not listening (the port is taken): another process would get the mail, so stop and say so.
+  if (!server.server.listening) process.exit(1);
+});
 server.listen(env.MAIL_SINK_PORT, '127.0.0.1', () => {
   console.log(`› mail sink on 127.0.0.1:${env.MAIL_SINK_PORT}, keeping messages in ${path.relative(process.cwd(), dir)}`);
 });

@@ -7,6 +7,7 @@
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { rmSync } from 'node:fs';
+import { connect } from 'node:net';
 import recreateTestDatabase from '../db/global-setup';
 import { BASE_URL, E2E_MAIL_DIR, E2E_MAIL_PORT, E2E_PORT } from './support/env';
 
@@ -44,7 +45,22 @@ function run(command: string, args: string[], env: Record<string, string>) {
   });
 }
 
+/** Whether something already answers on a loopback port (a process left over from an earlier run). */
+function taken(port: number): Promise<boolean> {
+  return new Promise((resolve) => {
+    const socket = connect(port, '127.0.0.1');
+    socket.once('connect', () => (socket.destroy(), resolve(true)));
+    socket.once('error', () => resolve(false));
+  });
+}
+
 export default async function setup() {
+  // A leftover mail sink or server would take the tests' mail or requests, and they would fail far from the cause.
+  for (const [port, what] of [
+    [E2E_MAIL_PORT, 'the mail sink'],
+    [E2E_PORT, 'the app'],
+  ] as const)
+    if (await taken(port)) throw new Error(`127.0.0.1:${port}, the port of ${what} for the end-to-end tests, is in use by another process: stop it first.`);
   const env = {
     PG_DATABASE: process.env.PG_TEST_DATABASE ?? 'leeway_test',
     APP_URL: BASE_URL,
