@@ -79,8 +79,12 @@ function nameOf(o: OptionTemplate): string {
 function usedTemplateFrom(o: OptionTemplate, t: number, horizon: number): OptionTemplate {
   const atEnd: ExerciseWindow = { kind: 'european', at: horizon };
   switch (o.type) {
-    case 'switch':
-      return { ...o, cost: costFrom(o.cost, t), backCost: costFrom(o.backCost, t), window: (o.window ? windowFrom(o.window, t) : null) ?? atEnd };
+    case 'switch': {
+      // No window: switching back is possible at any time, as before.
+      const { window, ...rest } = o;
+      const back = window ? (windowFrom(window, t) ?? atEnd) : undefined;
+      return { ...rest, cost: costFrom(o.cost, t), backCost: costFrom(o.backCost, t), ...(back ? { window: back } : {}) };
+    }
     case 'stage':
       throw new ClockError('A stage right is followed payment by payment, not as one right used.');
     default:

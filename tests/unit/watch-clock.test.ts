@@ -99,6 +99,18 @@ describe('the clock of a followed decision', () => {
     }
   });
 
+  it('keeps a mothballed plant free to restart at any time when its switch has no window, and until the window closes when it has one', () => {
+    const mothball = (window?: { kind: 'american'; from: number; to: number }) =>
+      modelAt({ ...model, options: [{ type: 'switch', id: 'Mothball', toScale: 0, cost: 2, backCost: 3, ...(window ? { window } : {}) }] }, 2, 100, {
+        exercised: ['Mothball'],
+        declined: [],
+      }).model.options![0]!;
+    expect(mothball()).not.toHaveProperty('window');
+    expect(mothball({ kind: 'american', from: 0, to: 4 })).toMatchObject({ window: { kind: 'american', from: 0, to: 2 } });
+    // Its window passed: a single date at the horizon, where restarting earns nothing.
+    expect(mothball({ kind: 'american', from: 0, to: 1 })).toMatchObject({ window: { kind: 'european', at: 3 } });
+  });
+
   it('writes the same model as one built by hand for t = 1.5', () => {
     const { model: later, closed } = modelAt(model, 1.5, 130);
     expect(closed).toEqual(['Early add-on']);
