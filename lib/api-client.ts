@@ -13,6 +13,11 @@ export class ApiError extends Error {
     super(message);
     this.name = 'ApiError';
   }
+
+  /** The first problem of each field, for a form to show beside it. */
+  fieldProblems(): Record<string, string> {
+    return Object.fromEntries(Object.entries(this.fields ?? {}).map(([field, problems]) => [field, problems[0]!]));
+  }
 }
 
 async function parse<T>(res: Response): Promise<T> {

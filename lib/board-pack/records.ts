@@ -8,6 +8,9 @@ import { findSnapshotForPack, findStoredPack, followThroughBefore, insertStoredP
 import { AppError } from '../errors';
 import type { BoardPackData, FollowThrough, PageSize, RecordEvent } from './data';
 
+/** Who did it, when they have left the organisation since. */
+const FORMER_MEMBER = 'a former member';
+
 /**
  * Everything the pack shows, from the approved snapshot alone: its frozen inputs and results and
  * the names captured at submission and decision, never today's names (migration 0007).
@@ -16,23 +19,22 @@ export async function boardPackData(orgId: string, snapshotId: string, pageSize:
   const row = await findSnapshotForPack(db, { orgId, snapshotId });
   if (!row || row.status !== 'approved' || !row.decided_at) throw new AppError('not_found', 'No approved snapshot to make a board pack from.');
   const earlier = await listSubmissionsUpTo(db, { orgId, caseId: row.case_id, snapshotId: row.id });
-  const former = 'a former member';
   const record: RecordEvent[] = earlier.flatMap((s): RecordEvent[] => {
     const submitted: RecordEvent = {
       kind: 'submitted',
       caseVersion: s.case_version,
-      by: s.submitted_by_name ?? former,
+      by: s.submitted_by_name ?? FORMER_MEMBER,
       at: new Date(s.submitted_at).toISOString(),
     };
     if (!s.decided_at || s.status === 'in_review') return [submitted];
     const decided = new Date(s.decided_at).toISOString();
-    if (s.status === 'withdrawn') return [submitted, { kind: 'withdrawn', caseVersion: s.case_version, by: s.submitted_by_name ?? former, at: decided }];
+    if (s.status === 'withdrawn') return [submitted, { kind: 'withdrawn', caseVersion: s.case_version, by: s.submitted_by_name ?? FORMER_MEMBER, at: decided }];
     return [
       submitted,
       {
         kind: s.status,
         caseVersion: s.case_version,
-        by: s.decided_by_name ?? former,
+        by: s.decided_by_name ?? FORMER_MEMBER,
         at: decided,
         ...(s.decision_reason ? { reason: s.decision_reason } : {}),
       },
@@ -54,9 +56,9 @@ export async function boardPackData(orgId: string, snapshotId: string, pageSize:
       result: row.result as BoardPackData['snapshot']['result'],
       engineVersion: row.engine_version,
       inputHash: row.input_hash,
-      submittedBy: row.submitted_by_name ?? 'a former member',
+      submittedBy: row.submitted_by_name ?? FORMER_MEMBER,
       submittedAt: new Date(row.submitted_at).toISOString(),
-      decidedBy: row.decided_by_name ?? 'a former member',
+      decidedBy: row.decided_by_name ?? FORMER_MEMBER,
       decidedAt: new Date(row.decided_at).toISOString(),
       recommendation: row.recommendation,
     },
@@ -72,7 +74,7 @@ async function followThrough(orgId: string, caseId: string, snapshotId: string):
     caseVersion: found.previous.caseVersion,
     approvedAt: new Date(found.previous.decidedAt).toISOString(),
     observations: found.observations,
-    decisions: found.decisions.map((d) => ({ ...d, by: d.by ?? 'a former member' })),
+    decisions: found.decisions.map((d) => ({ ...d, by: d.by ?? FORMER_MEMBER })),
   };
 }
 

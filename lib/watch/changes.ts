@@ -6,6 +6,7 @@
  */
 import type { WatchAlertKind } from '@/db/types';
 import { formatMoney } from '../format';
+import { daysBetween } from './dates';
 import type { RightStatus, RightWatch } from './status';
 
 export interface Change {
@@ -19,8 +20,6 @@ export interface Change {
 
 type DatedRight = Omit<RightWatch, 'windowOpensAt' | 'windowClosesAt'> & { windowOpensAt: string | null; windowClosesAt: string | null };
 
-const DAY_MS = 86_400_000;
-const daysBetween = (from: string, to: string) => Math.round((Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / DAY_MS);
 const openStatuses: RightStatus[] = ['in_region', 'near', 'outside'];
 
 export function changesOf(args: {

@@ -132,7 +132,7 @@ async function standing(f: Followed, at: Position, run: { owner: string; signal?
   };
 }
 
-async function loadFollowed(orgId: string, caseId: string): Promise<Followed & { projectId: string }> {
+export async function loadFollowed(orgId: string, caseId: string): Promise<Followed & { projectId: string }> {
   const found = await requireCase(db, orgId, caseId);
   const snapshot = await latestApprovedSnapshot(db, { orgId, caseId });
   if (!snapshot?.decided_at) throw new AppError('conflict', 'This case has no approved version to follow yet: its rights are watched from their approval.');
@@ -279,7 +279,11 @@ export async function readWatch(f: Followed, run: { owner: string; signal?: Abor
 export async function watchCase(member: Member, caseId: string, signal?: AbortSignal) {
   const f = await loadFollowed(member.orgId, caseId);
   const { model, result, snapshot, valuationDate } = f;
-  const [now, replaced] = await Promise.all([readWatch(f, { owner: member.userId, signal }), previousApprovedSnapshot(db, { orgId: member.orgId, caseId })]);
+  const [now, replaced, alerts] = await Promise.all([
+    readWatch(f, { owner: member.userId, signal }),
+    previousApprovedSnapshot(db, { orgId: member.orgId, caseId }),
+    listAlerts(db, { orgId: member.orgId, caseId, limit: 50 }),
+  ]);
   return {
     followed: {
       snapshotId: snapshot.id,
@@ -295,7 +299,7 @@ export async function watchCase(member: Member, caseId: string, signal?: AbortSi
     ...now,
     observations: f.observations,
     decisions: f.decisions,
-    alerts: await listAlerts(db, { orgId: member.orgId, caseId, limit: 50 }),
+    alerts,
   };
 }
 
@@ -322,8 +326,6 @@ export async function listFollowed(
   }
   return out;
 }
-
-export { loadFollowed };
 
 /**
  * Every approved right across the organisation's active projects that is in its region or near

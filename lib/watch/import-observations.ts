@@ -6,6 +6,7 @@
  */
 import 'server-only';
 import { AppError } from '../errors';
+import { observationSchema } from '../validations/observation';
 import { HistoryError } from '../volatility/history';
 import { readCsvSeries, readXlsxSeries, type PlacedPoint } from '../volatility/read-series';
 import { inspectUpload } from '../uploads/inspect';
@@ -25,7 +26,10 @@ export async function readObservationFile(name: string, bytes: Uint8Array): Prom
   const refuse = (message: string) => new AppError('unprocessable', message, { file: [message] });
   if (points.length === 0) throw refuse('The file holds no dated values: put dates (YYYY-MM-DD) in the first column and values in the second.');
   if (points.length > MAX_IMPORTED_OBSERVATIONS) throw refuse(`At most ${MAX_IMPORTED_OBSERVATIONS.toLocaleString('en-GB')} values in one upload.`);
-  const bad = points.find((p) => !(p.value > 0) || p.value > 1e15);
-  if (bad) throw refuse(`${bad.place}: the project value must be above 0 (and plausible), got ${bad.value}.`);
+  // The rule of a single observation's value (lib/validations/observation.ts), with its words.
+  for (const p of points) {
+    const checked = observationSchema.shape.value.safeParse(p.value);
+    if (!checked.success) throw refuse(`${p.place}: ${checked.error.issues[0]!.message}`);
+  }
   return points;
 }

@@ -65,7 +65,7 @@ export function WatchDecisions({
       await onRecorded();
     } catch (error) {
       if (error instanceof ApiError) {
-        setProblems(Object.fromEntries(Object.entries(error.fields ?? {}).map(([k, v]) => [k, v[0]!])));
+        setProblems(error.fieldProblems());
         toast(error.message, 'error');
       } else toast('The decision could not be recorded; try again.', 'error');
     } finally {

@@ -86,7 +86,7 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
       await watch.mutate();
     } catch (error) {
       if (error instanceof ApiError) {
-        setProblems(Object.fromEntries(Object.entries(error.fields ?? {}).map(([k, v]) => [k, v[0]!])));
+        setProblems(error.fieldProblems());
         toast(error.message, 'error');
       } else toast('The value could not be recorded; try again.', 'error');
     } finally {
