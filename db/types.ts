@@ -188,6 +188,25 @@ export interface VolatilitySimulationTable {
   finished_at: Date | null;
 }
 
+/** An independent Monte Carlo of a case version's model, run as a job (migrations/0015). */
+export interface CrossCheckTable {
+  id: Generated<string>;
+  organization_id: string;
+  case_id: string;
+  case_version: number;
+  engine_version: string;
+  model: Json<unknown>;
+  paths: number;
+  seed: number;
+  status: Generated<'running' | 'done' | 'cancelled' | 'failed'>;
+  progress: Generated<number>;
+  result: ColumnType<Record<string, unknown> | null, string | null | undefined, string | null>;
+  error: string | null;
+  created_by: string | null;
+  created_at: Timestamp;
+  finished_at: Date | null;
+}
+
 export interface AttachmentTable {
   id: Generated<string>;
   organization_id: string;
@@ -223,6 +242,7 @@ export interface DB {
   right_decision: RightDecisionTable;
   right_standing: RightStandingTable;
   watch_alert: WatchAlertTable;
+  cross_check: CrossCheckTable;
 }
 
 /** A request to re-value every case whose stored figures come from an older engine (a job). */

@@ -2,7 +2,8 @@
 # Bundles the production server (.data/serve.mjs), the job worker (.data/worker.mjs) and the worker-thread entries: the engine (.data/engine-worker.mjs, loaded by
 # lib/engine/pool.ts), the board pack renderer (.data/board-pack-worker.mjs, loaded by
 # lib/board-pack/store.ts) and the Monte Carlo volatility estimate (.data/simulation-worker.mjs,
-# loaded by lib/jobs/run-simulation.ts in the job worker), so CPU-bound work never runs on a request's event loop.
+# loaded by lib/jobs/run-simulation.ts in the job worker) and the cross-check (.data/cross-check-worker.mjs,
+# loaded by lib/jobs/run-cross-check.ts), so CPU-bound work never runs on a request's event loop.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 mkdir -p .data
@@ -16,6 +17,8 @@ npx esbuild scripts/serve.ts --bundle --platform=node --format=esm --target=node
   --outfile=.data/serve.mjs --log-level=warning
 npx esbuild lib/volatility/simulation-worker-entry.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. \
   --outfile=.data/simulation-worker.mjs --log-level=warning
+npx esbuild lib/cross-check/worker-entry.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. \
+  --outfile=.data/cross-check-worker.mjs --log-level=warning
 # The job worker (scripts/worker.ts): packages stay in node_modules, except server-only's guard,
 # which is given its server entry (the worker is server code, like the modules it shares with the app).
 npx esbuild scripts/worker.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. --packages=external \

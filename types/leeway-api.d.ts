@@ -276,6 +276,56 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/cases/{caseId}/cross-checks": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The case's latest cross-checks, newest first
+         * @description Roles: Admin, Analyst, Reviewer, Executive (read-only).
+         */
+        get: operations["listCrossChecks"];
+        put?: never;
+        /**
+         * Cross-check the case's value by an independent least-squares Monte Carlo
+         * @description Queues a least-squares Monte Carlo (Longstaff & Schwartz 2001) of the case as saved, on its own code path, and compares it with the lattice (docs/engine.md §11). Follow it by its id.
+         *
+         *     Roles: Admin, Analyst, Reviewer.
+         */
+        post: operations["startCrossCheck"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/cases/{caseId}/cross-checks/{crossCheckId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * A cross-check: progress, and when done both estimates, the lattice and the verdict
+         * @description Roles: Admin, Analyst, Reviewer, Executive (read-only).
+         */
+        get: operations["getCrossCheck"];
+        put?: never;
+        post?: never;
+        /**
+         * Cancel a running cross-check
+         * @description Roles: Admin, Analyst, Reviewer.
+         */
+        delete: operations["cancelCrossCheck"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/valuations": {
         parameters: {
             query?: never;
@@ -1308,6 +1358,99 @@ export interface components {
                 change: number | null;
             }[];
             partsThatDiffer: string[];
+        };
+        CrossCheck: {
+            /** @description An opaque identifier. */
+            id: string;
+            /** @description An opaque identifier. */
+            caseId: string;
+            caseVersion: number;
+            /** @description The engine the lattice side ran with. */
+            engineVersion: string;
+            paths: number;
+            seed: number;
+            /** @enum {string} */
+            status: "running" | "done" | "failed" | "cancelled";
+            progress: number;
+            result: components["schemas"]["CrossCheckResult"] | null;
+            error: string | null;
+            /**
+             * Format: date-time
+             * @description An ISO 8601 instant (UTC).
+             */
+            createdAt: string;
+            finishedAt: string | null;
+        };
+        CrossCheckResult: {
+            lattice: {
+                /** @description An amount in the project's currency and units. */
+                expandedNpv: number;
+                /** @description The convergence band (docs/engine.md §5). */
+                band: {
+                    /** @description An amount in the project's currency and units. */
+                    low: number;
+                    /** @description An amount in the project's currency and units. */
+                    high: number;
+                } | null;
+                steps: number;
+                engineVersion: string;
+                rights: {
+                    id: string;
+                    exerciseProbability: number;
+                }[];
+            };
+            monteCarlo: {
+                paths: number;
+                seed: number;
+                dates: number;
+                /** @description The fitted rule on independent paths: biased down. */
+                lowBiased: {
+                    /** @description An amount in the project's currency and units. */
+                    expandedNpv: number;
+                    /** @description An amount in the project's currency and units. */
+                    standardError: number;
+                };
+                /** @description The fitted rule on the paths it was fitted to: biased up. */
+                highBiased: {
+                    /** @description An amount in the project's currency and units. */
+                    expandedNpv: number;
+                    /** @description An amount in the project's currency and units. */
+                    standardError: number;
+                };
+                rights: {
+                    id: string;
+                    probability: number;
+                    standardError: number;
+                }[];
+            };
+            verdict: {
+                agrees: boolean;
+                /** @description [low − 3·SE, high + 3·SE]. */
+                monteCarloRange: {
+                    /** @description An amount in the project's currency and units. */
+                    low: number;
+                    /** @description An amount in the project's currency and units. */
+                    high: number;
+                };
+                latticeRange: {
+                    /** @description An amount in the project's currency and units. */
+                    low: number;
+                    /** @description An amount in the project's currency and units. */
+                    high: number;
+                };
+                /** @description How far apart the two ranges are; 0 when they meet. */
+                gap: number;
+                /** @description The lattice's value less the middle of the two estimates. */
+                difference: number;
+                rights: {
+                    id: string;
+                    lattice: number;
+                    monteCarlo: number;
+                    standardError: number;
+                    differs: boolean;
+                }[];
+            };
+            seconds: number;
         };
         ComparisonRow: {
             /** @enum {string} */
@@ -3533,6 +3676,311 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["RerunOutcome"];
+                };
+            };
+            /** @description No session and no API key, or a key that is wrong, revoked or expired. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The caller's role does not allow this. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description No such record in the caller's organisation. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Too many requests from this key, or too many estimates at once; see Retry-After. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Any other error, in the same shape. */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+        };
+    };
+    listCrossChecks: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description An id from an earlier answer. */
+                caseId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Up to 20 cross-checks. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        crossChecks: components["schemas"]["CrossCheck"][];
+                    };
+                };
+            };
+            /** @description No session and no API key, or a key that is wrong, revoked or expired. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The caller's role does not allow this. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description No such record in the caller's organisation. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Too many requests from this key, or too many estimates at once; see Retry-After. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Any other error, in the same shape. */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+        };
+    };
+    startCrossCheck: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description An id from an earlier answer. */
+                caseId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    /** @description Paths in each pass (fitting and checking), 1000–200000; 20000 when omitted. */
+                    paths?: number;
+                    /** @description The same seed, paths and model give the same answer; chosen at random when omitted (and stored). */
+                    seed?: number;
+                };
+            };
+        };
+        responses: {
+            /** @description Started: follow it by its id. */
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        /** @description An opaque identifier. */
+                        id: string;
+                        /** @constant */
+                        status: "running";
+                    };
+                };
+            };
+            /** @description No session and no API key, or a key that is wrong, revoked or expired. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The caller's role does not allow this. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description No such record in the caller's organisation. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The input is not valid; `fields` says where. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Too many requests from this key, or too many estimates at once; see Retry-After. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Any other error, in the same shape. */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+        };
+    };
+    getCrossCheck: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description An id from an earlier answer. */
+                caseId: string;
+                /** @description An id from an earlier answer. */
+                crossCheckId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The cross-check. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CrossCheck"];
+                };
+            };
+            /** @description No session and no API key, or a key that is wrong, revoked or expired. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description The caller's role does not allow this. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description No such record in the caller's organisation. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Too many requests from this key, or too many estimates at once; see Retry-After. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+            /** @description Any other error, in the same shape. */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Error"];
+                };
+            };
+        };
+    };
+    cancelCrossCheck: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description An id from an earlier answer. */
+                caseId: string;
+                /** @description An id from an earlier answer. */
+                crossCheckId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Cancelled. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        id: string;
+                        /** @constant */
+                        status: "cancelled";
+                    };
                 };
             };
             /** @description No session and no API key, or a key that is wrong, revoked or expired. */

@@ -7,16 +7,11 @@ import PgBoss from 'pg-boss';
 import { databaseUrl } from '../env';
 import { QUEUE_POLICIES, QUEUES, type QueueName } from './queues';
 
-// A dead-letter queue must exist before the queue that names it.
+// Every queue, dead-letter queues first: a queue's dead-letter queue must exist before it.
+const deadLetters = new Set(Object.values(QUEUE_POLICIES).map((policy) => policy.deadLetter));
 const ORDER: QueueName[] = [
-  QUEUES.simulationGaveUp,
-  QUEUES.simulation,
-  QUEUES.boardPack,
-  QUEUES.mail,
-  QUEUES.revaluationGaveUp,
-  QUEUES.revaluation,
-  QUEUES.watchCheck,
-  QUEUES.watchDaily,
+  ...Object.values(QUEUES).filter((name) => deadLetters.has(name)),
+  ...Object.values(QUEUES).filter((name) => !deadLetters.has(name)),
 ];
 
 export async function installQueues(connectionString = databaseUrl()): Promise<void> {

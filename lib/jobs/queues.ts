@@ -12,6 +12,9 @@ import type { SimulationSpec } from '../volatility/monte-carlo';
 /** Seconds a worker lets a Monte Carlo estimate run before it is stopped and marked failed. */
 export const SIMULATION_DEADLINE_SECONDS = Number(process.env.SIMULATION_DEADLINE_SECONDS ?? 600);
 
+/** Seconds a worker lets a cross-check run before it is stopped and marked failed. */
+export const CROSS_CHECK_DEADLINE_SECONDS = Number(process.env.CROSS_CHECK_DEADLINE_SECONDS ?? 300);
+
 export const QUEUES = {
   mail: 'mail',
   boardPack: 'board-pack',
@@ -21,6 +24,8 @@ export const QUEUES = {
   revaluationGaveUp: 'portfolio-revaluation-gave-up',
   watchCheck: 'watch-check',
   watchDaily: 'watch-daily',
+  crossCheck: 'cross-check',
+  crossCheckGaveUp: 'cross-check-gave-up',
 } as const;
 
 /** When the daily check of every followed case runs (cron, UTC). */
@@ -69,6 +74,10 @@ export interface WatchCheckJob {
   caseId: string;
 }
 
+export interface CrossCheckJob {
+  crossCheckId: string;
+}
+
 export interface JobData {
   [QUEUES.mail]: MailJob;
   [QUEUES.boardPack]: BoardPackJob;
@@ -78,6 +87,8 @@ export interface JobData {
   [QUEUES.revaluationGaveUp]: RevaluationJob;
   [QUEUES.watchCheck]: WatchCheckJob;
   [QUEUES.watchDaily]: Record<string, never>;
+  [QUEUES.crossCheck]: CrossCheckJob;
+  [QUEUES.crossCheckGaveUp]: CrossCheckJob;
 }
 
 /**
@@ -112,4 +123,14 @@ export const QUEUE_POLICIES: Record<QueueName, PgBoss.Queue> = {
   // A check announces each change once (unique alert keys), so running it again is safe.
   [QUEUES.watchCheck]: { name: QUEUES.watchCheck, retryLimit: 3, retryDelay: 10, retryBackoff: true, expireInSeconds: 300 },
   [QUEUES.watchDaily]: { name: QUEUES.watchDaily, retryLimit: 2, retryDelay: 60, retryBackoff: true, expireInSeconds: 300 },
+  // Seeded like a simulation: a second attempt gives the same answer.
+  [QUEUES.crossCheck]: {
+    name: QUEUES.crossCheck,
+    retryLimit: 2,
+    retryDelay: 2,
+    retryBackoff: false,
+    expireInSeconds: CROSS_CHECK_DEADLINE_SECONDS + 15,
+    deadLetter: QUEUES.crossCheckGaveUp,
+  },
+  [QUEUES.crossCheckGaveUp]: { name: QUEUES.crossCheckGaveUp, retryLimit: 5, retryDelay: 5, retryBackoff: true, expireInSeconds: 60 },
 };

@@ -11,11 +11,13 @@ import { deliverMail } from './deliver-mail';
 import { QUEUES, WATCH_DAILY_CRON, type JobData, type QueueName } from './queues';
 import { renderBoardPacks } from './render-board-packs';
 import { markRevaluationGaveUp, revaluePortfolio } from './revalue-portfolio';
-import { markSimulationGaveUp, runSimulation, stopAllSimulations } from './run-simulation';
+import { markCrossCheckGaveUp, runCrossCheckJob } from './run-cross-check';
+import { markSimulationGaveUp, runSimulation } from './run-simulation';
+import { stopAllThreads } from './thread-job';
 
 const seconds = (name: string, fallback: number) => Number(process.env[name] ?? fallback);
 
-/** Jobs of each queue one worker process runs at once (simulations are the CPU-heavy ones). */
+/** Jobs of each queue one worker process runs at once (simulations and cross-checks are the CPU-heavy ones). */
 const CONCURRENCY: Record<QueueName, number> = {
   [QUEUES.mail]: 2,
   [QUEUES.boardPack]: 1,
@@ -25,6 +27,8 @@ const CONCURRENCY: Record<QueueName, number> = {
   [QUEUES.revaluationGaveUp]: 1,
   [QUEUES.watchCheck]: 1,
   [QUEUES.watchDaily]: 1,
+  [QUEUES.crossCheck]: seconds('WORKER_CROSS_CHECKS', 1),
+  [QUEUES.crossCheckGaveUp]: 1,
 };
 
 const HANDLERS: { [Q in QueueName]: (data: JobData[Q]) => Promise<void> } = {
@@ -36,10 +40,12 @@ const HANDLERS: { [Q in QueueName]: (data: JobData[Q]) => Promise<void> } = {
   [QUEUES.revaluationGaveUp]: markRevaluationGaveUp,
   [QUEUES.watchCheck]: checkWatch,
   [QUEUES.watchDaily]: checkEveryWatch,
+  [QUEUES.crossCheck]: runCrossCheckJob,
+  [QUEUES.crossCheckGaveUp]: markCrossCheckGaveUp,
 };
 
 export interface RunningWorker {
-  /** Stops taking jobs; simulations go back on the queue at once, other jobs get `graceMs` to finish. */
+  /** Stops taking jobs; simulations and cross-checks go back on the queue at once, other jobs get `graceMs` to finish. */
   stop(graceMs?: number): Promise<void>;
 }
 
@@ -74,7 +80,7 @@ export async function startWorker(): Promise<RunningWorker> {
   }
   return {
     async stop(graceMs = 7_000) {
-      await stopAllSimulations();
+      await stopAllThreads();
       // pg-boss records a failed handler's job without waiting; give it a moment before closing its pool.
       await new Promise((resolve) => setTimeout(resolve, 500));
       await boss.stop({ graceful: true, timeout: graceMs });

@@ -12,6 +12,7 @@ import { commentSchema, returnSchema, submitSchema } from '../validations/review
 import { settingsSchema } from '../validations/settings';
 import { observationSchema } from '../validations/observation';
 import { rightDecisionSchema } from '../validations/right-decision';
+import { crossCheckStartSchema } from '../validations/cross-check';
 import { historyJsonSchema, simulationStartSchema } from '../validations/volatility';
 import type { Operation } from './operation';
 import * as s from './schemas';
@@ -231,6 +232,42 @@ export const operations = {
     tag: 'Valuations',
     permission: { review: ['read'] },
     answers: { 200: { description: 'Whether the run reproduces, and what moved.', schema: s.rerunSchema } },
+  },
+  startCrossCheck: {
+    method: 'post',
+    path: '/api/v1/cases/{caseId}/cross-checks',
+    summary: "Cross-check the case's value by an independent least-squares Monte Carlo",
+    description:
+      'Queues a least-squares Monte Carlo (Longstaff & Schwartz 2001) of the case as saved, on its own code path, and compares it with the lattice (docs/engine.md §11). Follow it by its id.',
+    tag: 'Valuations',
+    permission: { review: ['comment'] },
+    body: crossCheckStartSchema,
+    example: { paths: 20000, seed: 7 },
+    answers: { 202: { description: 'Started: follow it by its id.', schema: s.jobStartedSchema } },
+  },
+  listCrossChecks: {
+    method: 'get',
+    path: '/api/v1/cases/{caseId}/cross-checks',
+    summary: "The case's latest cross-checks, newest first",
+    tag: 'Valuations',
+    permission: { case: ['read'] },
+    answers: { 200: { description: 'Up to 20 cross-checks.', schema: z.object({ crossChecks: z.array(s.crossCheckSchema) }) } },
+  },
+  getCrossCheck: {
+    method: 'get',
+    path: '/api/v1/cases/{caseId}/cross-checks/{crossCheckId}',
+    summary: 'A cross-check: progress, and when done both estimates, the lattice and the verdict',
+    tag: 'Valuations',
+    permission: { case: ['read'] },
+    answers: { 200: { description: 'The cross-check.', schema: s.crossCheckSchema } },
+  },
+  cancelCrossCheck: {
+    method: 'delete',
+    path: '/api/v1/cases/{caseId}/cross-checks/{crossCheckId}',
+    summary: 'Cancel a running cross-check',
+    tag: 'Valuations',
+    permission: { review: ['comment'] },
+    answers: { 200: { description: 'Cancelled.', schema: z.object({ id: z.string(), status: z.literal('cancelled') }) } },
   },
   valueModel: {
     method: 'post',

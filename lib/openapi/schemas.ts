@@ -357,6 +357,55 @@ export const importPreviewSchema = z.object({
   preview: z.object({ cashFlows: z.looseObject({}), analysis: z.looseObject({}) }),
 });
 
+const estimateSchema = z.object({ expandedNpv: money, standardError: money });
+const rangeSchema = z.object({ low: money, high: money });
+
+export const crossCheckResultSchema = z
+  .object({
+    lattice: z.object({
+      expandedNpv: money,
+      band: rangeSchema.nullable().meta({ description: 'The convergence band (docs/engine.md §5).' }),
+      steps: z.int(),
+      engineVersion: z.string(),
+      rights: z.array(z.object({ id: z.string(), exerciseProbability: z.number() })),
+    }),
+    monteCarlo: z.object({
+      paths: z.int(),
+      seed: z.int(),
+      dates: z.int(),
+      lowBiased: estimateSchema.meta({ description: 'The fitted rule on independent paths: biased down.' }),
+      highBiased: estimateSchema.meta({ description: 'The fitted rule on the paths it was fitted to: biased up.' }),
+      rights: z.array(z.object({ id: z.string(), probability: z.number(), standardError: z.number() })),
+    }),
+    verdict: z.object({
+      agrees: z.boolean(),
+      monteCarloRange: rangeSchema.meta({ description: '[low − 3·SE, high + 3·SE].' }),
+      latticeRange: rangeSchema,
+      gap: money.meta({ description: 'How far apart the two ranges are; 0 when they meet.' }),
+      difference: money.meta({ description: "The lattice's value less the middle of the two estimates." }),
+      rights: z.array(z.object({ id: z.string(), lattice: z.number(), monteCarlo: z.number(), standardError: z.number(), differs: z.boolean() })),
+    }),
+    seconds: z.number(),
+  })
+  .meta({ id: 'CrossCheckResult' });
+
+export const crossCheckSchema = z
+  .object({
+    id,
+    caseId: id,
+    caseVersion: z.int(),
+    engineVersion: z.string().meta({ description: 'The engine the lattice side ran with.' }),
+    paths: z.int(),
+    seed: z.int(),
+    status: z.enum(['running', 'done', 'failed', 'cancelled']),
+    progress: z.number(),
+    result: crossCheckResultSchema.nullable(),
+    error: z.string().nullable(),
+    createdAt: dateTime,
+    finishedAt: dateTime.nullable(),
+  })
+  .meta({ id: 'CrossCheck' });
+
 export const rerunSchema = z
   .object({
     runId: id,

@@ -29,6 +29,7 @@ describe('migrations', () => {
       'case',
       'case_observation',
       'case_snapshot',
+      'cross_check',
       'invitation',
       'member',
       'organization',

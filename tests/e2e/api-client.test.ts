@@ -202,6 +202,24 @@ describe('the API through its typed client', () => {
     const rerun = ok(await reviewer.POST('/api/v1/cases/{caseId}/valuations/{runId}/rerun', { params: { path: { caseId: other.id, runId: run.id } } }));
     expect(rerun.reproduced).toBe(true);
 
+    // A cross-check cancelled at once, and one followed until it is done.
+    const crossPath = { caseId: other.id };
+    const big = ok(await reviewer.POST('/api/v1/cases/{caseId}/cross-checks', { params: { path: crossPath }, body: { paths: 200_000, seed: 1 } }));
+    ok(await analyst.DELETE('/api/v1/cases/{caseId}/cross-checks/{crossCheckId}', { params: { path: { ...crossPath, crossCheckId: big.id } } }));
+    const small = ok(await reviewer.POST('/api/v1/cases/{caseId}/cross-checks', { params: { path: crossPath }, body: { paths: 2_000, seed: 3 } }));
+    let check = ok(await viewer.GET('/api/v1/cases/{caseId}/cross-checks/{crossCheckId}', { params: { path: { ...crossPath, crossCheckId: small.id } } }));
+    for (let waited = 0; check.status === 'running' && waited < 90_000; waited += 1_000) {
+      await new Promise((resolve) => setTimeout(resolve, 1_000));
+      check = ok(await viewer.GET('/api/v1/cases/{caseId}/cross-checks/{crossCheckId}', { params: { path: { ...crossPath, crossCheckId: small.id } } }));
+    }
+    expect([check.status, check.error]).toEqual(['done', null]);
+    expect(check.result!.monteCarlo.paths).toBe(2_000);
+    const checks = ok(await viewer.GET('/api/v1/cases/{caseId}/cross-checks', { params: { path: crossPath } })).crossChecks;
+    expect(checks.map((c) => [c.id, c.status])).toEqual([
+      [small.id, 'done'],
+      [big.id, 'cancelled'],
+    ]);
+
     // Volatility: from a history, and a Monte Carlo estimate started, read and cancelled.
     const series = Array.from({ length: 30 }, (_, k) => ({
       date: `2026-${String(1 + Math.floor(k / 28)).padStart(2, '0')}-${String(1 + (k % 28)).padStart(2, '0')}`,

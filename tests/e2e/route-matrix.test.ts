@@ -77,6 +77,10 @@ const matrix: [Method, string, Role[], Probe?][] = [
   ['POST', '/api/v1/cases/:case/valuations', BUILDERS],
   ['GET', '/api/v1/cases/:case/valuations', ALL],
   ['POST', '/api/v1/cases/:case/valuations/:run/rerun', ['admin', 'analyst', 'reviewer']],
+  ['POST', '/api/v1/cases/:case/cross-checks', ['admin', 'analyst', 'reviewer'], { json: { paths: 5 }, status: 422, valid: { paths: 1000, seed: 1 } }],
+  ['GET', '/api/v1/cases/:case/cross-checks', ALL],
+  ['GET', '/api/v1/cases/:case/cross-checks/:crossCheck', ALL],
+  ['DELETE', '/api/v1/cases/:case/cross-checks/:crossCheck', ['admin', 'analyst', 'reviewer']],
   ['GET', '/api/v1/cases/:case/attachments', ALL],
   ['POST', '/api/v1/cases/:case/attachments', BUILDERS, { text: 'not multipart', status: 415 }],
   ['GET', '/api/v1/cases/:case/comments', ALL],
@@ -134,6 +138,7 @@ const filePlaceholders: Record<string, string> = {
   apiKey: 'keyId',
   run: 'runId',
   right: 'rightId',
+  crossCheck: 'crossCheckId',
 };
 
 const fill = (path: string) => path.replace(/:(\w+)/g, (_, key: string) => ids[key]!);
@@ -161,7 +166,7 @@ beforeAll(async () => {
   contexts.push(anonymous);
   as.anonymous = anonymous.request;
 
-  // The approved demo case, so its board pack exists; an attachment and a finished simulation on it, and a finished re-valuation.
+  // The approved demo case, so its board pack exists; an attachment, a finished simulation and a cross-check on it, and a finished re-valuation.
   const approved = await demoCase('Phased bio-resin plant', 'Base case');
   ids.case = approved.caseId;
   ids.right = encodeURIComponent('Phase 2');
@@ -203,6 +208,25 @@ beforeAll(async () => {
       .returning('id')
       .executeTakeFirstOrThrow()
   ).id;
+  ids.crossCheck = (
+    await db
+      .insertInto('cross_check')
+      .values({
+        organization_id: org.id,
+        case_id: ids.case,
+        case_version: 1,
+        engine_version: 'matrix',
+        model: JSON.stringify({}),
+        paths: 1000,
+        seed: 1,
+        status: 'cancelled',
+        finished_at: new Date(),
+        error: null,
+        created_by: null,
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow()
+  ).id;
   ids.revaluation = (
     await db
       .insertInto('portfolio_revaluation')
@@ -237,6 +261,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await db.deleteFrom('attachment').where('id', '=', ids.attachment!).execute();
   await db.deleteFrom('volatility_simulation').where('id', '=', ids.simulation!).execute();
+  await db.deleteFrom('cross_check').where('id', '=', ids.crossCheck!).execute();
   await db.deleteFrom('portfolio_revaluation').where('id', '=', ids.revaluation!).execute();
   await db
     .deleteFrom('user')

@@ -51,6 +51,10 @@ function describe(e: Entry, currency: string): string {
       return `imported cash flows into ${name}`;
     case 'volatility.simulate':
       return `started a Monte Carlo volatility estimate for ${name}`;
+    case 'case.cross_check':
+      return `started a cross-check of ${name} (version ${String(e.detail.version ?? '?')})`;
+    case 'case.cross_check_cancel':
+      return 'cancelled a cross-check';
     default:
       // An event this list does not know yet reads as words, not as a key.
       return e.action.replace(/[._]/g, ' ');
