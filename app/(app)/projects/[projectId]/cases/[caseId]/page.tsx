@@ -36,6 +36,7 @@ export default async function CasePage({
         canDecide: roleAllows(member.role, { review: ['decide'] }),
         canComment: roleAllows(member.role, { review: ['comment'] }),
         canRerun: roleAllows(member.role, { review: ['read'] }),
+        canCrossCheck: roleAllows(member.role, { review: ['comment'] }),
       }}
     />
   );

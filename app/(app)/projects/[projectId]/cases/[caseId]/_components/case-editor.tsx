@@ -29,6 +29,7 @@ import { LatticeSettingsSection } from './lattice-settings-section';
 import { OptionCards } from './option-cards';
 import { ResultsSection } from './results-section';
 import { StoredRuns } from './stored-runs';
+import { CrossCheckPanel } from './cross-check-panel';
 import { WatchPanel } from './watch-panel';
 import { ReviewPanel, type ReviewRights } from './review-panel';
 
@@ -443,6 +444,7 @@ function LoadedEditor({
                     <LoadingBlock label="Valuing the case" lines={5} />
                   )}
                   <StoredRuns caseId={caseId} currency={currency} canRerun={rights.canRerun} />
+                  <CrossCheckPanel caseId={caseId} currency={currency} canStart={rights.canCrossCheck} unsaved={dirty} />
                 </div>
               ),
             },

@@ -23,6 +23,8 @@ export interface ReviewRights {
   canComment: boolean;
   /** May re-run stored runs (model validation is a reviewer's job as much as an analyst's). */
   canRerun: boolean;
+  /** May start and cancel cross-checks (the same independent review). */
+  canCrossCheck: boolean;
 }
 
 interface Snapshot {
