@@ -339,12 +339,11 @@ export function leastSquaresMonteCarlo(model: ProjectModel, spec: CrossCheckSpec
   const collected = new Float64Array(P);
   const used = new Int32Array(P);
   W.fill(0);
-  const continuation = (k: number, s: number, v: number, role: 'target' | 'source') => {
+  // The fitted continuation at the basis `row` already filled for this path and date.
+  const continuation = (k: number, s: number, role: 'target' | 'source') => {
     const beta = fitted[k]![s]![role];
     if (!beta) return 0;
-    const basis = bases[k];
-    if (!basis) return beta[0]!;
-    fillBasis(row, v, basis);
+    if (!bases[k]) return beta[0]!;
     let c = 0;
     for (let i = 0; i < BASIS; i++) c += row[i]! * beta[i]!;
     return c;
@@ -356,11 +355,12 @@ export function leastSquaresMonteCarlo(model: ProjectModel, spec: CrossCheckSpec
       const options = openFrom[k]![state[p]!]!;
       if (options.length === 0) continue;
       const v = level[k]! * Math.exp(sigma * W[p]!);
-      let best = Math.max(continuation(k, state[p]!, v, 'source'), 0);
+      if (bases[k]) fillBasis(row, v, bases[k]!);
+      let best = Math.max(continuation(k, state[p]!, 'source'), 0);
       let chosen = null;
       for (const m of options) {
         const pays = m.slope * v + m.constant[k]!;
-        const total = pays + continuation(k, m.to, v, 'target');
+        const total = pays + continuation(k, m.to, 'target');
         if (total > best) {
           best = total;
           chosen = m;

@@ -1,6 +1,6 @@
 /**
  * How big a cross-check may be: paths in each pass, and the work of one run in
- * path × date × (state + move) units, about a minute on this two-core machine (npm run bench
+ * path × date × (state + move) units, about two minutes on this two-core machine (npm run bench
  * prints the time per 100 000 paths).
  */
 export const PATH_LIMITS = { min: 1_000, max: 200_000, default: 20_000 } as const;
