@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # Bundles the production server (.data/serve.mjs), the job worker (.data/worker.mjs) and the worker-thread entries: the engine (.data/engine-worker.mjs, loaded by
 # lib/engine/pool.ts), the board pack renderer (.data/board-pack-worker.mjs, loaded by
-# lib/board-pack/store.ts) and the Monte Carlo volatility estimate (.data/simulation-worker.mjs,
+# lib/board-pack/store.ts), the validation report's (.data/validation-report-worker.mjs) and the Monte Carlo volatility estimate (.data/simulation-worker.mjs,
 # loaded by lib/jobs/run-simulation.ts in the job worker) and the cross-check (.data/cross-check-worker.mjs,
 # loaded by lib/jobs/run-cross-check.ts), so CPU-bound work never runs on a request's event loop.
 set -euo pipefail
@@ -12,6 +12,8 @@ npx esbuild lattice/worker-entry.ts --bundle --platform=node --format=esm --targ
 # worker imports them from node_modules like the app does.
 npx esbuild lib/board-pack/worker-entry.ts --bundle --platform=node --format=esm --target=node20 --jsx=automatic --alias:@=. \
   --external:@react-pdf/renderer --external:react --outfile=.data/board-pack-worker.mjs --log-level=warning
+npx esbuild lib/validation-report/worker-entry.ts --bundle --platform=node --format=esm --target=node20 --jsx=automatic --alias:@=. \
+  --external:@react-pdf/renderer --external:react --outfile=.data/validation-report-worker.mjs --log-level=warning
 # The production server (scripts/serve.ts): Next.js and compression (CommonJS) stay outside the bundle.
 npx esbuild scripts/serve.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. --external:next --external:compression \
   --outfile=.data/serve.mjs --log-level=warning
@@ -24,3 +26,5 @@ npx esbuild lib/cross-check/worker-entry.ts --bundle --platform=node --format=es
 npx esbuild scripts/worker.ts --bundle --platform=node --format=esm --target=node20 --alias:@=. --packages=external \
   --alias:server-only=./node_modules/server-only/empty.js \
   --outfile=.data/worker.mjs --log-level=warning
+# The engine's published-value checks, valued from the tests' own tables for the validation report.
+node --import tsx scripts/reference-results.ts

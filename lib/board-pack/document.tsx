@@ -6,7 +6,7 @@
  * (lib/charts/*). Everything comes from the approved snapshot, so the same snapshot always gives
  * the same document.
  */
-import { Circle, Document, G, Line, Page, Rect, StyleSheet, Svg, Text, View } from '@react-pdf/renderer';
+import { Circle, Document, G, Line, Page, Rect, Svg, Text, View } from '@react-pdf/renderer';
 import type { ReactNode } from 'react';
 import type { Sensitivity, ValuationResult } from '@/lattice';
 import { VALUATION_CAUTION } from '@/lib/caution';
@@ -18,48 +18,16 @@ import { layoutWaterfall, waterfallSteps } from '../charts/waterfall';
 import { textWidth, wrapLabel } from '../charts/wrap-label';
 import { decisionRule } from '../decision-rules';
 import { readingOfFigures } from '../figures-reading';
-import { formatChange, formatDateTime, formatMoney, formatPercent } from '../format';
+import { formatChange, formatDateTime, formatPercent } from '../format';
 import { optionTypeLabels, type OptionType } from '../option-form';
 import { premiumSplitText } from '../premium-split';
 import { describeOption } from '../option-words';
 import type { BoardPackData, FollowThrough, RecordEvent } from './data';
 import { pdfText } from './text';
 import { palette, seriesFill } from '@/lib/palette';
+import { assumptionRows, money, pdfColours, styles, Table } from './pdf-parts';
 
-const ink = palette.ink.DEFAULT;
-const soft = palette.ink.soft;
-const muted = palette.ink.muted;
-const line = palette.line.DEFAULT;
-const tide = palette.tide[500];
-const brick = palette.brick[500];
-
-const styles = StyleSheet.create({
-  page: { fontFamily: 'Work Sans', fontSize: 10, color: ink, paddingTop: 48, paddingBottom: 64, paddingHorizontal: 48 },
-  // Line height is set per paragraph, never on the page: on the page it drops the footer's page numbers (react-pdf 4.9).
-  para: { fontSize: 10, lineHeight: 1.4 },
-  // Four footer lines (the longest project and case names) fit between the page's bottom padding (64) and the footer's bottom (16).
-  footer: { position: 'absolute', bottom: 16, left: 48, right: 48, fontSize: 8, color: muted, flexDirection: 'row', justifyContent: 'space-between' },
-  eyebrow: { fontSize: 8, letterSpacing: 1, color: muted, textTransform: 'uppercase' },
-  h1: { fontSize: 24, fontWeight: 600, marginTop: 6, marginBottom: 6, lineHeight: 1.2 },
-  h2: { fontSize: 14, fontWeight: 600, marginBottom: 8, marginTop: 4 },
-  h3: { fontSize: 11, fontWeight: 600, marginBottom: 4, marginTop: 10 },
-  lead: { lineHeight: 1.4, fontSize: 11, color: soft, marginTop: 6 },
-  tiles: { flexDirection: 'row', gap: 10, marginTop: 18 },
-  tile: { flex: 1, borderWidth: 1, borderColor: line, borderRadius: 4, padding: 10 },
-  tileStrong: { flex: 1, borderWidth: 1.5, borderColor: tide, borderRadius: 4, padding: 10, backgroundColor: palette.tide[50] },
-  tileLabel: { fontSize: 8, color: muted, textTransform: 'uppercase', letterSpacing: 0.6 },
-  tileValue: { fontSize: 16, fontWeight: 600, marginTop: 3 },
-  caution: { lineHeight: 1.4, marginTop: 14, padding: 10, backgroundColor: palette.paper.sunk, fontSize: 8.5, color: soft, borderRadius: 3 },
-  demo: { lineHeight: 1.4, marginTop: 10, padding: 6, backgroundColor: palette.ember[100], color: palette.ember[700], fontSize: 8.5, borderRadius: 3 },
-  table: { borderWidth: 1, borderColor: line, borderRadius: 3, marginTop: 6 },
-  row: { flexDirection: 'row', borderBottomWidth: 1, borderBottomColor: line },
-  head: { backgroundColor: palette.paper.sunk },
-  cell: { padding: 4, fontSize: 8.5 },
-  num: { textAlign: 'right' },
-  rule: { fontSize: 10, lineHeight: 1.4, marginBottom: 5, paddingLeft: 8, borderLeftWidth: 2, borderLeftColor: tide },
-});
-
-const money = (value: number | null | undefined, currency?: string, digits = 1) => formatMoney(value, currency, digits);
+const { ink, soft, muted, tide, brick } = pdfColours;
 
 /** Chart label size (pt), and the tornado's label column, in which long labels wrap. */
 const LABEL_SIZE = 7.5;
@@ -90,31 +58,6 @@ function Section({ data, title, children }: { data: BoardPackData; title: string
       {children}
       <Footer data={data} />
     </Page>
-  );
-}
-
-/** A table whose columns after the first hold figures (right-aligned), unless `textColumns` says otherwise. */
-function Table({ columns, rows, widths, textColumns = [] }: { columns: string[]; rows: string[][]; widths: number[]; textColumns?: number[] }) {
-  const numeric = (k: number) => k > 0 && !textColumns.includes(k);
-  return (
-    <View style={styles.table}>
-      <View style={[styles.row, styles.head]}>
-        {columns.map((c, k) => (
-          <Text key={c} style={[styles.cell, { width: `${widths[k]}%`, fontWeight: 600 }, numeric(k) ? styles.num : {}]}>
-            {c}
-          </Text>
-        ))}
-      </View>
-      {rows.map((r, i) => (
-        <View key={i} style={[styles.row, i === rows.length - 1 ? { borderBottomWidth: 0 } : {}]} wrap={false}>
-          {r.map((c, k) => (
-            <Text key={k} style={[styles.cell, { width: `${widths[k]}%` }, numeric(k) ? styles.num : {}]}>
-              {pdfText(c)}
-            </Text>
-          ))}
-        </View>
-      ))}
-    </View>
   );
 }
 
@@ -502,21 +445,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
       </Section>
 
       <Section data={data} title="Assumptions">
-        <Table
-          columns={['Assumption', 'Value']}
-          widths={[60, 40]}
-          rows={[
-            ['Underlying value V0 (PV of operating cash flows)', money(analysis.underlyingValue, currency)],
-            ['Static NPV at the WACC', money(analysis.staticNpv, currency)],
-            ['WACC', formatPercent(snapshot.inputs.cashFlows.wacc)],
-            ['Cash-flow timing', snapshot.inputs.cashFlows.timing === 'mid-year' ? 'mid-year' : 'end of year'],
-            ['Volatility of the project value', formatPercent(snapshot.inputs.settings.volatility)],
-            ['Where the volatility comes from', snapshot.inputs.settings.volatilitySource?.note || 'Not stated'],
-            ['Risk-free rate (continuous)', formatPercent(snapshot.inputs.settings.riskFreeRate, 2)],
-            ['Lattice', `${snapshot.inputs.settings.tree ?? 'crr'}, ${snapshot.inputs.settings.steps} steps`],
-            ['Horizon', `${snapshot.model.horizon} years`],
-          ]}
-        />
+        <Table columns={['Assumption', 'Value']} widths={[60, 40]} rows={assumptionRows(snapshot.inputs, snapshot.model, currency)} />
         <Text style={styles.h3}>Cash flows ({currency})</Text>
         <Table
           columns={['Year', 'Revenue', 'Operating cost', 'Tax', 'Working capital', 'Capex', 'Free cash flow']}

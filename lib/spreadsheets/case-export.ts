@@ -10,9 +10,9 @@ import type { ValuationResult } from '@/lattice';
 import { decisionRule } from '../decision-rules';
 import { formatDateTime } from '../format';
 import { describeOption } from '../option-words';
-import { safeCell } from '../spreadsheet-safe';
 import type { CaseInput } from '../validations/case';
 import { addCashFlowSheets } from './cash-flow-workbook';
+import { table } from './sheet-table';
 
 export interface CaseExport {
   projectName: string;
@@ -23,12 +23,6 @@ export interface CaseExport {
   inputs: CaseInput;
   result: ValuationResult;
   valuedAt: string;
-}
-
-function table(sheet: ExcelJS.Worksheet, header: string[], rows: (string | number | null)[][]) {
-  sheet.addRow(header).font = { bold: true };
-  for (const r of rows) sheet.addRow(r.map(safeCell));
-  sheet.columns.forEach((c) => (c.width = 22));
 }
 
 export async function caseWorkbook(c: CaseExport): Promise<Buffer> {

@@ -214,6 +214,11 @@ describe('the API through its typed client', () => {
     }
     expect([check.status, check.error]).toEqual(['done', null]);
     expect(check.result!.monteCarlo.paths).toBe(2_000);
+    // The validation report of that version, in both forms, and kept with the case by the reviewer.
+    ok(await viewer.GET('/api/v1/cases/{caseId}/validation-report', { params: { path: crossPath, query: { size: 'LETTER' } }, parseAs: 'arrayBuffer' }));
+    ok(await viewer.GET('/api/v1/cases/{caseId}/validation-report.xlsx', { params: { path: crossPath }, parseAs: 'arrayBuffer' }));
+    const kept = ok(await reviewer.POST('/api/v1/cases/{caseId}/validation-report/attachments', { params: { path: crossPath } })).attachment;
+    expect([kept.kind, kept.filename]).toEqual(['pdf', `${other.name} - validation report v${other.version}.pdf`]);
     const checks = ok(await viewer.GET('/api/v1/cases/{caseId}/cross-checks', { params: { path: crossPath } })).crossChecks;
     expect(checks.map((c) => [c.id, c.status])).toEqual([
       [small.id, 'done'],

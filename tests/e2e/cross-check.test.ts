@@ -1,7 +1,9 @@
 /**
  * The cross-check as a reviewer uses it (issue 15): on the demo plant's Results tab the reviewer
  * types a path count key by key, starts a cross-check, watches it run on the queue and reads the
- * verdict beside the lattice's figures; the stored row keeps the case and engine versions.
+ * verdict beside the lattice's figures; the version's validation report then carries the verdict
+ * and the engine's published checks, and the reviewer keeps it with the case's documents; the
+ * stored row keeps the case and engine versions.
  * Through the API: a run beyond the work bound is refused before it is queued, an organisation
  * cannot queue more than its share, a viewer cannot start one, and a cancelled one says so.
  */
@@ -10,6 +12,7 @@ import { db } from '@/db';
 import { ENGINE_VERSION } from '@/lattice';
 import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
+import { pdfText } from '../support/pdf-text';
 
 let plant: Awaited<ReturnType<typeof demoCase>>;
 
@@ -50,6 +53,26 @@ describe('cross-checking a case', () => {
     expect(await page.getByText(/8,000 paths in each pass/).isVisible()).toBe(true);
     await page.getByRole('heading', { name: 'Independent cross-check' }).scrollIntoViewIfNeeded();
     await page.screenshot({ path: '.data/cross-check.png', fullPage: false });
+
+    // The validation report of this version now carries the cross-check; the reviewer keeps it with the case.
+    const report = await page.request.get(`/api/v1/cases/${plant.caseId}/validation-report?size=A4`, { timeout: 120_000 });
+    expect(report.headers()['content-type']).toBe('application/pdf');
+    const text = pdfText(Buffer.from(await report.body()));
+    expect(text).toContain('Verdict: the two agree');
+    expect(text).toMatch(/\d+ of \d+ lie within their tolerance/);
+    await page.getByRole('button', { name: 'Keep it with the case’s documents' }).click();
+    await expect.poll(() => page.getByText(/^Kept with the case’s documents as/).isVisible(), { timeout: 120_000, interval: 1_000 }).toBe(true);
+    await page.getByRole('tab', { name: 'Documents' }).click();
+    await expect
+      .poll(
+        () =>
+          page
+            .getByRole('link', { name: /validation report v\d+\.pdf/ })
+            .first()
+            .isVisible(),
+        { timeout: 30_000 },
+      )
+      .toBe(true);
 
     const row = await db
       .selectFrom('cross_check')

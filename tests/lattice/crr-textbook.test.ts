@@ -7,6 +7,7 @@
  * - McDonald, *Derivatives Markets*, ch. 17: an option to defer with cash-flow leakage,
  *   S = 150, K = 100, r = ln 1.07, δ = ln 1.12, σ = 0.5, two annual steps, American: 55.80 with
  *   p* ≈ 0.335 (two and three decimals).
+ *   Both tables live in reference/published-checks.ts, which the validation report reads too.
  * - A plain nested-array CRR written below from Cox, Ross & Rubinstein (1979) with the exercise
  *   test at every node: same steps, so the two must agree to rounding (1e-10 relative).
  */
@@ -14,6 +15,7 @@ import { describe, it } from 'vitest';
 import { valueProject } from '@/lattice';
 import { expectClose } from './support/check';
 import { abandonOnly, deferOnly } from './support/models';
+import { publishedChecks } from './reference/published-checks';
 
 function textbookCrr(kind: 'call' | 'put', S: number, K: number, r: number, q: number, sigma: number, T: number, n: number): number {
   const dt = T / n;
@@ -36,23 +38,9 @@ function textbookCrr(kind: 'call' | 'put', S: number, K: number, r: number, q: n
 }
 
 describe('CRR tree', () => {
-  it.each([
-    [5, 4.49, 0.005],
-    [30, 4.263, 0.0005],
-    [50, 4.272, 0.0005],
-    [100, 4.278, 0.0005],
-    [500, 4.283, 0.0005],
-  ])('reproduces Hull Example 21.1 at %i steps (%f)', (steps, printed, abs) => {
-    const c = { value: 50, strike: 50, rate: 0.1, volatility: 0.4, horizon: 5 / 12, steps };
-    const put = valueProject(abandonOnly(c), { extras: false }).value - 50;
-    expectClose(put, printed, { abs }, { source: 'Hull Example 21.1', ...c });
-  });
-
-  it("reproduces McDonald's two-step option to defer with leakage (55.80, p* ≈ 0.335)", () => {
-    const c = { value: 150, strike: 100, rate: Math.log(1.07), payoutYield: Math.log(1.12), volatility: 0.5, horizon: 2, steps: 2 };
-    const result = valueProject(deferOnly(c), { extras: false });
-    expectClose(result.value, 55.8, { abs: 0.005 }, { source: 'McDonald ch. 17', ...c });
-    expectClose(result.tree.p, 0.335, { abs: 0.0005 }, { source: 'McDonald ch. 17 p*', ...c });
+  it.each(publishedChecks.filter((c) => !c.source.startsWith('Longstaff')))('reproduces $source: $what ($published)', (check) => {
+    const result = valueProject(check.model, { extras: false });
+    expectClose(check.read(result), check.published, { abs: check.tolerance }, { source: check.source, what: check.what });
   });
 
   it('matches a textbook nested-array CRR at the same steps', () => {

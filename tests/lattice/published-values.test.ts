@@ -6,7 +6,8 @@
  *   dates a year on a 500-steps-a-year CRR tree. Tolerance 0.005: the table has three decimals
  *   and the finite-difference values carry their own grid error; the largest measured gap was
  *   0.0041 (S = 44, σ = 0.4, T = 2). Their closed-form European value is checked too (1000
- *   steps a year, tolerance 0.005, the CRR European error at that step count).
+ *   steps a year, tolerance 0.005, the CRR European error at that step count). The rows and
+ *   their models are in reference/published-checks.ts, which the validation report reads too.
  * - Dixit & Pindyck (1994), *Investment under Uncertainty*, ch. 5: perpetual option to invest,
  *   r = δ = 0.04, σ = 0.2 gives β1 = 2, V* = 2I and F(V) = (V* − I)(V/V*)^β1. A 100-year defer
  *   window approximates the perpetuity: the value at V = I must be within 0.5 % of F(I) = I/4
@@ -16,48 +17,23 @@
  *   `stage` option is a call on a call; closed form with a bivariate normal (support/normal.ts).
  *   Tolerance 0.2 % relative at 1000 steps (binomial European error is O(1/N)).
  */
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import { describe, it, expect } from 'vitest';
 import { valueProject, type ProjectModel } from '@/lattice';
 import { expectClose } from './support/check';
 import { bivariateNormalCdf, normalCdf } from './support/normal';
+import { longstaffSchwartzRows, publishedChecks } from './reference/published-checks';
 
-const csv = readFileSync(fileURLToPath(new URL('./reference/longstaff-schwartz-2001-table1.csv', import.meta.url)), 'utf8');
-const rows = csv
-  .split('\n')
-  .filter((line) => line.trim() !== '' && !line.startsWith('#') && !line.startsWith('S,'))
-  .map((line) => {
-    const [S, sigma, T, fd, european] = line.split(',').map(Number) as [number, number, number, number, number];
-    return { S, sigma, T, fd, european };
-  });
+const lsChecks = publishedChecks.filter((c) => c.source.startsWith('Longstaff'));
 
 describe('Longstaff & Schwartz (2001) Table 1', () => {
-  it('has all twenty rows', () => expect(rows).toHaveLength(20));
-
-  it.each(rows)('American put S=$S σ=$sigma T=$T ≈ $fd with 50 exercise dates a year', ({ S, sigma, T, fd }) => {
-    const dates = Array.from({ length: 50 * T }, (_, k) => (k + 1) / 50);
-    const model: ProjectModel = {
-      underlying: { value: S, volatility: sigma },
-      riskFreeRate: 0.06,
-      horizon: T,
-      steps: 500 * T,
-      options: [{ type: 'abandon', salvage: 40, window: { kind: 'bermudan', dates: [0, ...dates] } }],
-    };
-    const put = valueProject(model, { extras: false }).value - S;
-    expectClose(put, fd, { abs: 0.005 }, { source: 'Longstaff & Schwartz 2001 Table 1', S, sigma, T });
+  it('has all twenty rows, American and European', () => {
+    expect(longstaffSchwartzRows).toHaveLength(20);
+    expect(lsChecks).toHaveLength(40);
   });
 
-  it.each(rows)('European put S=$S σ=$sigma T=$T ≈ $european', ({ S, sigma, T, european }) => {
-    const model: ProjectModel = {
-      underlying: { value: S, volatility: sigma },
-      riskFreeRate: 0.06,
-      horizon: T,
-      steps: 1000 * T,
-      options: [{ type: 'abandon', salvage: 40, window: { kind: 'european', at: T } }],
-    };
-    const put = valueProject(model, { extras: false }).value - S;
-    expectClose(put, european, { abs: 0.005 }, { source: 'Longstaff & Schwartz 2001 Table 1 (European)', S, sigma, T });
+  it.each(lsChecks)('$what ≈ $published', (check) => {
+    const result = valueProject(check.model, { extras: false });
+    expectClose(check.read(result), check.published, { abs: check.tolerance }, { source: check.source, what: check.what });
   });
 });
 

@@ -55,6 +55,8 @@ function describe(e: Entry, currency: string): string {
       return `started a cross-check of ${name} (version ${String(e.detail.version ?? '?')})`;
     case 'case.cross_check_cancel':
       return 'cancelled a cross-check';
+    case 'case.attach_validation_report':
+      return `kept the validation report of ${name} (version ${String(e.detail.version ?? '?')}) with its documents`;
     default:
       // An event this list does not know yet reads as words, not as a key.
       return e.action.replace(/[._]/g, ' ');

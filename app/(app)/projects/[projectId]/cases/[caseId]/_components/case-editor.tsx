@@ -30,6 +30,7 @@ import { OptionCards } from './option-cards';
 import { ResultsSection } from './results-section';
 import { StoredRuns } from './stored-runs';
 import { CrossCheckPanel } from './cross-check-panel';
+import { ValidationReportPanel } from './validation-report-panel';
 import { WatchPanel } from './watch-panel';
 import { ReviewPanel, type ReviewRights } from './review-panel';
 
@@ -445,6 +446,7 @@ function LoadedEditor({
                   )}
                   <StoredRuns caseId={caseId} currency={currency} canRerun={rights.canRerun} />
                   <CrossCheckPanel caseId={caseId} currency={currency} canStart={rights.canCrossCheck} unsaved={dirty} />
+                  <ValidationReportPanel caseId={caseId} canAttach={rights.canCrossCheck} unsaved={dirty} />
                 </div>
               ),
             },

@@ -5,19 +5,14 @@ import { NumberField } from '@/components/number-field';
 import { Select } from '@/components/ui/select';
 import { MAX_STEPS } from '@/lattice';
 import type { CaseInput } from '@/lib/validations/case';
+import { volatilityMethodLabels as methodLabels } from '@/lib/volatility/method-words';
+import { treeLabels } from '@/lib/tree-words';
 import { HistoryEstimate } from './history-estimate';
 import { MonteCarloEstimate } from './monte-carlo-estimate';
 
 type CaseSettings = CaseInput['settings'];
 
-const trees = [
-  { value: 'crr', label: 'Cox–Ross–Rubinstein (1979)' },
-  { value: 'jarrow-rudd', label: 'Jarrow–Rudd (equal probabilities)' },
-  { value: 'tian', label: 'Tian (1993, third moment)' },
-  { value: 'trigeorgis', label: 'Trigeorgis (1991, log-transformed)' },
-];
-
-const methodLabels = { direct: 'Entered directly', history: 'Estimated from history', 'monte-carlo': 'Estimated by Monte Carlo' } as const;
+const trees = Object.entries(treeLabels).map(([value, label]) => ({ value, label }));
 
 /**
  * The inputs the valuation rests on beyond the cash flows: the volatility (entered with its
