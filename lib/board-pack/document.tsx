@@ -25,7 +25,7 @@ import { describeOption } from '../option-words';
 import type { BoardPackData, FollowThrough, RecordEvent } from './data';
 import { pdfText } from './text';
 import { palette, seriesFill } from '@/lib/palette';
-import { assumptionRows, money, pdfColours, styles, Table } from './pdf-parts';
+import { assumptionRows, money, PageFooter, pdfColours, SectionPage, styles, Table } from './pdf-parts';
 
 const { ink, soft, muted, tide, brick } = pdfColours;
 
@@ -38,26 +38,15 @@ const WATERFALL_LABEL_LINES = 5;
 const NODE_LABEL_CHARS = 15;
 
 function Footer({ data }: { data: BoardPackData }) {
-  return (
-    <View style={styles.footer} fixed>
-      {/* The left part takes what the page number leaves and wraps there: a long name never runs into it. */}
-      <Text style={{ flex: 1, marginRight: 16 }}>
-        {pdfText(`${data.project.name} · ${data.snapshot.caseName} · approved ${formatDateTime(data.snapshot.decidedAt)}`)}
-        {data.isDemo ? ' · invented demo figures' : ''}
-      </Text>
-      {/* A fixed width: react-pdf lays out a render-prop text before it knows its words. */}
-      <Text style={{ width: 150, textAlign: 'right' }} render={({ pageNumber, totalPages }) => `Leeway board pack · page ${pageNumber} of ${totalPages}`} />
-    </View>
-  );
+  const about = `${data.project.name} · ${data.snapshot.caseName} · approved ${formatDateTime(data.snapshot.decidedAt)}${data.isDemo ? ' · invented demo figures' : ''}`;
+  return <PageFooter about={about} document="board pack" />;
 }
 
 function Section({ data, title, children }: { data: BoardPackData; title: string; children: ReactNode }) {
   return (
-    <Page size={data.pageSize} style={styles.page}>
-      <Text style={styles.h2}>{title}</Text>
+    <SectionPage size={data.pageSize} title={title} footer={<Footer data={data} />}>
       {children}
-      <Footer data={data} />
-    </Page>
+    </SectionPage>
   );
 }
 

@@ -3,7 +3,8 @@
  * app ships, the page and table styles, a figures table, and the assumptions table.
  */
 import path from 'node:path';
-import { Font, StyleSheet, Text, View } from '@react-pdf/renderer';
+import { Font, Page, StyleSheet, Text, View } from '@react-pdf/renderer';
+import type { ReactNode } from 'react';
 import type { ProjectModel } from '@/lattice';
 import { palette } from '@/lib/palette';
 import { analyseCashFlows } from '../cash-flows';
@@ -102,4 +103,27 @@ export function assumptionRows(inputs: CaseInput, model: ProjectModel, currency:
     ['Lattice', `${inputs.settings.tree ?? 'crr'}, ${inputs.settings.steps} steps`],
     ['Horizon', `${model.horizon} years`],
   ];
+}
+
+/** A page's footer: what the document is about on the left (it wraps), the page count on the right. */
+export function PageFooter({ about, document }: { about: string; document: string }) {
+  return (
+    <View style={styles.footer} fixed>
+      {/* The left part takes what the page number leaves and wraps there: a long name never runs into it. */}
+      <Text style={{ flex: 1, marginRight: 16 }}>{pdfText(about)}</Text>
+      {/* A fixed width: react-pdf lays out a render-prop text before it knows its words. */}
+      <Text style={{ width: 170, textAlign: 'right' }} render={({ pageNumber, totalPages }) => `Leeway ${document} · page ${pageNumber} of ${totalPages}`} />
+    </View>
+  );
+}
+
+/** A page that starts with a section title and ends with the document's footer. */
+export function SectionPage({ size, title, footer, children }: { size: 'A4' | 'LETTER'; title: string; footer: ReactNode; children: ReactNode }) {
+  return (
+    <Page size={size} style={styles.page}>
+      <Text style={styles.h2}>{title}</Text>
+      {children}
+      {footer}
+    </Page>
+  );
 }

@@ -8,7 +8,7 @@ import { Document, Page, Text, View } from '@react-pdf/renderer';
 import type { ReactNode } from 'react';
 import { VALUATION_CAUTION } from '@/lib/caution';
 import { pdfText } from '../board-pack/text';
-import { assumptionRows, money, pdfColours, styles, Table } from '../board-pack/pdf-parts';
+import { assumptionRows, money, PageFooter, pdfColours, SectionPage, styles, Table } from '../board-pack/pdf-parts';
 import { formatDateTime, formatNumber, formatPercent } from '../format';
 import { describeOption } from '../option-words';
 import { premiumSplitText } from '../premium-split';
@@ -17,27 +17,15 @@ import { treeLabels } from '../tree-words';
 import type { ValidationReportData } from './data';
 
 function Footer({ data }: { data: ValidationReportData }) {
-  return (
-    <View style={styles.footer} fixed>
-      <Text style={{ flex: 1, marginRight: 16 }}>
-        {pdfText(`${data.project.name} · ${data.caseName} · version ${data.caseVersion} · ${formatDateTime(data.generatedAt)}`)}
-        {data.isDemo ? ' · invented demo figures' : ''}
-      </Text>
-      <Text
-        style={{ width: 170, textAlign: 'right' }}
-        render={({ pageNumber, totalPages }) => `Leeway validation report · page ${pageNumber} of ${totalPages}`}
-      />
-    </View>
-  );
+  const about = `${data.project.name} · ${data.caseName} · version ${data.caseVersion} · ${formatDateTime(data.generatedAt)}${data.isDemo ? ' · invented demo figures' : ''}`;
+  return <PageFooter about={about} document="validation report" />;
 }
 
 function Section({ data, title, children }: { data: ValidationReportData; title: string; children: ReactNode }) {
   return (
-    <Page size={data.pageSize} style={styles.page}>
-      <Text style={styles.h2}>{title}</Text>
+    <SectionPage size={data.pageSize} title={title} footer={<Footer data={data} />}>
       {children}
-      <Footer data={data} />
-    </Page>
+    </SectionPage>
   );
 }
 
@@ -102,6 +90,7 @@ export function ValidationReportDocument({ data }: { data: ValidationReportData 
         <Text style={{ lineHeight: 1.4, marginTop: 10, fontSize: 8, color: pdfColours.muted }}>
           {pdfText(`Input fingerprint (SHA-256) ${data.inputHash}; result hash ${data.resultHash}.`)}
         </Text>
+        <Footer data={data} />
       </Page>
 
       <Section data={data} title="The model and its conventions">

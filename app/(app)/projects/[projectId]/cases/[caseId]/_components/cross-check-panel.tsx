@@ -4,6 +4,7 @@ import { useState } from 'react';
 import useSWR from 'swr';
 import { FieldProblems } from '@/components/field-problems';
 import { FormProblem } from '@/components/form-problem';
+import { JobProgress } from '@/components/job-progress';
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { NumberField } from '@/components/number-field';
 import { Button } from '@/components/ui/button';
@@ -121,29 +122,6 @@ function Verdict({ result, currency }: { result: CrossCheckResult; currency: str
   );
 }
 
-function Progress({ check, onCancel, canCancel }: { check: CrossCheck; onCancel: () => void; canCancel: boolean }) {
-  return (
-    <div className="flex items-center gap-3">
-      <div
-        role="progressbar"
-        aria-label="Cross-check progress"
-        aria-valuemin={0}
-        aria-valuemax={100}
-        aria-valuenow={Math.round(check.progress * 100)}
-        className="h-3 w-72 overflow-hidden rounded-full bg-paper-sunk"
-      >
-        <div className="h-full bg-tide-500 transition-[width]" style={{ width: `${check.progress * 100}%` }} />
-      </div>
-      <span className="figures text-caption text-ink-soft">{check.progress > 0 ? `${Math.round(check.progress * 100)} %` : 'Waiting for a worker'}</span>
-      {canCancel ? (
-        <Button variant="quiet" onClick={onCancel}>
-          Cancel
-        </Button>
-      ) : null}
-    </div>
-  );
-}
-
 /**
  * The case's cross-checks (docs/engine.md §11): an independent least-squares Monte Carlo of the
  * saved version, queued as a job, compared with the lattice's value and convergence band.
@@ -213,7 +191,14 @@ export function CrossCheckPanel({ caseId, currency, canStart, unsaved }: { caseI
             <p className="text-caption text-ink-muted">
               Version {latest.caseVersion}, started {formatDateTime(latest.createdAt)}
             </p>
-            {latest.status === 'running' ? <Progress check={latest} canCancel={canStart} onCancel={() => void cancel(latest.id)} /> : null}
+            {latest.status === 'running' ? (
+              <JobProgress
+                label="Cross-check progress"
+                progress={latest.progress}
+                state={latest.progress > 0 ? `${Math.round(latest.progress * 100)} %` : 'Waiting for a worker'}
+                onCancel={canStart ? () => void cancel(latest.id) : undefined}
+              />
+            ) : null}
             {latest.status === 'failed' ? <p className="text-brick-700">Failed: {latest.error}</p> : null}
             {latest.status === 'cancelled' ? <p className="text-ink-soft">Cancelled.</p> : null}
             {latest.result ? <Verdict result={latest.result} currency={currency} /> : null}

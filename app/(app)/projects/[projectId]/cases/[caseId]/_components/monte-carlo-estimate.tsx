@@ -4,6 +4,7 @@ import { useState } from 'react';
 import useSWR from 'swr';
 import { HistogramChart } from '@/components/charts/histogram-chart';
 import { FormProblem } from '@/components/form-problem';
+import { JobProgress } from '@/components/job-progress';
 import { Button } from '@/components/ui/button';
 import { getJson, sendJson } from '@/lib/api-client';
 import { formatPercent } from '@/lib/format';
@@ -190,32 +191,20 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
       <FormProblem message={problem} />
       {state ? (
         <div className="flex flex-col gap-2" aria-live="polite">
-          <div className="flex items-center gap-3">
-            <div
-              role="progressbar"
-              aria-label="Simulation progress"
-              aria-valuemin={0}
-              aria-valuemax={100}
-              aria-valuenow={Math.round(state.progress * 100)}
-              className="h-3 w-72 overflow-hidden rounded-full bg-paper-sunk"
-            >
-              <div className="h-full bg-tide-500 transition-[width]" style={{ width: `${state.progress * 100}%` }} />
-            </div>
-            <span className="figures text-caption text-ink-soft">
-              {state.status === 'running'
+          <JobProgress
+            label="Simulation progress"
+            progress={state.progress}
+            state={
+              state.status === 'running'
                 ? `${Math.round(state.progress * 100)} %`
                 : state.status === 'done'
                   ? 'Done'
                   : state.status === 'cancelled'
                     ? 'Cancelled'
-                    : `Failed: ${state.error}`}
-            </span>
-            {state.status === 'running' ? (
-              <Button variant="quiet" onClick={() => void cancel()}>
-                Cancel
-              </Button>
-            ) : null}
-          </div>
+                    : `Failed: ${state.error}`
+            }
+            onCancel={state.status === 'running' ? () => void cancel() : undefined}
+          />
         </div>
       ) : null}
       {result ? (
