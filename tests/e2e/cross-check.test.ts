@@ -30,7 +30,7 @@ describe('cross-checking a case', () => {
     const { page } = await signedInPage('reviewer@kestrelbay.example');
     await page.goto(plant.url);
     await page.getByRole('tab', { name: 'Results' }).click();
-    const paths = page.getByLabel('Paths in each pass');
+    const paths = page.getByLabel('Cross-check paths (each pass)');
     await expect.poll(() => paths.isVisible(), { timeout: 30_000 }).toBe(true);
     await paths.click();
     await paths.press('Control+a');

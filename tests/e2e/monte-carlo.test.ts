@@ -26,7 +26,7 @@ describe('Monte Carlo volatility', () => {
     const { context, page } = await signedInPage('analyst@kestrelbay.example');
     await page.goto(caseUrl);
     await page.getByRole('tab', { name: 'Uncertainty' }).click();
-    await page.getByLabel('Paths').fill('1000000');
+    await page.getByLabel('Paths', { exact: true }).fill('1000000');
     await page.getByLabel('Seed (same seed, same result)').fill('2026');
     await page.getByRole('button', { name: 'Run the simulation' }).click();
     const bar = page.getByRole('progressbar', { name: 'Simulation progress' });

@@ -174,7 +174,7 @@ export function CrossCheckPanel({ caseId, currency, canStart, unsaved }: { caseI
         <div className="mb-4 flex flex-wrap items-end gap-4">
           {/* Not a field of the case: its problems are its own, never the case form's (which would then not save). */}
           <FieldProblems.Provider value={ignoreProblem}>
-            <NumberField label="Paths in each pass" value={paths} onChange={setPaths} integer check={pathsProblem} className="w-40" />
+            <NumberField label="Cross-check paths (each pass)" value={paths} onChange={setPaths} integer check={pathsProblem} className="w-40" />
           </FieldProblems.Provider>
           <Button variant="secondary" busy={busy} disabled={busy || running || pathsProblem(paths) !== null} onClick={() => void start()}>
             Cross-check
