@@ -10,7 +10,7 @@ import 'server-only';
 import { headers } from 'next/headers';
 import { cache } from 'react';
 import { db } from '@/db';
-import { findFirstMembership, findMembership } from '@/db/queries/members';
+import { findMembership } from '@/db/queries/members';
 import { auth } from './auth';
 import { AppError } from './errors';
 import { isRoleName, roleAllows, type Permission, type RoleName } from './permissions';
@@ -40,23 +40,11 @@ export const currentViewer = cache(async (): Promise<Viewer | null> => {
   if (!session) return null;
   const { user } = session;
   const activeOrg = (session.session as { activeOrganizationId?: string | null }).activeOrganizationId ?? null;
-  let membership = activeOrg ? await findMembership(db, { orgId: activeOrg, userId: user.id }) : undefined;
-  let orgId = membership ? activeOrg : null;
-  let orgName: string | null = null;
-  if (!membership) {
-    const first = await findFirstMembership(db, { userId: user.id });
-    if (first) {
-      membership = { id: '', role: first.role, organizationId: first.organizationId };
-      orgId = first.organizationId;
-      orgName = first.organizationName;
-    }
-  }
-  let isDemo = false;
-  if (orgId) {
-    const org = await db.selectFrom('organization').select(['name', 'metadata']).where('id', '=', orgId).executeTakeFirst();
-    orgName = org?.name ?? null;
-    isDemo = org?.metadata?.includes('"demo":true') ?? false;
-  }
+  // One query: the membership in the session's organisation (or the first one) with the organisation's name.
+  const membership = await findMembership(db, { userId: user.id, orgId: activeOrg });
+  const orgId = membership?.organizationId ?? null;
+  const orgName = membership?.organizationName ?? null;
+  const isDemo = membership?.organizationMetadata?.includes('"demo":true') ?? false;
   const role = membership && isRoleName(membership.role) ? membership.role : null;
   return { userId: user.id, name: user.name, email: user.email, orgId, orgName, role, isDemo };
 });

@@ -2,15 +2,24 @@
 import { randomUUID } from 'node:crypto';
 import type { Database } from '../index';
 
-export async function findMembership(db: Database, { orgId, userId }: { orgId: string; userId: string }) {
-  return db.selectFrom('member').select(['id', 'role', 'organizationId']).where('organizationId', '=', orgId).where('userId', '=', userId).executeTakeFirst();
+/**
+ * The user's membership with its organisation's name and demo flag, in one query: in the
+ * organisation given, or (without one, or when it is not theirs) the first they joined.
+ */
+export async function findMembership(db: Database, { userId, orgId }: { userId: string; orgId?: string | null }) {
+  const base = db
+    .selectFrom('member')
+    .innerJoin('organization', 'organization.id', 'member.organizationId')
+    .select(['member.organizationId', 'member.role', 'organization.name as organizationName', 'organization.metadata as organizationMetadata'])
+    .where('member.userId', '=', userId);
+  return (orgId ? await base.where('member.organizationId', '=', orgId).executeTakeFirst() : undefined) ?? findFirstMembership(db, { userId });
 }
 
 export async function findFirstMembership(db: Database, { userId }: { userId: string }) {
   return db
     .selectFrom('member')
     .innerJoin('organization', 'organization.id', 'member.organizationId')
-    .select(['member.organizationId', 'member.role', 'organization.name as organizationName'])
+    .select(['member.organizationId', 'member.role', 'organization.name as organizationName', 'organization.metadata as organizationMetadata'])
     .where('member.userId', '=', userId)
     .orderBy('member.createdAt')
     .executeTakeFirst();
