@@ -21,7 +21,8 @@ import { authSecret, env } from './env';
 import { queueInvitationMail } from './invitation-mail';
 import { linkMail, queueMail } from './mail';
 import { ac, roles } from './permissions';
-import { clearFailures, recordFailure, secondsUntilAllowed } from './sign-in-backoff';
+import { addSignInFailure, clearSignInFailures } from '@/db/queries/sign-in-failures';
+import { secondsUntilAllowed } from './sign-in-backoff';
 
 /** The body field holding a new password, per auth endpoint. */
 const passwordFields: Record<string, string> = {
@@ -95,8 +96,8 @@ export const auth = betterAuth({
       const returned = ctx.context.returned;
       if (isAPIError(returned)) {
         // Only a wrong password counts; refusals for other reasons (unverified e-mail, our own backoff) do not.
-        if (returned.status === 'UNAUTHORIZED') await recordFailure(db, ctx.body.email);
-      } else await clearFailures(db, ctx.body.email);
+        if (returned.status === 'UNAUTHORIZED') await addSignInFailure(db, { email: ctx.body.email });
+      } else await clearSignInFailures(db, { email: ctx.body.email });
     }),
   },
   databaseHooks: {

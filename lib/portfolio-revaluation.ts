@@ -7,6 +7,7 @@ import 'server-only';
 import { sql } from 'kysely';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
+import { findRevaluation as findRevaluationRow, findRunningRevaluation, insertRevaluation } from '@/db/queries/revaluations';
 import { AppError } from './errors';
 import { enqueue } from './jobs/enqueue';
 import { QUEUES } from './jobs/queues';
@@ -14,31 +15,22 @@ import { QUEUES } from './jobs/queues';
 export async function startRevaluation(actor: { orgId: string; userId: string }): Promise<string> {
   return db.transaction().execute(async (trx) => {
     await sql`select pg_advisory_xact_lock(hashtext('portfolio_revaluation'), hashtext(${actor.orgId}))`.execute(trx);
-    const running = await trx
-      .selectFrom('portfolio_revaluation')
-      .select('id')
-      .where('organization_id', '=', actor.orgId)
-      .where('status', '=', 'running')
-      .executeTakeFirst();
-    if (running) throw new AppError('conflict', 'A re-valuation of this portfolio is already running; wait for it to finish.');
-    const row = await trx
-      .insertInto('portfolio_revaluation')
-      .values({ organization_id: actor.orgId, requested_by: actor.userId })
-      .returning('id')
-      .executeTakeFirstOrThrow();
+    if (await findRunningRevaluation(trx, { orgId: actor.orgId }))
+      throw new AppError('conflict', 'A re-valuation of this portfolio is already running; wait for it to finish.');
+    const id = await insertRevaluation(trx, { orgId: actor.orgId, userId: actor.userId });
     await recordAudit(trx, {
       orgId: actor.orgId,
       actorId: actor.userId,
       action: 'portfolio.revalue',
       subjectType: 'organization',
       subjectId: actor.orgId,
-      detail: { revaluation: row.id },
+      detail: { revaluation: id },
     });
-    await enqueue(QUEUES.revaluation, { revaluationId: row.id, orgId: actor.orgId, userId: actor.userId }, { executor: trx, id: row.id });
-    return row.id;
+    await enqueue(QUEUES.revaluation, { revaluationId: id, orgId: actor.orgId, userId: actor.userId }, { executor: trx, id });
+    return id;
   });
 }
 
 export async function findRevaluation(orgId: string, id: string) {
-  return db.selectFrom('portfolio_revaluation').selectAll().where('organization_id', '=', orgId).where('id', '=', id).executeTakeFirst();
+  return findRevaluationRow(db, { orgId, id });
 }

@@ -36,3 +36,8 @@ export async function listAttachments(db: Database, { orgId, caseId }: { orgId: 
 export async function findAttachment(db: Database, { orgId, attachmentId }: { orgId: string; attachmentId: string }) {
   return db.selectFrom('attachment').selectAll().where('organization_id', '=', orgId).where('id', '=', attachmentId).executeTakeFirst();
 }
+
+/** Removes a document; its case and name when it was there. */
+export async function deleteAttachment(db: Database, { orgId, attachmentId }: { orgId: string; attachmentId: string }) {
+  return db.deleteFrom('attachment').where('organization_id', '=', orgId).where('id', '=', attachmentId).returning(['case_id', 'filename']).executeTakeFirst();
+}

@@ -6,44 +6,31 @@
  * the queue gave up on is marked failed (its dead-letter queue).
  */
 import { db } from '@/db';
+import { countRevaluation, finishRevaluation, revaluationStatus } from '@/db/queries/revaluations';
 import { listCasesValuedByOtherEngines } from '@/db/queries/valuation-runs';
 import { ENGINE_VERSION } from '@/lattice';
 import { valueAndStore } from '../store-valuation';
 import type { RevaluationJob } from './queues';
 
 export async function revaluePortfolio(job: RevaluationJob): Promise<void> {
-  const request = await db.selectFrom('portfolio_revaluation').select('status').where('id', '=', job.revaluationId).executeTakeFirst();
-  if (request?.status !== 'running') return;
+  const id = job.revaluationId;
+  if ((await revaluationStatus(db, { id })) !== 'running') return;
   const stale = await listCasesValuedByOtherEngines(db, { orgId: job.orgId, engineVersion: ENGINE_VERSION });
-  await db.updateTable('portfolio_revaluation').set({ total: stale.length, done: 0, failed: 0 }).where('id', '=', job.revaluationId).execute();
+  await countRevaluation(db, { id, total: stale.length, done: 0, failed: 0 });
   let failed = 0;
   for (const [k, stored] of stale.entries()) {
     try {
-      await valueAndStore(stored, { orgId: job.orgId, userId: job.userId }, { owner: `revaluation:${job.revaluationId}` });
+      await valueAndStore(stored, { orgId: job.orgId, userId: job.userId }, { owner: `revaluation:${id}` });
     } catch (error) {
       failed++;
-      console.error(`[leeway worker] re-valuation ${job.revaluationId}: case ${stored.id} not valued:`, error instanceof Error ? error.message : error);
+      console.error(`[leeway worker] re-valuation ${id}: case ${stored.id} not valued:`, error instanceof Error ? error.message : error);
     }
-    await db
-      .updateTable('portfolio_revaluation')
-      .set({ done: k + 1, failed })
-      .where('id', '=', job.revaluationId)
-      .execute();
+    await countRevaluation(db, { id, done: k + 1, failed });
   }
-  await db
-    .updateTable('portfolio_revaluation')
-    .set({ status: 'done', finished_at: new Date() })
-    .where('id', '=', job.revaluationId)
-    .where('status', '=', 'running')
-    .execute();
+  await finishRevaluation(db, { id });
 }
 
 /** Marks the request failed when the queue gave up on it. */
 export async function markRevaluationGaveUp(job: RevaluationJob): Promise<void> {
-  await db
-    .updateTable('portfolio_revaluation')
-    .set({ status: 'failed', error: 'The worker running it stopped more than once; start it again.', finished_at: new Date() })
-    .where('id', '=', job.revaluationId)
-    .where('status', '=', 'running')
-    .execute();
+  await finishRevaluation(db, { id: job.revaluationId, error: 'The worker running it stopped more than once; start it again.' });
 }

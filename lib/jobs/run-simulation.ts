@@ -5,28 +5,15 @@
  * final; a thread that crashed, or a worker told to stop, throws so the queue runs it again.
  */
 import { db } from '@/db';
+import { finishSimulation, setSimulationProgress } from '@/db/queries/simulations';
 import type { SimulationResult } from '../volatility/monte-carlo';
 import { SIMULATION_DEADLINE_SECONDS, type SimulationJob } from './queues';
 import { runInThread } from './thread-job';
 
-async function finish(id: string, values: { status: 'done' | 'failed'; result?: SimulationResult; error?: string }) {
-  await db
-    .updateTable('volatility_simulation')
-    .set({
-      status: values.status,
-      progress: values.status === 'done' ? 1 : undefined,
-      result: values.result ? JSON.stringify(values.result) : null,
-      error: values.error ?? null,
-      finished_at: new Date(),
-    })
-    .where('id', '=', id)
-    .where('status', '=', 'running')
-    .execute();
-}
-
 /** Marks the run failed when the queue gave up on it (its dead-letter queue). */
 export async function markSimulationGaveUp(job: SimulationJob) {
-  await finish(job.simulationId, {
+  await finishSimulation(db, {
+    id: job.simulationId,
     status: 'failed',
     error: 'The worker running this estimate stopped more than once; start it again, perhaps with fewer paths.',
   });
@@ -35,30 +22,19 @@ export async function markSimulationGaveUp(job: SimulationJob) {
 export async function runSimulation(job: SimulationJob): Promise<void> {
   const { simulationId: id } = job;
   // A new attempt starts from nothing; a row that is no longer running was cancelled while it waited.
-  const claimed = await db
-    .updateTable('volatility_simulation')
-    .set({ progress: 0 })
-    .where('id', '=', id)
-    .where('status', '=', 'running')
-    .returning('id')
-    .executeTakeFirst();
-  if (!claimed) return;
-
+  if (!(await setSimulationProgress(db, { id, progress: 0 }))) return;
   const outcome = await runInThread<SimulationResult>({
     file: 'simulation-worker.mjs',
     data: { schedule: job.schedule, spec: job.spec },
     deadlineSeconds: SIMULATION_DEADLINE_SECONDS,
-    onProgress: async (progress) =>
-      !!(await db
-        .updateTable('volatility_simulation')
-        .set({ progress })
-        .where('id', '=', id)
-        .where('status', '=', 'running')
-        .returning('id')
-        .executeTakeFirst()),
+    onProgress: (progress) => setSimulationProgress(db, { id, progress }),
   });
-  if (outcome.kind === 'done') await finish(id, { status: 'done', result: outcome.result });
-  else if (outcome.kind === 'failed') await finish(id, { status: 'failed', error: outcome.error });
+  if (outcome.kind === 'done') await finishSimulation(db, { id, status: 'done', result: outcome.result });
+  else if (outcome.kind === 'failed') await finishSimulation(db, { id, status: 'failed', error: outcome.error });
   else if (outcome.kind === 'deadline')
-    await finish(id, { status: 'failed', error: `The estimate ran longer than ${SIMULATION_DEADLINE_SECONDS} s and was stopped; try fewer paths.` });
+    await finishSimulation(db, {
+      id,
+      status: 'failed',
+      error: `The estimate ran longer than ${SIMULATION_DEADLINE_SECONDS} s and was stopped; try fewer paths.`,
+    });
 }

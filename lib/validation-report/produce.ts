@@ -3,10 +3,7 @@
  * kept with the case as a supporting document, which a reviewer attaches before deciding.
  */
 import 'server-only';
-import { createHash } from 'node:crypto';
-import { db } from '@/db';
-import { addAttachment } from '@/db/queries/attachments';
-import { recordAudit } from '@/db/queries/audit';
+import { attachDocument } from '../attachments';
 import type { PageSize } from '../board-pack/data';
 import { renderPdfInThread } from '../board-pack/pdf-thread';
 import type { Member } from '../dal';
@@ -25,32 +22,16 @@ export async function validationReportWorkbook(member: Member, caseId: string, s
   return { bytes: await validationWorkbook(data), filename: filename(data.caseName, data.caseVersion, 'xlsx') };
 }
 
-/** Renders the A4 report and keeps it with the case (Documents), with its audit entry in the same transaction. */
+/** Renders the A4 report and keeps it with the case (Documents), audited as such. */
 export async function attachValidationReport(member: Member, caseId: string, signal?: AbortSignal) {
-  const data = await gatherValidationReport(member, caseId, 'A4', signal);
-  const pdf = await renderPdfInThread('validation-report-worker.mjs', data);
-  const name = filename(data.caseName, data.caseVersion, 'pdf')
-    .replace(/[\\/\u0000-\u001f]/g, '_')
-    .slice(0, 200);
-  const made = await db.transaction().execute(async (trx) => {
-    const made = await addAttachment(trx, {
-      orgId: member.orgId,
-      caseId,
-      filename: name,
-      kind: 'pdf',
-      data: pdf,
-      sha256: createHash('sha256').update(pdf).digest('hex'),
-      uploadedBy: member.userId,
-    });
-    await recordAudit(trx, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.attach_validation_report',
-      subjectType: 'case',
-      subjectId: caseId,
-      detail: { name: data.caseName, version: data.caseVersion, file: name, size: pdf.length },
-    });
-    return made;
-  });
-  return { id: made.id, filename: made.filename, kind: made.kind, size: made.size, uploadedBy: member.name, uploadedAt: made.created_at };
+  return attachDocument(
+    member,
+    caseId,
+    async () => {
+      const data = await gatherValidationReport(member, caseId, 'A4', signal);
+      const pdf = await renderPdfInThread('validation-report-worker.mjs', data);
+      return { filename: filename(data.caseName, data.caseVersion, 'pdf'), kind: 'pdf' as const, data: pdf, detail: { version: data.caseVersion } };
+    },
+    'case.attach_validation_report',
+  );
 }

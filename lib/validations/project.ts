@@ -17,3 +17,6 @@ export const projectUpdateSchema = z.object({
   description: z.string().trim().max(2000).optional(),
   status: z.enum(['active', 'archived']).optional(),
 });
+
+export type ProjectCreate = z.infer<typeof projectCreateSchema>;
+export type ProjectUpdate = z.infer<typeof projectUpdateSchema>;

@@ -8,6 +8,7 @@ import 'server-only';
 import { sql } from 'kysely';
 import { db } from '@/db';
 import { recordAudit, type AuditEvent } from '@/db/queries/audit';
+import { countRunningSimulations, findSimulation as findSimulationRow, insertSimulation, markSimulationCancelled } from '@/db/queries/simulations';
 import type { CashFlowSchedule } from '../cash-flows';
 import { AppError } from '../errors';
 import { cancelJob, enqueue } from '../jobs/enqueue';
@@ -29,46 +30,29 @@ export async function startSimulation(args: {
   return db.transaction().execute(async (trx) => {
     // One organisation's requests are counted one at a time (the lock), so the limit holds under a burst.
     await sql`select pg_advisory_xact_lock(hashtext('volatility_simulation'), hashtext(${args.orgId}))`.execute(trx);
-    const { running } = await trx
-      .selectFrom('volatility_simulation')
-      .select((eb) => eb.fn.countAll<number>().as('running'))
-      .where('organization_id', '=', args.orgId)
-      .where('status', '=', 'running')
-      .executeTakeFirstOrThrow();
-    if (Number(running) >= SIMULATIONS_PER_ORGANISATION)
+    if ((await countRunningSimulations(trx, { orgId: args.orgId })) >= SIMULATIONS_PER_ORGANISATION)
       throw new AppError(
         'rate_limited',
         `Your organisation already has ${SIMULATIONS_PER_ORGANISATION} Monte Carlo estimates waiting or running; wait for one to finish, or cancel one, and try again.`,
         undefined,
         15,
       );
-    const row = await trx
-      .insertInto('volatility_simulation')
-      .values({ organization_id: args.orgId, case_id: args.caseId, spec: JSON.stringify(args.spec), created_by: args.userId })
-      .returning('id')
-      .executeTakeFirstOrThrow();
-    await recordAudit(trx, args.audit(row.id));
-    await enqueue(QUEUES.simulation, { simulationId: row.id, schedule: args.schedule, spec: args.spec }, { executor: trx, id: row.id });
-    return row.id;
+    const id = await insertSimulation(trx, { orgId: args.orgId, caseId: args.caseId, spec: args.spec, userId: args.userId });
+    await recordAudit(trx, args.audit(id));
+    await enqueue(QUEUES.simulation, { simulationId: id, schedule: args.schedule, spec: args.spec }, { executor: trx, id });
+    return id;
   });
 }
 
 /** Marks a running simulation cancelled and withdraws its job; returns false when it had already ended. */
 export async function cancelSimulation(orgId: string, id: string): Promise<boolean> {
   return db.transaction().execute(async (trx) => {
-    const updated = await trx
-      .updateTable('volatility_simulation')
-      .set({ status: 'cancelled', finished_at: new Date() })
-      .where('organization_id', '=', orgId)
-      .where('id', '=', id)
-      .where('status', '=', 'running')
-      .returning('id')
-      .executeTakeFirst();
-    if (updated) await cancelJob(QUEUES.simulation, id, trx);
-    return !!updated;
+    const cancelled = await markSimulationCancelled(trx, { orgId, id });
+    if (cancelled) await cancelJob(QUEUES.simulation, id, trx);
+    return cancelled;
   });
 }
 
 export async function findSimulation(orgId: string, id: string) {
-  return db.selectFrom('volatility_simulation').selectAll().where('organization_id', '=', orgId).where('id', '=', id).executeTakeFirst();
+  return findSimulationRow(db, { orgId, id });
 }
