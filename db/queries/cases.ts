@@ -102,3 +102,29 @@ export async function duplicateCase(db: Database, args: { orgId: string; caseId:
     content: { name: args.name, cashFlows: source.cash_flows, settings: source.settings, options: source.options },
   });
 }
+
+/** Every case of the organisation with its project, for pickers (by project name, then age). */
+export async function listCasesWithProjects(db: Database, { orgId }: { orgId: string }) {
+  return db
+    .selectFrom('case')
+    .innerJoin('project', 'project.id', 'case.project_id')
+    .select(['case.id', 'case.name', 'case.status', 'project.id as projectId', 'project.name as projectName'])
+    .where('case.organization_id', '=', orgId)
+    .orderBy('project.name')
+    .orderBy('case.created_at')
+    .execute();
+}
+
+/**
+ * Deletes a case unless it was ever submitted (its review record is kept: such a case is never
+ * deleted); its name and project when it was deleted.
+ */
+export async function deleteCaseWithoutReviews(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
+  return db
+    .deleteFrom('case')
+    .where('organization_id', '=', orgId)
+    .where('id', '=', caseId)
+    .where((eb) => eb.not(eb.exists(eb.selectFrom('case_snapshot').select('case_snapshot.id').whereRef('case_snapshot.case_id', '=', 'case.id'))))
+    .returning(['name', 'project_id'])
+    .executeTakeFirst();
+}

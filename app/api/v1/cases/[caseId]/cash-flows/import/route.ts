@@ -1,8 +1,5 @@
 // POST /api/v1/cases/{id}/cash-flows/import – read a cash-flow workbook: a preview, or (confirm=true, version=N) save it into the case
 import { NextResponse } from 'next/server';
-import { db } from '@/db';
-import { recordAudit } from '@/db/queries/audit';
-import { saveCase } from '@/db/queries/cases';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import { readUploadForm } from '@/lib/uploads/read-form';
@@ -11,13 +8,13 @@ import { analyseCashFlows, type CashFlowSchedule } from '@/lib/cash-flows';
 import { AppError } from '@/lib/errors';
 import { readCashFlowWorkbook } from '@/lib/spreadsheets/cash-flow-workbook';
 import { inspectUpload } from '@/lib/uploads/inspect';
-import { requireCase } from '@/lib/cases/require-case';
+import { readCase, saveCase } from '@/lib/cases/service';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 export const POST = withAuth<{ caseId: string }>(async ({ member, params, request }) => {
-  const stored = await requireCase(db, member.orgId, params.caseId);
+  const stored = await readCase(member, params.caseId);
   const { form, file, bytes } = await readUploadForm(request, { what: 'the workbook', choose: 'Choose an XLSX file.' });
   inspectUpload(file.name, bytes, ['xlsx']);
   const read = await readCashFlowWorkbook(bytes);
@@ -33,26 +30,12 @@ export const POST = withAuth<{ caseId: string }>(async ({ member, params, reques
   const version = Number(form.get('version'));
   if (!Number.isInteger(version) || version < 1)
     throw new AppError('unprocessable', 'Send the version the import was previewed on.', { version: ['Required to confirm.'] });
-  // The change and its audit entry commit together or not at all.
-  const saved = await db.transaction().execute(async (trx) => {
-    const saved = await saveCase(trx, {
-      orgId: member.orgId,
-      caseId: stored.id,
-      expectedVersion: version,
-      content: { name: stored.name, cashFlows, settings: stored.settings, options: stored.options },
-    });
-    if (!saved.ok && saved.reason === 'in_review')
-      throw new AppError('conflict', 'This case is in review and cannot be edited until a reviewer returns it. Nothing was imported.');
-    if (!saved.ok) throw new AppError('conflict', 'This case was saved by someone else meanwhile; reload it and import again. Nothing was imported.');
-    await recordAudit(trx, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: 'case.import',
-      subjectType: 'case',
-      subjectId: stored.id,
-      detail: { name: stored.name, file: file.name, years: read.input.rows.length, version: saved.row.version },
-    });
-    return saved;
+  const saved = await saveCase(member, stored.id, {
+    expectedVersion: version,
+    content: { name: stored.name, cashFlows, settings: stored.settings, options: stored.options },
+    action: 'case.import',
+    detail: { file: file.name, years: read.input.rows.length },
+    undone: 'Nothing was imported.',
   });
-  return NextResponse.json({ case: presentCase(saved.row) });
+  return NextResponse.json({ case: presentCase(saved) });
 }, operations.importCashFlows);

@@ -1,0 +1,81 @@
+/**
+ * Cases as routes change them: each change and its audit entry in one transaction, every lookup
+ * scoped to the member's organisation (another organisation's case is "no such case", 404).
+ * Valuing, duplicating, submitting and deciding live in their own modules for now
+ * (lib/store-valuation.ts, lib/review/).
+ */
+import 'server-only';
+import { db } from '@/db';
+import { recordAudit } from '@/db/queries/audit';
+import { deleteCaseWithoutReviews, findCase, listCasesWithProjects, saveCase as updateCase, type CaseContent } from '@/db/queries/cases';
+import type { Case } from '@/db/types';
+import type { Member } from '../dal';
+import { AppError } from '../errors';
+import { missingCase, requireCase } from './require-case';
+
+export async function listCases(member: Member) {
+  return listCasesWithProjects(db, { orgId: member.orgId });
+}
+
+export async function readCase(member: Member, caseId: string): Promise<Case> {
+  return requireCase(db, member.orgId, caseId);
+}
+
+/**
+ * Saves a case's content on the version it was based on (409 when someone saved since, or when
+ * it is in review or approved), with the audit entry `action` and its detail. `undone` ends each
+ * refusal: what did not happen ("Nothing was changed.").
+ */
+export async function saveCase(
+  member: Member,
+  caseId: string,
+  args: { expectedVersion: number; content: CaseContent; action: string; detail: Record<string, unknown>; undone: string },
+): Promise<Case> {
+  return db.transaction().execute(async (trx) => {
+    const saved = await updateCase(trx, { orgId: member.orgId, caseId, expectedVersion: args.expectedVersion, content: args.content });
+    if (!saved.ok && saved.reason === 'not_found') throw missingCase();
+    if (!saved.ok && saved.reason === 'in_review')
+      throw new AppError('conflict', `This case is in review and cannot be edited until a reviewer returns it. ${args.undone}`);
+    if (!saved.ok && saved.reason === 'approved')
+      throw new AppError(
+        'conflict',
+        `This case is approved: start a revision to change it (the approved version and its board pack stay as they are). ${args.undone}`,
+      );
+    if (!saved.ok)
+      throw new AppError(
+        'conflict',
+        `This case was saved by someone else meanwhile (now version ${saved.currentVersion}); reload it and try again. Nothing was overwritten.`,
+      );
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: args.action,
+      subjectType: 'case',
+      subjectId: saved.row.id,
+      detail: { version: saved.row.version, name: saved.row.name, ...args.detail },
+    });
+    return saved.row;
+  });
+}
+
+export async function deleteCase(member: Member, caseId: string): Promise<void> {
+  await db.transaction().execute(async (trx) => {
+    const gone = await deleteCaseWithoutReviews(trx, { orgId: member.orgId, caseId });
+    if (!gone) {
+      if (await findCase(trx, { orgId: member.orgId, caseId }))
+        throw new AppError(
+          'conflict',
+          'This case has been submitted for review, so its record is kept: it cannot be deleted. Duplicate it to start a new version.',
+        );
+      throw missingCase();
+    }
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.delete',
+      subjectType: 'case',
+      subjectId: caseId,
+      detail: { name: gone.name, projectId: gone.project_id },
+    });
+  });
+}
