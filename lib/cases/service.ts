@@ -7,14 +7,68 @@
 import 'server-only';
 import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
-import { deleteCaseWithoutReviews, findCase, listCasesWithProjects, saveCase as updateCase, type CaseContent } from '@/db/queries/cases';
+import {
+  createCase as insertCase,
+  deleteCaseWithoutReviews,
+  duplicateCase as copyCase,
+  findCase,
+  listCases as listCasesOfProject,
+  listCasesWithProjects,
+  saveCase as updateCase,
+  startRevision,
+  type CaseContent,
+} from '@/db/queries/cases';
+import { latestRunByCase } from '@/db/queries/summaries';
 import type { Case } from '@/db/types';
 import type { Member } from '../dal';
 import { AppError } from '../errors';
+import { readProject } from '../projects/service';
+import { statusLabels } from '../review/transitions';
 import { missingCase, requireCase } from './require-case';
 
 export async function listCases(member: Member) {
   return listCasesWithProjects(db, { orgId: member.orgId });
+}
+
+/** A project's cases, each with its latest stored valuation (null before any). */
+export async function listProjectCases(member: Member, projectId: string) {
+  await readProject(member, projectId);
+  const scope = { orgId: member.orgId, projectId };
+  const [cases, latest] = await Promise.all([listCasesOfProject(db, scope), latestRunByCase(db, scope)]);
+  return cases.map((c) => ({ stored: c, latest: latest.get(c.id) ?? null }));
+}
+
+export async function createCase(member: Member, projectId: string, content: CaseContent): Promise<Case> {
+  return db.transaction().execute(async (trx) => {
+    const made = await insertCase(trx, { orgId: member.orgId, projectId, createdBy: member.userId, content });
+    if (!made) throw new AppError('not_found', 'No such project in your organisation.');
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.create',
+      subjectType: 'case',
+      subjectId: made.id,
+      detail: { name: content.name, projectId },
+    });
+    return made;
+  });
+}
+
+/** Copies a case into a new, independent draft of the same project. */
+export async function duplicateCase(member: Member, caseId: string, name: string): Promise<Case> {
+  return db.transaction().execute(async (trx) => {
+    const copy = await copyCase(trx, { orgId: member.orgId, caseId, name, createdBy: member.userId });
+    if (!copy) throw missingCase();
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.duplicate',
+      subjectType: 'case',
+      subjectId: copy.id,
+      detail: { from: caseId, name: copy.name, projectId: copy.project_id },
+    });
+    return copy;
+  });
 }
 
 export async function readCase(member: Member, caseId: string): Promise<Case> {
@@ -77,5 +131,25 @@ export async function deleteCase(member: Member, caseId: string): Promise<void> 
       subjectId: caseId,
       detail: { name: gone.name, projectId: gone.project_id },
     });
+  });
+}
+
+/** Starts a revision of an approved case: a draft at the next version (the approved snapshot and its pack stay). */
+export async function reviseCase(member: Member, caseId: string): Promise<Case> {
+  return db.transaction().execute(async (trx) => {
+    const revised = await startRevision(trx, { orgId: member.orgId, caseId });
+    if (!revised) {
+      const found = await requireCase(trx, member.orgId, caseId);
+      throw new AppError('conflict', `Only an approved case is revised; this one is ${statusLabels[found.status].toLowerCase()} and can be edited as it is.`);
+    }
+    await recordAudit(trx, {
+      orgId: member.orgId,
+      actorId: member.userId,
+      action: 'case.revise',
+      subjectType: 'case',
+      subjectId: revised.id,
+      detail: { name: revised.name, version: revised.version },
+    });
+    return revised;
   });
 }

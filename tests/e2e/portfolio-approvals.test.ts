@@ -38,7 +38,8 @@ describe('the portfolio and project pages', () => {
   it('show each project’s approval with a board pack that downloads', async () => {
     const executive = await signedInPage('executive@kestrelbay.example');
     await executive.page.goto('/portfolio');
-    const row = executive.page.getByRole('row', { name: /Phased bio-resin plant/ });
+    // The projects table's row (the watch list beside it may name the same project).
+    const row = executive.page.getByRole('table', { name: /^Projects with their latest valuation/ }).getByRole('row', { name: /Phased bio-resin plant/ });
     await expect.poll(() => row.getByText('Approved').isVisible(), { timeout: 30_000 }).toBe(true);
     const approved = await latestApproval(plant.projectId);
     expect(await row.textContent()).toContain(`${approved.case_name} v${approved.case_version}`);
