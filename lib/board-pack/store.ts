@@ -4,6 +4,11 @@
  * thread (.data/board-pack-worker.mjs), never on the request's event loop.
  */
 import 'server-only';
+import { db } from '@/db';
+import { latestApprovedSnapshot } from '@/db/queries/reviews';
+import { requireCase } from '../cases/require-case';
+import type { Member } from '../dal';
+import { AppError } from '../errors';
 import type { PageSize } from './data';
 import { renderPdfInThread } from './pdf-thread';
 import { boardPackData, findBoardPack, saveBoardPack } from './records';
@@ -14,4 +19,12 @@ export async function ensureBoardPack(orgId: string, snapshotId: string, pageSiz
   if (stored) return stored;
   const pdf = await renderPdfInThread('board-pack-worker.mjs', await boardPackData(orgId, snapshotId, pageSize));
   return saveBoardPack(orgId, snapshotId, pageSize, pdf);
+}
+
+/** The board pack of the case's latest approved version, for a member of its organisation. */
+export async function latestBoardPack(member: Member, caseId: string, pageSize: PageSize) {
+  const found = await requireCase(db, member.orgId, caseId);
+  const snapshot = await latestApprovedSnapshot(db, { orgId: member.orgId, caseId: found.id });
+  if (!snapshot) throw new AppError('not_found', 'This case has no approved snapshot yet, so there is no board pack.');
+  return { caseName: found.name, ...(await ensureBoardPack(member.orgId, snapshot.id, pageSize)) };
 }

@@ -8,7 +8,7 @@ import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { createProject as insertProject, deleteProjectWithoutReviews, findProject, updateProject as changeProject } from '@/db/queries/projects';
 import { findSettings } from '@/db/queries/settings';
-import { listProjectSummaries } from '@/db/queries/summaries';
+import { listProjectActivity, listProjectSummaries } from '@/db/queries/summaries';
 import type { Project } from '@/db/types';
 import type { Member } from '../dal';
 import { AppError } from '../errors';
@@ -78,4 +78,10 @@ export async function deleteProject(member: Member, projectId: string): Promise<
       detail: { name },
     });
   });
+}
+
+/** The audit trail of a project and its cases, newest first. */
+export async function readProjectActivity(member: Member, projectId: string) {
+  await readProject(member, projectId);
+  return listProjectActivity(db, { orgId: member.orgId, projectId });
 }

@@ -1,18 +1,17 @@
 // POST /api/v1/volatility/simulations – start a Monte Carlo volatility estimate for a case (answers its id at once)
 import { NextResponse } from 'next/server';
-import { db } from '@/db';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import type { CashFlowSchedule } from '@/lib/cash-flows';
 import { AppError } from '@/lib/errors';
 import { startSimulation } from '@/lib/volatility/simulation-jobs';
-import { requireCase } from '@/lib/cases/require-case';
+import { readCase } from '@/lib/cases/service';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 export const POST = withAuth(async ({ member, body }) => {
-  const found = await requireCase(db, member.orgId, body.caseId);
+  const found = await readCase(member, body.caseId);
   const schedule = found.cash_flows as CashFlowSchedule;
   if (schedule.rows.length < 3)
     throw new AppError('unprocessable', 'The cash flows need year 0 and at least two more years for a Monte Carlo estimate.', {

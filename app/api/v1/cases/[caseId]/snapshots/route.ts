@@ -1,21 +1,17 @@
 // GET /api/v1/cases/{id}/snapshots – the case's review history: every frozen snapshot and its decision, and for a
 // submission in review what changed since the version last returned and whether the same inputs were approved before
 import { NextResponse } from 'next/server';
-import { db } from '@/db';
-import { listSnapshots } from '@/db/queries/reviews';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
-import { versionChanges } from '@/lib/review/version-changes';
-import { requireCase } from '@/lib/cases/require-case';
+import { readReviewHistory } from '@/lib/review/history';
 
 export const dynamic = 'force-dynamic';
 
 export const GET = withAuth<{ caseId: string }>(async ({ member, params }) => {
-  const found = await requireCase(db, member.orgId, params.caseId);
-  const snapshots = await listSnapshots(db, { orgId: member.orgId, caseId: found.id });
+  const { found, snapshots, changes } = await readReviewHistory(member, params.caseId);
   return NextResponse.json({
     status: found.status,
-    changes: await versionChanges(member.orgId, found.id),
+    changes,
     snapshots: snapshots.map((s) => ({
       id: s.id,
       caseVersion: s.case_version,
