@@ -3,7 +3,7 @@
  * per origin mode), and the rights the user named (a template or a raw switch), which are what
  * results are reported for.
  */
-import type { Cost, ExerciseWindow } from './schema';
+import type { Cost, ExerciseWindow, OptionTemplate } from './schema';
 import type { Money, Years } from './units';
 
 export interface CompiledMode {
@@ -24,7 +24,8 @@ export interface CompiledSwitch {
   field: string;
 }
 
-export type RightKind = 'expand' | 'contract' | 'abandon' | 'defer' | 'stage' | 'switch' | 'custom';
+/** A template's type, or `custom` for a switch given directly (the advanced form). */
+export type RightKind = OptionTemplate['type'] | 'custom';
 
 export interface Right {
   id: string;

@@ -66,13 +66,35 @@ function modelDates(model: ProjectModel): Years[] {
   const cost = (c: Cost) => {
     if (Array.isArray(c)) dates.push(...c.map((e) => e.from));
   };
+  // Every option type names its dates here: the compiler refuses a type left out.
   for (const o of model.options ?? []) {
-    if (o.type === 'stage') dates.push(...o.payments.map((p) => p.at));
-    else window(o.window);
-    if (o.type === 'expand' || o.type === 'defer' || o.type === 'switch') cost(o.cost);
-    if (o.type === 'switch') cost(o.backCost);
-    if (o.type === 'contract') cost(o.savings);
-    if (o.type === 'abandon') cost(o.salvage);
+    switch (o.type) {
+      case 'stage':
+        dates.push(...o.payments.map((p) => p.at));
+        break;
+      case 'expand':
+      case 'defer':
+        window(o.window);
+        cost(o.cost);
+        break;
+      case 'switch':
+        window(o.window);
+        cost(o.cost);
+        cost(o.backCost);
+        break;
+      case 'contract':
+        window(o.window);
+        cost(o.savings);
+        break;
+      case 'abandon':
+        window(o.window);
+        cost(o.salvage);
+        break;
+      default: {
+        const unknown: never = o;
+        return unknown;
+      }
+    }
   }
   for (const sw of model.switches ?? []) {
     window(sw.window);

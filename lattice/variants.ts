@@ -3,7 +3,7 @@
  * some of its rights (stand-alone and incremental values), and with one input moved
  * (sensitivities). Each variant is a plain model that passes the same checks as the original.
  */
-import type { CompiledModel } from './compiled';
+import type { CompiledModel, RightKind } from './compiled';
 import { templateIds } from './compile-templates';
 import { scaleCost } from './cost';
 import type { OptionTemplate, ProjectModel } from './schema';
@@ -108,7 +108,7 @@ function costBump(model: ProjectModel, k: number, factor: number): ProjectModel 
 }
 
 /** The field each kind of right keeps its money in, and how a tornado labels it. */
-const costField: Record<string, [field: string, label: string]> = {
+const costField: Record<RightKind, [field: string, label: string]> = {
   expand: ['cost', 'cost'],
   defer: ['cost', 'cost'],
   contract: ['savings', 'savings'],

@@ -142,17 +142,33 @@ function fromTemplates(model: ProjectModel): StateGraph {
       });
     } else if (s.phase === 'running') {
       options.forEach((o, k) => {
-        // A sale is open whether or not the plant is paused; it sells the plant's scale as built.
-        if (o.type === 'abandon') add(k, { phase: 'closed' }, times(o.salvage, o.fixedSalvage ? -1 : -plantScale(s.used)), o.window);
-        if (s.paused !== null) {
-          if (o.type === 'switch' && s.paused === k) add(k, { ...s, paused: null }, o.backCost, o.window ?? always);
-          return;
-        }
         const used = s.used.includes(k);
         const withIt = [...s.used, k].sort((a, b) => a - b);
-        if (o.type === 'expand' && !used) add(k, { ...s, used: withIt }, o.cost, o.window);
-        if (o.type === 'contract' && !used) add(k, { ...s, used: withIt }, times(o.savings, -1), o.window);
-        if (o.type === 'switch') add(k, { ...s, paused: k }, o.cost, o.window ?? always);
+        // Every option type says what it can do from a running plant: the compiler refuses a type left out.
+        switch (o.type) {
+          case 'abandon':
+            // A sale is open whether or not the plant is paused; it sells the plant's scale as built.
+            add(k, { phase: 'closed' }, times(o.salvage, o.fixedSalvage ? -1 : -plantScale(s.used)), o.window);
+            break;
+          case 'switch':
+            if (s.paused === k) add(k, { ...s, paused: null }, o.backCost, o.window ?? always);
+            else if (s.paused === null) add(k, { ...s, paused: k }, o.cost, o.window ?? always);
+            break;
+          case 'expand':
+            if (s.paused === null && !used) add(k, { ...s, used: withIt }, o.cost, o.window);
+            break;
+          case 'contract':
+            if (s.paused === null && !used) add(k, { ...s, used: withIt }, times(o.savings, -1), o.window);
+            break;
+          case 'defer':
+          case 'stage':
+            // Used before the plant runs (the unbuilt and funding states above).
+            break;
+          default: {
+            const unknown: never = o;
+            throw new Error(`no reading of option ${JSON.stringify(unknown)}`);
+          }
+        }
       });
     }
   }
