@@ -124,22 +124,37 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
       });
     }
     if (s.phase !== 'operating') return moves;
+    const running = s.switched < 0;
     options.forEach((o, k) => {
-      if (o.type === 'abandon') {
-        const salvage = o.fixedSalvage ? o.salvage : scaleCost(o.salvage, operatingScale(s));
-        moves.push({ template: k, to: { ...s, phase: 'closed', exercised: 0, switched: -1 }, cost: negateCost(salvage), window: o.window, field: field(k) });
-      }
-      if (s.switched >= 0) {
-        if (k === s.switched && o.type === 'switch')
-          moves.push({ template: k, to: { ...s, switched: -1 }, cost: o.backCost, window: o.window ?? whole, field: `${field(k)}.backCost` });
-        return;
-      }
       const done = (s.exercised & (1 << k)) !== 0;
-      if (o.type === 'expand' && !done)
-        moves.push({ template: k, to: { ...s, exercised: s.exercised | (1 << k) }, cost: o.cost, window: o.window, field: field(k) });
-      if (o.type === 'contract' && !done)
-        moves.push({ template: k, to: { ...s, exercised: s.exercised | (1 << k) }, cost: negateCost(o.savings), window: o.window, field: field(k) });
-      if (o.type === 'switch') moves.push({ template: k, to: { ...s, switched: k }, cost: o.cost, window: o.window ?? whole, field: field(k) });
+      // Every type says what it can do from an operating mode: the compiler refuses a type left out.
+      switch (o.type) {
+        case 'abandon': {
+          const salvage = o.fixedSalvage ? o.salvage : scaleCost(o.salvage, operatingScale(s));
+          moves.push({ template: k, to: { ...s, phase: 'closed', exercised: 0, switched: -1 }, cost: negateCost(salvage), window: o.window, field: field(k) });
+          break;
+        }
+        case 'switch':
+          if (k === s.switched)
+            moves.push({ template: k, to: { ...s, switched: -1 }, cost: o.backCost, window: o.window ?? whole, field: `${field(k)}.backCost` });
+          else if (running) moves.push({ template: k, to: { ...s, switched: k }, cost: o.cost, window: o.window ?? whole, field: field(k) });
+          break;
+        case 'expand':
+          if (running && !done) moves.push({ template: k, to: { ...s, exercised: s.exercised | (1 << k) }, cost: o.cost, window: o.window, field: field(k) });
+          break;
+        case 'contract':
+          if (running && !done)
+            moves.push({ template: k, to: { ...s, exercised: s.exercised | (1 << k) }, cost: negateCost(o.savings), window: o.window, field: field(k) });
+          break;
+        case 'defer':
+        case 'stage':
+          // Used before the project operates (the waiting and staging phases above).
+          break;
+        default: {
+          const unreachable: never = o;
+          return unreachable;
+        }
+      }
     });
     return moves;
   }
