@@ -4,7 +4,9 @@ import next from 'eslint-config-next';
  * The layers, enforced: each folder may import only what sits below it.
  *   lattice/ ← db/ ← lib/ ← components/ ← app/      (migrations/ import nothing of the app)
  * lattice/ is the engine and knows nothing of the app; db/ holds the queries and knows nothing
- * of the services; lib/ never reaches up into components; components/ never reach the database.
+ * of the services; lib/ never reaches up into components; components/ never reach the database;
+ * pages, actions and routes (app/) go through lib/'s services, never to db/ themselves, so a
+ * figure on a screen is found in two hops: page → lib service → lattice.
  * Relative paths are caught as well as the `@/` alias.
  */
 const layer = (files, forbidden, why) => ({
@@ -35,6 +37,7 @@ const config = [
   layer(['migrations/**'], ['lib', 'db', 'components', 'app', 'demo', 'lattice'], 'A migration is frozen in time and imports nothing of the app'),
   layer(['lib/**'], ['components', 'app'], 'lib/ does not reach up into components/ or pages'),
   layer(['components/**'], ['db', 'app'], 'components/ never reach the database: take data from lib/ or props'),
+  layer(['app/**'], ['db'], 'Pages, actions and routes call a service in lib/, which calls db/queries'),
 ];
 
 export default config;

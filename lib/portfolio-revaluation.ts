@@ -4,8 +4,8 @@
  * gave up on is marked failed by the worker (lib/jobs/revalue-portfolio.ts).
  */
 import 'server-only';
-import { sql } from 'kysely';
 import { db } from '@/db';
+import { lockForOrganisation } from '@/db/queries/locks';
 import { recordAudit } from '@/db/queries/audit';
 import { findRevaluation as findRevaluationRow, findRunningRevaluation, insertRevaluation } from '@/db/queries/revaluations';
 import { AppError } from './errors';
@@ -14,7 +14,7 @@ import { QUEUES } from './jobs/queues';
 
 export async function startRevaluation(actor: { orgId: string; userId: string }): Promise<string> {
   return db.transaction().execute(async (trx) => {
-    await sql`select pg_advisory_xact_lock(hashtext('portfolio_revaluation'), hashtext(${actor.orgId}))`.execute(trx);
+    await lockForOrganisation(trx, 'portfolio_revaluation', actor.orgId);
     if (await findRunningRevaluation(trx, { orgId: actor.orgId }))
       throw new AppError('conflict', 'A re-valuation of this portfolio is already running; wait for it to finish.');
     const id = await insertRevaluation(trx, { orgId: actor.orgId, userId: actor.userId });

@@ -54,6 +54,18 @@ export async function findInvitation(db: Database, { invitationId }: { invitatio
     .executeTakeFirst();
 }
 
+/** Pending, unexpired invitations sent to an address, with the inviting organisation's name. */
+export async function listOpenInvitationsFor(db: Database, { email, now = new Date() }: { email: string; now?: Date }) {
+  return db
+    .selectFrom('invitation')
+    .innerJoin('organization', 'organization.id', 'invitation.organizationId')
+    .select(['invitation.id', 'organization.name'])
+    .where('invitation.email', '=', email.toLowerCase())
+    .where('invitation.status', '=', 'pending')
+    .where('invitation.expiresAt', '>', now)
+    .execute();
+}
+
 /*
  * The writes below are the app's own, not the auth library's endpoints, so that each runs in
  * the caller's transaction together with its audit entry. They write the rows in the auth

@@ -1,6 +1,5 @@
 /** Organisation defaults: currency, risk-free rate, WACC, fiscal calendar. */
 import type { Database } from '../index';
-import { recordAudit } from './audit';
 import type { OrganizationSettings } from '../types';
 
 /** The organisation's defaults; an organisation that never saved any gets the column defaults. */
@@ -57,20 +56,4 @@ export async function updateSettings(
     )
     .returningAll()
     .executeTakeFirstOrThrow();
-}
-
-/** Saves the defaults and records who changed them, in one transaction. */
-export async function saveSettingsAudited(db: Database, args: { orgId: string; userId: string; change: SettingsChange }): Promise<OrganizationSettings> {
-  return db.transaction().execute(async (trx) => {
-    const row = await updateSettings(trx, args);
-    await recordAudit(trx, {
-      orgId: args.orgId,
-      actorId: args.userId,
-      action: 'settings.update',
-      subjectType: 'organization_settings',
-      subjectId: args.orgId,
-      detail: { ...args.change },
-    });
-    return row;
-  });
 }

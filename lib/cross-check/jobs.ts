@@ -6,8 +6,8 @@
  */
 import 'server-only';
 import { randomInt } from 'node:crypto';
-import { sql } from 'kysely';
 import { db } from '@/db';
+import { lockForOrganisation } from '@/db/queries/locks';
 import { recordAudit } from '@/db/queries/audit';
 import { countRunningCrossChecks, findCrossCheck, insertCrossCheck, listCrossChecks, markCrossCheckCancelled } from '@/db/queries/cross-checks';
 import { ENGINE_VERSION } from '@/lattice';
@@ -66,7 +66,7 @@ export async function startCrossCheck(member: Member, caseId: string, request: C
   if (refusal) throw new AppError('unprocessable', refusal, { paths: [refusal] });
   return db.transaction().execute(async (trx) => {
     // One organisation's requests are counted one at a time (the lock), so the limit holds under a burst.
-    await sql`select pg_advisory_xact_lock(hashtext('cross_check'), hashtext(${args.orgId}))`.execute(trx);
+    await lockForOrganisation(trx, 'cross_check', args.orgId);
     if ((await countRunningCrossChecks(trx, { orgId: args.orgId })) >= CROSS_CHECKS_PER_ORGANISATION)
       throw new AppError(
         'rate_limited',

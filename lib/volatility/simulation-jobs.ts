@@ -5,8 +5,8 @@
  * is the row's, taken by whichever worker process is free (lib/jobs/run-simulation.ts).
  */
 import 'server-only';
-import { sql } from 'kysely';
 import { db } from '@/db';
+import { lockForOrganisation } from '@/db/queries/locks';
 import { recordAudit, type AuditEvent } from '@/db/queries/audit';
 import { countRunningSimulations, findSimulation as findSimulationRow, insertSimulation, markSimulationCancelled } from '@/db/queries/simulations';
 import type { CashFlowSchedule } from '../cash-flows';
@@ -29,7 +29,7 @@ export async function startSimulation(args: {
 }): Promise<string> {
   return db.transaction().execute(async (trx) => {
     // One organisation's requests are counted one at a time (the lock), so the limit holds under a burst.
-    await sql`select pg_advisory_xact_lock(hashtext('volatility_simulation'), hashtext(${args.orgId}))`.execute(trx);
+    await lockForOrganisation(trx, 'volatility_simulation', args.orgId);
     if ((await countRunningSimulations(trx, { orgId: args.orgId })) >= SIMULATIONS_PER_ORGANISATION)
       throw new AppError(
         'rate_limited',

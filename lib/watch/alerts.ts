@@ -9,12 +9,20 @@
 import 'server-only';
 import { db } from '@/db';
 import { findSettings } from '@/db/queries/settings';
-import { addAlert, alertRecipients, listStandings, saveStandings } from '@/db/queries/watch-alerts';
+import { addAlert, alertRecipients, listAlerts, listStandings, saveStandings } from '@/db/queries/watch-alerts';
+import type { Member } from '../dal';
 import { env } from '../env';
 import { linkMail, queueMail } from '../mail';
 import { dateOf } from './dates';
 import { loadFollowed, readWatch } from './follow';
 import { changesOf } from './changes';
+
+export type { WatchAlertKind } from '@/db/types';
+
+/** The organisation's alerts, newest first (the Alerts page). */
+export async function listOrganisationAlerts(member: Member) {
+  return listAlerts(db, { orgId: member.orgId });
+}
 
 /** Checks one followed case on `today` and announces what changed; returns the alerts recorded. */
 export async function checkFollowedCase(orgId: string, caseId: string, today = dateOf(new Date())): Promise<{ alerts: number }> {

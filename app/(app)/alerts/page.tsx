@@ -5,11 +5,9 @@ import { Forbidden } from '@/components/forbidden';
 import { PageHeader } from '@/components/page-header';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { ValuationCaution } from '@/components/valuation-caution';
-import { db } from '@/db';
-import { listAlerts } from '@/db/queries/watch-alerts';
-import type { WatchAlertKind } from '@/db/types';
 import { formatDateTime } from '@/lib/format';
 import { guardPage } from '@/lib/page-guard';
+import { listOrganisationAlerts, type WatchAlertKind } from '@/lib/watch/alerts';
 
 export const metadata: Metadata = { title: 'Alerts' };
 
@@ -24,7 +22,7 @@ const kindWords: Record<WatchAlertKind, string> = {
 export default async function AlertsPage() {
   const member = await guardPage({ case: ['read'] });
   if (member === 'forbidden') return <Forbidden />;
-  const alerts = await listAlerts(db, { orgId: member.orgId });
+  const alerts = await listOrganisationAlerts(member);
   return (
     <>
       <PageHeader

@@ -1,10 +1,9 @@
 import type { Metadata } from 'next';
 import { Forbidden } from '@/components/forbidden';
 import { PageHeader } from '@/components/page-header';
-import { db } from '@/db';
-import { findSettings } from '@/db/queries/settings';
 import { guardPage } from '@/lib/page-guard';
 import { roleAllows } from '@/lib/permissions';
+import { readSettings } from '@/lib/settings/service';
 import { NewProjectButton } from './_components/new-project-button';
 import { ProjectList } from './_components/project-list';
 
@@ -14,7 +13,7 @@ export default async function ProjectsPage() {
   const member = await guardPage({ project: ['read'] });
   if (member === 'forbidden') return <Forbidden />;
   const canCreate = roleAllows(member.role, { project: ['create'] });
-  const currency = canCreate ? (await findSettings(db, { orgId: member.orgId })).currency : '';
+  const currency = canCreate ? (await readSettings(member.orgId)).currency : '';
   return (
     <>
       <PageHeader

@@ -1,10 +1,9 @@
 import type { Metadata } from 'next';
 import { Forbidden } from '@/components/forbidden';
 import { PageHeader } from '@/components/page-header';
-import { db } from '@/db';
-import { findSettings } from '@/db/queries/settings';
 import { formatDateTime } from '@/lib/format';
 import { guardPage } from '@/lib/page-guard';
+import { readSettings } from '@/lib/settings/service';
 import { SettingsForm } from './_components/settings-form';
 import { SettingsNav } from './_components/settings-nav';
 
@@ -13,7 +12,7 @@ export const metadata: Metadata = { title: 'Settings' };
 export default async function SettingsPage() {
   const member = await guardPage({ settings: ['update'] });
   if (member === 'forbidden') return <Forbidden />;
-  const settings = await findSettings(db, { orgId: member.orgId });
+  const settings = await readSettings(member.orgId);
   return (
     <>
       <PageHeader title="Settings" lead={`Defaults every new case of ${member.orgName} starts from.`} />

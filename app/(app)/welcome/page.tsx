@@ -2,8 +2,8 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { redirect } from 'next/navigation';
 import { PageHeader } from '@/components/page-header';
-import { db } from '@/db';
 import { currentViewer } from '@/lib/dal';
+import { invitationsWaitingFor } from '@/lib/members/service';
 import { CreateOrganisationForm } from './_components/create-organisation-form';
 
 export const metadata: Metadata = { title: 'Welcome' };
@@ -12,14 +12,7 @@ export default async function WelcomePage() {
   const viewer = await currentViewer();
   if (!viewer) redirect('/sign-in');
   if (viewer.orgId) redirect('/portfolio');
-  const invitations = await db
-    .selectFrom('invitation')
-    .innerJoin('organization', 'organization.id', 'invitation.organizationId')
-    .select(['invitation.id', 'organization.name'])
-    .where('invitation.email', '=', viewer.email.toLowerCase())
-    .where('invitation.status', '=', 'pending')
-    .where('invitation.expiresAt', '>', new Date())
-    .execute();
+  const invitations = await invitationsWaitingFor(viewer);
   return (
     <>
       <PageHeader title={`Welcome, ${viewer.name}`} lead="You are not a member of an organisation yet." />

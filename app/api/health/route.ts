@@ -1,60 +1,10 @@
 // GET /api/health – can the app reach its database, does the engine answer, and is the job queue worked? (no sign-in)
-import { sql } from 'kysely';
 import { NextResponse } from 'next/server';
-import { db } from '@/db';
-import { ENGINE_VERSION, type ProjectModel } from '@/lattice';
-import { enginePoolStats, valueInWorker } from '@/lib/engine/pool';
-import { AppError } from '@/lib/errors';
-import { queueHealth, type QueueHealth } from '@/lib/jobs/queue-health';
+import { healthReport } from '@/lib/health';
 
 export const dynamic = 'force-dynamic';
 
-/** A valuation small enough to answer in milliseconds: it proves a worker is alive. */
-const canary: ProjectModel = {
-  underlying: { value: 100, volatility: 0.3 },
-  riskFreeRate: 0.03,
-  horizon: 1,
-  steps: 4,
-  options: [{ type: 'abandon', salvage: 90, window: { kind: 'american', from: 0, to: 1 } }],
-};
-
-async function databaseCheck(): Promise<{ database: 'ok' | 'unreachable'; databaseMs: number }> {
-  const started = performance.now();
-  try {
-    await sql`select 1`.execute(db);
-    return { database: 'ok', databaseMs: Math.round(performance.now() - started) };
-  } catch {
-    return { database: 'unreachable', databaseMs: Math.round(performance.now() - started) };
-  }
-}
-
-async function engineCheck(): Promise<{ engine: 'ok' | 'busy' | 'unavailable'; engineMs: number }> {
-  const started = performance.now();
-  try {
-    await valueInWorker(canary, { extras: false }, { owner: 'health-check', deadlineMs: 5_000 });
-    return { engine: 'ok', engineMs: Math.round(performance.now() - started) };
-  } catch (error) {
-    // A full queue is load, not an outage; anything else (a deadline, a dead worker) is.
-    const busy = error instanceof AppError && error.code === 'rate_limited';
-    return { engine: busy ? 'busy' : 'unavailable', engineMs: Math.round(performance.now() - started) };
-  }
-}
-
-/** The job queue's state; null when the database cannot be asked (reported above). */
-async function jobsCheck(): Promise<QueueHealth | null> {
-  try {
-    return await queueHealth();
-  } catch {
-    return null;
-  }
-}
-
 export async function GET() {
-  const [database, engine, jobs] = await Promise.all([databaseCheck(), engineCheck(), jobsCheck()]);
-  // A queue with no worker delays e-mail and simulations but serves every page: reported, not failed.
-  const healthy = database.database === 'ok' && engine.engine !== 'unavailable';
-  return NextResponse.json(
-    { status: healthy ? 'ok' : 'degraded', ...database, ...engine, queue: enginePoolStats(), jobs, engineVersion: ENGINE_VERSION },
-    { status: healthy ? 200 : 503, headers: { 'cache-control': 'no-store' } },
-  );
+  const { healthy, report } = await healthReport();
+  return NextResponse.json(report, { status: healthy ? 200 : 503, headers: { 'cache-control': 'no-store' } });
 }

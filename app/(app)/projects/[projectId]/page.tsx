@@ -1,14 +1,12 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { Forbidden } from '@/components/forbidden';
 import { PageHeader } from '@/components/page-header';
 import { ValuationCaution } from '@/components/valuation-caution';
-import { db } from '@/db';
-import { findProject } from '@/db/queries/projects';
-import { findSettings } from '@/db/queries/settings';
-import { guardPage } from '@/lib/page-guard';
+import { guardPage, orNotFound } from '@/lib/page-guard';
 import { roleAllows } from '@/lib/permissions';
+import { readProject } from '@/lib/projects/service';
+import { readSettings } from '@/lib/settings/service';
 import { ActivityList } from './_components/activity-list';
 import { CaseTable } from './_components/case-table';
 import { ProjectActions } from './_components/project-actions';
@@ -19,9 +17,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   const member = await guardPage({ project: ['read'] });
   if (member === 'forbidden') return <Forbidden />;
   const { projectId } = await params;
-  const project = await findProject(db, { orgId: member.orgId, projectId });
-  if (!project) notFound();
-  const settings = await findSettings(db, { orgId: member.orgId });
+  const [project, settings] = await Promise.all([orNotFound(readProject(member, projectId)), readSettings(member.orgId)]);
   return (
     <>
       <nav aria-label="Breadcrumb" className="mb-2 text-caption text-ink-muted">

@@ -2,9 +2,8 @@ import type { Metadata } from 'next';
 import { Forbidden } from '@/components/forbidden';
 import { PageHeader } from '@/components/page-header';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
-import { db } from '@/db';
-import { listMembers, listPendingInvitations } from '@/db/queries/members';
 import { formatDate } from '@/lib/format';
+import { listMembership } from '@/lib/members/service';
 import { guardPage } from '@/lib/page-guard';
 import { isRoleName, roleLabels } from '@/lib/permissions';
 import { SettingsNav } from '../_components/settings-nav';
@@ -17,7 +16,7 @@ export const metadata: Metadata = { title: 'Members' };
 export default async function MembersPage() {
   const member = await guardPage({ member: ['update'] });
   if (member === 'forbidden') return <Forbidden />;
-  const [members, invitations] = await Promise.all([listMembers(db, { orgId: member.orgId }), listPendingInvitations(db, { orgId: member.orgId })]);
+  const { members, invitations } = await listMembership(member);
   return (
     <>
       <PageHeader title="Settings" lead={`Who works on the cases of ${member.orgName}, and in which role.`} />

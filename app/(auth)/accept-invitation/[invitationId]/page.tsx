@@ -1,8 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { db } from '@/db';
-import { findInvitation } from '@/db/queries/members';
 import { currentViewer } from '@/lib/dal';
+import { readInvitation } from '@/lib/members/service';
 import { isRoleName, roleLabels } from '@/lib/permissions';
 import { AcceptInvitation } from './_components/accept-invitation';
 
@@ -10,7 +9,7 @@ export const metadata: Metadata = { title: 'Accept invitation' };
 
 export default async function AcceptInvitationPage({ params }: { params: Promise<{ invitationId: string }> }) {
   const { invitationId } = await params;
-  const invitation = await findInvitation(db, { invitationId });
+  const invitation = await readInvitation(invitationId);
   const usable = invitation && invitation.status === 'pending' && new Date(invitation.expiresAt) > new Date();
   if (!invitation || !usable) {
     return (

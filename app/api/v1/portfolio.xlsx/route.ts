@@ -1,9 +1,8 @@
 // GET /api/v1/portfolio.xlsx – the portfolio's approved figures as a workbook, with the cautions
 import { VALUATION_CAUTION } from '@/lib/caution';
-import { db } from '@/db';
-import { listProjectSummaries } from '@/db/queries/summaries';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
+import { listProjects } from '@/lib/projects/service';
 import { portfolioWorkbook } from '@/lib/spreadsheets/portfolio-export';
 import { xlsxResponse } from '@/lib/spreadsheets/xlsx-response';
 
@@ -11,7 +10,6 @@ export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 export const GET = withAuth(
-  async ({ member }) =>
-    xlsxResponse(await portfolioWorkbook(await listProjectSummaries(db, { orgId: member.orgId }), member.orgName, VALUATION_CAUTION), 'Leeway portfolio.xlsx'),
+  async ({ member }) => xlsxResponse(await portfolioWorkbook(await listProjects(member), member.orgName, VALUATION_CAUTION), 'Leeway portfolio.xlsx'),
   operations.portfolioXlsx,
 );

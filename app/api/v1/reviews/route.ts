@@ -1,9 +1,8 @@
 // GET /api/v1/reviews – the review queue: cases waiting for a decision (?status=approved,returned for decided ones)
 import { NextResponse } from 'next/server';
-import { db } from '@/db';
-import { listReviewQueue } from '@/db/queries/reviews';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
+import { readReviewQueue } from '@/lib/review/queue';
 import { reviewStatusesSchema } from '@/lib/validations/review';
 
 export const dynamic = 'force-dynamic';
@@ -11,6 +10,6 @@ export const dynamic = 'force-dynamic';
 export const GET = withAuth(async ({ member, request }) => {
   const asked = request.nextUrl.searchParams.get('status');
   const statuses = reviewStatusesSchema.parse(asked ? asked.split(',') : ['in_review']);
-  const queue = await listReviewQueue(db, { orgId: member.orgId, statuses });
+  const queue = await readReviewQueue(member, statuses);
   return NextResponse.json({ cases: queue });
 }, operations.listReviews);

@@ -12,7 +12,7 @@ import { Dialog } from '@/components/ui/dialog';
 import { Input } from '@/components/ui/input';
 import { StatusBadge } from '@/components/status-badge';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
-import type { CaseStatus } from '@/db/types';
+import type { CaseStatus } from '@/lib/review/transitions';
 import { ENGINE_VERSION } from '@/lattice';
 import { useToast } from '@/components/ui/toast';
 import { getJson, sendJson } from '@/lib/api-client';

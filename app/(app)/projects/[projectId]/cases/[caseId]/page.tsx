@@ -1,11 +1,10 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { Forbidden } from '@/components/forbidden';
-import { db } from '@/db';
-import { findCase } from '@/db/queries/cases';
-import { findProject } from '@/db/queries/projects';
-import { guardPage } from '@/lib/page-guard';
+import { readCase } from '@/lib/cases/service';
+import { guardPage, orNotFound } from '@/lib/page-guard';
 import { roleAllows } from '@/lib/permissions';
+import { readProject } from '@/lib/projects/service';
 import { CaseEditor } from './_components/case-editor';
 
 export const metadata: Metadata = { title: 'Case' };
@@ -21,8 +20,8 @@ export default async function CasePage({
   if (member === 'forbidden') return <Forbidden />;
   const { projectId, caseId } = await params;
   const { tab } = await searchParams;
-  const [project, found] = await Promise.all([findProject(db, { orgId: member.orgId, projectId }), findCase(db, { orgId: member.orgId, caseId })]);
-  if (!project || !found || found.project_id !== project.id) notFound();
+  const [project, found] = await Promise.all([orNotFound(readProject(member, projectId)), orNotFound(readCase(member, caseId))]);
+  if (found.project_id !== project.id) notFound();
   return (
     <CaseEditor
       caseId={found.id}

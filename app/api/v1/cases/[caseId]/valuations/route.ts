@@ -1,12 +1,9 @@
 // POST /api/v1/cases/{id}/valuations – value the stored case and keep the run; GET – its runs, newest first
 import { NextResponse } from 'next/server';
-import { db } from '@/db';
-import { listValuationRuns } from '@/db/queries/valuation-runs';
 import { withAuth } from '@/lib/api';
+import { listCaseRuns, valueCase } from '@/lib/cases/valuations';
 import { operations } from '@/lib/openapi/operations';
 import { hashResult } from '@/lib/model-hash';
-import { valueAndStore } from '@/lib/store-valuation';
-import { requireCase } from '@/lib/cases/require-case';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -18,8 +15,7 @@ function summary(result: { value: number; staticNpv: number; expandedNpv: number
 }
 
 export const POST = withAuth<Params>(async ({ member, params, request }) => {
-  const stored = await requireCase(db, member.orgId, params.caseId);
-  const { model, warnings, result, inputHash, run } = await valueAndStore(stored, member, { owner: member.userId, signal: request.signal });
+  const { model, warnings, result, inputHash, run } = await valueCase(member, params.caseId, request.signal);
   return NextResponse.json(
     {
       run: {
@@ -38,8 +34,7 @@ export const POST = withAuth<Params>(async ({ member, params, request }) => {
 }, operations.valueCase);
 
 export const GET = withAuth<Params>(async ({ member, params }) => {
-  await requireCase(db, member.orgId, params.caseId);
-  const runs = await listValuationRuns(db, { orgId: member.orgId, caseId: params.caseId });
+  const runs = await listCaseRuns(member, params.caseId);
   return NextResponse.json({
     runs: runs.map((r) => ({
       id: r.id,

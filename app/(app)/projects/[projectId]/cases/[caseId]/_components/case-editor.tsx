@@ -19,7 +19,7 @@ import { formatDateTime, formatMoney } from '@/lib/format';
 import { issueInWords } from '@/lib/issue-words';
 import { cardBasis } from '@/lib/option-form';
 import type { CaseInput } from '@/lib/validations/case';
-import type { CaseStatus } from '@/db/types';
+import type { CaseStatus } from '@/lib/review/transitions';
 import { AttachmentsPanel } from './attachments-panel';
 import { CashFlowImport } from './cash-flow-import';
 import { CashFlowSection } from './cash-flow-section';

@@ -9,7 +9,7 @@ import { Dialog } from '@/components/ui/dialog';
 import { StatusBadge } from '@/components/status-badge';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { useToast } from '@/components/ui/toast';
-import type { CaseStatus, SnapshotStatus } from '@/db/types';
+import type { CaseStatus, SnapshotStatus } from '@/lib/review/transitions';
 import { getJson, sendJson } from '@/lib/api-client';
 import { formatDateTime, formatMoney } from '@/lib/format';
 import { readingOfFigures } from '@/lib/figures-reading';
