@@ -14,7 +14,7 @@ import { APIError, createAuthMiddleware, isAPIError } from 'better-auth/api';
 import { nextCookies } from 'better-auth/next-js';
 import { organization } from 'better-auth/plugins';
 import { db, pool } from '@/db';
-import { INVITATION_LIFETIME_MS } from '@/db/queries/members';
+import { findFirstMembership, INVITATION_LIFETIME_MS } from '@/db/queries/members';
 import { CLIENT_ADDRESS_HEADER } from './client-address';
 import { COMMON_PASSWORD_MESSAGE, isCommonPassword } from './common-passwords';
 import { authSecret, env } from './env';
@@ -120,7 +120,7 @@ export const auth = betterAuth({
       roles,
       creatorRole: 'admin',
       // The app's rule: one organisation per user, created from the welcome page by someone without one.
-      allowUserToCreateOrganization: async (user) => !(await db.selectFrom('member').select('id').where('userId', '=', user.id).executeTakeFirst()),
+      allowUserToCreateOrganization: async (user) => !(await findFirstMembership(db, { userId: user.id })),
       invitationExpiresIn: INVITATION_LIFETIME_MS / 1000,
       cancelPendingInvitationsOnReInvite: true,
       sendInvitationEmail: async ({ id, email, organization: org, inviter, role }) =>

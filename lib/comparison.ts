@@ -6,6 +6,8 @@
  */
 import 'server-only';
 import { db } from '@/db';
+import { findCasesWithProject } from '@/db/queries/cases';
+import { latestRunsOfCases } from '@/db/queries/valuation-runs';
 import type { ValuationResult } from '@/lattice';
 import { comparisonRows, type ComparisonRow } from './comparison-rows';
 import { AppError } from './errors';
@@ -37,26 +39,11 @@ export interface Comparison {
 }
 
 export async function compareCases(orgId: string, caseIds: string[]): Promise<Comparison> {
-  const found = await db
-    .selectFrom('case')
-    .innerJoin('project', 'project.id', 'case.project_id')
-    .selectAll('case')
-    .select(['project.name as project_name', 'project.currency'])
-    .where('case.organization_id', '=', orgId)
-    .where('case.id', 'in', caseIds)
-    .execute();
+  const found = await findCasesWithProject(db, { orgId, caseIds });
   const byId = new Map(found.map((c) => [c.id, c]));
   const missing = caseIds.filter((id) => !byId.has(id));
   if (missing.length > 0) throw new AppError('not_found', `No such case in your organisation: ${missing.join(', ')}.`);
-  const runs = await db
-    .selectFrom('valuation_run')
-    .select(['case_id', 'result', 'created_at', 'case_version'])
-    .distinctOn('case_id')
-    .where('organization_id', '=', orgId)
-    .where('case_id', 'in', caseIds)
-    .orderBy('case_id')
-    .orderBy('created_at', 'desc')
-    .execute();
+  const runs = await latestRunsOfCases(db, { orgId, caseIds });
   const runOf = new Map(runs.map((r) => [r.case_id, r]));
 
   const ordered = caseIds.map((id) => byId.get(id)!);

@@ -115,6 +115,19 @@ export async function listCasesWithProjects(db: Database, { orgId }: { orgId: st
     .execute();
 }
 
+/** Cases of the organisation with their project's name and currency (the review e-mails, the comparison); missing ids are left out. */
+export async function findCasesWithProject(db: Database, { orgId, caseIds }: { orgId: string; caseIds: string[] }) {
+  if (caseIds.length === 0) return [];
+  return db
+    .selectFrom('case')
+    .innerJoin('project', 'project.id', 'case.project_id')
+    .selectAll('case')
+    .select(['project.name as project_name', 'project.currency'])
+    .where('case.organization_id', '=', orgId)
+    .where('case.id', 'in', caseIds)
+    .execute();
+}
+
 /**
  * Deletes a case unless it was ever submitted (its review record is kept: such a case is never
  * deleted); its name and project when it was deleted.

@@ -66,6 +66,22 @@ export async function listOpenInvitationsFor(db: Database, { email, now = new Da
     .execute();
 }
 
+/** The e-mail addresses of the organisation's reviewers (who hear of submissions and withdrawals). */
+export async function listReviewerEmails(db: Database, { orgId }: { orgId: string }): Promise<string[]> {
+  const rows = await db
+    .selectFrom('member')
+    .innerJoin('user', 'user.id', 'member.userId')
+    .select('user.email')
+    .where('member.organizationId', '=', orgId)
+    .where('member.role', '=', 'reviewer')
+    .execute();
+  return rows.map((r) => r.email);
+}
+
+export async function findUserEmail(db: Database, { userId }: { userId: string }): Promise<string | null> {
+  return (await db.selectFrom('user').select('email').where('id', '=', userId).executeTakeFirst())?.email ?? null;
+}
+
 /*
  * The writes below are the app's own, not the auth library's endpoints, so that each runs in
  * the caller's transaction together with its audit entry. They write the rows in the auth

@@ -21,6 +21,11 @@ export async function findProject(db: Database, { orgId, projectId }: { orgId: s
   return db.selectFrom('project').selectAll().where('organization_id', '=', orgId).where('id', '=', projectId).executeTakeFirst();
 }
 
+/** A project of the organisation by its exact name (the demo seed leaves one that exists alone). */
+export async function findProjectByName(db: Database, { orgId, name }: { orgId: string; name: string }): Promise<Project | undefined> {
+  return db.selectFrom('project').selectAll().where('organization_id', '=', orgId).where('name', '=', name).executeTakeFirst();
+}
+
 export async function updateProject(
   db: Database,
   { orgId, projectId, change }: { orgId: string; projectId: string; change: Partial<Pick<Project, 'name' | 'description' | 'status'>> },

@@ -287,3 +287,24 @@ export async function listComments(db: Database, { orgId, caseId }: { orgId: str
     .orderBy('review_comment.created_at')
     .execute();
 }
+
+/**
+ * What a reviewer compares before deciding: the snapshot in review, the version last returned,
+ * and an earlier approved snapshot with exactly the same inputs (compared in PostgreSQL, jsonb
+ * equality, so no earlier inputs travel to the app). Null when nothing is in review.
+ */
+export async function findSubmissionContext(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
+  const ofCase = db.selectFrom('case_snapshot').where('organization_id', '=', orgId).where('case_id', '=', caseId);
+  const current = await ofCase.select(['id', 'inputs', 'result', 'currency']).where('status', '=', 'in_review').executeTakeFirst();
+  if (!current) return null;
+  const [returned, sameApproved] = await Promise.all([
+    ofCase.select(['case_version', 'inputs', 'result', 'decided_at']).where('status', '=', 'returned').orderBy('submitted_at', 'desc').executeTakeFirst(),
+    ofCase
+      .select(['case_version', 'decided_at'])
+      .where('status', '=', 'approved')
+      .where(sql<boolean>`inputs = (select s.inputs from case_snapshot s where s.id = ${current.id})`)
+      .orderBy('decided_at', 'desc')
+      .executeTakeFirst(),
+  ]);
+  return { current, returned, sameApproved };
+}

@@ -88,3 +88,17 @@ export async function listCasesValuedByOtherEngines(db: Database, { orgId, engin
     .orderBy('case.created_at')
     .execute();
 }
+
+/** Each listed case's newest run (any version: the row names its case version). */
+export async function latestRunsOfCases(db: Database, { orgId, caseIds }: { orgId: string; caseIds: string[] }) {
+  if (caseIds.length === 0) return [];
+  return db
+    .selectFrom('valuation_run')
+    .select(['case_id', 'result', 'created_at', 'case_version'])
+    .distinctOn('case_id')
+    .where('organization_id', '=', orgId)
+    .where('case_id', 'in', caseIds)
+    .orderBy('case_id')
+    .orderBy('created_at', 'desc')
+    .execute();
+}

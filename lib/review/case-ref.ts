@@ -1,17 +1,11 @@
 /** A case with its project, as the review routes and e-mails name it; scoped by organisation. */
 import 'server-only';
 import { db } from '@/db';
+import { findCasesWithProject } from '@/db/queries/cases';
 import { missingCase } from '../cases/require-case';
 
 export async function loadCaseRef(orgId: string, caseId: string) {
-  const row = await db
-    .selectFrom('case')
-    .innerJoin('project', 'project.id', 'case.project_id')
-    .selectAll('case')
-    .select(['project.name as project_name', 'project.currency'])
-    .where('case.organization_id', '=', orgId)
-    .where('case.id', '=', caseId)
-    .executeTakeFirst();
+  const [row] = await findCasesWithProject(db, { orgId, caseIds: [caseId] });
   if (!row) throw missingCase();
   return row;
 }

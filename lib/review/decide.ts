@@ -6,40 +6,20 @@
  */
 import 'server-only';
 import { db } from '@/db';
-import { recordAudit } from '@/db/queries/audit';
-import { decideCase } from '@/db/queries/reviews';
+import { findUserEmail } from '@/db/queries/members';
 import type { Member } from '../dal';
-import { AppError } from '../errors';
 import { loadCaseRef, refOf } from './case-ref';
 import { notifyDecided } from './notify';
-import { checkTransition } from './transitions';
+import { recordDecision } from './record';
 
 export async function decide(member: Member, caseId: string, action: 'approve' | 'return', reason?: string) {
   const ref = await loadCaseRef(member.orgId, caseId);
   // The decision, its audit entry and its e-mail commit together or not at all.
-  const snapshot = await db.transaction().execute(async (trx) => {
-    const outcome = await decideCase(trx, {
-      orgId: member.orgId,
-      caseId: ref.id,
-      allowed: (status) => checkTransition(member.role, action, status),
-      userId: member.userId,
-      reason,
-    });
-    if (!outcome.ok) throw new AppError(outcome.code, outcome.message);
-    await recordAudit(trx, {
-      orgId: member.orgId,
-      actorId: member.userId,
-      action: action === 'approve' ? 'case.approve' : 'case.return',
-      subjectType: 'case',
-      subjectId: ref.id,
-      detail: { name: ref.name, snapshot: outcome.value.id, ...(reason ? { reason } : {}) },
-    });
-    const snapshot = outcome.value;
-    const submitter = snapshot.submitted_by
-      ? await trx.selectFrom('user').select('email').where('id', '=', snapshot.submitted_by).executeTakeFirst()
-      : undefined;
+  return db.transaction().execute(async (trx) => {
+    const snapshot = await recordDecision(trx, { actor: member, stored: ref, action, reason });
+    const submitterEmail = snapshot.submitted_by ? await findUserEmail(trx, { userId: snapshot.submitted_by }) : null;
     await notifyDecided(trx, refOf(ref, (snapshot.result as { expandedNpv: number }).expandedNpv), {
-      to: submitter?.email ?? null,
+      to: submitterEmail,
       decision: action === 'approve' ? 'approved' : 'returned',
       by: member.name,
       reason,
@@ -47,5 +27,4 @@ export async function decide(member: Member, caseId: string, action: 'approve' |
     });
     return snapshot;
   });
-  return snapshot;
 }

@@ -6,6 +6,7 @@
  */
 import 'server-only';
 import type { Transaction } from 'kysely';
+import { listReviewerEmails } from '@/db/queries/members';
 import type { DB } from '@/db/types';
 import { env } from '../env';
 import { formatMoney } from '../format';
@@ -25,19 +26,8 @@ interface CaseRef {
 
 const caseUrl = (c: CaseRef) => `${env.APP_URL}/projects/${c.projectId}/cases/${c.caseId}`;
 
-async function reviewerEmails(trx: Transaction<DB>, orgId: string): Promise<string[]> {
-  const rows = await trx
-    .selectFrom('member')
-    .innerJoin('user', 'user.id', 'member.userId')
-    .select('user.email')
-    .where('member.organizationId', '=', orgId)
-    .where('member.role', '=', 'reviewer')
-    .execute();
-  return rows.map((r) => r.email);
-}
-
 export async function notifySubmitted(trx: Transaction<DB>, c: CaseRef, submitter: string) {
-  for (const email of await reviewerEmails(trx, c.orgId))
+  for (const email of await listReviewerEmails(trx, { orgId: c.orgId }))
     await queueMail(
       linkMail(
         email,
@@ -52,7 +42,7 @@ export async function notifySubmitted(trx: Transaction<DB>, c: CaseRef, submitte
 
 /** Tells the reviewers that a submission they were asked to review was withdrawn, so nobody reviews it in vain. */
 export async function notifyWithdrawn(trx: Transaction<DB>, c: CaseRef, analyst: string) {
-  for (const email of await reviewerEmails(trx, c.orgId))
+  for (const email of await listReviewerEmails(trx, { orgId: c.orgId }))
     await queueMail(
       linkMail(
         email,

@@ -4,8 +4,8 @@
  * whether the same content was approved before. Read from the frozen snapshots alone.
  */
 import 'server-only';
-import { sql } from 'kysely';
 import { db } from '@/db';
+import { findSubmissionContext } from '@/db/queries/reviews';
 import type { ValuationResult } from '@/lattice';
 import { comparisonRows, type ComparisonRow } from '../comparison-rows';
 import type { CaseInput } from '../validations/case';
@@ -18,21 +18,9 @@ export interface VersionChanges {
 }
 
 export async function versionChanges(orgId: string, caseId: string): Promise<VersionChanges | null> {
-  const ofCase = db.selectFrom('case_snapshot').where('organization_id', '=', orgId).where('case_id', '=', caseId);
-  const current = await ofCase.select(['id', 'inputs', 'result', 'currency']).where('status', '=', 'in_review').executeTakeFirst();
-  if (!current) return null;
-  const returned = await ofCase
-    .select(['case_version', 'inputs', 'result', 'decided_at'])
-    .where('status', '=', 'returned')
-    .orderBy('submitted_at', 'desc')
-    .executeTakeFirst();
-  // Compared in PostgreSQL (jsonb equality), so no earlier inputs travel to the app.
-  const same = await ofCase
-    .select(['case_version', 'decided_at'])
-    .where('status', '=', 'approved')
-    .where(sql<boolean>`inputs = (select s.inputs from case_snapshot s where s.id = ${current.id})`)
-    .orderBy('decided_at', 'desc')
-    .executeTakeFirst();
+  const found = await findSubmissionContext(db, { orgId, caseId });
+  if (!found) return null;
+  const { current, returned, sameApproved: same } = found;
   const currency = current.currency ?? '';
   return {
     sinceReturned: returned
