@@ -24,6 +24,21 @@ const layer = (files, forbidden, why) => ({
   },
 });
 
+/** Queries live in db/queries/, handle-first; everything else calls them (one place to read every query). */
+const queriesOnlyInDb = {
+  files: ['lib/**', 'app/**', 'components/**', 'demo/**', 'scripts/**'],
+  rules: {
+    'no-restricted-syntax': [
+      'error',
+      {
+        selector: 'CallExpression[callee.property.name=/^(selectFrom|insertInto|updateTable|deleteFrom|selectNoFrom)$/]',
+        message: 'Write the query as a function in db/queries/ that takes the handle first, and call it (eslint.config.mjs).',
+      },
+      { selector: "TaggedTemplateExpression[tag.name='sql']", message: 'SQL lives in db/queries/ (eslint.config.mjs).' },
+    ],
+  },
+};
+
 const config = [
   { ignores: ['.next/**', 'node_modules/**', '.data/**', 'next-env.d.ts', 'types/leeway-api.d.ts'] },
   ...next,
@@ -38,6 +53,7 @@ const config = [
   layer(['lib/**'], ['components', 'app'], 'lib/ does not reach up into components/ or pages'),
   layer(['components/**'], ['db', 'app'], 'components/ never reach the database: take data from lib/ or props'),
   layer(['app/**'], ['db'], 'Pages, actions and routes call a service in lib/, which calls db/queries'),
+  queriesOnlyInDb,
 ];
 
 export default config;

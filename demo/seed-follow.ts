@@ -8,7 +8,9 @@
  * the worker) sends its one alert.
  */
 import { db } from '@/db';
+import { dateProjectRecords } from '@/db/queries/demo';
 import { addObservation } from '@/db/queries/observations';
+import { latestApprovedSnapshot } from '@/db/queries/reviews';
 import type { ProjectModel, ValuationResult } from '@/lattice';
 import { enqueue } from '@/lib/jobs/enqueue';
 import { QUEUES } from '@/lib/jobs/queues';
@@ -34,26 +36,11 @@ export function historyOf(follow: DemoFollow) {
   return { built: daysBefore(follow.approvedDaysAgo + 3), submitted: daysBefore(follow.approvedDaysAgo + 1), approved: daysBefore(follow.approvedDaysAgo) };
 }
 
-/** Dates the project, its cases and their runs at `built`, as if they had been made then. */
-async function dateRecords(projectId: string, built: Date) {
-  await db.transaction().execute(async (trx) => {
-    await trx.updateTable('project').set({ created_at: built, updated_at: built }).where('id', '=', projectId).execute();
-    const caseIds = (await trx.selectFrom('case').select('id').where('project_id', '=', projectId).execute()).map((c) => c.id);
-    if (caseIds.length === 0) return;
-    await trx.updateTable('case').set({ created_at: built, updated_at: built }).where('id', 'in', caseIds).execute();
-    await trx.updateTable('valuation_run').set({ created_at: built }).where('case_id', 'in', caseIds).execute();
-  });
-}
-
 export async function seedFollow(args: { orgId: string; analystId: string; projectId: string; caseId: string; follow: DemoFollow }) {
   const { follow } = args;
-  await dateRecords(args.projectId, historyOf(follow).built);
-  const snapshot = await db
-    .selectFrom('case_snapshot')
-    .select(['model', 'result', 'decided_at'])
-    .where('case_id', '=', args.caseId)
-    .where('status', '=', 'approved')
-    .executeTakeFirstOrThrow();
+  await db.transaction().execute((trx) => dateProjectRecords(trx, { projectId: args.projectId, built: historyOf(follow).built }));
+  const snapshot = await latestApprovedSnapshot(db, { orgId: args.orgId, caseId: args.caseId });
+  if (!snapshot) throw new Error('seed: the followed case has no approved version');
   const model = snapshot.model as ProjectModel;
   const result = snapshot.result as ValuationResult;
   const approvedOn = dateOf(snapshot.decided_at!);

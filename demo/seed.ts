@@ -3,8 +3,8 @@
  * Users are created verified, with the demo password, through better-auth's own password
  * hashing so they sign in like anyone else.
  */
-import { randomUUID } from 'node:crypto';
 import { db } from '@/db';
+import { addDemoOrganisation, ensureMembership, findOrganisationIdBySlug, findUserIdByEmail } from '@/db/queries/demo';
 import { auth } from '@/lib/auth';
 import { DEMO_PASSWORD, demoOrganisations } from './organisations';
 import { seedPortfolio } from './seed-portfolio';
@@ -13,29 +13,14 @@ export async function seedDemo(): Promise<{ created: string[] }> {
   const ctx = await auth.$context;
   const created: string[] = [];
   for (const org of demoOrganisations) {
-    let orgRow = await db.selectFrom('organization').select('id').where('slug', '=', org.slug).executeTakeFirst();
-    if (!orgRow) {
-      orgRow = await db
-        .insertInto('organization')
-        .values({ id: randomUUID(), name: org.name, slug: org.slug, createdAt: new Date(), logo: null, metadata: JSON.stringify({ demo: true }) })
-        .returning('id')
-        .executeTakeFirstOrThrow();
-      await db
-        .insertInto('organization_settings')
-        .values({
-          organization_id: orgRow.id,
-          currency: org.settings.currency,
-          risk_free_rate: org.settings.riskFreeRate,
-          wacc: org.settings.wacc,
-          fiscal_year_start_month: org.settings.fiscalYearStartMonth,
-        })
-        .onConflict((c) => c.doNothing())
-        .execute();
+    let orgId = await findOrganisationIdBySlug(db, { slug: org.slug });
+    if (!orgId) {
+      orgId = await addDemoOrganisation(db, { name: org.name, slug: org.slug, settings: org.settings });
       created.push(org.name);
     }
     for (const person of org.users) {
-      let user = await db.selectFrom('user').select('id').where('email', '=', person.email).executeTakeFirst();
-      if (!user) {
+      let userId = await findUserIdByEmail(db, { email: person.email });
+      if (!userId) {
         const made = await ctx.internalAdapter.createUser({ email: person.email, name: person.name, emailVerified: true }, { method: 'admin' });
         await ctx.internalAdapter.linkAccount({
           userId: made.id,
@@ -43,21 +28,20 @@ export async function seedDemo(): Promise<{ created: string[] }> {
           accountId: made.id,
           password: await ctx.password.hash(DEMO_PASSWORD),
         });
-        user = { id: made.id };
+        userId = made.id;
         created.push(person.email);
       }
-      const membership = await db.selectFrom('member').select('id').where('organizationId', '=', orgRow.id).where('userId', '=', user.id).executeTakeFirst();
-      if (!membership)
-        await db
-          .insertInto('member')
-          .values({ id: randomUUID(), organizationId: orgRow.id, userId: user.id, role: person.role, createdAt: new Date() })
-          .execute();
+      await ensureMembership(db, { orgId, userId, role: person.role });
     }
     if (org.portfolioBy) {
-      const idOf = async (email: string) => (await db.selectFrom('user').select('id').where('email', '=', email).executeTakeFirstOrThrow()).id;
+      const idOf = async (email: string) => {
+        const id = await findUserIdByEmail(db, { email });
+        if (!id) throw new Error(`seed: no user ${email}`);
+        return id;
+      };
       created.push(
         ...(await seedPortfolio({
-          orgId: orgRow.id,
+          orgId,
           analystId: await idOf(org.portfolioBy),
           reviewerId: org.reviewedBy ? await idOf(org.reviewedBy) : undefined,
           currency: org.settings.currency,
