@@ -14,15 +14,33 @@ export function formatDate(value: Date | string): string {
 
 export const monthNames = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
 
+const numberFormats = new Map<string, Intl.NumberFormat>();
+
+/**
+ * Grouped thousands and a fixed number of decimals by Intl's own options: `negative` signs
+ * negative figures only, `exceptZero` every figure but zero, and a figure that rounds to zero
+ * is never signed in either (Intl rounds before it signs). The hyphen Intl writes for minus
+ * becomes the true minus sign a printed pack uses.
+ */
+function grouped(value: number, digits: number, signDisplay: 'negative' | 'exceptZero'): string {
+  const key = `${digits}|${signDisplay}`;
+  let format = numberFormats.get(key);
+  if (!format) numberFormats.set(key, (format = new Intl.NumberFormat('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits, signDisplay })));
+  return format
+    .formatToParts(value)
+    .map((part) => (part.type === 'minusSign' ? '−' : part.value))
+    .join('');
+}
+
+const withCurrency = (text: string, currency?: string) => (currency ? `${currency} ${text}` : text);
+
 /**
  * A money amount as people read it in a finance pack: grouped thousands, one decimal (the demo
  * and most cases are in millions), a true minus sign, and the currency code in front.
  */
 export function formatMoney(value: number | null | undefined, currency?: string, digits = 1): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '–';
-  const text = new Intl.NumberFormat('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits }).format(Math.abs(value));
-  const sign = value < 0 && Number(text.replace(/,/g, '')) !== 0 ? '−' : '';
-  return `${currency ? `${currency} ` : ''}${sign}${text}`;
+  return withCurrency(grouped(value, digits, 'negative'), currency);
 }
 
 /** A number with grouped thousands and a true minus sign, for grids and tables. */
@@ -30,8 +48,8 @@ export function formatNumber(value: number | null | undefined, digits = 1): stri
   return formatMoney(value, undefined, digits);
 }
 
-/** A change, always signed (+ or −), e.g. for increments in a waterfall. */
+/** A change, always signed (+ or −) unless it rounds to zero, e.g. for increments in a waterfall. */
 export function formatChange(value: number, currency?: string, digits = 1): string {
-  const text = formatMoney(value, currency, digits);
-  return value > 0 && text.replace(/[^1-9]/g, '') !== '' ? text.replace(/^([A-Z]{3} )?/, (m) => `${m}+`) : text;
+  if (!Number.isFinite(value)) return '–';
+  return withCurrency(grouped(value, digits, 'exceptZero'), currency);
 }

@@ -6,6 +6,7 @@ import { Input } from '@/components/ui/input';
 import { Select } from '@/components/ui/select';
 import { useToast } from '@/components/ui/toast';
 import { monthNames } from '@/lib/format';
+import { readNumberText } from '@/lib/number-text';
 import { settingsSchema, type SettingsInput } from '@/lib/validations/settings';
 import { updateSettingsAction } from '../actions';
 
@@ -18,7 +19,12 @@ interface SettingsFields {
   alertDaysBeforeClose: string;
 }
 
-const percentToFraction = (v: string) => (v.trim() === '' ? NaN : Number(v) / 100);
+/** The one reading of typed numbers (lib/number-text.ts); what it refuses reaches the schema as NaN, "Enter a number." */
+const typed = (v: string) => {
+  const read = readNumberText(v);
+  return read.ok ? read.value : NaN;
+};
+const percentToFraction = (v: string) => typed(v) / 100;
 
 function toInput(fields: SettingsFields) {
   return {
@@ -26,7 +32,7 @@ function toInput(fields: SettingsFields) {
     riskFreeRate: percentToFraction(fields.riskFreeRate),
     wacc: percentToFraction(fields.wacc),
     fiscalYearStartMonth: Number(fields.fiscalYearStartMonth),
-    alertDaysBeforeClose: fields.alertDaysBeforeClose.trim() === '' ? NaN : Number(fields.alertDaysBeforeClose),
+    alertDaysBeforeClose: typed(fields.alertDaysBeforeClose),
   };
 }
 

@@ -8,6 +8,7 @@ import { JobProgress } from '@/components/job-progress';
 import { Button } from '@/components/ui/button';
 import { getJson, sendJson } from '@/lib/api-client';
 import { formatPercent } from '@/lib/format';
+import { readNumberText } from '@/lib/number-text';
 import type { Distribution, SimulationResult, UncertainLine } from '@/lib/volatility/monte-carlo';
 
 const lineLabels: Record<UncertainLine, string> = { revenue: 'Revenue', operatingCost: 'Operating cost', tax: 'Tax', workingCapital: 'Working capital' };
@@ -26,6 +27,13 @@ interface Job {
   progress: number;
   result: SimulationResult | null;
   error: string | null;
+}
+
+/** A typed figure by the one reading (lib/number-text.ts); one it refuses stops the start, naming the field. */
+function typed(raw: string, what: string): number {
+  const read = readNumberText(raw);
+  if (!read.ok) throw new Error(`${what}: ${read.message}`);
+  return read.value;
 }
 
 const field = 'h-9 rounded-md border border-line-strong bg-paper-raised px-2';
@@ -62,12 +70,12 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
         drivers: chosen.map((line) => ({
           line,
           distribution: drivers[line].distribution,
-          spread: Number(drivers[line].spread) / 100,
-          growth: Number(drivers[line].growth) / 100,
+          spread: typed(drivers[line].spread, `${lineLabels[line]} spread`) / 100,
+          growth: typed(drivers[line].growth, `${lineLabels[line]} growth`) / 100,
         })),
-        correlations: pairs.map((p) => Number(correlation[p] ?? '0')),
-        paths: Number(paths),
-        seed: Number(seed),
+        correlations: pairs.map((p) => typed(correlation[p] ?? '0', 'Correlation')),
+        paths: typed(paths, 'Paths'),
+        seed: typed(seed, 'Seed'),
       };
       const { id } = await sendJson<{ id: string }>('POST', '/api/v1/volatility/simulations', { caseId, spec });
       setJobId(id);
