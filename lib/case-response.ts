@@ -1,5 +1,6 @@
 /** How projects and cases appear in the API. */
 import type { Case, Project } from '@/db/types';
+import type { CaseJson } from './case-json';
 
 export function presentProject(p: Project) {
   return {
@@ -27,4 +28,9 @@ export function presentCase(c: Case) {
     createdAt: c.created_at,
     updatedAt: c.updated_at,
   };
+}
+
+/** A case as the API's JSON carries it (dates as ISO text), for a page that hands it to the editor. */
+export function caseAsJson(c: Case): CaseJson {
+  return JSON.parse(JSON.stringify(presentCase(c))) as CaseJson;
 }

@@ -143,8 +143,14 @@ describe('the analyst workspace', () => {
 
   it('shows the case read-only to an executive, and refuses a direct write with 403', async () => {
     const { context, page } = await signedInPage('executive@kestrelbay.example');
+    // The page hands the case it loaded to the editor: the browser does not fetch it a second time.
+    const caseFetches: string[] = [];
+    page.on('request', (r) => {
+      if (new URL(r.url()).pathname === `/api/v1/cases/${caseId}`) caseFetches.push(r.method());
+    });
     await page.goto(caseUrl);
     await expect.poll(() => page.getByText('Read-only: your role can read this case but not change it.').isVisible(), { timeout: 20_000 }).toBe(true);
+    expect(caseFetches).toEqual([]);
     expect(await page.getByRole('button', { name: 'Save' }).count()).toBe(0);
     expect(await page.getByRole('button', { name: 'Value case' }).count()).toBe(0);
     expect(await page.getByLabel('Revenue, year 1', { exact: true }).getAttribute('readonly')).not.toBeNull();

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { Forbidden } from '@/components/forbidden';
+import { caseAsJson } from '@/lib/case-response';
 import { readCase } from '@/lib/cases/service';
 import { guardPage, orNotFound } from '@/lib/page-guard';
 import { roleAllows } from '@/lib/permissions';
@@ -25,6 +26,7 @@ export default async function CasePage({
   return (
     <CaseEditor
       caseId={found.id}
+      loaded={caseAsJson(found)}
       projectId={project.id}
       projectName={project.name}
       currency={project.currency}

@@ -45,6 +45,9 @@ interface Props {
   initialTab?: string;
 }
 
+/** The case as the page loaded it: shown at once, and fetched again only after a save or a conflict. */
+type EditorProps = Props & { loaded: CaseJson };
+
 interface RunSummary {
   id: string;
   caseVersion: number;
@@ -53,8 +56,12 @@ interface RunSummary {
   expandedNpv: number;
 }
 
-export function CaseEditor(props: Props) {
-  const { data, error, isLoading, mutate } = useSWR<{ case: CaseJson }>(`/api/v1/cases/${props.caseId}`, getJson, { revalidateOnFocus: false });
+export function CaseEditor({ loaded, ...props }: EditorProps) {
+  const { data, error, isLoading, mutate } = useSWR<{ case: CaseJson }>(`/api/v1/cases/${props.caseId}`, getJson, {
+    fallbackData: { case: loaded },
+    revalidateOnMount: false,
+    revalidateOnFocus: false,
+  });
   if (isLoading) return <LoadingBlock label="Loading the case" lines={8} />;
   if (error || !data) return <LoadError message={error?.message ?? 'No answer from the server.'} onRetry={() => mutate()} />;
   return <LoadedEditor key={`${data.case.id}:${data.case.version}`} {...props} initial={data.case} reload={() => mutate()} />;
