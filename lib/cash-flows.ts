@@ -1,5 +1,5 @@
 /**
- * From a yearly cash-flow schedule to what the lattice needs: the static NPV at the WACC, the
+ * From a yearly cash-flow schedule to what the lattice needs: the NPV at the WACC, the
  * underlying value V0 (PV of the operating cash flows, i.e. without the investment) and the
  * payout schedule (the share of the project's value it pays out each year).
  *
@@ -52,7 +52,8 @@ export interface CashFlowAnalysis {
   totals: { revenue: number; operatingCost: number; capex: number; tax: number; workingCapital: number; freeCashFlow: number };
   underlyingValue: number;
   investment: number;
-  staticNpv: number;
+  /** Σ free cash flow × discount factor at the WACC. Not the lattice's static NPV (docs/glossary.md), which discounts a defer cost or stage payments at the risk-free rate. */
+  npvAtWacc: number;
   /** The capex of each year that has some, and its discount factor at the WACC. */
   outlays: { year: number; amount: number; discountFactor: number }[];
   /** Per year t ≥ 1, the share of the value still to come that the year (t − 1, t] pays out. */
@@ -72,7 +73,7 @@ export function analyseCashFlows(input: CashFlowSchedule): CashFlowAnalysis {
   });
   const underlyingValue = analysed.reduce((sum, r) => sum + r.operatingCashFlow * r.discountFactor, 0);
   const investment = analysed.reduce((sum, r) => sum + r.capex * r.discountFactor, 0);
-  const staticNpv = analysed.reduce((sum, r) => sum + r.presentValue, 0);
+  const npvAtWacc = analysed.reduce((sum, r) => sum + r.presentValue, 0);
 
   const payouts: CashFlowAnalysis['payouts'] = [];
   // Year t's operating cash is the share f_t of the value still to come that the year pays
@@ -108,7 +109,7 @@ export function analyseCashFlows(input: CashFlowSchedule): CashFlowAnalysis {
     },
     underlyingValue,
     investment,
-    staticNpv,
+    npvAtWacc,
     outlays: analysed.filter((r) => r.capex !== 0).map((r) => ({ year: r.year, amount: r.capex, discountFactor: r.discountFactor })),
     payouts,
     warnings,

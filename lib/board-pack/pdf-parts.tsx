@@ -94,7 +94,7 @@ export function assumptionRows(inputs: CaseInput, model: ProjectModel, currency:
   const analysis = analyseCashFlows(inputs.cashFlows);
   return [
     ['Underlying value V0 (PV of operating cash flows)', money(analysis.underlyingValue, currency)],
-    ['Static NPV at the WACC', money(analysis.staticNpv, currency)],
+    ['NPV at the WACC', money(analysis.npvAtWacc, currency)],
     ['WACC', formatPercent(inputs.cashFlows.wacc)],
     ['Cash-flow timing', inputs.cashFlows.timing === 'mid-year' ? 'mid-year' : 'end of year'],
     ['Volatility of the project value', formatPercent(inputs.settings.volatility)],

@@ -70,7 +70,7 @@ describe('the analyst workspace', () => {
     };
     const analysis = analyseCashFlows(schedule);
     await expect.poll(() => page.getByText(formatMoney(analysis.underlyingValue, 'EUR'), { exact: true }).isVisible()).toBe(true);
-    await expect.poll(() => headline(page, 'Static NPV').innerText()).toBe(formatMoney(analysis.staticNpv, 'EUR'));
+    await expect.poll(() => headline(page, 'Static NPV').innerText()).toBe(formatMoney(analysis.npvAtWacc, 'EUR'));
 
     // A cell that is not a number is flagged and keeps the model unchanged.
     await cell('Tax', 3).fill('n/a');

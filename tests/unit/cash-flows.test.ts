@@ -29,7 +29,7 @@ describe('cash-flow arithmetic', () => {
     const a = analyseCashFlows({ wacc: 0.1, rows: [year(0, 0, 0, 0, 100), year(1, 80, 30, 10), year(2, 80, 30, 10), year(3, 80, 30, 10)] });
     expect(a.underlyingValue).toBeCloseTo(99.4740796, 6);
     expect(a.investment).toBeCloseTo(100, 12);
-    expect(a.staticNpv).toBeCloseTo(-0.5259204, 6);
+    expect(a.npvAtWacc).toBeCloseTo(-0.5259204, 6);
     expect(a.payouts.map((p) => p.at)).toEqual([1, 2, 3]);
     expect(a.payouts[0]!.fraction).toBeCloseTo(0.365559, 6);
     expect(a.payouts[1]!.fraction).toBeCloseTo(0.52381, 6);
@@ -53,8 +53,8 @@ describe('cash-flow arithmetic', () => {
           wacc,
           a.rows.map((r) => r.freeCashFlow),
         );
-        expect(Math.abs(a.staticNpv - reference)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(reference)));
-        expect(Math.abs(a.staticNpv - (a.underlyingValue - a.investment))).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(reference)));
+        expect(Math.abs(a.npvAtWacc - reference)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(reference)));
+        expect(Math.abs(a.npvAtWacc - (a.underlyingValue - a.investment))).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(reference)));
       }),
       { numRuns: 200 },
     );

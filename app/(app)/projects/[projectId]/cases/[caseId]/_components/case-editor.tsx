@@ -332,7 +332,7 @@ function LoadedEditor({
         ) : null}
 
         <div className="grid gap-4 sm:grid-cols-3">
-          <Headline label="Static NPV" value={formatMoney(result?.staticNpv ?? analysis?.staticNpv, currency)} busy={busy} />
+          <Headline label="Static NPV" value={formatMoney(result?.staticNpv, currency)} busy={busy} />
           <Headline label="Option premium" value={formatMoney(result?.optionPremium, currency)} busy={busy} />
           <Headline label="Expanded NPV" value={formatMoney(result?.expandedNpv, currency)} strong busy={busy} />
         </div>
@@ -355,8 +355,8 @@ function LoadedEditor({
               : busy
                 ? 'Recomputing in your browser…'
                 : 'Computed live in your browser from the figures on screen; “Value case” stores a run on the server.'}
-          {result && analysis && Math.abs(result.staticNpv - analysis.staticNpv) > 0.05
-            ? ` Static NPV here is the plan without flexibility as the lattice values it: a defer cost or stage payments are discounted at the risk-free rate (at the WACC it is ${formatMoney(analysis.staticNpv, currency)}, see Cash flows).`
+          {result && analysis && Math.abs(result.staticNpv - analysis.npvAtWacc) > 0.05
+            ? ` Static NPV here is the plan without flexibility as the lattice values it: a defer cost or stage payments are discounted at the risk-free rate (the NPV at the WACC is ${formatMoney(analysis.npvAtWacc, currency)}, see Cash flows).`
             : ''}
         </p>
 

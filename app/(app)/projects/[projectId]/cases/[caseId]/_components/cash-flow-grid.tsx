@@ -222,7 +222,7 @@ export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCoun
                   {formatNumber(analysis?.rows[col]?.presentValue)}
                 </td>
               ))}
-              <td className="border-l border-line px-2 py-1">{formatNumber(analysis?.staticNpv)}</td>
+              <td className="border-l border-line px-2 py-1">{formatNumber(analysis?.npvAtWacc)}</td>
             </tr>
           </tbody>
         </table>

@@ -127,7 +127,7 @@ export function CashFlowImport({
           <div className="flex flex-col gap-4">
             <p className="text-ink-soft">
               Read {preview.cashFlows.rows.length} years at a WACC of {formatPercent(preview.cashFlows.wacc)}: static NPV{' '}
-              {formatMoney(preview.analysis.staticNpv, currency)}, V₀ {formatMoney(preview.analysis.underlyingValue, currency)}. Nothing is saved until you
+              {formatMoney(preview.analysis.npvAtWacc, currency)}, V₀ {formatMoney(preview.analysis.underlyingValue, currency)}. Nothing is saved until you
               confirm; the current cash flows are then replaced.
             </p>
             <div className="max-h-80 overflow-auto rounded-card border border-line">

@@ -68,7 +68,7 @@ export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onCha
       {analysis ? (
         <>
           <dl className="grid gap-4 sm:grid-cols-3">
-            <Derived label="Static NPV at the WACC" value={formatMoney(analysis.staticNpv, currency)} note="Σ free cash flow × discount factor" />
+            <Derived label="NPV at the WACC" value={formatMoney(analysis.npvAtWacc, currency)} note="Σ free cash flow × discount factor" />
             <Derived
               label="Underlying value V₀"
               value={formatMoney(analysis.underlyingValue, currency)}
