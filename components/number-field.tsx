@@ -1,6 +1,7 @@
 'use client';
 
 import { useEffect, useState } from 'react';
+import type { z } from 'zod';
 import { readNumberText } from '@/lib/number-text';
 import { useReportProblem } from './field-problems';
 import { Input } from './ui/input';
@@ -12,7 +13,12 @@ interface Props {
   onChange: (value: number) => void;
   /** Shown and typed as a percentage, stored as a fraction. */
   percent?: boolean;
-  /** Checks a parsed value; returns a message when it is out of range. */
+  /**
+   * The range the server enforces, read from the same zod schema (lib/validations/, lib/cash-flows.ts):
+   * the field says the schema's own message, so the rule and its words are written once.
+   */
+  schema?: z.ZodType<number>;
+  /** A rule that depends on other fields (the steps a case's rights may use); returns a message or null. */
   check?: (value: number) => string | null;
   hint?: string;
   readOnly?: boolean;
@@ -28,7 +34,7 @@ const show = (value: number, percent: boolean) => (percent ? String(Number((valu
  * wrong and reports it to the form around it (components/field-problems.tsx), which then will not
  * save.
  */
-export function NumberField({ label, value, onChange, percent = false, check, hint, readOnly, integer, className }: Props) {
+export function NumberField({ label, value, onChange, percent = false, schema, check, hint, readOnly, integer, className }: Props) {
   const [text, setText] = useState(show(value, percent));
   const [error, setError] = useState<string | null>(null);
   // Follow outside changes (a reload, an import) without fighting the user's typing: adjust
@@ -45,14 +51,15 @@ export function NumberField({ label, value, onChange, percent = false, check, hi
   const change = (next: string) => {
     setText(next);
     const read = readNumberText(next);
+    const model = read.ok ? (percent ? read.value / 100 : read.value) : NaN;
     const problem = !read.ok
       ? read.message
       : integer && !Number.isInteger(read.value)
         ? 'Enter a whole number.'
-        : (check?.(percent ? read.value / 100 : read.value) ?? null);
+        : (schema?.safeParse(model).error?.issues[0]?.message ?? check?.(model) ?? null);
     setError(problem);
     report(field, problem);
-    if (!problem && read.ok) onChange(percent ? read.value / 100 : read.value);
+    if (!problem && read.ok) onChange(model);
   };
   return (
     <Input

@@ -27,10 +27,13 @@ export const cashFlowYearSchema = z.object({
   workingCapital: amount,
 });
 
+/** The discount rate of the cash flows, as a fraction a year. */
+export const waccSchema = z.number().gt(-0.5, 'WACC must be above −50 %.').lt(1, 'WACC must be below 100 %.');
+
 export const cashFlowScheduleSchema = z
   .object({
     rows: z.array(cashFlowYearSchema).min(1, 'Add at least one year.').max(60, 'At most 60 years.'),
-    wacc: z.number().gt(-0.5, 'WACC must be above −50 %.').lt(1, 'WACC must be below 100 %.'),
+    wacc: waccSchema,
     timing: z.enum(['end-of-year', 'mid-year']).default('end-of-year'),
   })
   .superRefine((value, ctx) => {

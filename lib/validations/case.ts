@@ -7,8 +7,12 @@ export const caseSettingsSchema = z.object({
   /** Annualised volatility of the project's value, as a fraction. */
   volatility: z.number().gt(0, 'Volatility must be above 0 %.').max(3, 'Volatility must be at most 300 %.'),
   /** Continuously compounded risk-free rate, as a fraction a year. */
-  riskFreeRate: z.number().gt(-0.05).lt(0.25),
-  steps: z.number().int().min(1).max(MAX_STEPS),
+  riskFreeRate: z.number().gt(-0.05, 'Use a rate above −5 %.').lt(0.25, 'Use a rate below 25 %.'),
+  steps: z
+    .number()
+    .int('Enter a whole number.')
+    .min(1, 'Use at least 1 step.')
+    .max(MAX_STEPS, `Use at most ${MAX_STEPS.toLocaleString('en-GB')} steps.`),
   tree: treeKindSchema.default('crr'),
   /** Where the volatility comes from, in words a reviewer can check (the method and its inputs). */
   volatilitySource: z

@@ -4,9 +4,9 @@ import { PATH_LIMITS } from '../cross-check/limits';
 
 export const crossCheckStartSchema = z.strictObject({
   paths: z
-    .int()
-    .min(PATH_LIMITS.min)
-    .max(PATH_LIMITS.max)
+    .int('Enter a whole number of paths.')
+    .min(PATH_LIMITS.min, `Use at least ${PATH_LIMITS.min.toLocaleString('en-GB')} paths.`)
+    .max(PATH_LIMITS.max, `Use at most ${PATH_LIMITS.max.toLocaleString('en-GB')} paths.`)
     .optional()
     .meta({ description: `Paths in each pass (fitting and checking), ${PATH_LIMITS.min}–${PATH_LIMITS.max}; ${PATH_LIMITS.default} when omitted.` }),
   seed: z

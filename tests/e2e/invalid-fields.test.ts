@@ -51,7 +51,7 @@ describe('invalid fields', () => {
     await steps.click();
     await steps.press('ControlOrMeta+a');
     await steps.pressSequentially('100000', { delay: 20 });
-    await expect.poll(() => alert.innerText()).toMatch(/Lattice steps: Use 1 to [\d,]+ steps/);
+    await expect.poll(() => alert.innerText()).toMatch(/Lattice steps: Use at most [\d,]+ steps/);
 
     // Fixed, the case saves again with the figures on screen.
     await steps.press('ControlOrMeta+a');

@@ -2,7 +2,7 @@
 
 import { NumberField } from '@/components/number-field';
 import { Select } from '@/components/ui/select';
-import type { CashFlowAnalysis, CashFlowSchedule } from '@/lib/cash-flows';
+import { waccSchema, type CashFlowAnalysis, type CashFlowSchedule } from '@/lib/cash-flows';
 import { formatMoney, formatPercent } from '@/lib/format';
 import { CashFlowGrid } from './cash-flow-grid';
 
@@ -29,7 +29,6 @@ function Derived({ label, value, note }: { label: string; value: string; note: s
 
 /** The case's cash flows: the grid, the discounting conventions, and what the lattice takes from them, all live. */
 export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onChange, onInvalidCount, importer }: Props) {
-  const wacc = (value: number) => (value <= -0.5 || value >= 1 ? 'WACC must lie between −50 % and 100 %.' : null);
   return (
     <div className="flex flex-col gap-6">
       <div className="flex flex-wrap items-end gap-4">
@@ -37,7 +36,7 @@ export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onCha
           label="WACC"
           percent
           value={cashFlows.wacc}
-          check={wacc}
+          schema={waccSchema}
           readOnly={readOnly}
           onChange={(v) => onChange({ ...cashFlows, wacc: v })}
           className="w-40"

@@ -12,6 +12,7 @@ import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { ApiError, getJson, sendJson } from '@/lib/api-client';
 import { PATH_LIMITS } from '@/lib/cross-check/limits';
 import type { CrossCheckResult } from '@/lib/cross-check/run';
+import { crossCheckStartSchema } from '@/lib/validations/cross-check';
 import { formatDateTime, formatMoney, formatPercent } from '@/lib/format';
 
 interface CrossCheck {
@@ -27,10 +28,7 @@ interface CrossCheck {
   createdAt: string;
 }
 
-const pathsProblem = (n: number) =>
-  Number.isInteger(n) && n >= PATH_LIMITS.min && n <= PATH_LIMITS.max
-    ? null
-    : `Between ${PATH_LIMITS.min.toLocaleString('en-GB')} and ${PATH_LIMITS.max.toLocaleString('en-GB')} whole paths.`;
+const pathsSchema = crossCheckStartSchema.shape.paths.unwrap();
 
 const ignoreProblem = () => {};
 
@@ -174,9 +172,9 @@ export function CrossCheckPanel({ caseId, currency, canStart, unsaved }: { caseI
         <div className="mb-4 flex flex-wrap items-end gap-4">
           {/* Not a field of the case: its problems are its own, never the case form's (which would then not save). */}
           <FieldProblems.Provider value={ignoreProblem}>
-            <NumberField label="Cross-check paths (each pass)" value={paths} onChange={setPaths} integer check={pathsProblem} className="w-40" />
+            <NumberField label="Cross-check paths (each pass)" value={paths} onChange={setPaths} integer schema={pathsSchema} className="w-40" />
           </FieldProblems.Provider>
-          <Button variant="secondary" busy={busy} disabled={busy || running || pathsProblem(paths) !== null} onClick={() => void start()}>
+          <Button variant="secondary" busy={busy} disabled={busy || running || !pathsSchema.safeParse(paths).success} onClick={() => void start()}>
             Cross-check
           </Button>
           {unsaved ? <span className="text-caption text-ember-700">Checks the saved version: save first to include your changes.</span> : null}

@@ -4,7 +4,7 @@ import { Panel } from '@/components/panel';
 import { NumberField } from '@/components/number-field';
 import { Select } from '@/components/ui/select';
 import { MAX_STEPS } from '@/lattice';
-import type { CaseInput } from '@/lib/validations/case';
+import { caseSettingsSchema, type CaseInput } from '@/lib/validations/case';
 import { volatilityMethodLabels as methodLabels } from '@/lib/volatility/method-words';
 import { treeLabels } from '@/lib/tree-words';
 import { HistoryEstimate } from './history-estimate';
@@ -50,7 +50,7 @@ export function LatticeSettingsSection({
             percent
             value={settings.volatility}
             readOnly={readOnly}
-            check={(v) => (v <= 0 ? 'Volatility must be above 0 %.' : v > 3 ? 'Volatility must be at most 300 %.' : null)}
+            schema={caseSettingsSchema.shape.volatility}
             onChange={(volatility) => onChange({ ...settings, volatility, volatilitySource: { method: 'direct', note: source?.note ?? '' } })}
           />
           <label className="flex flex-col gap-1">
@@ -95,7 +95,7 @@ export function LatticeSettingsSection({
             value={settings.riskFreeRate}
             readOnly={readOnly}
             hint="Continuously compounded, a year; e.g. a government bond yield of the project's currency and life."
-            check={(v) => (v <= -0.05 || v >= 0.25 ? 'Use a rate between −5 % and 25 %.' : null)}
+            schema={caseSettingsSchema.shape.riskFreeRate}
             onChange={(riskFreeRate) => onChange({ ...settings, riskFreeRate })}
           />
           <NumberField
@@ -104,11 +104,8 @@ export function LatticeSettingsSection({
             value={settings.steps}
             readOnly={readOnly}
             hint={`${perYear.toFixed(1)} steps a year over the ${horizon}-year horizon; more steps, smaller error (see Results → convergence).`}
-            check={(v) =>
-              v < 1 || v > maxSteps
-                ? `Use 1 to ${maxSteps.toLocaleString('en-GB')} steps${maxSteps < MAX_STEPS ? ' (the most a full valuation with these rights may use)' : ''}.`
-                : null
-            }
+            schema={caseSettingsSchema.shape.steps}
+            check={(v) => (v > maxSteps ? `Use at most ${maxSteps.toLocaleString('en-GB')} steps: the most a full valuation with these rights may use.` : null)}
             onChange={(steps) => onChange({ ...settings, steps })}
           />
           <Select
