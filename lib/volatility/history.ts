@@ -11,6 +11,7 @@
  */
 import { jStat } from 'jstat';
 import { z } from 'zod';
+import { deviation } from 'd3';
 
 export const MIN_RETURNS = 10;
 export const MAX_OBSERVATIONS = 100_000;
@@ -129,8 +130,8 @@ export function estimateFromHistory(input: HistoryPoint[], confidence = 0.95): H
 
   const logReturns = sorted.slice(1).map((p, k) => ({ date: p.date, value: Math.log(p.value / sorted[k]!.value) }));
   const n = logReturns.length;
-  const mean = logReturns.reduce((s, r) => s + r.value, 0) / n;
-  const periodStdDev = Math.sqrt(logReturns.reduce((s, r) => s + (r.value - mean) ** 2, 0) / (n - 1));
+  // The sample standard deviation (n − 1) of the log returns, by d3 (Welford's method).
+  const periodStdDev = deviation(logReturns, (r) => r.value) ?? NaN;
   if (!(periodStdDev > 0)) throw new HistoryError('The values never change, so their volatility is zero: the lattice needs a positive volatility.');
   const f = periodsPerYear[frequency];
   const alpha = 1 - confidence;

@@ -19,6 +19,7 @@
  * to each factor's distribution). Draws come from a seeded generator (normal-draws.ts): the same
  * seed gives the same result.
  */
+import { deviation, extent, mean as d3Mean } from 'd3';
 import { jStat } from 'jstat';
 import { z } from 'zod';
 import { cashFlowScheduleSchema, type CashFlowSchedule, type CashFlowYear } from '../cash-flows';
@@ -140,24 +141,15 @@ function summarise(all: Float64Array): MethodEstimate {
   const excluded = all.length - values.length;
   const n = values.length;
   if (n < 2) return { volatility: NaN, mean: NaN, excluded, histogram: [] };
-  let mean = 0;
-  for (let k = 0; k < n; k++) mean += values[k]!;
-  mean /= n;
-  let sq = 0;
-  let lo = Infinity;
-  let hi = -Infinity;
-  for (let k = 0; k < n; k++) {
-    const d = values[k]! - mean;
-    sq += d * d;
-    if (values[k]! < lo) lo = values[k]!;
-    if (values[k]! > hi) hi = values[k]!;
-  }
+  // d3's mean and deviation (the sample standard deviation, n − 1, by Welford's method).
+  const mean = d3Mean(values)!;
+  const [lo, hi] = extent(values) as [number, number];
   const bins = 40;
   const width = (hi - lo) / bins || 1;
   const counts = new Array<number>(bins).fill(0);
   for (let k = 0; k < n; k++) counts[Math.min(bins - 1, Math.floor((values[k]! - lo) / width))]! += 1;
   return {
-    volatility: Math.sqrt(sq / (n - 1)),
+    volatility: deviation(values)!,
     mean,
     excluded,
     histogram: counts.map((count, b) => ({ from: lo + b * width, to: lo + (b + 1) * width, count })),
