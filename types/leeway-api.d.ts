@@ -1584,6 +1584,8 @@ export interface components {
             /** @description An amount in the project's currency and units. */
             staticNpv: number;
             /** @description An amount in the project's currency and units. */
+            optionPremium: number;
+            /** @description An amount in the project's currency and units. */
             expandedNpv: number;
         };
         Watch: {
@@ -4433,6 +4435,8 @@ export interface operations {
                             recommendation: string | null;
                             engineVersion: string;
                             inputHash: string;
+                            staticNpv: number | null;
+                            optionPremium: number | null;
                             expandedNpv: number | null;
                         }[];
                     };

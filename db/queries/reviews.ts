@@ -180,6 +180,8 @@ export async function listSnapshots(db: Database, { orgId, caseId }: { orgId: st
       'case_snapshot.input_hash',
       'submitter.name as submitted_by_name',
       'decider.name as decided_by_name',
+      sql<number>`(case_snapshot.result->>'staticNpv')::float8`.as('static_npv'),
+      sql<number>`(case_snapshot.result->>'optionPremium')::float8`.as('option_premium'),
       sql<number>`(case_snapshot.result->>'expandedNpv')::float8`.as('expanded_npv'),
     ])
     .where('case_snapshot.organization_id', '=', orgId)
@@ -234,6 +236,7 @@ export async function listReviewQueue(db: Database, { orgId, statuses = ['in_rev
         'case_snapshot.decided_at as decidedAt',
         'user.name as submittedBy',
         sql<number>`(case_snapshot.result->>'staticNpv')::float8`.as('staticNpv'),
+        sql<number>`(case_snapshot.result->>'optionPremium')::float8`.as('optionPremium'),
         sql<number>`(case_snapshot.result->>'expandedNpv')::float8`.as('expandedNpv'),
       ])
       .where('case.organization_id', '=', orgId)

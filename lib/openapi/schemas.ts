@@ -269,6 +269,8 @@ export const snapshotListingSchema = z.object({
       recommendation: z.string().nullable(),
       engineVersion: z.string(),
       inputHash: z.string(),
+      staticNpv: money.nullable(),
+      optionPremium: money.nullable(),
       expandedNpv: money.nullable(),
     }),
   ),
@@ -287,6 +289,7 @@ export const reviewQueueItemSchema = z
     decidedAt: dateTime.nullable(),
     submittedBy: nullableName,
     staticNpv: money,
+    optionPremium: money,
     expandedNpv: money,
   })
   .meta({ id: 'ReviewQueueItem' });

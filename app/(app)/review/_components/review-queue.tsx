@@ -2,11 +2,11 @@
 
 import Link from 'next/link';
 import useSWR from 'swr';
+import { DecisionCell, FigureCells, FigureHeads, SubmittedCell } from '@/components/case-figures';
 import { EmptyState } from '@/components/empty-state';
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { getJson } from '@/lib/api-client';
-import { formatDateTime, formatMoney } from '@/lib/format';
 
 interface QueueRow {
   caseId: string;
@@ -19,6 +19,7 @@ interface QueueRow {
   decidedAt: string | null;
   submittedBy: string | null;
   staticNpv: number;
+  optionPremium: number;
   expandedNpv: number;
 }
 
@@ -29,8 +30,7 @@ function QueueTable({ rows, decided }: { rows: QueueRow[]; decided?: boolean }) 
         <tr>
           <Th>Case</Th>
           <Th>Submitted</Th>
-          <Th numeric>Static NPV</Th>
-          <Th numeric>Expanded NPV</Th>
+          <FigureHeads />
           {decided ? <Th>Decision</Th> : null}
         </tr>
       </thead>
@@ -42,20 +42,9 @@ function QueueTable({ rows, decided }: { rows: QueueRow[]; decided?: boolean }) 
                 {r.projectName} — {r.caseName}
               </Link>
             </Td>
-            <Td>
-              {formatDateTime(r.submittedAt)}
-              <span className="block text-caption text-ink-muted">by {r.submittedBy ?? 'a former member'}</span>
-            </Td>
-            <Td numeric>{formatMoney(r.staticNpv, r.currency)}</Td>
-            <Td numeric className="font-semibold">
-              {formatMoney(r.expandedNpv, r.currency)}
-            </Td>
-            {decided ? (
-              <Td>
-                {r.status === 'approved' ? 'Approved' : 'Returned'}
-                {r.decidedAt ? <span className="block text-caption text-ink-muted">{formatDateTime(r.decidedAt)}</span> : null}
-              </Td>
-            ) : null}
+            <SubmittedCell at={r.submittedAt} by={r.submittedBy} />
+            <FigureCells figures={r} currency={r.currency} />
+            {decided ? <DecisionCell status={r.status === 'approved' ? 'approved' : 'returned'} at={r.decidedAt} /> : null}
           </Tr>
         ))}
       </tbody>

@@ -4,6 +4,7 @@ import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import useSWR from 'swr';
+import { FigureCells, FigureHeads } from '@/components/case-figures';
 import { EmptyState } from '@/components/empty-state';
 import { FormProblem } from '@/components/form-problem';
 import { LoadError, LoadingBlock } from '@/components/load-state';
@@ -17,7 +18,7 @@ import { ENGINE_VERSION } from '@/lattice';
 import { useToast } from '@/components/ui/toast';
 import { getJson, sendJson } from '@/lib/api-client';
 import type { CaseJson } from '@/lib/case-json';
-import { formatDate, formatMoney } from '@/lib/format';
+import { formatDate } from '@/lib/format';
 import { starterCase } from '@/lib/starter-case';
 
 type Pending = { kind: 'new' } | { kind: 'duplicate'; source: CaseJson } | { kind: 'delete'; target: CaseJson } | null;
@@ -102,9 +103,7 @@ export function CaseTable(props: { projectId: string; currency: string; canEdit:
             <tr>
               <Th>Case</Th>
               <Th>Status</Th>
-              <Th numeric>Static NPV</Th>
-              <Th numeric>Option premium</Th>
-              <Th numeric>Expanded NPV</Th>
+              <FigureHeads />
               <Th>Figures of</Th>
               <Th>Version</Th>
               {canEdit ? <Th className="text-right">Actions</Th> : null}
@@ -121,11 +120,7 @@ export function CaseTable(props: { projectId: string; currency: string; canEdit:
                 <Td>
                   <StatusBadge status={c.status as CaseStatus} />
                 </Td>
-                <Td numeric>{formatMoney(c.latest?.staticNpv, currency)}</Td>
-                <Td numeric>{formatMoney(c.latest?.optionPremium, currency)}</Td>
-                <Td numeric className="font-semibold">
-                  {formatMoney(c.latest?.expandedNpv, currency)}
-                </Td>
+                <FigureCells figures={c.latest} currency={currency} />
                 <Td>
                   {c.latest ? (
                     <>

@@ -27,6 +27,8 @@ export const GET = withAuth<{ caseId: string }>(async ({ member, params }) => {
       recommendation: s.recommendation,
       engineVersion: s.engine_version,
       inputHash: s.input_hash,
+      staticNpv: s.static_npv,
+      optionPremium: s.option_premium,
       expandedNpv: s.expanded_npv,
     })),
   });

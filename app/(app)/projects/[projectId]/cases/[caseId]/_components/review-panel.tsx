@@ -7,15 +7,15 @@ import { LoadError, LoadingBlock } from '@/components/load-state';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
 import { StatusBadge } from '@/components/status-badge';
-import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { useToast } from '@/components/ui/toast';
-import type { CaseStatus, SnapshotStatus } from '@/lib/review/transitions';
+import type { CaseStatus } from '@/lib/review/transitions';
 import { getJson, sendJson } from '@/lib/api-client';
-import { formatDateTime, formatMoney } from '@/lib/format';
+import { formatDateTime } from '@/lib/format';
 import { readingOfFigures } from '@/lib/figures-reading';
 import { transitions, type ReviewAction } from '@/lib/review/transitions';
 import { SubmitDialog } from './submit-dialog';
 import { VersionChanges, type VersionChangesJson } from './version-changes';
+import { ReviewHistory, type Snapshot } from './review-history';
 
 export interface ReviewRights {
   canSubmit: boolean;
@@ -25,20 +25,6 @@ export interface ReviewRights {
   canRerun: boolean;
   /** May start and cancel cross-checks (the same independent review). */
   canCrossCheck: boolean;
-}
-
-interface Snapshot {
-  id: string;
-  caseVersion: number;
-  status: SnapshotStatus;
-  submittedAt: string;
-  submittedBy: string | null;
-  submittedByYou: boolean;
-  decidedAt: string | null;
-  decidedBy: string | null;
-  decisionReason: string | null;
-  recommendation: string | null;
-  expandedNpv: number;
 }
 
 interface Comment {
@@ -217,45 +203,6 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
             </p>
           ) : null}
         </section>
-        <section>
-          <h3 className="mb-2 text-body font-semibold">Review history</h3>
-          {snapshots.length === 0 ? (
-            <p className="text-ink-soft">Not submitted yet. Submitting freezes the inputs, the result and the engine version for the reviewers.</p>
-          ) : (
-            <Table caption="Snapshots submitted for review">
-              <thead>
-                <tr>
-                  <Th>Submitted</Th>
-                  <Th>Version</Th>
-                  <Th numeric>Expanded NPV</Th>
-                  <Th>Decision</Th>
-                </tr>
-              </thead>
-              <tbody>
-                {snapshots.map((s) => (
-                  <Tr key={s.id}>
-                    <Td>
-                      {formatDateTime(s.submittedAt)}
-                      <span className="block text-caption text-ink-muted">by {s.submittedBy ?? 'a former member'}</span>
-                    </Td>
-                    <Td className="figures">v{s.caseVersion}</Td>
-                    <Td numeric>{formatMoney(s.expandedNpv, currency)}</Td>
-                    <Td>
-                      <StatusBadge status={s.status} />
-                      {s.decidedAt ? (
-                        <span className="block text-caption text-ink-muted">
-                          {s.status === 'withdrawn' ? `by ${s.submittedBy ?? 'a former member'}` : (s.decidedBy ?? 'a former member')},{' '}
-                          {formatDateTime(s.decidedAt)}
-                          {s.decisionReason ? `: “${s.decisionReason}”` : ''}
-                        </span>
-                      ) : null}
-                    </Td>
-                  </Tr>
-                ))}
-              </tbody>
-            </Table>
-          )}
-        </section>
       </div>
       <section aria-labelledby="comments-heading" className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
         <h3 id="comments-heading" className="mb-3 text-body font-semibold">
@@ -311,6 +258,7 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
           </form>
         ) : null}
       </section>
+      <ReviewHistory snapshots={snapshots} currency={currency} />
       <SubmitDialog
         open={submitting}
         text={recommendation}
