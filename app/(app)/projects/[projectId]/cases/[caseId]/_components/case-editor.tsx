@@ -1,19 +1,17 @@
 'use client';
 
 import Link from 'next/link';
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useState } from 'react';
 import useSWR from 'swr';
-import { FieldProblems } from '@/components/field-problems';
+import { FieldProblems, useFieldProblemList } from '@/components/field-problems';
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { StatusBadge } from '@/components/status-badge';
 import { Button } from '@/components/ui/button';
 import { Tabs } from '@/components/ui/tabs';
 import { useToast } from '@/components/ui/toast';
-import { largestStepsWithinBudget, MAX_STEPS, ModelError, prepareModel, type OptionTemplate, type ProjectModel } from '@/lattice';
+import type { OptionTemplate } from '@/lattice';
 import { ApiError, getJson, sendJson } from '@/lib/api-client';
 import type { CaseJson } from '@/lib/case-json';
-import { caseToModel } from '@/lib/case-model';
-import { analyseCashFlows, type CashFlowAnalysis } from '@/lib/cash-flows';
 import { useValuation } from '@/lib/engine/use-engine';
 import { formatDateTime, formatMoney } from '@/lib/format';
 import { issueInWords } from '@/lib/issue-words';
@@ -33,6 +31,8 @@ import { CrossCheckPanel } from './cross-check-panel';
 import { ValidationReportPanel } from './validation-report-panel';
 import { WatchPanel } from './watch-panel';
 import { ReviewPanel, type ReviewRights } from './review-panel';
+import { useDraftModel } from './use-draft-model';
+import { useUnsavedWarning } from './use-unsaved-warning';
 
 interface Props {
   caseId: string;
@@ -101,19 +101,8 @@ function LoadedEditor({
   const [invalidCells, setInvalidCells] = useState(0);
   const [optionProblems, setOptionProblems] = useState(0);
   // Fields whose text is not a valid value (components/field-problems.tsx), by label.
-  const [fieldProblems, setFieldProblems] = useState<Record<string, string>>({});
-  const reportProblem = useCallback((field: string, problem: string | null) => {
-    // What is on screen is no longer what is saved, even if no valid value changed.
-    if (problem) setDirty(true);
-    setFieldProblems((current) => {
-      if ((current[field] ?? null) === problem) return current;
-      const next = { ...current };
-      if (problem) next[field] = problem;
-      else delete next[field];
-      return next;
-    });
-  }, []);
-  const wrongFields = Object.entries(fieldProblems);
+  const markUnsaved = useCallback(() => setDirty(true), []);
+  const { report: reportProblem, problems: wrongFields } = useFieldProblemList(markUnsaved);
   const [saving, setSaving] = useState(false);
   const [valuing, setValuing] = useState(false);
   const [conflict, setConflict] = useState<string | null>(null);
@@ -124,47 +113,11 @@ function LoadedEditor({
     setDirty(true);
   };
 
-  const analysis: CashFlowAnalysis | null = useMemo(() => {
-    try {
-      return analyseCashFlows(draft.cashFlows);
-    } catch {
-      return null;
-    }
-  }, [draft.cashFlows]);
-  const horizon = Math.max(1, draft.cashFlows.rows.at(-1)?.year ?? 1);
-
-  const built = useMemo((): { model: ProjectModel; modes: string[]; start: string } | { problem: string; cards?: Record<number, string> } => {
-    try {
-      const { model } = caseToModel(draft);
-      const { compiled } = prepareModel(model);
-      return { model, modes: compiled.modes.map((m) => m.id), start: compiled.modes[compiled.start]!.id };
-    } catch (error) {
-      if (error instanceof ModelError) {
-        const options = (draft.options ?? []) as OptionTemplate[];
-        // A refusal that names an option marks its card too.
-        const cards: Record<number, string> = {};
-        for (const issue of error.issues) {
-          const index = issue.field.match(/^options\[(\d+)\]/)?.[1];
-          if (index !== undefined) cards[Number(index)] = issueInWords(issue.message, options);
-        }
-        return { problem: error.issues.map((i) => issueInWords(i.message, options)).join('; '), cards };
-      }
-      return { problem: error instanceof Error ? error.message : 'The case cannot be valued yet.' };
-    }
-  }, [draft]);
-  const model = 'model' in built ? built.model : null;
-  // The steps field allows what the engine's budget allows for these rights (it refuses more).
-  // Read off the model already built from the draft, not a second build of it.
-  const maxSteps = useMemo(() => (model ? largestStepsWithinBudget(model) : MAX_STEPS), [model]);
+  const { analysis, horizon, built, model, maxSteps } = useDraftModel(draft);
   const valuation = useValuation(model, {});
   const result = model ? valuation.result : null;
 
-  useEffect(() => {
-    if (!dirty) return;
-    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
-    window.addEventListener('beforeunload', warn);
-    return () => window.removeEventListener('beforeunload', warn);
-  }, [dirty]);
+  useUnsavedWarning(dirty);
 
   const blocked =
     wrongFields.length > 0
