@@ -6,6 +6,7 @@ import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette, seriesStrong } from '@/lib/palette';
+import { axisTicks } from '@/lib/charts/axis';
 
 const dashes = ['', '6 3', '2 3', '8 3 2 3', '1 2', '10 4'];
 
@@ -55,17 +56,17 @@ export function BoundaryChart({
   return (
     <div ref={ref} className="w-full">
       <svg width={width} height={height} role="img" aria-label={series.map((x) => x.rule.text).join(' ')}>
-        {y.ticks(5).map((t) => (
-          <g key={t}>
-            <line x1={margin.left} x2={width - margin.right} y1={y(t)} y2={y(t)} stroke={palette.paper.sunk} />
-            <text x={margin.left - 8} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
-              {formatMoney(t, undefined, 0)}
+        {axisTicks(y, 5).map((t) => (
+          <g key={t.value}>
+            <line x1={margin.left} x2={width - margin.right} y1={t.at} y2={t.at} stroke={palette.paper.sunk} />
+            <text x={margin.left - 8} y={t.at} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
+              {t.label}
             </text>
           </g>
         ))}
-        {x.ticks(Math.min(10, horizon)).map((t) => (
-          <text key={t} x={x(t)} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
-            {t}
+        {axisTicks(x, Math.min(10, horizon)).map((t) => (
+          <text key={t.value} x={t.at} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
+            {t.label}
           </text>
         ))}
         <text x={(margin.left + width - margin.right) / 2} y={height - 4} textAnchor="middle" className="fill-ink-muted text-caption">

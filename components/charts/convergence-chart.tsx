@@ -2,10 +2,10 @@
 
 import { line, scaleLinear } from 'd3';
 import type { Convergence } from '@/lattice';
-import { tickDigits } from '@/lib/charts/tick-digits';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
+import { axisTicks } from '@/lib/charts/axis';
 
 /** The expanded NPV as steps grow, with the engine's error band around the case's own value and the extrapolated value. */
 export function ConvergenceChart({ convergence, currency }: { convergence: Convergence; currency: string }) {
@@ -26,8 +26,7 @@ export function ConvergenceChart({ convergence, currency }: { convergence: Conve
     .nice()
     .range([height - margin.bottom, margin.top]);
   // As many decimals as the tick spacing needs, so no two ticks read the same.
-  const ticks = y.ticks(4);
-  const digits = tickDigits(ticks);
+  const ticks = axisTicks(y, 4);
   const path = line<{ steps: number; value: number }>()
     .x((p) => x(p.steps))
     .y((p) => y(p.value))(points);
@@ -51,8 +50,8 @@ export function ConvergenceChart({ convergence, currency }: { convergence: Conve
           extrapolated {formatMoney(extrapolated, currency, 2)}
         </text>
         {ticks.map((t) => (
-          <text key={t} x={margin.left - 8} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
-            {formatMoney(t, undefined, digits)}
+          <text key={t.value} x={margin.left - 8} y={t.at} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
+            {t.label}
           </text>
         ))}
         {path ? <path d={path} fill="none" stroke={palette.ink.DEFAULT} strokeWidth="1.5" /> : null}

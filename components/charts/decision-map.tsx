@@ -5,6 +5,7 @@ import type { NodeGrid } from '@/lattice';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
+import { axisTicks } from '@/lib/charts/axis';
 
 /**
  * The decision map of one mode over the whole lattice: every node placed by time and project
@@ -62,9 +63,9 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
               {formatMoney(t, undefined, t < 1 ? 2 : 0)}
             </text>
           ))}
-        {x.ticks(8).map((t) => (
-          <text key={t} x={x(t)} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
-            {t}
+        {axisTicks(x, 8).map((t) => (
+          <text key={t.value} x={t.at} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
+            {t.label}
           </text>
         ))}
         <text x={(margin.left + width - margin.right) / 2} y={height - 4} textAnchor="middle" className="fill-ink-muted text-caption">

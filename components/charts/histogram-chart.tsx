@@ -4,6 +4,7 @@ import { scaleLinear } from 'd3';
 import { formatPercent } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
+import { axisTicks } from '@/lib/charts/axis';
 
 /** A histogram of simulated returns (bins of z = ln of the year-1 value over today's), in counts of paths. */
 export function HistogramChart({ bins, label }: { bins: { from: number; to: number; count: number }[]; label: string }) {
@@ -23,9 +24,9 @@ export function HistogramChart({ bins, label }: { bins: { from: number; to: numb
         {bins.map((b) => (
           <rect key={b.from} x={x(b.from)} width={Math.max(1, x(b.to) - x(b.from) - 1)} y={y(b.count)} height={y(0) - y(b.count)} fill={palette.tide[500]} />
         ))}
-        {x.ticks(5).map((t) => (
-          <text key={t} x={x(t)} y={height - 6} textAnchor="middle" className="figures fill-ink-muted text-caption">
-            {formatPercent(t, 0)}
+        {axisTicks(x, 5, (v, digits) => formatPercent(v, Math.max(0, digits - 2))).map((t) => (
+          <text key={t.value} x={t.at} y={height - 6} textAnchor="middle" className="figures fill-ink-muted text-caption">
+            {t.label}
           </text>
         ))}
       </svg>

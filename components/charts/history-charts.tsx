@@ -4,6 +4,7 @@ import { extent, line, max, scaleLinear, scaleUtc } from 'd3';
 import { formatPercent } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
+import { axisTicks } from '@/lib/charts/axis';
 
 interface Point {
   date: string;
@@ -39,11 +40,11 @@ export function HistoryCharts({ series, returns }: { series: Point[]; returns: P
   return (
     <div ref={ref} className="grid w-full gap-2">
       <svg width={width} height={height} role="img" aria-label={`The series: ${series.length} values from ${series[0]?.date} to ${series.at(-1)?.date}`}>
-        {y.ticks(4).map((t) => (
-          <g key={t}>
-            <line x1={margin.left} x2={width - margin.right} y1={y(t)} y2={y(t)} stroke={palette.paper.sunk} />
-            <text x={margin.left - 6} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
-              {t.toLocaleString('en-GB')}
+        {axisTicks(y, 4).map((t) => (
+          <g key={t.value}>
+            <line x1={margin.left} x2={width - margin.right} y1={t.at} y2={t.at} stroke={palette.paper.sunk} />
+            <text x={margin.left - 6} y={t.at} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
+              {t.label}
             </text>
           </g>
         ))}
@@ -55,11 +56,11 @@ export function HistoryCharts({ series, returns }: { series: Point[]; returns: P
         ))}
       </svg>
       <svg width={width} height={height} role="img" aria-label={`Log returns, between ${formatPercent(-r)} and ${formatPercent(r)}`}>
-        {yr.ticks(4).map((t) => (
-          <g key={t}>
-            <line x1={margin.left} x2={width - margin.right} y1={yr(t)} y2={yr(t)} stroke={t === 0 ? palette.ink.muted : palette.paper.sunk} />
-            <text x={margin.left - 6} y={yr(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
-              {formatPercent(t, 0)}
+        {axisTicks(yr, 4, (v, digits) => formatPercent(v, Math.max(0, digits - 2))).map((t) => (
+          <g key={t.value}>
+            <line x1={margin.left} x2={width - margin.right} y1={t.at} y2={t.at} stroke={t.value === 0 ? palette.ink.muted : palette.paper.sunk} />
+            <text x={margin.left - 6} y={t.at} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
+              {t.label}
             </text>
           </g>
         ))}

@@ -41,7 +41,7 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
           <g key={t.value}>
             <line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} />
             <text x={t.x} y={layout.height - layout.margin.bottom + 16} textAnchor="middle" className="fill-ink-muted text-caption figures">
-              {formatMoney(t.value, undefined, Math.abs(t.value) < 10 && t.value % 1 !== 0 ? 1 : 0)}
+              {t.label}
             </text>
           </g>
         ))}

@@ -35,7 +35,7 @@ export function TornadoChart({ sensitivities, base, currency }: { sensitivities:
           <g key={t.value}>
             <line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} />
             <text x={t.x} y={layout.height - layout.margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
-              {formatMoney(t.value, undefined, 0)}
+              {t.label}
             </text>
           </g>
         ))}

@@ -28,7 +28,7 @@ export function WaterfallChart({ result, currency }: { result: ValuationResult; 
           <g key={t.value}>
             <line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={t.y} y2={t.y} stroke={palette.paper.sunk} />
             <text x={layout.margin.left - 8} y={t.y} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
-              {formatMoney(t.value, undefined, 0)}
+              {t.label}
             </text>
           </g>
         ))}

@@ -88,7 +88,7 @@ function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
         <G key={t.value}>
           <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} strokeWidth={1} />
           <SvgText x={t.x} y={layout.height - layout.margin.bottom + 12} anchor="middle" color={muted}>
-            {money(t.value, undefined, 0)}
+            {t.label}
           </SvgText>
         </G>
       ))}
@@ -126,7 +126,7 @@ function WaterfallPdf({ data, width }: { data: BoardPackData; width: number }) {
         <G key={t.value}>
           <Line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={t.y} y2={t.y} stroke={palette.paper.sunk} strokeWidth={1} />
           <SvgText x={layout.margin.left - 6} y={t.y + 3} anchor="end" color={muted}>
-            {money(t.value, undefined, 0)}
+            {t.label}
           </SvgText>
         </G>
       ))}
@@ -160,7 +160,7 @@ function TornadoPdf({ data, width }: { data: BoardPackData; width: number }) {
         <G key={t.value}>
           <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} strokeWidth={1} />
           <SvgText x={t.x} y={layout.height - layout.margin.bottom + 12} anchor="middle" color={muted}>
-            {money(t.value, undefined, 0)}
+            {t.label}
           </SvgText>
         </G>
       ))}

@@ -4,6 +4,7 @@
  * and a zero line. Pure (d3-scale only), so the web chart and the PDF chart draw the same thing.
  */
 import { scaleBand, scaleLinear } from 'd3';
+import { axisTicks } from './axis';
 
 export interface NpvPair {
   id: string;
@@ -17,7 +18,7 @@ export interface NpvComparisonLayout {
   height: number;
   margin: { top: number; right: number; bottom: number; left: number };
   x: (value: number) => number;
-  ticks: { value: number; x: number }[];
+  ticks: { value: number; x: number; label: string }[];
   zeroX: number;
   rows: (NpvPair & { y: number; staticX: number; expandedX: number })[];
   rowHeight: number;
@@ -44,7 +45,7 @@ export function layoutNpvComparison(items: NpvPair[], width: number, options: { 
     height,
     margin,
     x,
-    ticks: x.ticks(6).map((value) => ({ value, x: x(value) })),
+    ticks: axisTicks(x, 6).map((t) => ({ value: t.value, x: t.at, label: t.label })),
     zeroX: x(0),
     rowHeight,
     rows: items.map((i) => ({ ...i, y: (y(i.id) ?? 0) + y.bandwidth() / 2, staticX: x(i.staticNpv), expandedX: x(i.expandedNpv) })),

@@ -3,6 +3,7 @@
  * drawn as bars from the base value, widest swing on top. Pure, shared by web and PDF charts.
  */
 import { scaleBand, scaleLinear } from 'd3';
+import { axisTicks } from './axis';
 import type { Sensitivity } from '@/lattice';
 
 export interface TornadoLayout {
@@ -10,7 +11,7 @@ export interface TornadoLayout {
   height: number;
   margin: { top: number; right: number; bottom: number; left: number };
   baseX: number;
-  ticks: { value: number; x: number }[];
+  ticks: { value: number; x: number; label: string }[];
   rows: { sensitivity: Sensitivity; y: number; bandHeight: number; lowX: number | null; highX: number | null; swing: number }[];
 }
 
@@ -40,7 +41,7 @@ export function layoutTornado(
     height,
     margin,
     baseX: x(base),
-    ticks: x.ticks(5).map((value) => ({ value, x: x(value) })),
+    ticks: axisTicks(x, 5).map((t) => ({ value: t.value, x: t.at, label: t.label })),
     rows: sorted.map((s) => ({
       sensitivity: s,
       y: y(s.parameter) ?? 0,

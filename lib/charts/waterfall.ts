@@ -4,6 +4,7 @@
  * stand-alone values; negative when they substitute) and the expanded NPV. Pure (d3-scale only), shared by the web and PDF charts.
  */
 import { scaleBand, scaleLinear } from 'd3';
+import { axisTicks } from './axis';
 import type { ValuationResult } from '@/lattice';
 
 export interface WaterfallStep {
@@ -37,7 +38,7 @@ export interface WaterfallLayout {
   height: number;
   margin: { top: number; right: number; bottom: number; left: number };
   bars: (WaterfallStep & { x: number; width: number; y: number; height: number; center: number })[];
-  ticks: { value: number; y: number }[];
+  ticks: { value: number; y: number; label: string }[];
   zeroY: number;
 }
 
@@ -58,7 +59,7 @@ export function layoutWaterfall(steps: WaterfallStep[], width: number, height = 
     height,
     margin,
     zeroY: y(0),
-    ticks: y.ticks(5).map((value) => ({ value, y: y(value) })),
+    ticks: axisTicks(y, 5).map((t) => ({ value: t.value, y: t.at, label: t.label })),
     bars: steps.map((s) => {
       const top = y(Math.max(s.from, s.to));
       const bottom = y(Math.min(s.from, s.to));

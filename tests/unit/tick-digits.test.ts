@@ -1,6 +1,7 @@
 /** Axis labels never repeat: decimals follow the tick spacing (the convergence axis read "20.1" twice). */
 import { scaleLinear } from 'd3';
 import { describe, expect, it } from 'vitest';
+import { axisTicks } from '@/lib/charts/axis';
 import { tickDigits } from '@/lib/charts/tick-digits';
 import { formatMoney } from '@/lib/format';
 
@@ -23,5 +24,14 @@ describe('tick labels', () => {
       const labels = ticks.map((t) => formatMoney(t, undefined, tickDigits(ticks)));
       expect(new Set(labels).size).toBe(labels.length);
     }
+  });
+
+  it('are what every chart and the board pack print: axisTicks places and labels them once', () => {
+    // A waterfall whose bars span 0 to 2 (a small case): the old labels with no decimals read "0, 1, 1, 2, 2".
+    const small = axisTicks(scaleLinear().domain([0, 2]).range([0, 100]), 5);
+    expect(small.map((t) => t.label)).toEqual(['0.0', '0.5', '1.0', '1.5', '2.0']);
+    expect(small.map((t) => t.at)).toEqual([0, 25, 50, 75, 100]);
+    const wide = axisTicks(scaleLinear().domain([-1500, 1500]).range([0, 300]), 6);
+    expect(wide.map((t) => t.label)).toEqual(['−1,500', '−1,000', '−500', '0', '500', '1,000', '1,500']);
   });
 });
