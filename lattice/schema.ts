@@ -1,6 +1,7 @@
 /**
  * The engine's input, as one zod schema shared by the engine, the API and the forms.
- * Shape checks live here (types, signs, ranges); rules that relate fields to each other (mode
+ * Shape checks live here (types, signs, ranges), with the words the option cards show beside
+ * the field (the engine's own refusals are written from the rule, lattice/format-issues.ts); rules that relate fields to each other (mode
  * ids that exist, windows inside the horizon, no switching cycle that pays for itself) live in
  * `check-model.ts`, which runs right after this schema.
  */
@@ -48,14 +49,14 @@ export const switchSchema = z.strictObject({
 const expandSchema = z.strictObject({
   type: z.literal('expand'),
   id: id.optional(),
-  factor: z.number().gt(0),
+  factor: z.number().gt(0, 'Must be above 0 %.'),
   cost: costSchema,
   window: windowSchema,
 });
 const contractSchema = z.strictObject({
   type: z.literal('contract'),
   id: id.optional(),
-  fraction: z.number().gt(0).max(1),
+  fraction: z.number().gt(0, 'Must be above 0 % and at most 100 %.').max(1, 'Must be above 0 % and at most 100 %.'),
   savings: costSchema,
   window: windowSchema,
 });
@@ -78,14 +79,14 @@ const stageSchema = z.strictObject({
   type: z.literal('stage'),
   id: id.optional(),
   payments: z
-    .array(z.strictObject({ at: years, amount: z.number().min(0) }))
+    .array(z.strictObject({ at: years, amount: z.number().min(0, 'Must be 0 or more.') }))
     .min(1)
     .max(12),
 });
 const switchTemplateSchema = z.strictObject({
   type: z.literal('switch'),
   id: id.optional(),
-  toScale: z.number().min(0),
+  toScale: z.number().min(0, 'Must be 0 or more.'),
   cost: costSchema,
   backCost: costSchema,
   flowPerYear: finite.optional(),

@@ -175,6 +175,8 @@ function readNumber(text: string, path: string, problems: Problems, rule?: (x: n
   return value;
 }
 
+// A schedule's years are checked here, not by the schema: a cost is a union there, whose refusal
+// would name the whole cost instead of the period's field.
 const nonNegative = (x: number) => (x < 0 ? 'Must be 0 or more.' : null);
 
 function readCost(form: CostForm, path: string, problems: Problems): Cost {
@@ -216,13 +218,14 @@ export function toTemplates(forms: OptionForm[], horizon: number): { templates: 
     const labelsBefore = forms.slice(0, i).map((g) => g.label.trim());
     if (id && labelsBefore.includes(id)) problems[`${at}.label`] = 'Another option already has this name.';
     const window = () => readWindow(f.window, `${at}.window`, horizon, problems);
-    const share = (rule: (x: number) => string | null) => readNumber(f.share, `${at}.share`, problems, rule) / 100;
+    // The share's range is the engine schema's (factor, fraction, toScale), checked below with its words.
+    const share = () => readNumber(f.share, `${at}.share`, problems) / 100;
     switch (f.type) {
       case 'expand':
         return {
           type: 'expand',
           id,
-          factor: share((x) => (x <= 0 ? 'Must be above 0 %.' : null)),
+          factor: share(),
           cost: readCost(f.cost, `${at}.cost`, problems),
           window: window(),
         };
@@ -230,7 +233,7 @@ export function toTemplates(forms: OptionForm[], horizon: number): { templates: 
         return {
           type: 'contract',
           id,
-          fraction: share((x) => (x <= 0 || x > 100 ? 'Must be above 0 % and at most 100 %.' : null)),
+          fraction: share(),
           savings: readCost(f.cost, `${at}.cost`, problems),
           window: window(),
         };
@@ -245,14 +248,14 @@ export function toTemplates(forms: OptionForm[], horizon: number): { templates: 
           id,
           payments: f.payments.map((p, k) => ({
             at: readNumber(p.at, `${at}.payments.${k}.at`, problems, (x) => (x < 0 || x > horizon ? `Must lie between year 0 and year ${horizon}.` : null)),
-            amount: readNumber(p.amount, `${at}.payments.${k}.amount`, problems, nonNegative),
+            amount: readNumber(p.amount, `${at}.payments.${k}.amount`, problems),
           })),
         };
       case 'switch':
         return {
           type: 'switch',
           id,
-          toScale: share(nonNegative),
+          toScale: share(),
           cost: readCost(f.cost, `${at}.cost`, problems),
           backCost: readCost(f.backCost, `${at}.backCost`, problems),
           flowPerYear: readNumber(f.flowPerYear, `${at}.flowPerYear`, problems),
@@ -264,7 +267,13 @@ export function toTemplates(forms: OptionForm[], horizon: number): { templates: 
   templates.forEach((t, i) => {
     if (Object.keys(problems).some((path) => path.startsWith(`options.${i}.`))) return;
     const parsed = optionTemplateSchema.safeParse(t);
-    if (!parsed.success) for (const issue of parsed.error.issues) problems[`options.${i}.${issue.path.join('.')}`] ??= issue.message;
+    if (!parsed.success)
+      for (const issue of parsed.error.issues) {
+        // The card shows factor, fraction and toScale in one "share" field.
+        const [first, ...rest] = issue.path.map(String);
+        const field = first === 'factor' || first === 'fraction' || first === 'toScale' ? 'share' : first;
+        problems[[`options.${i}`, field, ...rest].join('.')] ??= issue.message;
+      }
   });
   return { templates, problems };
 }

@@ -65,6 +65,26 @@ describe('option cards', () => {
     });
   });
 
+  it("say the engine schema's own words for a share or a payment out of its range, at the card's field", () => {
+    const b = basis(100);
+    const stage = newOptionForm('stage', b);
+    const { problems } = toTemplates(
+      [
+        { ...newOptionForm('expand', b), share: '0' },
+        { ...newOptionForm('contract', b), share: '150' },
+        { ...newOptionForm('switch', b), share: '-10' },
+        { ...stage, payments: [{ at: '0', amount: '-5' }] },
+      ],
+      5,
+    );
+    expect(problems).toEqual({
+      'options.0.share': 'Must be above 0 %.',
+      'options.1.share': 'Must be above 0 % and at most 100 %.',
+      'options.2.share': 'Must be 0 or more.',
+      'options.3.payments.0.amount': 'Must be 0 or more.',
+    });
+  });
+
   it('start a Defer or a Stage card from the static plan, so adding one leaves the NPV without flexibility where it was', () => {
     // The demo plant (capex at year 0) and pilot line (capex over years 0–2), invented figures.
     // The tolerance is the rounding of each amount to cents: 0.005 per payment.
