@@ -66,11 +66,11 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
   const ids = templateIds(options);
   const deferAt = options.findIndex((o) => o.type === 'defer');
   const stageAt = options.findIndex((o) => o.type === 'stage');
-  if (options.filter((o) => o.type === 'defer').length > 1) refuse('options', 'may hold at most one defer option');
-  if (options.filter((o) => o.type === 'stage').length > 1) refuse('options', 'may hold at most one stage option');
-  if (deferAt >= 0 && stageAt >= 0) refuse(`options[${stageAt}]`, 'cannot be combined with a defer option: make the first stage payment the defer cost');
+  if (options.filter((o) => o.type === 'defer').length > 1) refuse('options', 'may hold at most one defer right');
+  if (options.filter((o) => o.type === 'stage').length > 1) refuse('options', 'may hold at most one stage right');
+  if (deferAt >= 0 && stageAt >= 0) refuse(`options[${stageAt}]`, 'cannot be combined with a defer right: make the first stage payment the defer cost');
   if ((deferAt >= 0 || stageAt >= 0) && model.investment !== undefined && model.investment !== 0)
-    refuse('investment', 'must be omitted when a defer or stage option carries the outlay');
+    refuse('investment', 'must be omitted when a defer or stage right carries the outlay');
 
   const whole: ExerciseWindow = { kind: 'american', from: 0, to: model.horizon };
   const stage = stageAt >= 0 ? (options[stageAt] as Extract<OptionTemplate, { type: 'stage' }>) : undefined;
@@ -174,10 +174,10 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
       const field = `exercised[${n}]`;
       if (k < 0) refuse(field, `names no option template ("${name}")`);
       const o = options[k]!;
-      if (o.type === 'stage') refuse(field, 'cannot name a stage option: give only the payments still to make');
+      if (o.type === 'stage') refuse(field, 'cannot name a stage right: give only the payments still to make');
       if (s.phase === 'closed') refuse(field, 'follows an abandonment: nothing is left to use');
       if (o.type === 'defer') s = { ...s, phase: 'operating' };
-      else if (s.phase !== 'operating') refuse(field, `needs the project operating: name the defer option "${ids[deferAt]}" as used first`);
+      else if (s.phase !== 'operating') refuse(field, `needs the project operating: name the defer right "${ids[deferAt]}" as used first`);
       else if (o.type === 'abandon') s = { ...s, phase: 'closed', exercised: 0, switched: -1 };
       else if (o.type === 'switch') s = { ...s, switched: k };
       else s = { ...s, exercised: s.exercised | (1 << k) };

@@ -1,7 +1,7 @@
 /**
  * The engine names a field by its path in the model ("options[4].window.to must be ≤ horizon");
- * a person knows the option by the name on its card. This rewrites each path into words:
- * "Option “Phase 2”: window closes (to) must be ≤ horizon".
+ * a person knows the right by the name on its card. This rewrites each path into words:
+ * "right “Phase 2” (window closes (to)) must be ≤ horizon".
  */
 import type { OptionTemplate } from '@/lattice';
 
@@ -22,12 +22,12 @@ const parts: Record<string, string> = {
 export function issueInWords(message: string, options: OptionTemplate[]): string {
   return message.replace(/options\[(\d+)\]((?:\.\w+|\[\d+\])*)/g, (_, index: string, rest: string) => {
     const k = Number(index);
-    const name = options[k]?.id ?? `Option ${k + 1}`;
+    const name = options[k]?.id ?? `Right ${k + 1}`;
     const path = rest
       .split(/\.|\[|\]/)
       .filter(Boolean)
       .map((p) => (/^\d+$/.test(p) ? String(Number(p) + 1) : (parts[p] ?? p)))
       .join(' ');
-    return `option “${name}”${path ? ` (${path})` : ''}`;
+    return `right “${name}”${path ? ` (${path})` : ''}`;
   });
 }

@@ -216,7 +216,7 @@ export function toTemplates(forms: OptionForm[], horizon: number): { templates: 
     const at = `options.${i}`;
     const id = f.label.trim() || undefined;
     const labelsBefore = forms.slice(0, i).map((g) => g.label.trim());
-    if (id && labelsBefore.includes(id)) problems[`${at}.label`] = 'Another option already has this name.';
+    if (id && labelsBefore.includes(id)) problems[`${at}.label`] = 'Another right already has this name.';
     const window = () => readWindow(f.window, `${at}.window`, horizon, problems);
     // The share's range is the engine schema's (factor, fraction, toScale), checked below with its words.
     const share = () => readNumber(f.share, `${at}.share`, problems) / 100;

@@ -80,7 +80,7 @@ describe('the analyst workspace', () => {
     await page.getByRole('tab', { name: 'Flexibility' }).click();
     await page.getByRole('button', { name: 'Expand', exact: true }).click();
     await page.getByRole('button', { name: 'Abandon', exact: true }).click();
-    await expect.poll(() => page.getByLabel('Option name').count()).toBe(2);
+    await expect.poll(() => page.getByLabel('Name of the right').count()).toBe(2);
 
     await page.getByRole('button', { name: 'Save' }).click();
     await expect.poll(() => page.getByText('Saved as version 2.').isVisible()).toBe(true);

@@ -70,9 +70,9 @@ describe('invalid fields', () => {
     await page.getByRole('tab', { name: 'Flexibility' }).click();
     await page.getByRole('button', { name: 'Defer', exact: true }).click();
     await page.getByRole('button', { name: 'Stage', exact: true }).click();
-    const refusal = page.getByRole('alert').filter({ hasText: 'The engine cannot use this option' });
+    const refusal = page.getByRole('alert').filter({ hasText: 'The engine cannot use this right' });
     await expect.poll(() => refusal.count(), { timeout: 20_000 }).toBe(1);
-    expect(await refusal.innerText()).toContain('option “Stages” cannot be combined with a defer option');
+    expect(await refusal.innerText()).toContain('right “Stages” cannot be combined with a defer right');
     await page.getByRole('tab', { name: 'Results' }).click();
     await expect.poll(() => page.getByText('The engine cannot value this case as it stands.').isVisible()).toBe(true);
   });

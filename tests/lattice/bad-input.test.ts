@@ -107,7 +107,7 @@ const cases: [string, unknown, string][] = [
   [
     'defer with a separate investment',
     { ...ok, investment: 80, options: [{ type: 'defer', cost: 80, window: american }] },
-    'investment must be omitted when a defer or stage option carries the outlay',
+    'investment must be omitted when a defer or stage right carries the outlay',
   ],
   [
     'stage payments out of order',

@@ -58,7 +58,7 @@ describe('option cards', () => {
     expect(problems).toEqual({
       'options.0.share': '“lots” is not a number.',
       'options.0.window.to': 'Must not come before the opening year.',
-      'options.1.label': 'Another option already has this name.',
+      'options.1.label': 'Another right already has this name.',
       'options.1.cost.schedule.1.amount': '“x” is not a number.',
       'options.1.cost.schedule.1.from': 'Must come after year 0.',
       'options.1.window.to': 'Must lie between year 0 and the horizon, year 5.',

@@ -125,7 +125,7 @@ function LoadedEditor({
       : invalidCells > 0
         ? 'Fix the cells marked in red first.'
         : optionProblems > 0
-          ? 'Fix the option fields marked in red first.'
+          ? 'Fix the fields of the rights marked in red first.'
           : draft.name.trim() === ''
             ? 'Give the case a name first.'
             : null;
@@ -295,7 +295,9 @@ function LoadedEditor({
             {[
               ...wrongFields.map(([field, problem]) => `${field}: ${problem}`),
               ...(invalidCells > 0 ? [`${invalidCells} cash-flow cell${invalidCells > 1 ? 's are' : ' is'} not a number`] : []),
-              ...(optionProblems > 0 ? [`${optionProblems} option field${optionProblems > 1 ? 's are' : ' is'} not valid`] : []),
+              ...(optionProblems > 0
+                ? [`${optionProblems} field${optionProblems > 1 ? 's' : ''} of the rights ${optionProblems > 1 ? 'are' : 'is'} not valid`]
+                : []),
             ].join('; ')}
             . The case cannot be saved or valued until they are fixed.
           </p>
@@ -374,7 +376,7 @@ function LoadedEditor({
                     }}
                   />
                   <details className="rounded-card border border-line bg-paper-raised p-5">
-                    <summary className="cursor-pointer font-medium">Advanced: the operating modes and switches these options compile to</summary>
+                    <summary className="cursor-pointer font-medium">Advanced: the operating modes and switches these rights compile to</summary>
                     <div className="mt-4">
                       <CompiledView model={model} />
                     </div>
@@ -439,7 +441,7 @@ function LoadedEditor({
                   caseId={caseId}
                   currency={currency}
                   status={status}
-                  optionNames={((draft.options ?? []) as OptionTemplate[]).map((o, k) => o.id ?? `Option ${k + 1}`)}
+                  optionNames={((draft.options ?? []) as OptionTemplate[]).map((o, k) => o.id ?? `Right ${k + 1}`)}
                   rights={rights}
                   beforeSubmit={readyToSubmit}
                   onStatus={setStatus}

@@ -305,19 +305,19 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
         return (
           <section
             key={card.id}
-            aria-label={`${optionTypeLabels[type]} option`}
+            aria-label={`Right: ${optionTypeLabels[type]}`}
             className={`rounded-card border bg-paper-raised p-5 shadow-card ${engineProblems?.[k] ? 'border-brick-500' : 'border-line'}`}
           >
             {engineProblems?.[k] ? (
               <p role="alert" className="mb-3 rounded-md bg-brick-100 px-3 py-2 text-caption text-brick-700">
-                The engine cannot use this option: {engineProblems[k]}
+                The engine cannot use this right: {engineProblems[k]}
               </p>
             ) : null}
             <header className="mb-4 flex flex-wrap items-start gap-3">
               <span className="rounded bg-tide-50 px-2 py-1 text-caption font-semibold uppercase tracking-wide text-tide-700">{optionTypeLabels[type]}</span>
               <div className="flex flex-col">
                 <input
-                  aria-label="Option name"
+                  aria-label="Name of the right"
                   placeholder="Name, e.g. Phase 2"
                   readOnly={readOnly}
                   className={`${field} w-56 font-medium`}
@@ -327,7 +327,7 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
               </div>
               <p className="min-w-48 flex-1 pt-1.5 text-caption text-ink-muted">{explain[type]}</p>
               {readOnly ? null : (
-                <Button variant="quiet" onClick={() => remove(k)} aria-label={`Remove option ${k + 1} (${optionTypeLabels[type]})`}>
+                <Button variant="quiet" onClick={() => remove(k)} aria-label={`Remove right ${k + 1} (${optionTypeLabels[type]})`}>
                   Remove
                 </Button>
               )}
@@ -384,8 +384,8 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
         );
       })}
       {readOnly ? null : (
-        <div className="flex flex-wrap items-center gap-2" role="group" aria-label="Add an option">
-          <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">Add an option:</span>
+        <div className="flex flex-wrap items-center gap-2" role="group" aria-label="Add a right">
+          <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">Add a right:</span>
           {(Object.keys(optionTypeLabels) as OptionType[]).map((type) => (
             <Button key={type} variant="secondary" onClick={() => add(type)}>
               {optionTypeLabels[type]}

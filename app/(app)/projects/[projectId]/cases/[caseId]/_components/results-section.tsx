@@ -75,7 +75,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
         note="Stand-alone: the right alone on the project. Incremental: what it adds to the others. Probabilities are risk-neutral."
       >
         {result.switches.length === 0 ? (
-          <p className="text-ink-soft">No options: expanded NPV equals static NPV.</p>
+          <p className="text-ink-soft">No rights: expanded NPV equals static NPV.</p>
         ) : (
           <Table caption="Option values and exercise">
             <thead>

@@ -75,7 +75,7 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
   const [section, setSection] = useState('general');
   const [body, setBody] = useState('');
 
-  const sections: [string, string][] = [...baseSections, ...optionNames.map((n): [string, string] => [`option:${n}`, `Option: ${n}`])];
+  const sections: [string, string][] = [...baseSections, ...optionNames.map((n): [string, string] => [`option:${n}`, `Right: ${n}`])];
   const sectionLabel = (s: string) => sections.find(([k]) => k === s)?.[1] ?? s;
 
   const act = async (kind: ReviewAction) => {
