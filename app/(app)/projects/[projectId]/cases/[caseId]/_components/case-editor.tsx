@@ -1,11 +1,9 @@
 'use client';
 
-import Link from 'next/link';
 import { useCallback, useState } from 'react';
 import useSWR from 'swr';
 import { FieldProblems, useFieldProblemList } from '@/components/field-problems';
 import { LoadError, LoadingBlock } from '@/components/load-state';
-import { StatusBadge } from '@/components/status-badge';
 import { Button } from '@/components/ui/button';
 import { Tabs } from '@/components/ui/tabs';
 import { useToast } from '@/components/ui/toast';
@@ -13,7 +11,7 @@ import type { OptionTemplate } from '@/lattice';
 import { ApiError, getJson, sendJson } from '@/lib/api-client';
 import type { CaseJson } from '@/lib/case-json';
 import { useValuation } from '@/lib/engine/use-engine';
-import { formatDateTime, formatMoney } from '@/lib/format';
+import { formatMoney } from '@/lib/format';
 import { issueInWords } from '@/lib/issue-words';
 import { cardBasis } from '@/lib/option-form';
 import type { CaseInput } from '@/lib/validations/case';
@@ -30,6 +28,7 @@ import { StoredRuns } from './stored-runs';
 import { CrossCheckPanel } from './cross-check-panel';
 import { ValidationReportPanel } from './validation-report-panel';
 import { WatchPanel } from './watch-panel';
+import { CaseHeader } from './case-header';
 import { ReviewPanel, type ReviewRights } from './review-panel';
 import { useDraftModel } from './use-draft-model';
 import { useUnsavedWarning } from './use-unsaved-warning';
@@ -196,82 +195,28 @@ function LoadedEditor({
   return (
     <FieldProblems.Provider value={reportProblem}>
       <div className="flex flex-col gap-6">
-        <div>
-          <nav aria-label="Breadcrumb" className="mb-2 text-caption text-ink-muted">
-            <Link href="/projects" className="hover:underline">
-              Projects
-            </Link>{' '}
-            /{' '}
-            <Link href={`/projects/${projectId}`} className="hover:underline">
-              {projectName}
-            </Link>{' '}
-            / {draft.name || 'Untitled case'}
-          </nav>
-          <div className="flex flex-wrap items-end justify-between gap-4">
-            <div className="flex flex-col gap-1">
-              {readOnly ? (
-                <h1>{draft.name}</h1>
-              ) : (
-                <label className="flex flex-col">
-                  <span className="sr-only">Case name</span>
-                  <input
-                    value={draft.name}
-                    onChange={(e) => update({ name: e.target.value })}
-                    maxLength={120}
-                    // As wide as the name (within the page), so a long name is never cut off.
-                    size={Math.max(12, draft.name.length + 2)}
-                    className="-ml-2 max-w-full rounded-md border border-transparent bg-transparent px-2 py-1 text-title hover:border-line focus:border-tide-500"
-                  />
-                </label>
-              )}
-              <p className="flex flex-wrap items-center gap-2 text-caption text-ink-muted">
-                <StatusBadge status={status} />
-                Version {version}
-                {dirty ? ' · unsaved changes' : ' · saved'}
-                {latestRun
-                  ? ` · last stored valuation ${formatDateTime(latestRun.createdAt)} by ${latestRun.createdBy ?? 'someone'} (version ${latestRun.caseVersion})`
-                  : runs.data
-                    ? ' · never valued on the server'
-                    : ''}
-              </p>
-            </div>
-            <div className="flex flex-wrap items-center gap-3">
-              <a
-                href={`/api/v1/cases/${caseId}/export.xlsx`}
-                className="text-tide-600 underline"
-                title="Inputs, cash flows, settings, options, results and the first lattice steps of the saved case"
-              >
-                Export workbook
-              </a>
-              {readOnly && canEdit && status === 'approved' ? (
-                <div className="flex flex-wrap items-center gap-3 rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
-                  <span>Approved: changing it starts a revision, a new draft version. The approved version and its board pack stay as they are.</span>
-                  <Button variant="secondary" onClick={() => void startRevision()} busy={revising}>
-                    Start a revision
-                  </Button>
-                </div>
-              ) : readOnly ? (
-                <p className="rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
-                  {canEdit
-                    ? 'In review: the case is frozen until a reviewer returns it.'
-                    : rights.canDecide && status === 'in_review'
-                      ? 'In review: read the case, then decide in the Review tab.'
-                      : 'Read-only: your role can read this case but not change it.'}
-                </p>
-              ) : (
-                <div className="flex gap-2">
-                  <Button variant="secondary" onClick={() => void save()} busy={saving} disabled={!dirty}>
-                    Save
-                  </Button>
-                  <Button onClick={() => void valueCase()} busy={valuing} disabled={!model || blocked !== null}>
-                    Value case
-                  </Button>
-                </div>
-              )}
-            </div>
-          </div>
-        </div>
-
+        <CaseHeader
+          caseId={caseId}
+          projectId={projectId}
+          projectName={projectName}
+          name={draft.name}
+          onName={(name) => update({ name })}
+          status={status}
+          version={version}
+          dirty={dirty}
+          latestRun={latestRun}
+          runsLoaded={runs.data !== undefined}
+          readOnly={readOnly}
+          canEdit={canEdit}
+          canDecide={rights.canDecide}
+          saving={saving}
+          onSave={() => void save()}
+          valuing={valuing}
+          canValue={model !== null && blocked === null}
+          onValue={() => void valueCase()}
+          revising={revising}
+          onRevise={() => void startRevision()}
+        />
         {conflict ? (
           <div
             role="alert"
