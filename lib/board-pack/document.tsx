@@ -74,6 +74,22 @@ function SvgText({
   );
 }
 
+/** A horizontal value axis: a light line and a label at each tick (lib/charts/axis.ts placed and labelled them). */
+function ValueAxis({ layout }: { layout: { ticks: { value: number; x: number; label: string }[]; margin: { top: number; bottom: number }; height: number } }) {
+  return (
+    <>
+      {layout.ticks.map((t) => (
+        <G key={t.value}>
+          <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} strokeWidth={1} />
+          <SvgText x={t.x} y={layout.height - layout.margin.bottom + 12} anchor="middle" color={muted}>
+            {t.label}
+          </SvgText>
+        </G>
+      ))}
+    </>
+  );
+}
+
 function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
   const r = data.snapshot.result;
   // One row, the approved case, whose name heads the page: a short label that always fits.
@@ -84,14 +100,7 @@ function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
   const row = layout.rows[0]!;
   return (
     <Svg width={layout.width} height={layout.height}>
-      {layout.ticks.map((t) => (
-        <G key={t.value}>
-          <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} strokeWidth={1} />
-          <SvgText x={t.x} y={layout.height - layout.margin.bottom + 12} anchor="middle" color={muted}>
-            {t.label}
-          </SvgText>
-        </G>
-      ))}
+      <ValueAxis layout={layout} />
       <Line
         x1={layout.zeroX}
         x2={layout.zeroX}
@@ -156,14 +165,7 @@ function TornadoPdf({ data, width }: { data: BoardPackData; width: number }) {
   const layout = layoutTornado(r.sensitivities, r.expandedNpv, width, { labelWidth: LABEL_COLUMN, rightWidth });
   return (
     <Svg width={layout.width} height={layout.height}>
-      {layout.ticks.map((t) => (
-        <G key={t.value}>
-          <Line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} strokeWidth={1} />
-          <SvgText x={t.x} y={layout.height - layout.margin.bottom + 12} anchor="middle" color={muted}>
-            {t.label}
-          </SvgText>
-        </G>
-      ))}
+      <ValueAxis layout={layout} />
       {layout.rows.map((row) => {
         const s = row.sensitivity;
         const bar = (x: number | null, fill: string) =>
