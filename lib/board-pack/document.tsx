@@ -1,6 +1,6 @@
 /**
  * The board pack, drawn with @react-pdf/renderer: cover and recommendation, NPV with and without
- * flexibility, decision rules, an excerpt of the lattice, option values and their interactions,
+ * flexibility, decision rules, an excerpt of the lattice, the rights' values and their interactions,
  * sensitivities, assumptions, methodology and limitations with the cautions, and the approval
  * record. Charts are vector drawings laid out by the same functions as the web charts
  * (lib/charts/*). Everything comes from the approved snapshot, so the same snapshot always gives
@@ -127,7 +127,7 @@ function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
 }
 
 function WaterfallPdf({ data, width }: { data: BoardPackData; width: number }) {
-  // Up to five lines of label under each bar: an option's name (at most 64 characters) fits whole.
+  // Up to five lines of label under each bar: a right's name (at most 64 characters) fits whole.
   const layout = layoutWaterfall(waterfallSteps(data.snapshot.result), width, 240, 12 + WATERFALL_LABEL_LINES * (LABEL_SIZE + 2));
   return (
     <Svg width={layout.width} height={layout.height}>
@@ -383,13 +383,13 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
         <Footer data={data} />
       </Page>
 
-      <Section data={data} title="Option values and their interactions">
+      <Section data={data} title="Rights: their values and interactions">
         <Text style={{ fontSize: 10, lineHeight: 1.4, color: soft, marginBottom: 6 }}>
-          Stand-alone: the option alone on the project. Incremental: what it adds to all the others. The interaction is what the options are worth together
-          beyond the sum of their stand-alone values (negative when they substitute). Probabilities are risk-neutral.
+          Stand-alone: the right alone on the project. Incremental: what it adds to all the others. The interaction is what the rights are worth together beyond
+          the sum of their stand-alone values (negative when they substitute). Probabilities are risk-neutral.
         </Text>
         <Table
-          columns={['Option', 'Stand-alone', 'Incremental', 'Ever exercised']}
+          columns={['Right', 'Stand-alone', 'Incremental', 'Ever exercised']}
           widths={[46, 18, 18, 18]}
           rows={[
             ...r.switches.map((s) => [
@@ -410,7 +410,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
           <Text style={styles.h3}>Sensitivity of the expanded NPV ({currency})</Text>
           <Text style={{ lineHeight: 1.4, color: soft, fontSize: 8.5 }}>
             Each input moved on its own, both ways: V0 and volatility by 10 % down (grey) and up (teal), the risk-free rate by one point, the payout schedule
-            and each option&apos;s money by 10 %. Figures: expanded NPV when moved down / up; the vertical line is the valued expanded NPV,{' '}
+            and each right&apos;s money by 10 %. Figures: expanded NPV when moved down / up; the vertical line is the valued expanded NPV,{' '}
             {money(r.expandedNpv, currency)}.
           </Text>
           <TornadoPdf data={data} width={contentWidth} />
@@ -420,7 +420,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
       <Section data={data} title="The lattice">
         <Text style={{ fontSize: 10, lineHeight: 1.4, color: soft }}>
           {pdfText(
-            `A ${r.tree.kind.toUpperCase()} binomial lattice of ${r.tree.steps} steps over ${snapshot.model.horizon} years (step ${r.tree.dt.toFixed(4)} years; up ${r.tree.u.toFixed(4)}, down ${r.tree.d.toFixed(4)}, risk-neutral probability ${r.tree.p.toFixed(4)}). The excerpt shows its first steps from today: V is the project's value, W its value with every option, and the label the decision taken at the node.`,
+            `A ${r.tree.kind.toUpperCase()} binomial lattice of ${r.tree.steps} steps over ${snapshot.model.horizon} years (step ${r.tree.dt.toFixed(4)} years; up ${r.tree.u.toFixed(4)}, down ${r.tree.d.toFixed(4)}, risk-neutral probability ${r.tree.p.toFixed(4)}). The excerpt shows its first steps from today: V is the project's value, W its value with every right, and the label the decision taken at the node.`,
           )}
         </Text>
         <View style={{ marginTop: 10 }}>

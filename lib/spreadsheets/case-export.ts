@@ -65,13 +65,13 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
     ],
   );
 
-  const options = book.addWorksheet('Options');
+  const rights = book.addWorksheet('Rights');
   table(
-    options,
-    ['Option', 'Kind', 'Terms'],
-    (c.inputs.options ?? []).map((o, k) => [o.id ?? `Option ${k + 1}`, o.type, describeOption(o, c.currency)]),
+    rights,
+    ['Right', 'Kind', 'Terms'],
+    (c.inputs.options ?? []).map((o, k) => [o.id ?? `Right ${k + 1}`, o.type, describeOption(o, c.currency)]),
   );
-  options.getColumn(3).width = 100;
+  rights.getColumn(3).width = 100;
 
   const results = book.addWorksheet('Results');
   table(

@@ -41,7 +41,7 @@ describe('workbooks', () => {
       CASH_FLOW_SHEET,
       'How to fill this in',
       'Settings',
-      'Options',
+      'Rights',
       'Results',
       'Lattice',
       'Cautions',

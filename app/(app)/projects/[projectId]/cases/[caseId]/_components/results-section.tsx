@@ -77,7 +77,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
         {result.switches.length === 0 ? (
           <p className="text-ink-soft">No rights: expanded NPV equals static NPV.</p>
         ) : (
-          <Table caption="Option values and exercise">
+          <Table caption="Rights: values and exercise">
             <thead>
               <tr>
                 <Th>Right</Th>
