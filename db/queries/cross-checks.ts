@@ -1,16 +1,6 @@
 /** Cross-check rows (migrations/0015): what a job was asked to compare, its progress and result. */
 import type { Database } from '../index';
 
-export async function countRunningCrossChecks(db: Database, { orgId }: { orgId: string }): Promise<number> {
-  const { running } = await db
-    .selectFrom('cross_check')
-    .select((eb) => eb.fn.countAll<number>().as('running'))
-    .where('organization_id', '=', orgId)
-    .where('status', '=', 'running')
-    .executeTakeFirstOrThrow();
-  return Number(running);
-}
-
 export async function insertCrossCheck(
   db: Database,
   args: { orgId: string; caseId: string; caseVersion: number; engineVersion: string; model: unknown; paths: number; seed: number; userId: string },
@@ -52,41 +42,4 @@ export async function listCrossChecks(db: Database, { orgId, caseId, limit }: { 
     .orderBy('id', 'desc')
     .limit(limit)
     .execute();
-}
-
-/** Writes progress; false when the row is no longer running (it was cancelled). */
-export async function setCrossCheckProgress(db: Database, { id, progress }: { id: string; progress: number }): Promise<boolean> {
-  const row = await db.updateTable('cross_check').set({ progress }).where('id', '=', id).where('status', '=', 'running').returning('id').executeTakeFirst();
-  return !!row;
-}
-
-export async function finishCrossCheck(
-  db: Database,
-  { id, status, result, error }: { id: string; status: 'done' | 'failed'; result?: unknown; error?: string },
-) {
-  await db
-    .updateTable('cross_check')
-    .set({
-      status,
-      progress: status === 'done' ? 1 : undefined,
-      result: result === undefined ? null : JSON.stringify(result),
-      error: error ?? null,
-      finished_at: new Date(),
-    })
-    .where('id', '=', id)
-    .where('status', '=', 'running')
-    .execute();
-}
-
-/** Marks a running cross-check cancelled; false when it had already ended. */
-export async function markCrossCheckCancelled(db: Database, { orgId, id }: { orgId: string; id: string }): Promise<boolean> {
-  const row = await db
-    .updateTable('cross_check')
-    .set({ status: 'cancelled', finished_at: new Date() })
-    .where('organization_id', '=', orgId)
-    .where('id', '=', id)
-    .where('status', '=', 'running')
-    .returning('id')
-    .executeTakeFirst();
-  return !!row;
 }

@@ -9,7 +9,8 @@ import { randomInt } from 'node:crypto';
 import { db } from '@/db';
 import { lockForOrganisation } from '@/db/queries/locks';
 import { recordAudit } from '@/db/queries/audit';
-import { countRunningCrossChecks, findCrossCheck, insertCrossCheck, listCrossChecks, markCrossCheckCancelled } from '@/db/queries/cross-checks';
+import { findCrossCheck, insertCrossCheck, listCrossChecks } from '@/db/queries/cross-checks';
+import { countRunningJobs, markJobCancelled } from '@/db/queries/job-rows';
 import { ENGINE_VERSION } from '@/lattice';
 import { caseToModel } from '../case-model';
 import { requireCase } from '../cases/require-case';
@@ -67,7 +68,7 @@ export async function startCrossCheck(member: Member, caseId: string, request: C
   return db.transaction().execute(async (trx) => {
     // One organisation's requests are counted one at a time (the lock), so the limit holds under a burst.
     await lockForOrganisation(trx, 'cross_check', args.orgId);
-    if ((await countRunningCrossChecks(trx, { orgId: args.orgId })) >= CROSS_CHECKS_PER_ORGANISATION)
+    if ((await countRunningJobs(trx, 'cross_check', { orgId: args.orgId })) >= CROSS_CHECKS_PER_ORGANISATION)
       throw new AppError(
         'rate_limited',
         `Your organisation already has ${CROSS_CHECKS_PER_ORGANISATION} cross-checks waiting or running; wait for one to finish, or cancel one, and try again.`,
@@ -101,7 +102,7 @@ export async function startCrossCheck(member: Member, caseId: string, request: C
 export async function cancelCrossCheck(member: Member, caseId: string, id: string): Promise<void> {
   const current = await readCrossCheck(member, caseId, id);
   const cancelled = await db.transaction().execute(async (trx) => {
-    if (!(await markCrossCheckCancelled(trx, { orgId: member.orgId, id }))) return false;
+    if (!(await markJobCancelled(trx, 'cross_check', { orgId: member.orgId, id }))) return false;
     await cancelJob(QUEUES.crossCheck, id, trx);
     await recordAudit(trx, {
       orgId: member.orgId,

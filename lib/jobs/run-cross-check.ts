@@ -5,13 +5,14 @@
  * runs it again (seeded: the same answer).
  */
 import { db } from '@/db';
-import { findCrossCheckForJob, finishCrossCheck, setCrossCheckProgress } from '@/db/queries/cross-checks';
+import { findCrossCheckForJob } from '@/db/queries/cross-checks';
+import { finishJob, setJobProgress } from '@/db/queries/job-rows';
 import type { CrossCheckResult } from '../cross-check/run';
 import { CROSS_CHECK_DEADLINE_SECONDS, type CrossCheckJob } from './queues';
 import { runInThread } from './thread-job';
 
 export async function markCrossCheckGaveUp(job: CrossCheckJob) {
-  await finishCrossCheck(db, {
+  await finishJob(db, 'cross_check', {
     id: job.crossCheckId,
     status: 'failed',
     error: 'The worker running this cross-check stopped more than once; start it again, perhaps with fewer paths.',
@@ -22,17 +23,17 @@ export async function runCrossCheckJob(job: CrossCheckJob): Promise<void> {
   const id = job.crossCheckId;
   const row = await findCrossCheckForJob(db, { id });
   // Cancelled while it waited, or gone with its case.
-  if (!row || row.status !== 'running' || !(await setCrossCheckProgress(db, { id, progress: 0 }))) return;
+  if (!row || row.status !== 'running' || !(await setJobProgress(db, 'cross_check', { id, progress: 0 }))) return;
   const outcome = await runInThread<CrossCheckResult>({
     file: 'cross-check-worker.mjs',
     data: { model: row.model, spec: { paths: row.paths, seed: row.seed } },
     deadlineSeconds: CROSS_CHECK_DEADLINE_SECONDS,
-    onProgress: (progress) => setCrossCheckProgress(db, { id, progress }),
+    onProgress: (progress) => setJobProgress(db, 'cross_check', { id, progress }),
   });
-  if (outcome.kind === 'done') await finishCrossCheck(db, { id, status: 'done', result: outcome.result });
-  else if (outcome.kind === 'failed') await finishCrossCheck(db, { id, status: 'failed', error: outcome.error });
+  if (outcome.kind === 'done') await finishJob(db, 'cross_check', { id, status: 'done', result: outcome.result });
+  else if (outcome.kind === 'failed') await finishJob(db, 'cross_check', { id, status: 'failed', error: outcome.error });
   else if (outcome.kind === 'deadline')
-    await finishCrossCheck(db, {
+    await finishJob(db, 'cross_check', {
       id,
       status: 'failed',
       error: `The cross-check ran longer than ${CROSS_CHECK_DEADLINE_SECONDS} s and was stopped; try fewer paths.`,

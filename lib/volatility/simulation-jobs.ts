@@ -8,7 +8,8 @@ import 'server-only';
 import { db } from '@/db';
 import { lockForOrganisation } from '@/db/queries/locks';
 import { recordAudit, type AuditEvent } from '@/db/queries/audit';
-import { countRunningSimulations, findSimulation as findSimulationRow, insertSimulation, markSimulationCancelled } from '@/db/queries/simulations';
+import { countRunningJobs, markJobCancelled } from '@/db/queries/job-rows';
+import { findSimulation as findSimulationRow, insertSimulation } from '@/db/queries/simulations';
 import type { CashFlowSchedule } from '../cash-flows';
 import { AppError } from '../errors';
 import { cancelJob, enqueue } from '../jobs/enqueue';
@@ -30,7 +31,7 @@ export async function startSimulation(args: {
   return db.transaction().execute(async (trx) => {
     // One organisation's requests are counted one at a time (the lock), so the limit holds under a burst.
     await lockForOrganisation(trx, 'volatility_simulation', args.orgId);
-    if ((await countRunningSimulations(trx, { orgId: args.orgId })) >= SIMULATIONS_PER_ORGANISATION)
+    if ((await countRunningJobs(trx, 'volatility_simulation', { orgId: args.orgId })) >= SIMULATIONS_PER_ORGANISATION)
       throw new AppError(
         'rate_limited',
         `Your organisation already has ${SIMULATIONS_PER_ORGANISATION} Monte Carlo estimates waiting or running; wait for one to finish, or cancel one, and try again.`,
@@ -47,7 +48,7 @@ export async function startSimulation(args: {
 /** Marks a running simulation cancelled and withdraws its job; returns false when it had already ended. */
 export async function cancelSimulation(orgId: string, id: string): Promise<boolean> {
   return db.transaction().execute(async (trx) => {
-    const cancelled = await markSimulationCancelled(trx, { orgId, id });
+    const cancelled = await markJobCancelled(trx, 'volatility_simulation', { orgId, id });
     if (cancelled) await cancelJob(QUEUES.simulation, id, trx);
     return cancelled;
   });
