@@ -15,6 +15,7 @@ import { readingOfFigures } from '@/lib/figures-reading';
 import { transitions, type ReviewAction } from '@/lib/review/transitions';
 import { SubmitDialog } from './submit-dialog';
 import { VersionChanges, type VersionChangesJson } from './version-changes';
+import { ReviewDiscussion } from './review-discussion';
 import { ReviewHistory, type Snapshot } from './review-history';
 
 export interface ReviewRights {
@@ -26,23 +27,6 @@ export interface ReviewRights {
   /** May start and cancel cross-checks (the same independent review). */
   canCrossCheck: boolean;
 }
-
-interface Comment {
-  id: string;
-  section: string;
-  body: string;
-  author: string | null;
-  createdAt: string;
-}
-
-const baseSections: [string, string][] = [
-  ['general', 'The case as a whole'],
-  ['cash-flows', 'Cash flows'],
-  ['uncertainty', 'Uncertainty'],
-  ['flexibility', 'Flexibility'],
-  ['results', 'Results'],
-  ['lattice', 'Lattice'],
-];
 
 interface Props {
   caseId: string;
@@ -65,18 +49,12 @@ interface Props {
 export function ReviewPanel({ caseId, currency, status, optionNames, rights, beforeSubmit, onStatus, figures }: Props) {
   const toast = useToast();
   const history = useSWR<{ status: CaseStatus; snapshots: Snapshot[]; changes: VersionChangesJson | null }>(`/api/v1/cases/${caseId}/snapshots`, getJson);
-  const comments = useSWR<{ comments: Comment[] }>(`/api/v1/cases/${caseId}/comments`, getJson);
-  const [busy, setBusy] = useState<null | ReviewAction | 'comment'>(null);
+  const [busy, setBusy] = useState<null | ReviewAction>(null);
   const [returning, setReturning] = useState(false);
   const [submitting, setSubmitting] = useState(false);
   const [recommendation, setRecommendation] = useState('');
   const [reason, setReason] = useState('');
   const [problem, setProblem] = useState<string | null>(null);
-  const [section, setSection] = useState('general');
-  const [body, setBody] = useState('');
-
-  const sections: [string, string][] = [...baseSections, ...optionNames.map((n): [string, string] => [`option:${n}`, `Right: ${n}`])];
-  const sectionLabel = (s: string) => sections.find(([k]) => k === s)?.[1] ?? s;
 
   const act = async (kind: ReviewAction) => {
     setBusy(kind);
@@ -106,19 +84,6 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
       if (kind === 'return' || kind === 'submit') setProblem(message);
       else toast(message, 'error');
       await history.mutate();
-    } finally {
-      setBusy(null);
-    }
-  };
-
-  const comment = async () => {
-    setBusy('comment');
-    try {
-      await sendJson('POST', `/api/v1/cases/${caseId}/comments`, { section, body });
-      setBody('');
-      await comments.mutate();
-    } catch (error) {
-      toast(error instanceof Error ? error.message : 'The comment was not saved.', 'error');
     } finally {
       setBusy(null);
     }
@@ -204,60 +169,7 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
           ) : null}
         </section>
       </div>
-      <section aria-labelledby="comments-heading" className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
-        <h3 id="comments-heading" className="mb-3 text-body font-semibold">
-          Discussion
-        </h3>
-        {comments.data?.comments.length ? (
-          <ol className="mb-4 flex flex-col gap-3">
-            {comments.data.comments.map((c) => (
-              <li key={c.id} className="border-l-2 border-tide-300 pl-3">
-                <p className="text-caption text-ink-muted">
-                  <span className="font-medium text-ink">{c.author ?? 'A former member'}</span> on {sectionLabel(c.section)} · {formatDateTime(c.createdAt)}
-                </p>
-                <p className="whitespace-pre-wrap">{c.body}</p>
-              </li>
-            ))}
-          </ol>
-        ) : (
-          <p className="mb-4 text-ink-soft">No comments yet.</p>
-        )}
-        {rights.canComment ? (
-          <form
-            onSubmit={(e) => {
-              e.preventDefault();
-              void comment();
-            }}
-            className="flex flex-col gap-2"
-          >
-            <label className="flex flex-col gap-1">
-              <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">About</span>
-              <select value={section} onChange={(e) => setSection(e.target.value)} className="h-10 rounded-md border border-line-strong bg-paper-raised px-3">
-                {sections.map(([k, label]) => (
-                  <option key={k} value={k}>
-                    {label}
-                  </option>
-                ))}
-              </select>
-            </label>
-            <label className="flex flex-col gap-1">
-              <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">Comment</span>
-              <textarea
-                value={body}
-                onChange={(e) => setBody(e.target.value)}
-                rows={3}
-                maxLength={4000}
-                className="rounded-md border border-line-strong bg-paper-raised px-3 py-2"
-              />
-            </label>
-            <div>
-              <Button type="submit" variant="secondary" busy={busy === 'comment'} disabled={body.trim() === ''}>
-                Add comment
-              </Button>
-            </div>
-          </form>
-        ) : null}
-      </section>
+      <ReviewDiscussion caseId={caseId} optionNames={optionNames} canComment={rights.canComment} />
       <ReviewHistory snapshots={snapshots} currency={currency} />
       <SubmitDialog
         open={submitting}
