@@ -11,11 +11,12 @@ import { db } from '@/db';
 import { dateProjectRecords } from '@/db/queries/demo';
 import { addObservation } from '@/db/queries/observations';
 import { latestApprovedSnapshot } from '@/db/queries/reviews';
-import type { ProjectModel, ValuationResult } from '@/lattice';
+import type { ProjectModel } from '@/lattice';
 import { enqueue } from '@/lib/jobs/enqueue';
 import { QUEUES } from '@/lib/jobs/queues';
 import { dateOf, yearsBetween } from '@/lib/watch/dates';
 import { rightStatuses } from '@/lib/watch/status';
+import { readStoredResult } from '@/lattice';
 
 export interface DemoFollow {
   approvedDaysAgo: number;
@@ -42,7 +43,7 @@ export async function seedFollow(args: { orgId: string; analystId: string; proje
   const snapshot = await latestApprovedSnapshot(db, { orgId: args.orgId, caseId: args.caseId });
   if (!snapshot) throw new Error('seed: the followed case has no approved version');
   const model = snapshot.model as ProjectModel;
-  const result = snapshot.result as ValuationResult;
+  const result = readStoredResult(snapshot.result);
   const approvedOn = dateOf(snapshot.decided_at!);
   const rows = follow.observations.map((o) => ({ ...o, value: model.underlying.value * o.ofApproved }));
   // Where the right's boundary stands today, from the approved run (lib/watch/status.ts).
@@ -50,7 +51,7 @@ export async function seedFollow(args: { orgId: string; analystId: string; proje
   const t = yearsBetween(approvedOn, today);
   const probe = rightStatuses({
     options: model.options ?? [],
-    switches: result.switches,
+    rights: result.rights,
     horizon: model.horizon,
     volatility: model.underlying.volatility,
     t,

@@ -11,4 +11,5 @@ export { projectModelSchema, optionTemplateSchema, costSchema, windowSchema, tre
 export type { ProjectModel, OptionTemplate, Cost, ExerciseWindow, TreeKind, ModeInput, SwitchInput } from './schema';
 export type * from './result';
 export { ENGINE_VERSION } from './version';
+export { readStoredResult } from './stored-result';
 export { MAX_STEPS, MAX_MODES, NODE_BUDGET, MAX_DECISION_CELLS, MAX_REQUEST_CELLS } from './limits';

@@ -26,7 +26,7 @@ export interface SwitchPath {
   boundary: BoundaryPoint[];
 }
 
-export interface SwitchResult {
+export interface RightResult {
   id: string;
   kind: string;
   /** Expanded NPV with only this right present, minus the static NPV (null without extras). */
@@ -95,7 +95,7 @@ export interface ValuationResult {
   /** The mode the project is in today; `value` is its root value. */
   startMode: string;
   modes: Record<string, Money>;
-  switches: SwitchResult[];
+  rights: RightResult[];
   tree: TreeSummary;
   /**
    * The premium split in two (null without extras): `betterPlan`, what the same rights add when

@@ -6,7 +6,7 @@ import type { CompiledModel } from './compiled';
 import { costAt } from './cost';
 import { exerciseProfiles } from './forward';
 import { buildPlan, type LatticePlan } from './plan';
-import type { BoundaryPoint, NodeGrid, SwitchResult } from './result';
+import type { BoundaryPoint, NodeGrid, RightResult } from './result';
 import { rollback } from './rollback';
 import type { ProjectModel } from './schema';
 
@@ -16,7 +16,7 @@ export interface PassResult {
   staticNpv: number;
   expandedNpv: number;
   modes: Record<string, number>;
-  switches: SwitchResult[];
+  rights: RightResult[];
   grid?: NodeGrid;
 }
 
@@ -25,7 +25,7 @@ export interface PassOptions {
   valueOnly?: boolean;
   /** Return the node grid for steps 0..gridSteps. */
   gridSteps?: number;
-  /** Return every path of each right with its boundary (`SwitchResult.paths`). */
+  /** Return every path of each right with its boundary (`RightResult.paths`). */
   paths?: boolean;
 }
 
@@ -57,7 +57,7 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
   const modes: Record<string, number> = {};
   compiled.modes.forEach((mode, m) => (modes[mode.id] = rootOf(m)));
 
-  const switches: SwitchResult[] = [];
+  const rights: RightResult[] = [];
   if (!options.valueOnly) {
     const rightOfSwitch = Int32Array.from(compiled.switches, (s) => s.right);
     const profiles =
@@ -82,7 +82,7 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
       const own = compiled.switches.flatMap((s, k) => (s.right === r ? [k] : []));
       const primary = own.find((k) => compiled.switches[k]!.from === right.primaryFrom) ?? own[0];
       const profile = profiles[r]!;
-      const timing: SwitchResult['exerciseTiming'] = [];
+      const timing: RightResult['exerciseTiming'] = [];
       profile.byStep.forEach((probability, i) => {
         if (probability > 1e-15) timing.push({ t: i * plan.dt, probability });
       });
@@ -94,7 +94,7 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
             boundary: k === primary ? boundary : boundaryOf(k),
           }))
         : undefined;
-      switches.push({
+      rights.push({
         id: right.id,
         kind: right.kind,
         standalone: null,
@@ -130,5 +130,5 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
   }
 
   const staticNpv = staticNpvOf(plan, compiled, model.riskFreeRate);
-  return { plan, value, staticNpv, expandedNpv: value - compiled.upfront, modes, switches, grid };
+  return { plan, value, staticNpv, expandedNpv: value - compiled.upfront, modes, rights, grid };
 }

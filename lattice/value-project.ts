@@ -288,7 +288,7 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
     if (betterPlan !== null) premiumSplit = { betterPlan, uncertainty: pass.expandedNpv - pass.staticNpv - betterPlan };
     sensitivities = sensitivitiesOf(model, compiled);
     const count = compiled.rights.length;
-    pass.switches.forEach((sw, r) => {
+    pass.rights.forEach((sw, r) => {
       if (count === 1) {
         sw.standalone = sw.incremental = pass.expandedNpv - pass.staticNpv;
         return;
@@ -299,7 +299,7 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
       sw.incremental = others === null ? null : pass.expandedNpv - others;
     });
   }
-  for (const sw of pass.switches) {
+  for (const sw of pass.rights) {
     if (sw.exerciseProbability === 0) warnings.push(`${sw.id} is never exercised on this lattice, so it adds no value as specified`);
     // A right first used today is a decision of the plan by definition; only later use is flagged.
     const usedToday = sw.exerciseTiming[0]?.t === 0 ? sw.exerciseTiming[0].probability : 0;
@@ -309,9 +309,9 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
       );
   }
 
-  const standalones = pass.switches.map((sw) => sw.standalone);
+  const standalones = pass.rights.map((sw) => sw.standalone);
   const interaction =
-    pass.switches.length >= 2 && standalones.every((x) => x !== null) ? pass.expandedNpv - pass.staticNpv - standalones.reduce((sum, x) => sum + x!, 0) : null;
+    pass.rights.length >= 2 && standalones.every((x) => x !== null) ? pass.expandedNpv - pass.staticNpv - standalones.reduce((sum, x) => sum + x!, 0) : null;
   const { plan } = pass;
   const result: ValuationResult = {
     value: pass.value,
@@ -320,7 +320,7 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
     optionPremium: pass.expandedNpv - pass.staticNpv,
     startMode: compiled.modes[compiled.start]!.id,
     modes: pass.modes,
-    switches: pass.switches,
+    rights: pass.rights,
     tree: { kind: plan.kind, steps: plan.steps, u: plan.u, d: plan.d, p: plan.p, dt: plan.dt, discount: plan.discount },
     premiumSplit,
     interaction,

@@ -52,7 +52,7 @@ export function comparisonRows(inputs: CaseInput[], results: (ValuationResult | 
 
   const optionIds = [...new Set(inputs.flatMap((input) => (input.options ?? []).map((o, j) => o.id ?? `option ${j + 1}`)))];
   for (const id of optionIds) {
-    add('Options', `${id}: incremental value`, ...money((r) => r.switches.find((s) => s.id === id)?.incremental ?? null));
+    add('Options', `${id}: incremental value`, ...money((r) => r.rights.find((s) => s.id === id)?.incremental ?? null));
     add(
       'Options',
       `${id}: terms`,

@@ -8,12 +8,12 @@ import 'server-only';
 import { db } from '@/db';
 import { findCasesWithProject } from '@/db/queries/cases';
 import { latestRunsOfCases } from '@/db/queries/valuation-runs';
-import type { ValuationResult } from '@/lattice';
 import { comparisonRows, type ComparisonRow } from './comparison-rows';
 import { AppError } from './errors';
 import { statusLabels } from './review/transitions';
 import type { CaseInput } from './validations/case';
 import type { CaseStatus } from '@/db/types';
+import { readStoredResult } from '@/lattice';
 
 export interface ComparedCase {
   id: string;
@@ -47,7 +47,7 @@ export async function compareCases(orgId: string, caseIds: string[]): Promise<Co
   const runOf = new Map(runs.map((r) => [r.case_id, r]));
 
   const ordered = caseIds.map((id) => byId.get(id)!);
-  const results = ordered.map((c) => (runOf.get(c.id)?.result as ValuationResult | undefined) ?? null);
+  const results = ordered.map((c) => (runOf.has(c.id) ? readStoredResult(runOf.get(c.id)!.result) : null));
   const inputs = ordered.map((c) => ({ name: c.name, cashFlows: c.cash_flows, settings: c.settings, options: c.options }) as CaseInput);
   const cases: ComparedCase[] = ordered.map((c, k) => ({
     id: c.id,

@@ -9,7 +9,7 @@
  * side: for those the side follows the right's kind (rights that add scale or start the project
  * are used when the value is high), as it did then.
  */
-import type { BoundaryPoint, SwitchResult } from '@/lattice';
+import type { BoundaryPoint, RightResult } from '@/lattice';
 import { formatMoney } from './format';
 
 type Side = 'above' | 'below' | 'between';
@@ -36,7 +36,7 @@ function located(point: BoundaryPoint, kind: string): { side: Side | 'anywhere';
   return { side, critical: side === 'above' ? point.low : point.high };
 }
 
-export function decisionRule(s: Pick<SwitchResult, 'id' | 'kind' | 'boundary' | 'exerciseProbability'>, currency?: string): DecisionRule {
+export function decisionRule(s: Pick<RightResult, 'id' | 'kind' | 'boundary' | 'exerciseProbability'>, currency?: string): DecisionRule {
   const read = s.boundary.map((b) => ({ t: b.t, ...located(b, s.kind) }));
   const verb = { expand: 'Expand', contract: 'Contract', abandon: 'Abandon', defer: 'Invest', stage: 'Pay the stage', switch: 'Switch' }[s.kind] ?? 'Exercise';
   const sides = read.filter((p) => p.side !== 'anywhere' && p.critical !== null);

@@ -4,6 +4,7 @@
  * does not), and which parts of the result differ at all (boundaries, timing, convergence…).
  */
 import canonicalize from 'canonicalize';
+import { readStoredResult } from '@/lattice';
 
 export interface FigureChange {
   figure: string;
@@ -14,15 +15,15 @@ export interface FigureChange {
 }
 
 type Result = Record<string, unknown> & {
-  switches?: { id: string; standalone?: number | null; incremental?: number | null; exerciseProbability?: number }[];
+  rights?: { id: string; standalone?: number | null; incremental?: number | null; exerciseProbability?: number }[];
   premiumSplit?: { betterPlan: number; uncertainty: number } | null;
 };
 
 const num = (x: unknown): number | null => (typeof x === 'number' && Number.isFinite(x) ? x : null);
 
 export function figureChanges(storedResult: unknown, nowResult: unknown): FigureChange[] {
-  const stored = storedResult as Result;
-  const now = nowResult as Result;
+  const stored = readStoredResult(storedResult) as unknown as Result;
+  const now = readStoredResult(nowResult) as unknown as Result;
   const pairs: [string, unknown, unknown][] = [
     ['Project value (V0)', stored.value, now.value],
     ['Static NPV', stored.staticNpv, now.staticNpv],
@@ -32,10 +33,10 @@ export function figureChanges(storedResult: unknown, nowResult: unknown): Figure
     ['Premium: better plan', stored.premiumSplit?.betterPlan, now.premiumSplit?.betterPlan],
     ['Premium: flexibility', stored.premiumSplit?.uncertainty, now.premiumSplit?.uncertainty],
   ];
-  const ids = new Set([...(stored.switches ?? []), ...(now.switches ?? [])].map((s) => s.id));
+  const ids = new Set([...(stored.rights ?? []), ...(now.rights ?? [])].map((s) => s.id));
   for (const id of ids) {
-    const a = stored.switches?.find((s) => s.id === id);
-    const b = now.switches?.find((s) => s.id === id);
+    const a = stored.rights?.find((s) => s.id === id);
+    const b = now.rights?.find((s) => s.id === id);
     pairs.push([`${id}: stand-alone value`, a?.standalone, b?.standalone]);
     pairs.push([`${id}: incremental value`, a?.incremental, b?.incremental]);
     pairs.push([`${id}: probability of use`, a?.exerciseProbability, b?.exerciseProbability]);
@@ -47,7 +48,7 @@ export function figureChanges(storedResult: unknown, nowResult: unknown): Figure
 
 /** The result's top-level parts whose content differs (in canonical JSON). */
 export function partsThatDiffer(storedResult: unknown, nowResult: unknown): string[] {
-  const stored = storedResult as Record<string, unknown>;
-  const now = nowResult as Record<string, unknown>;
+  const stored = readStoredResult(storedResult) as unknown as Record<string, unknown>;
+  const now = readStoredResult(nowResult) as unknown as Record<string, unknown>;
   return [...new Set([...Object.keys(stored), ...Object.keys(now)])].filter((k) => canonicalize(stored[k]) !== canonicalize(now[k])).sort();
 }

@@ -1606,7 +1606,7 @@ export interface components {
                 } | null;
             };
             /** @description The approved rights with their boundaries (years after the valuation date), for charts. */
-            switches: {
+            boundaries: {
                 id: string;
                 kind: string;
                 exerciseProbability: number;
@@ -4101,7 +4101,7 @@ export interface operations {
             query?: {
                 /** @description false: one lattice pass, no extras. */
                 extras?: "true" | "false";
-                /** @description true: each right's boundary from every mode it can be used from (switches[].paths). */
+                /** @description true: each right's boundary from every mode it can be used from (rights[].paths). */
                 paths?: "true" | "false";
             };
             header?: never;

@@ -1,7 +1,7 @@
 'use client';
 
 import { area, line, scaleLinear } from 'd3';
-import type { SwitchResult } from '@/lattice';
+import type { RightResult } from '@/lattice';
 import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
@@ -17,14 +17,14 @@ const dashes = ['', '6 3', '2 3', '8 3 2 3', '1 2', '10 4'];
  * right's region (the side where it is used) and draws the observed values over time.
  */
 export function BoundaryChart({
-  switches,
+  rights,
   v0,
   horizon,
   currency,
   observed,
   v0Label = 'V₀ today',
 }: {
-  switches: SwitchResult[];
+  rights: RightResult[];
   v0: number;
   horizon: number;
   currency: string;
@@ -35,7 +35,7 @@ export function BoundaryChart({
   const { ref, width } = useWidth<HTMLDivElement>();
   const height = 280;
   const margin = { top: 16, right: 24, bottom: 36, left: 64 };
-  const series = switches.map((s, k) => {
+  const series = rights.map((s, k) => {
     const rule = decisionRule(s, currency);
     return { s, k, rule, points: rule.points.map((p) => ({ t: p.t, v: p.threshold })) };
   });

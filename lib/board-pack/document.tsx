@@ -314,7 +314,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
   const currency = project.currency;
   const contentWidth = (data.pageSize === 'A4' ? 595.28 : 612) - 96;
   const rec = readingOfFigures(r, currency);
-  const rules = r.switches.map((s) => decisionRule(s, currency));
+  const rules = r.rights.map((s) => decisionRule(s, currency));
   const analysis = analyseCashFlows(snapshot.inputs.cashFlows);
   const rows = snapshot.inputs.cashFlows.rows;
   const options = snapshot.inputs.options ?? [];
@@ -392,7 +392,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
           columns={['Right', 'Stand-alone', 'Incremental', 'Ever exercised']}
           widths={[46, 18, 18, 18]}
           rows={[
-            ...r.switches.map((s) => [
+            ...r.rights.map((s) => [
               `${s.id} (${optionTypeLabels[s.kind as OptionType] ?? s.kind})`,
               money(s.standalone, currency),
               money(s.incremental, currency),

@@ -7,6 +7,7 @@ import { db } from '@/db';
 import { findSnapshotForPack, findStoredPack, followThroughBefore, insertStoredPack, listSubmissionsUpTo } from '@/db/queries/board-packs';
 import { AppError } from '../errors';
 import type { BoardPackData, FollowThrough, PageSize, RecordEvent } from './data';
+import { readStoredResult } from '@/lattice';
 
 /** Who did it, when they have left the organisation since. */
 const FORMER_MEMBER = 'a former member';
@@ -53,7 +54,7 @@ export async function boardPackData(orgId: string, snapshotId: string, pageSize:
       caseVersion: row.case_version,
       inputs: row.inputs as BoardPackData['snapshot']['inputs'],
       model: row.model as BoardPackData['snapshot']['model'],
-      result: row.result as BoardPackData['snapshot']['result'],
+      result: readStoredResult(row.result) as BoardPackData['snapshot']['result'],
       engineVersion: row.engine_version,
       inputHash: row.input_hash,
       submittedBy: row.submitted_by_name ?? FORMER_MEMBER,

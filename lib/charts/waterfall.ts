@@ -17,17 +17,17 @@ export interface WaterfallStep {
   to: number;
 }
 
-export function waterfallSteps(result: Pick<ValuationResult, 'staticNpv' | 'expandedNpv' | 'optionPremium' | 'switches' | 'interaction'>): WaterfallStep[] {
+export function waterfallSteps(result: Pick<ValuationResult, 'staticNpv' | 'expandedNpv' | 'optionPremium' | 'rights' | 'interaction'>): WaterfallStep[] {
   const steps: WaterfallStep[] = [{ key: 'static', label: 'Static NPV', kind: 'total', value: result.staticNpv, from: 0, to: result.staticNpv }];
   let running = result.staticNpv;
-  for (const s of result.switches) {
+  for (const s of result.rights) {
     if (s.standalone === null) continue;
     steps.push({ key: `right:${s.id}`, label: s.id, kind: 'change', value: s.standalone, from: running, to: running + s.standalone });
     running += s.standalone;
   }
   // The engine's interaction closes the bridge (results stored before it reported one: the remainder).
-  const interaction = result.interaction ?? (result.switches.length > 1 ? result.expandedNpv - running : null);
-  if (interaction !== null && result.switches.length > 1)
+  const interaction = result.interaction ?? (result.rights.length > 1 ? result.expandedNpv - running : null);
+  if (interaction !== null && result.rights.length > 1)
     steps.push({ key: 'interaction', label: 'Together vs. alone', kind: 'change', value: interaction, from: running, to: running + interaction });
   steps.push({ key: 'expanded', label: 'Expanded NPV', kind: 'total', value: result.expandedNpv, from: 0, to: result.expandedNpv });
   return steps;

@@ -30,7 +30,7 @@ export function latticeFigures(model: ProjectModel): LatticeFigures {
     band: result.convergence?.band ?? null,
     steps: result.tree.steps,
     engineVersion: result.engineVersion,
-    rights: result.switches.map((s) => ({ id: s.id, exerciseProbability: s.exerciseProbability })),
+    rights: result.rights.map((s) => ({ id: s.id, exerciseProbability: s.exerciseProbability })),
   };
 }
 

@@ -279,7 +279,7 @@ export const operations = {
     permission: { project: ['read'] },
     query: z.object({
       extras: z.enum(['true', 'false']).optional().meta({ description: 'false: one lattice pass, no extras.' }),
-      paths: z.enum(['true', 'false']).optional().meta({ description: "true: each right's boundary from every mode it can be used from (switches[].paths)." }),
+      paths: z.enum(['true', 'false']).optional().meta({ description: "true: each right's boundary from every mode it can be used from (rights[].paths)." }),
     }),
     otherBody: { contentType: 'application/json', description: 'An engine model.', schema: projectModelSchema },
     answers: { 200: { description: 'The result.', schema: s.valuationResultSchema } },

@@ -436,7 +436,7 @@ export const watchSchema = z
         .nullable()
         .meta({ description: 'The approved version this one replaced as the model followed (its decisions stay on its record).' }),
     }),
-    switches: z
+    boundaries: z
       .array(
         z.object({
           id: z.string(),

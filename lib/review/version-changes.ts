@@ -6,9 +6,9 @@
 import 'server-only';
 import { db } from '@/db';
 import { findSubmissionContext } from '@/db/queries/reviews';
-import type { ValuationResult } from '@/lattice';
 import { comparisonRows, type ComparisonRow } from '../comparison-rows';
 import type { CaseInput } from '../validations/case';
+import { readStoredResult } from '@/lattice';
 
 export interface VersionChanges {
   /** The version last returned before this submission, and what differs from it; null when none was returned. */
@@ -29,7 +29,7 @@ export async function versionChanges(orgId: string, caseId: string): Promise<Ver
           decidedAt: new Date(returned.decided_at!).toISOString(),
           rows: comparisonRows(
             [returned.inputs as CaseInput, current.inputs as CaseInput],
-            [returned.result as ValuationResult, current.result as ValuationResult],
+            [readStoredResult(returned.result), readStoredResult(current.result)],
             [currency, currency],
           ).filter((row) => row.differs),
         }

@@ -77,7 +77,7 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
   table(
     results,
     ['Right', 'Kind', 'Stand-alone value', 'Incremental value', 'Probability ever exercised', 'Decision rule'],
-    c.result.switches.map((r) => [r.id, r.kind, r.standalone, r.incremental, r.exerciseProbability, decisionRule(r, c.currency).text]),
+    c.result.rights.map((r) => [r.id, r.kind, r.standalone, r.incremental, r.exerciseProbability, decisionRule(r, c.currency).text]),
   );
   results.getColumn(6).width = 100;
 

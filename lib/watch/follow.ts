@@ -26,10 +26,11 @@ import type { RightDecisionInput } from '../validations/right-decision';
 import { ClockError, modelAt, type UsedRights } from './clock';
 import { dateAfter, dateOf, yearsBetween } from './dates';
 import { rightStatuses, type RightWatch } from './status';
+import { readStoredResult } from '@/lattice';
 
 /** Where each right stands by the approved run's boundary alone (lib/watch/status.ts). */
 function boundaryReading(model: ProjectModel, result: ValuationResult, t: number, value: number): RightWatch[] {
-  return rightStatuses({ options: model.options ?? [], switches: result.switches, horizon: model.horizon, volatility: model.underlying.volatility, t, value });
+  return rightStatuses({ options: model.options ?? [], rights: result.rights, horizon: model.horizon, volatility: model.underlying.volatility, t, value });
 }
 
 /** A followed version with what is known of it since: observations and decisions. */
@@ -105,10 +106,10 @@ async function standing(f: Followed, at: Position, run: { owner: string; signal?
   let rights = approved;
   if (used.exercised.length > 0) {
     // The re-valued run's boundaries, from the mode the decisions made, at its own time zero.
-    const fromStart = now.switches.map((s) => ({ ...s, boundary: s.paths?.find((p) => p.from === now.startMode)?.boundary ?? s.boundary }));
+    const fromStart = now.rights.map((s) => ({ ...s, boundary: s.paths?.find((p) => p.from === now.startMode)?.boundary ?? s.boundary }));
     const fresh = rightStatuses({
       options: clock.model.options ?? [],
-      switches: fromStart,
+      rights: fromStart,
       horizon: clock.model.horizon,
       volatility: model.underlying.volatility,
       t: 0,
@@ -142,7 +143,7 @@ export async function loadFollowed(orgId: string, caseId: string): Promise<Follo
     snapshot,
     valuationDate: dateOf(snapshot.decided_at),
     model: snapshot.model as ProjectModel,
-    result: snapshot.result as ValuationResult,
+    result: readStoredResult(snapshot.result),
     observations,
     decisions,
   };
@@ -295,7 +296,7 @@ export async function watchCase(member: Member, caseId: string, signal?: AbortSi
       replaces: replaced?.decided_at ? { caseVersion: replaced.case_version, approvedOn: dateOf(replaced.decided_at) } : null,
     },
     // The approved rights with their boundaries, for the chart of observed values against them.
-    switches: result.switches.map((s) => ({ id: s.id, kind: s.kind, exerciseProbability: s.exerciseProbability, boundary: s.boundary })),
+    boundaries: result.rights.map((s) => ({ id: s.id, kind: s.kind, exerciseProbability: s.exerciseProbability, boundary: s.boundary })),
     ...now,
     observations: f.observations,
     decisions: f.decisions,
@@ -319,7 +320,7 @@ export async function listFollowed(
       ...row,
       valuationDate: dateOf(row.snapshot.decided_at),
       model: row.snapshot.model as ProjectModel,
-      result: row.snapshot.result as ValuationResult,
+      result: readStoredResult(row.snapshot.result),
       observations,
       decisions,
     });

@@ -6,7 +6,7 @@
  * template. Distances: the move V must make to reach the boundary, as a fraction of V and in
  * standard deviations of ln V over the next year (σ).
  */
-import { templateIds, type BoundaryPoint, type ExerciseWindow, type OptionTemplate, type SwitchResult } from '@/lattice';
+import { templateIds, type BoundaryPoint, type ExerciseWindow, type OptionTemplate, type RightResult } from '@/lattice';
 
 export type RightStatus = 'in_region' | 'near' | 'outside' | 'window_not_open' | 'window_closed' | 'exercised' | 'declined';
 
@@ -65,17 +65,17 @@ export function boundaryAt(
 
 export function rightStatuses(args: {
   options: OptionTemplate[];
-  switches: SwitchResult[];
+  rights: RightResult[];
   horizon: number;
   volatility: number;
   t: number;
   value: number;
 }): RightWatch[] {
-  const { options, switches, horizon, volatility, t, value } = args;
+  const { options, rights, horizon, volatility, t, value } = args;
   const ids = templateIds(options);
   return options.map((o, k) => {
     const id = ids[k]!;
-    const right = switches.find((s) => s.id === id);
+    const right = rights.find((s) => s.id === id);
     const window = windowAt(o, horizon, t);
     const base = { id, name: o.id ?? id, windowOpensAt: window.opensAt, windowClosesAt: window.closesAt };
     const none = { critical: null, side: null, distanceRatio: null, distanceSd: null };

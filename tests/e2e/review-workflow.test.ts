@@ -139,7 +139,7 @@ describe('review workflow', () => {
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
     const text = pdfText(pdf, { layout: true });
     const snapshot = await db.selectFrom('case_snapshot').select(['result', 'decided_at']).where('id', '=', snapshots[0].id).executeTakeFirstOrThrow();
-    const result = snapshot.result as { staticNpv: number; optionPremium: number; expandedNpv: number; switches: never[] };
+    const result = snapshot.result as { staticNpv: number; optionPremium: number; expandedNpv: number; rights: never[] };
     for (const figure of [result.staticNpv, result.optionPremium, result.expandedNpv]) expect(text).toContain(formatMoney(figure, 'EUR'));
     expect(text).toContain('Approval record');
     expect(text).toContain('Tomasz Okafor');
@@ -150,7 +150,7 @@ describe('review workflow', () => {
     expect(text).toContain('Written by Priya Lindqvist when submitting version');
     expect(text).toContain("Leeway's reading of the figures (generated, for reference)");
     expect(text.match(/Submitted for review/g)).toHaveLength(2);
-    expect(text).toContain(decisionRule(result.switches[0]!, 'EUR').text.slice(0, 40));
+    expect(text).toContain(decisionRule(result.rights[0]!, 'EUR').text.slice(0, 40));
 
     // The same snapshot always gives the same document, and Letter is there too.
     const again = await page.request.get(`/api/v1/cases/${caseId}/board-pack?size=A4`);

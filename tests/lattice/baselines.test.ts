@@ -73,7 +73,7 @@ describe('one baseline: no right is worth less than nothing', () => {
       fc.property(modelFrom(market), (model) => {
         const r = valueProject(model);
         const scale = model.underlying.value;
-        for (const sw of r.switches) {
+        for (const sw of r.rights) {
           expect({ id: sw.id, standalone: sw.standalone! >= -1e-9 * scale ? 'ok' : sw.standalone }).toEqual({ id: sw.id, standalone: 'ok' });
           expect({ id: sw.id, incremental: sw.incremental! >= -1e-9 * scale ? 'ok' : sw.incremental }).toEqual({ id: sw.id, incremental: 'ok' });
         }
@@ -94,7 +94,7 @@ describe('one baseline: no right is worth less than nothing', () => {
         { type: 'expand', factor: 0.5, cost: 50, window: { kind: 'american', from: 1, to: 5 } },
       ],
     });
-    for (const sw of r.switches) expect([sw.id, sw.standalone! >= 0, sw.incremental! >= 0]).toEqual([sw.id, true, true]);
+    for (const sw of r.rights) expect([sw.id, sw.standalone! >= 0, sw.incremental! >= 0]).toEqual([sw.id, true, true]);
   });
 
   it('a stage with abandonment under leakage', () => {
@@ -114,7 +114,7 @@ describe('one baseline: no right is worth less than nothing', () => {
         { type: 'abandon', salvage: 40, window: { kind: 'american', from: 0, to: 4 } },
       ],
     });
-    for (const sw of r.switches) expect([sw.id, sw.standalone! >= 0, sw.incremental! >= 0]).toEqual([sw.id, true, true]);
+    for (const sw of r.rights) expect([sw.id, sw.standalone! >= 0, sw.incremental! >= 0]).toEqual([sw.id, true, true]);
   });
 });
 
@@ -139,7 +139,7 @@ describe('salvage follows the scale sold', () => {
       ],
     };
     const r = valueProject(model);
-    const [contract, abandon] = r.switches;
+    const [contract, abandon] = r.rights;
     // The engine reports it; it is the premium less the two stand-alone values.
     expect(r.interaction).toBeCloseTo(r.optionPremium - contract!.standalone! - abandon!.standalone!, 10);
     expect(r.interaction!).toBeLessThanOrEqual(1e-9 * 248);

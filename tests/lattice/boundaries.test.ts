@@ -55,7 +55,7 @@ describe('exercise boundaries', () => {
       fc.property(model, (m) => {
         const r = valueProject(m, { extras: false, grid: true });
         const grid = r.grid!;
-        const sw = r.switches[0]!;
+        const sw = r.rights[0]!;
         for (const b of sw.boundary) {
           const step = grid.steps.findIndex((s) => Math.abs(s.t - b.t) < 1e-9);
           const nodes = grid.steps[step]!.underlying;
@@ -82,7 +82,7 @@ describe('exercise boundaries', () => {
     };
     const r = valueProject(m, { extras: false, grid: true });
     const firstInvest = r.grid!.steps.find((s) => s.modes['waiting']!.decision.some((d) => d !== null))!.t;
-    const points = r.switches[0]!.boundary;
+    const points = r.rights[0]!.boundary;
     expect(points[0]!.t).toBeCloseTo(firstInvest, 12);
     for (const b of points) expect([b.side, b.high]).toEqual(['above', null]);
   });
@@ -95,7 +95,7 @@ describe('exercise boundaries', () => {
     const plant = demoPortfolio.find((p) => p.name === 'Phased bio-resin plant')!.cases[0]!;
     const boundary = (steps: number) => {
       const r = valueProject(caseToModel({ ...plant, settings: { ...plant.settings, steps } }).model, { extras: false });
-      return new Map(r.switches.find((s) => s.id === 'Phase 2')!.boundary.map((b) => [Math.round(b.t * 1e6), b]));
+      return new Map(r.rights.find((s) => s.id === 'Phase 2')!.boundary.map((b) => [Math.round(b.t * 1e6), b]));
     };
     const reference = boundary(5000);
     for (const steps of [96, 200]) {
@@ -115,16 +115,16 @@ describe('exercise boundaries', () => {
     const { model } = caseToModel(plant);
     const lean = valueProject(model, { extras: false });
     const full = valueProject(model, { extras: false, paths: true });
-    expect(lean.switches.every((s) => s.paths === undefined)).toBe(true);
+    expect(lean.rights.every((s) => s.paths === undefined)).toBe(true);
     expect(full.expandedNpv).toBe(lean.expandedNpv);
-    for (const [k, s] of full.switches.entries()) {
-      expect(s.boundary).toEqual(lean.switches[k]!.boundary);
+    for (const [k, s] of full.rights.entries()) {
+      expect(s.boundary).toEqual(lean.rights[k]!.boundary);
       expect(s.paths!.length).toBeGreaterThanOrEqual(1);
       // The primary path's boundary is the right's own boundary (when the right has boundary points at all).
       if (s.boundary.length > 0) expect(s.paths!.some((p) => JSON.stringify(p.boundary) === JSON.stringify(s.boundary))).toBe(true);
     }
     // Abandonment can be used from several modes: its other paths are there.
-    const abandon = full.switches.find((s) => s.kind === 'abandon')!;
+    const abandon = full.rights.find((s) => s.kind === 'abandon')!;
     expect(abandon.paths!.length).toBeGreaterThan(1);
   });
 });

@@ -53,7 +53,7 @@ describe('interacting rights worked by hand', () => {
     expectClose(r.value, root, { abs: 1e-9 }, { case: 'expand + abandon' });
     expectClose(r.staticNpv, 100, { abs: 1e-9 }, {});
     // Expand is taken at (2,2) and (2,1): probability p² + 2pq = 65/81; abandon at (2,0): q² = 16/81.
-    const [expand, abandon] = r.switches;
+    const [expand, abandon] = r.rights;
     expectClose(expand!.exerciseProbability, 65 / 81, { abs: 1e-12 }, {});
     expectClose(abandon!.exerciseProbability, 16 / 81, { abs: 1e-12 }, {});
     // At t = 2 the plant is sold at the bottom node (64) and expanded at the next (100): the
@@ -89,7 +89,7 @@ describe('interacting rights worked by hand', () => {
     expectClose(r.expandedNpv, 37.07483, { abs: 1e-6 }, { case: 'defer + expand' });
     expectClose(r.staticNpv, 10, { abs: 1e-9 }, {});
     expectClose(r.modes.operating!, 122.789116, { abs: 1e-6 }, {});
-    const [defer, expand] = r.switches;
+    const [defer, expand] = r.rights;
     expectClose(defer!.exerciseProbability, 1, { abs: 1e-12 }, {});
     expect(defer!.exerciseTiming).toEqual([{ t: 1, probability: expect.closeTo(1, 12) }]);
     expectClose(expand!.exerciseProbability, 1, { abs: 1e-12 }, {});
@@ -109,7 +109,7 @@ describe('interacting rights worked by hand', () => {
     ];
     const scaled = valueProject({ ...base, horizon: 1, steps: 1, options: options(false) }, { extras: false });
     expectClose(scaled.value, (p * 125 + q * 90) / 1.05, { abs: 1e-9 }, { case: 'salvage per scale' });
-    expectClose(scaled.switches[0]!.exerciseProbability, 0, { abs: 1e-12 }, {});
+    expectClose(scaled.rights[0]!.exerciseProbability, 0, { abs: 1e-12 }, {});
     const fixed = valueProject({ ...base, horizon: 1, steps: 1, options: options(true) }, { extras: false });
     expectClose(fixed.value, 48 + 90 / 1.05, { abs: 1e-9 }, { case: 'fixed salvage' });
   });
@@ -142,7 +142,7 @@ describe('interacting rights worked by hand', () => {
       { extras: false },
     );
     expectClose(r.value, root, { abs: 1e-9 }, { case: 'step schedule' });
-    expect(r.switches[0]!.exerciseTiming).toEqual([{ t: 1, probability: expect.closeTo(q, 12) }]);
+    expect(r.rights[0]!.exerciseTiming).toEqual([{ t: 1, probability: expect.closeTo(q, 12) }]);
   });
 
   it('an expansion whose cost grows 10 % a year (30·1.1^t)', () => {
@@ -167,7 +167,7 @@ describe('interacting rights worked by hand', () => {
       { extras: false },
     );
     expectClose(r.value, root, { abs: 1e-9 }, { case: 'growing cost' });
-    expect(r.switches[0]!.exerciseTiming).toEqual([{ t: 0, probability: 1 }]);
+    expect(r.rights[0]!.exerciseTiming).toEqual([{ t: 0, probability: 1 }]);
   });
 
   it('mothball and restart around a discrete payout, two steps', () => {
@@ -197,8 +197,8 @@ describe('interacting rights worked by hand', () => {
     };
     const r = valueProject(model, { extras: false });
     expectClose(r.value, 100 + (8 - 2 - 4 / 1.05) / 1.05, { abs: 1e-9 }, { case: 'mothball + restart' });
-    expectClose(r.switches[0]!.exerciseProbability, 1, { abs: 1e-12 }, {});
-    expect(r.switches[0]!.exerciseTiming).toEqual([{ t: 1, probability: expect.closeTo(1, 12) }]);
+    expectClose(r.rights[0]!.exerciseProbability, 1, { abs: 1e-12 }, {});
+    expect(r.rights[0]!.exerciseTiming).toEqual([{ t: 1, probability: expect.closeTo(1, 12) }]);
   });
 });
 

@@ -55,7 +55,7 @@ describe('the premium split', () => {
       investment: 80,
       options: [{ type: 'abandon', id: 'Sale', salvage: 120, fixedSalvage: true, window: { kind: 'european', at: 3 } }],
     });
-    expect(sure.switches[0]!.exerciseProbability).toBeGreaterThan(0.95);
+    expect(sure.rights[0]!.exerciseProbability).toBeGreaterThan(0.95);
     expect(sure.warnings.some((w) => w.startsWith('Sale is used with probability'))).toBe(true);
     // Building for 50 a project worth 100 that leaks 15 % a year: build now.
     const today = valueProject({
@@ -65,7 +65,7 @@ describe('the premium split', () => {
       steps: 60,
       options: [{ type: 'defer', id: 'Build', cost: 50, window: { kind: 'american', from: 0, to: 3 } }],
     });
-    expect(today.switches[0]!.exerciseTiming[0]).toEqual({ t: 0, probability: 1 });
+    expect(today.rights[0]!.exerciseTiming[0]).toEqual({ t: 0, probability: 1 });
     expect(today.warnings.some((w) => w.startsWith('Build is used with probability'))).toBe(false);
   });
 });

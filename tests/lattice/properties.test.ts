@@ -217,7 +217,7 @@ describe('lattice properties', () => {
             { type: 'abandon', salvage: late * V0, window: { kind: 'american', from: T / 4, to: T } },
           ],
         });
-        for (const sw of r.switches) expect(sw.incremental!).toBeLessThanOrEqual(sw.standalone! + 1e-9 * V0);
+        for (const sw of r.rights) expect(sw.incremental!).toBeLessThanOrEqual(sw.standalone! + 1e-9 * V0);
       }),
       { numRuns: 60 },
     );

@@ -63,7 +63,7 @@ describe('Dixit & Pindyck (1994) ch. 5, perpetual option to invest', () => {
     const perpetual = (threshold - I) * (I / threshold) ** beta1;
     expectClose(result.value, perpetual, { rel: 0.005 }, { source: 'Dixit & Pindyck ch. 5', perpetual });
     expect(result.value).toBeLessThanOrEqual(perpetual);
-    const atYear10 = result.switches[0]!.boundary.find((b) => Math.abs(b.t - 10) < 1e-9)!;
+    const atYear10 = result.rights[0]!.boundary.find((b) => Math.abs(b.t - 10) < 1e-9)!;
     const spacing = result.tree.u / result.tree.d;
     expect(atYear10.low).not.toBeNull();
     expect(atYear10.low!).toBeGreaterThanOrEqual(threshold / spacing);

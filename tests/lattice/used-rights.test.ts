@@ -39,7 +39,7 @@ describe('rights used before the valuation date', () => {
     expectClose(r.value, (p * up + q * down) / 1.05, { abs: 1e-9 }, { case: 'expanded before' });
     expect(r.startMode).toBe('operating+phase-2');
     // The expansion cannot be used twice.
-    expect(r.switches[0]!.exerciseProbability).toBe(0);
+    expect(r.rights[0]!.exerciseProbability).toBe(0);
   });
 
   it('a plant mothballed before the valuation date equals raw modes that start mothballed', () => {

@@ -15,7 +15,7 @@ describe('the decision rule of a case', () => {
   it('reads the same from the stored run, the workbook and the board pack', async () => {
     const { inputs, model } = demoPlant();
     const stored = JSON.parse(JSON.stringify(valueProject(model, { grid: { steps: 4 } }))) as ValuationResult;
-    const rules = stored.switches.map((s) => decisionRule(s, 'EUR').text);
+    const rules = stored.rights.map((s) => decisionRule(s, 'EUR').text);
     expect(rules.length).toBe(2);
 
     const book = new ExcelJS.Workbook();
@@ -32,7 +32,7 @@ describe('the decision rule of a case', () => {
       })) as never,
     );
     const sheet = book.getWorksheet('Results')!;
-    const fromWorkbook = stored.switches.map((_, k) => String(sheet.getRow(k + 2).getCell(6).value));
+    const fromWorkbook = stored.rights.map((_, k) => String(sheet.getRow(k + 2).getCell(6).value));
     expect(fromWorkbook).toEqual(rules);
 
     const pack = pdfText(await renderPlantPack(model, stored));

@@ -36,12 +36,17 @@ describe('result hashes and what moved', () => {
     expect(partsThatDiffer(result, structuredClone(result))).toEqual([]);
     const moved = structuredClone(result);
     moved.expandedNpv += 0.25;
-    moved.switches[0]!.exerciseProbability = 0.5;
-    moved.switches[0]!.boundary = [];
+    moved.rights[0]!.exerciseProbability = 0.5;
+    moved.rights[0]!.boundary = [];
     expect(hashResult(moved)).not.toBe(hashResult(result));
     const changes = figureChanges(result, moved);
-    expect(changes.map((c) => c.figure)).toEqual(['Expanded NPV', `${result.switches[0]!.id}: probability of use`]);
+    expect(changes.map((c) => c.figure)).toEqual(['Expanded NPV', `${result.rights[0]!.id}: probability of use`]);
     expect(changes[0]!.change).toBeCloseTo(0.25, 12);
-    expect(partsThatDiffer(result, moved)).toEqual(['expandedNpv', 'switches']);
+    expect(partsThatDiffer(result, moved)).toEqual(['expandedNpv', 'rights']);
+    // A run stored before leeway-lattice 3.0.0 lists its rights under `switches`: read in today's shape, nothing else differs.
+    const { rights, ...rest } = structuredClone(result);
+    const stored = { ...rest, switches: rights };
+    expect(partsThatDiffer(stored, result)).toEqual([]);
+    expect(figureChanges(stored, moved).map((c) => c.figure)).toEqual(['Expanded NPV', `${result.rights[0]!.id}: probability of use`]);
   });
 });

@@ -5,34 +5,34 @@
  * the right. Figures invented.
  */
 import { describe, expect, it } from 'vitest';
-import { valueProject, type BoundaryPoint, type OptionTemplate, type SwitchResult } from '@/lattice';
+import { valueProject, type BoundaryPoint, type OptionTemplate, type RightResult } from '@/lattice';
 import { demoPortfolio } from '@/demo/portfolio';
 import { caseToModel } from '@/lib/case-model';
 import { boundaryAt, rightStatuses } from '@/lib/watch/status';
 
 const above = (t: number, critical: number): BoundaryPoint => ({ t, critical, side: 'above', low: critical, high: null });
 const below = (t: number, critical: number): BoundaryPoint => ({ t, critical, side: 'below', low: null, high: critical });
-const right = (id: string, boundary: BoundaryPoint[]) => ({ id, boundary }) as unknown as SwitchResult;
+const right = (id: string, boundary: BoundaryPoint[]) => ({ id, boundary }) as unknown as RightResult;
 
 const options: OptionTemplate[] = [
   { type: 'expand', id: 'Grow', factor: 0.5, cost: 40, window: { kind: 'american', from: 1, to: 4 } },
   { type: 'abandon', id: 'Sell', salvage: 50, window: { kind: 'american', from: 0, to: 5 } },
   { type: 'contract', id: 'Halve', fraction: 0.5, savings: 20, window: { kind: 'european', at: 2 } },
 ];
-const switches = [
+const rights = [
   right('Grow', [above(1, 150), above(1.05, 148), above(1.1, 146)]),
   right('Sell', [below(0.5, 45), below(0.55, 46)]),
   right('Halve', [below(2, 70)]),
 ];
-const statusAt = (t: number, value: number) => rightStatuses({ options, switches, horizon: 5, volatility: 0.3, t, value });
+const statusAt = (t: number, value: number) => rightStatuses({ options, rights, horizon: 5, volatility: 0.3, t, value });
 
 describe('where each right stands', () => {
   it('reads the boundary between its steps, and nowhere the right is not used', () => {
-    expect(boundaryAt(switches[0]!.boundary, 1.025)!.critical).toBeCloseTo(149, 12);
-    expect(boundaryAt(switches[0]!.boundary, 1.2)).toBeNull();
-    expect(boundaryAt(switches[0]!.boundary, 0.9)).toBeNull();
+    expect(boundaryAt(rights[0]!.boundary, 1.025)!.critical).toBeCloseTo(149, 12);
+    expect(boundaryAt(rights[0]!.boundary, 1.2)).toBeNull();
+    expect(boundaryAt(rights[0]!.boundary, 0.9)).toBeNull();
     // Less than a step before the first point (as the valuation date is before step 1): that point.
-    expect(boundaryAt(switches[0]!.boundary, 0.98)!.critical).toBe(150);
+    expect(boundaryAt(rights[0]!.boundary, 0.98)!.critical).toBe(150);
     // Used at the valuation date's single node ("anywhere"): the next step's boundary stands for it;
     // at a later date "anywhere" means every node uses it, and is kept.
     const anywhere = { t: 0, side: 'anywhere' as const, critical: null, low: null, high: null };
@@ -68,14 +68,14 @@ describe('where each right stands', () => {
     const { model } = caseToModel(plant);
     const result = valueProject(model, { extras: false, grid: true });
     const k = model.options!.findIndex((o) => o.type === 'expand');
-    const id = result.switches[k]!.id;
+    const id = result.rights[k]!.id;
     let checked = 0;
     for (const step of result.grid!.steps) {
       const decisions = step.modes[result.startMode]!.decision;
       step.underlying.forEach((v, j) => {
         const watch = rightStatuses({
           options: model.options!,
-          switches: result.switches,
+          rights: result.rights,
           horizon: model.horizon,
           volatility: model.underlying.volatility,
           t: step.t,

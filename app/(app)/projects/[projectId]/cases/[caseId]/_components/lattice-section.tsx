@@ -53,7 +53,7 @@ export function LatticeSection({ model, modes, startMode, result, currency }: Pr
   const lattice = useValuation(model, { extras: false, grid: whole ? true : { steps: gridSteps } });
   const explanation = useNodeExplanation(model, selected ? { ...selected, mode: activeMode } : null);
   const grid = lattice.result?.grid;
-  const order = [...new Set(result?.switches.map((s) => s.id) ?? [])];
+  const order = [...new Set(result?.rights.map((s) => s.id) ?? [])];
   const lastFrom = Math.max(0, gridSteps - frame.steps);
   const view = { ...frame, from: Math.min(frame.from, lastFrom), steps: Math.min(frame.steps, model.steps) };
   const year = (step: number) => ((step * model.horizon) / model.steps).toFixed(2);
@@ -176,11 +176,11 @@ export function LatticeSection({ model, modes, startMode, result, currency }: Pr
           <NodeInspector explanation={explanation.result} issues={explanation.issues} computing={explanation.computing} />
         </section>
       </div>
-      {result && result.switches.length > 0 ? (
+      {result && result.rights.length > 0 ? (
         <section className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
           <h3 className="text-body font-semibold">Exercise boundary over time</h3>
           <p className="mb-3 text-caption text-ink-muted">The critical project value at each step where a right is used, over the whole horizon.</p>
-          <BoundaryChart switches={result.switches} v0={model.underlying.value} horizon={model.horizon} currency={currency} />
+          <BoundaryChart rights={result.rights} v0={model.underlying.value} horizon={model.horizon} currency={currency} />
         </section>
       ) : null}
       <section className="rounded-card border border-line bg-paper-raised p-5 shadow-card">

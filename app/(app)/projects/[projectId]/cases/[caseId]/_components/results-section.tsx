@@ -6,7 +6,7 @@ import { TornadoChart } from '@/components/charts/tornado-chart';
 import { WaterfallChart } from '@/components/charts/waterfall-chart';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { ValuationCaution } from '@/components/valuation-caution';
-import type { SwitchResult, ValuationResult } from '@/lattice';
+import type { RightResult, ValuationResult } from '@/lattice';
 import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney, formatPercent } from '@/lib/format';
 import { premiumSplitText } from '@/lib/premium-split';
@@ -18,7 +18,7 @@ import { palette } from '@/lib/palette';
  * the numbers are in a disclosure that opens by keyboard as well as by pointer (and in the
  * bars' tooltips).
  */
-function TimingBars({ s }: { s: SwitchResult }) {
+function TimingBars({ s }: { s: RightResult }) {
   const byYear = new Map<number, number>();
   for (const p of s.exerciseTiming) {
     const year = Math.min(Math.floor(p.t + 1e-9), 1000);
@@ -74,7 +74,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
         title="The rights, one by one"
         note="Stand-alone: the right alone on the project. Incremental: what it adds to the others. Probabilities are risk-neutral."
       >
-        {result.switches.length === 0 ? (
+        {result.rights.length === 0 ? (
           <p className="text-ink-soft">No rights: expanded NPV equals static NPV.</p>
         ) : (
           <Table caption="Rights: values and exercise">
@@ -88,7 +88,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
               </tr>
             </thead>
             <tbody>
-              {result.switches.map((s) => (
+              {result.rights.map((s) => (
                 <Tr key={s.id}>
                   <Td>
                     <span className="font-medium">{s.id}</span>

@@ -10,7 +10,7 @@ import { Input } from '@/components/ui/input';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { useToast } from '@/components/ui/toast';
 import { ValuationCaution } from '@/components/valuation-caution';
-import type { SwitchResult } from '@/lattice';
+import type { RightResult } from '@/lattice';
 import { ApiError, getJson, sendJson } from '@/lib/api-client';
 import { formatMoney } from '@/lib/format';
 import { readNumberText } from '@/lib/number-text';
@@ -23,7 +23,8 @@ import { WatchImport } from './watch-import';
 
 interface Watch {
   followed: { caseVersion: number; valuationDate: string; horizon: number; value: number; replaces: { caseVersion: number; approvedOn: string } | null };
-  switches: SwitchResult[];
+  /** Each approved right with its exercise boundary, for the chart. */
+  boundaries: RightResult[];
   asOf: string;
   value: number;
   valueOn: string;
@@ -147,7 +148,7 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
         </h3>
         <p className="mb-3 text-caption text-ink-muted">Years after the approval on {w.followed.valuationDate}.</p>
         <BoundaryChart
-          switches={w.switches}
+          rights={w.boundaries}
           v0={w.followed.value}
           v0Label="V at approval"
           horizon={w.followed.horizon}
