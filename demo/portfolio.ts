@@ -54,9 +54,9 @@ const plantBase: CaseInput = {
     },
   },
   options: [
-    { type: 'expand', id: 'Phase 2', factor: 0.5, cost: 95, window: { kind: 'american', from: 2, to: 4 } },
+    { kind: 'expand', id: 'Phase 2', factor: 0.5, cost: 95, window: { kind: 'american', from: 2, to: 4 } },
     {
-      type: 'abandon',
+      kind: 'abandon',
       id: 'Sell the plant',
       salvage: [
         { from: 0, amount: 95 },
@@ -88,7 +88,7 @@ const hubBase: CaseInput = {
     tree: 'crr',
     volatilitySource: { method: 'direct', note: 'Invented for the demo: regional cold-chain rents and volumes, five years of history.' },
   },
-  options: [{ type: 'defer', id: 'Build the hub', cost: { amount: 92, growth: 0.04 }, window: { kind: 'american', from: 0, to: 3 } }],
+  options: [{ kind: 'defer', id: 'Build the hub', cost: { amount: 92, growth: 0.04 }, window: { kind: 'american', from: 0, to: 3 } }],
 };
 
 const pilotRows = schedule({
@@ -111,7 +111,7 @@ const pilotBase: CaseInput = {
   },
   options: [
     {
-      type: 'stage',
+      kind: 'stage',
       id: 'Pilot funding',
       payments: [
         { at: 0, amount: 10 },
@@ -141,8 +141,8 @@ const lineBase: CaseInput = {
     volatilitySource: { method: 'direct', note: 'Invented for the demo: the line’s own margins over the last eight years.' },
   },
   options: [
-    { type: 'switch', id: 'Mothball', toScale: 0, cost: 1.5, backCost: 3, flowPerYear: 2, window: { kind: 'american', from: 0, to: 6 } },
-    { type: 'abandon', id: 'Close the line', salvage: 6, window: { kind: 'american', from: 0, to: 5 } },
+    { kind: 'mothball', id: 'Mothball', toScale: 0, cost: 1.5, backCost: 3, flowPerYear: 2, window: { kind: 'american', from: 0, to: 6 } },
+    { kind: 'abandon', id: 'Close the line', salvage: 6, window: { kind: 'american', from: 0, to: 5 } },
   ],
 };
 
@@ -200,6 +200,6 @@ export const demoPortfolio: DemoProject[] = [
     name: 'Older extrusion line',
     description:
       'An ageing extrusion line that can be mothballed when margins thin (saving EUR 2 m a year in site costs net of upkeep) and restarted later, or closed for its scrap value. Invented demo figures, EUR millions.',
-    cases: [lineBase, { ...lineBase, name: 'Without mothballing', options: lineBase.options!.filter((o) => o.type !== 'switch') }],
+    cases: [lineBase, { ...lineBase, name: 'Without mothballing', options: lineBase.options!.filter((o) => o.kind !== 'mothball') }],
   },
 ];

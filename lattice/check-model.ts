@@ -52,7 +52,7 @@ function checkFieldsInTime(model: ProjectModel) {
   });
   (model.options ?? []).forEach((o, k) => {
     const f = `options[${k}]`;
-    switch (o.type) {
+    switch (o.kind) {
       case 'expand':
       case 'defer':
         checkWindow(o.window, h, `${f}.window`);
@@ -66,7 +66,7 @@ function checkFieldsInTime(model: ProjectModel) {
         checkWindow(o.window, h, `${f}.window`);
         checkCost(o.salvage, `${f}.salvage`);
         return;
-      case 'switch':
+      case 'mothball':
         if (o.window) checkWindow(o.window, h, `${f}.window`);
         checkCost(o.cost, `${f}.cost`);
         checkCost(o.backCost, `${f}.backCost`);

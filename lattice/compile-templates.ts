@@ -51,9 +51,9 @@ const keyOf = (s: State) => `${s.phase}|${s.paid}|${s.exercised}|${s.switched}`;
 export function templateIds(options: OptionTemplate[]): string[] {
   const counts = new Map<string, number>();
   const ids = options.map((option) => {
-    const n = (counts.get(option.type) ?? 0) + 1;
-    counts.set(option.type, n);
-    return option.id ?? `${option.type}-${n}`;
+    const n = (counts.get(option.kind) ?? 0) + 1;
+    counts.set(option.kind, n);
+    return option.id ?? `${option.kind}-${n}`;
   });
   ids.forEach((id, k) => {
     if (ids.indexOf(id) !== k) refuse(`options[${k}].id`, `must be unique, "${id}" is used twice`);
@@ -64,24 +64,24 @@ export function templateIds(options: OptionTemplate[]): string[] {
 export function compileTemplates(model: ProjectModel): CompiledModel {
   const options = model.options ?? [];
   const ids = templateIds(options);
-  const deferAt = options.findIndex((o) => o.type === 'defer');
-  const stageAt = options.findIndex((o) => o.type === 'stage');
-  if (options.filter((o) => o.type === 'defer').length > 1) refuse('options', 'may hold at most one defer right');
-  if (options.filter((o) => o.type === 'stage').length > 1) refuse('options', 'may hold at most one stage right');
+  const deferAt = options.findIndex((o) => o.kind === 'defer');
+  const stageAt = options.findIndex((o) => o.kind === 'stage');
+  if (options.filter((o) => o.kind === 'defer').length > 1) refuse('options', 'may hold at most one defer right');
+  if (options.filter((o) => o.kind === 'stage').length > 1) refuse('options', 'may hold at most one stage right');
   if (deferAt >= 0 && stageAt >= 0) refuse(`options[${stageAt}]`, 'cannot be combined with a defer right: make the first stage payment the defer cost');
   if ((deferAt >= 0 || stageAt >= 0) && model.investment !== undefined && model.investment !== 0)
     refuse('investment', 'must be omitted when a defer or stage right carries the outlay');
 
   const whole: ExerciseWindow = { kind: 'american', from: 0, to: model.horizon };
-  const stage = stageAt >= 0 ? (options[stageAt] as Extract<OptionTemplate, { type: 'stage' }>) : undefined;
+  const stage = stageAt >= 0 ? (options[stageAt] as Extract<OptionTemplate, { kind: 'stage' }>) : undefined;
 
   /** The scale of the plant held, before any switch (mothballing) multiplies it. */
   function operatingScale(s: State): number {
     let scale = 1;
     options.forEach((o, k) => {
       if (!(s.exercised & (1 << k))) return;
-      if (o.type === 'expand') scale += o.factor;
-      if (o.type === 'contract') scale -= o.fraction;
+      if (o.kind === 'expand') scale += o.factor;
+      if (o.kind === 'contract') scale -= o.fraction;
     });
     return Math.max(0, scale);
   }
@@ -97,7 +97,7 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
     });
     let flowPerYear = 0;
     if (s.switched >= 0) {
-      const sw = options[s.switched] as Extract<OptionTemplate, { type: 'switch' }>;
+      const sw = options[s.switched] as Extract<OptionTemplate, { kind: 'mothball' }>;
       scale *= sw.toScale;
       flowPerYear = sw.flowPerYear ?? 0;
       id += ` (${ids[s.switched]})`;
@@ -109,7 +109,7 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
     const moves: Move[] = [];
     const field = (k: number) => `options[${k}]`;
     if (s.phase === 'waiting') {
-      const o = options[deferAt] as Extract<OptionTemplate, { type: 'defer' }>;
+      const o = options[deferAt] as Extract<OptionTemplate, { kind: 'defer' }>;
       moves.push({ template: deferAt, to: { ...s, phase: 'operating' }, cost: o.cost, window: o.window, field: field(deferAt) });
     }
     if (s.phase === 'staging' && stage) {
@@ -128,13 +128,13 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
     options.forEach((o, k) => {
       const done = (s.exercised & (1 << k)) !== 0;
       // Every type says what it can do from an operating mode: the compiler refuses a type left out.
-      switch (o.type) {
+      switch (o.kind) {
         case 'abandon': {
           const salvage = o.fixedSalvage ? o.salvage : scaleCost(o.salvage, operatingScale(s));
           moves.push({ template: k, to: { ...s, phase: 'closed', exercised: 0, switched: -1 }, cost: negateCost(salvage), window: o.window, field: field(k) });
           break;
         }
-        case 'switch':
+        case 'mothball':
           if (k === s.switched)
             moves.push({ template: k, to: { ...s, switched: -1 }, cost: o.backCost, window: o.window ?? whole, field: `${field(k)}.backCost` });
           else if (running) moves.push({ template: k, to: { ...s, switched: k }, cost: o.cost, window: o.window ?? whole, field: field(k) });
@@ -174,12 +174,12 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
       const field = `exercised[${n}]`;
       if (k < 0) refuse(field, `names no option template ("${name}")`);
       const o = options[k]!;
-      if (o.type === 'stage') refuse(field, 'cannot name a stage right: give only the payments still to make');
+      if (o.kind === 'stage') refuse(field, 'cannot name a stage right: give only the payments still to make');
       if (s.phase === 'closed') refuse(field, 'follows an abandonment: nothing is left to use');
-      if (o.type === 'defer') s = { ...s, phase: 'operating' };
+      if (o.kind === 'defer') s = { ...s, phase: 'operating' };
       else if (s.phase !== 'operating') refuse(field, `needs the project operating: name the defer right "${ids[deferAt]}" as used first`);
-      else if (o.type === 'abandon') s = { ...s, phase: 'closed', exercised: 0, switched: -1 };
-      else if (o.type === 'switch') s = { ...s, switched: k };
+      else if (o.kind === 'abandon') s = { ...s, phase: 'closed', exercised: 0, switched: -1 };
+      else if (o.kind === 'mothball') s = { ...s, switched: k };
       else s = { ...s, exercised: s.exercised | (1 << k) };
     }
     return s;
@@ -214,7 +214,7 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
 
   const rights: Right[] = options.map((o, k) => ({
     id: ids[k]!,
-    kind: o.type as RightKind,
+    kind: o.kind as RightKind,
     field: `options[${k}]`,
     primaryFrom: k === deferAt || k === stageAt ? start : staticMode,
   }));
@@ -222,7 +222,7 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
   const discount = (t: number) => Math.exp(-model.riskFreeRate * t);
   let staticPlan: CompiledModel['staticPlan'];
   if (deferAt >= 0) {
-    const defer = options[deferAt] as Extract<OptionTemplate, { type: 'defer' }>;
+    const defer = options[deferAt] as Extract<OptionTemplate, { kind: 'defer' }>;
     const at = windowStart(defer.window);
     staticPlan = { mode: staticMode, enterAt: at, outlays: [{ at, cost: defer.cost }] };
   } else if (stage) {

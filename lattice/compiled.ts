@@ -25,7 +25,7 @@ export interface CompiledSwitch {
 }
 
 /** A template's type, or `custom` for a switch given directly (the advanced form). */
-export type RightKind = OptionTemplate['type'] | 'custom';
+export type RightKind = OptionTemplate['kind'] | 'custom';
 
 export interface Right {
   id: string;

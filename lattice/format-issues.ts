@@ -4,6 +4,10 @@
  */
 import type { z } from 'zod';
 import type { ModelIssue } from './errors';
+import { optionTemplateSchema } from './schema';
+
+/** The kinds of right a template may name, read from the schema so the refusal lists them all. */
+const rightKinds = optionTemplateSchema.options.map((o) => JSON.stringify(o.shape.kind.value)).join(', ');
 
 export function fieldPath(path: ReadonlyArray<PropertyKey>): string {
   let out = '';
@@ -50,8 +54,10 @@ function rule(issue: z.core.$ZodIssue): string {
       const key = issue.path[issue.path.length - 1];
       if (key === 'cost' || key === 'salvage' || key === 'savings' || key === 'backCost') return `${moneyOverTime}${got}`;
       if (key === 'window') return `must be {kind: "american", from, to}, {kind: "bermudan", dates} or {kind: "european", at}`;
-      if (key === 'type') return `must be one of "expand", "contract", "abandon", "defer", "stage", "switch"${got}`;
-      if (key === 'kind') return `must be one of "american", "bermudan", "european"${got}`;
+      // zod reports a bad discriminator with the whole object as its input; name the kind given.
+      const gotKind = issue.input && typeof issue.input === 'object' ? `, got ${describeValue((issue.input as { kind?: unknown }).kind)}` : got;
+      if (key === 'kind' && issue.path.at(-2) === 'window') return `must be one of "american", "bermudan", "european"${gotKind}`;
+      if (key === 'kind') return `must be one of ${rightKinds}${gotKind}`;
       return `${issue.message}${got}`;
     }
     default:

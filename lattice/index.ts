@@ -12,4 +12,5 @@ export type { ProjectModel, OptionTemplate, Cost, ExerciseWindow, TreeKind, Mode
 export type * from './result';
 export { ENGINE_VERSION } from './version';
 export { readStoredResult } from './stored-result';
+export { readStoredModel, readStoredTemplates } from './stored-model';
 export { MAX_STEPS, MAX_MODES, NODE_BUDGET, MAX_DECISION_CELLS, MAX_REQUEST_CELLS } from './limits';

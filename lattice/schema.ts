@@ -47,21 +47,21 @@ export const switchSchema = z.strictObject({
 });
 
 const expandSchema = z.strictObject({
-  type: z.literal('expand'),
+  kind: z.literal('expand'),
   id: id.optional(),
   factor: z.number().gt(0, 'Must be above 0 %.'),
   cost: costSchema,
   window: windowSchema,
 });
 const contractSchema = z.strictObject({
-  type: z.literal('contract'),
+  kind: z.literal('contract'),
   id: id.optional(),
   fraction: z.number().gt(0, 'Must be above 0 % and at most 100 %.').max(1, 'Must be above 0 % and at most 100 %.'),
   savings: costSchema,
   window: windowSchema,
 });
 const abandonSchema = z.strictObject({
-  type: z.literal('abandon'),
+  kind: z.literal('abandon'),
   id: id.optional(),
   /** Proceeds for the project at its base scale; they follow the scale sold unless `fixedSalvage`. */
   salvage: costSchema,
@@ -70,21 +70,22 @@ const abandonSchema = z.strictObject({
   window: windowSchema,
 });
 const deferSchema = z.strictObject({
-  type: z.literal('defer'),
+  kind: z.literal('defer'),
   id: id.optional(),
   cost: costSchema,
   window: windowSchema,
 });
 const stageSchema = z.strictObject({
-  type: z.literal('stage'),
+  kind: z.literal('stage'),
   id: id.optional(),
   payments: z
     .array(z.strictObject({ at: years, amount: z.number().min(0, 'Must be 0 or more.') }))
     .min(1)
     .max(12),
 });
-const switchTemplateSchema = z.strictObject({
-  type: z.literal('switch'),
+/** Pause operations (mothball) and restart them later: the template compiles to two switches between modes. */
+const mothballSchema = z.strictObject({
+  kind: z.literal('mothball'),
   id: id.optional(),
   toScale: z.number().min(0, 'Must be 0 or more.'),
   cost: costSchema,
@@ -93,7 +94,7 @@ const switchTemplateSchema = z.strictObject({
   window: windowSchema.optional(),
 });
 
-export const optionTemplateSchema = z.discriminatedUnion('type', [expandSchema, contractSchema, abandonSchema, deferSchema, stageSchema, switchTemplateSchema]);
+export const optionTemplateSchema = z.discriminatedUnion('kind', [expandSchema, contractSchema, abandonSchema, deferSchema, stageSchema, mothballSchema]);
 
 export const treeKindSchema = z.enum(['crr', 'jarrow-rudd', 'tian', 'trigeorgis']);
 

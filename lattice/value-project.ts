@@ -68,7 +68,7 @@ function modelDates(model: ProjectModel): Years[] {
   };
   // Every option type names its dates here: the compiler refuses a type left out.
   for (const o of model.options ?? []) {
-    switch (o.type) {
+    switch (o.kind) {
       case 'stage':
         dates.push(...o.payments.map((p) => p.at));
         break;
@@ -77,7 +77,7 @@ function modelDates(model: ProjectModel): Years[] {
         window(o.window);
         cost(o.cost);
         break;
-      case 'switch':
+      case 'mothball':
         window(o.window);
         cost(o.cost);
         cost(o.backCost);

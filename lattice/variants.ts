@@ -21,7 +21,7 @@ export function withRights(model: ProjectModel, compiled: CompiledModel, keep: (
   if (model.options && model.options.length > 0) {
     const ids = templateIds(model.options);
     const kept = model.options.flatMap((o, k) => (keep(k) ? [{ ...o, id: ids[k]! }] : []));
-    const carriesOutlay = (o: OptionTemplate) => o.type === 'defer' || o.type === 'stage';
+    const carriesOutlay = (o: OptionTemplate) => o.kind === 'defer' || o.kind === 'stage';
     const outlayRemoved = model.options.some(carriesOutlay) && !kept.some(carriesOutlay);
     if (!outlayRemoved) return { model: { ...model, options: kept }, onStaticPlan: false };
     const dt = model.horizon / model.steps;
@@ -35,8 +35,8 @@ export function withRights(model: ProjectModel, compiled: CompiledModel, keep: (
 /** A right whose window opens no earlier than step time `from` (none when it closes before); dates snap to steps of `dt`. */
 function clipped(option: OptionTemplate, from: Years, dt: Years, horizon: Years): OptionTemplate[] {
   const onOrAfter = (t: Years) => Math.round(t / dt) >= Math.round(from / dt);
-  if (option.type === 'defer' || option.type === 'stage') return [option];
-  if (option.type === 'switch' && !option.window) return [{ ...option, window: { kind: 'american', from, to: horizon } }];
+  if (option.kind === 'defer' || option.kind === 'stage') return [option];
+  if (option.kind === 'mothball' && !option.window) return [{ ...option, window: { kind: 'american', from, to: horizon } }];
   const window = option.window!;
   switch (window.kind) {
     case 'american':
@@ -77,7 +77,7 @@ function costBump(model: ProjectModel, k: number, factor: number): ProjectModel 
   const clone = structuredClone(model);
   if (clone.options && clone.options.length > 0) {
     const o = clone.options[k]!;
-    switch (o.type) {
+    switch (o.kind) {
       case 'expand':
       case 'defer':
         o.cost = scaleCost(o.cost, factor);
@@ -91,7 +91,7 @@ function costBump(model: ProjectModel, k: number, factor: number): ProjectModel 
       case 'stage':
         o.payments = o.payments.map((p) => ({ at: p.at, amount: p.amount * factor }));
         break;
-      case 'switch':
+      case 'mothball':
         o.cost = scaleCost(o.cost, factor);
         o.backCost = scaleCost(o.backCost, factor);
         break;
@@ -114,7 +114,7 @@ const costField: Record<RightKind, [field: string, label: string]> = {
   contract: ['savings', 'savings'],
   abandon: ['salvage', 'salvage'],
   stage: ['payments', 'payments'],
-  switch: ['cost', 'switching costs'],
+  mothball: ['cost', 'switching costs'],
   custom: ['cost', 'cost'],
 };
 

@@ -17,7 +17,7 @@ export function caseToModel(input: CaseInput): { model: ProjectModel; warnings: 
       cashFlows: ['V0 must be positive.'],
     });
   const horizon = Math.max(1, parsed.cashFlows.rows.at(-1)!.year);
-  const carriesOutlay = parsed.options.some((o) => o.type === 'defer' || o.type === 'stage');
+  const carriesOutlay = parsed.options.some((o) => o.kind === 'defer' || o.kind === 'stage');
   const model: ProjectModel = {
     underlying: {
       value: analysis.underlyingValue,

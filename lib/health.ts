@@ -17,7 +17,7 @@ const canary: ProjectModel = {
   riskFreeRate: 0.03,
   horizon: 1,
   steps: 4,
-  options: [{ type: 'abandon', salvage: 90, window: { kind: 'american', from: 0, to: 1 } }],
+  options: [{ kind: 'abandon', salvage: 90, window: { kind: 'american', from: 0, to: 1 } }],
 };
 
 async function databaseCheck(): Promise<{ database: 'ok' | 'unreachable'; databaseMs: number }> {

@@ -9,7 +9,7 @@ import type { CashFlowAnalysis } from './cash-flows';
 import { readNumberText } from './number-text';
 import { optionTemplateSchema, type Cost, type ExerciseWindow, type OptionTemplate } from '@/lattice';
 
-export type OptionType = OptionTemplate['type'];
+export type OptionKind = OptionTemplate['kind'];
 export type CostKind = 'constant' | 'growing' | 'scheduled';
 
 export interface CostForm {
@@ -30,9 +30,9 @@ export interface WindowForm {
 }
 
 export interface OptionForm {
-  type: OptionType;
+  kind: OptionKind;
   label: string;
-  /** Expand: added scale in %; contract: share given up in %; switch: scale kept while switched in %. */
+  /** Expand: added scale in %; contract: share given up in %; mothball: scale kept while paused in %. */
   share: string;
   cost: CostForm;
   backCost: CostForm;
@@ -43,13 +43,13 @@ export interface OptionForm {
   fixedSalvage: boolean;
 }
 
-export const optionTypeLabels: Record<OptionType, string> = {
+export const optionKindLabels: Record<OptionKind, string> = {
   expand: 'Expand',
   contract: 'Contract',
   abandon: 'Abandon',
   defer: 'Defer',
   stage: 'Stage',
-  switch: 'Mothball & restart',
+  mothball: 'Mothball & restart',
 };
 
 const num = (value: number) => String(Number(value.toPrecision(12)));
@@ -73,7 +73,7 @@ function windowToForm(window: ExerciseWindow | undefined, horizon: number): Wind
 
 export function templateToForm(t: OptionTemplate, horizon: number): OptionForm {
   const form: OptionForm = {
-    type: t.type,
+    kind: t.kind,
     label: t.id ?? '',
     share: '',
     cost: costToForm(0),
@@ -83,7 +83,7 @@ export function templateToForm(t: OptionTemplate, horizon: number): OptionForm {
     payments: [],
     fixedSalvage: false,
   };
-  switch (t.type) {
+  switch (t.kind) {
     case 'expand':
       return { ...form, share: pct(t.factor), cost: costToForm(t.cost), window: windowToForm(t.window, horizon) };
     case 'contract':
@@ -94,7 +94,7 @@ export function templateToForm(t: OptionTemplate, horizon: number): OptionForm {
       return { ...form, cost: costToForm(t.cost), window: windowToForm(t.window, horizon) };
     case 'stage':
       return { ...form, payments: t.payments.map((p) => ({ at: num(p.at), amount: num(p.amount) })) };
-    case 'switch':
+    case 'mothball':
       return {
         ...form,
         share: pct(t.toScale),
@@ -137,19 +137,19 @@ export function cardBasis(analysis: CashFlowAnalysis | null, horizon: number, ri
  * stage) starts from the static plan's own outlay, so adding it never moves the NPV without
  * flexibility (docs/engine.md §5); the others start from shares of V0.
  */
-export function newOptionForm(type: OptionType, basis: CardBasis): OptionForm {
+export function newOptionForm(kind: OptionKind, basis: CardBasis): OptionForm {
   const { horizon, v0 } = basis;
   const round = (x: number) => Math.max(1, Math.round(x));
   const outlay = Math.round(Math.max(0, basis.investment) * 100) / 100;
   const payments = basis.stagePayments.length > 0 ? basis.stagePayments : [{ at: 0, amount: outlay }];
-  const templates: Record<OptionType, OptionTemplate> = {
-    expand: { type: 'expand', id: 'Expand', factor: 0.3, cost: round(v0 * 0.25), window: { kind: 'american', from: 1, to: horizon } },
-    contract: { type: 'contract', id: 'Contract', fraction: 0.3, savings: round(v0 * 0.2), window: { kind: 'american', from: 1, to: horizon } },
-    abandon: { type: 'abandon', id: 'Abandon', salvage: round(v0 * 0.5), window: { kind: 'american', from: 0, to: horizon } },
-    defer: { type: 'defer', id: 'Defer', cost: outlay, window: { kind: 'american', from: 0, to: Math.min(2, horizon) } },
-    stage: { type: 'stage', id: 'Stages', payments },
-    switch: {
-      type: 'switch',
+  const templates: Record<OptionKind, OptionTemplate> = {
+    expand: { kind: 'expand', id: 'Expand', factor: 0.3, cost: round(v0 * 0.25), window: { kind: 'american', from: 1, to: horizon } },
+    contract: { kind: 'contract', id: 'Contract', fraction: 0.3, savings: round(v0 * 0.2), window: { kind: 'american', from: 1, to: horizon } },
+    abandon: { kind: 'abandon', id: 'Abandon', salvage: round(v0 * 0.5), window: { kind: 'american', from: 0, to: horizon } },
+    defer: { kind: 'defer', id: 'Defer', cost: outlay, window: { kind: 'american', from: 0, to: Math.min(2, horizon) } },
+    stage: { kind: 'stage', id: 'Stages', payments },
+    mothball: {
+      kind: 'mothball',
       id: 'Mothball',
       toScale: 0,
       cost: round(v0 * 0.02),
@@ -158,7 +158,7 @@ export function newOptionForm(type: OptionType, basis: CardBasis): OptionForm {
       window: { kind: 'american', from: 0, to: horizon },
     },
   };
-  return templateToForm(templates[type], horizon);
+  return templateToForm(templates[kind], horizon);
 }
 
 type Problems = Record<string, string>;
@@ -220,10 +220,10 @@ export function toTemplates(forms: OptionForm[], horizon: number): { templates: 
     const window = () => readWindow(f.window, `${at}.window`, horizon, problems);
     // The share's range is the engine schema's (factor, fraction, toScale), checked below with its words.
     const share = () => readNumber(f.share, `${at}.share`, problems) / 100;
-    switch (f.type) {
+    switch (f.kind) {
       case 'expand':
         return {
-          type: 'expand',
+          kind: 'expand',
           id,
           factor: share(),
           cost: readCost(f.cost, `${at}.cost`, problems),
@@ -231,29 +231,29 @@ export function toTemplates(forms: OptionForm[], horizon: number): { templates: 
         };
       case 'contract':
         return {
-          type: 'contract',
+          kind: 'contract',
           id,
           fraction: share(),
           savings: readCost(f.cost, `${at}.cost`, problems),
           window: window(),
         };
       case 'abandon':
-        return { type: 'abandon', id, salvage: readCost(f.cost, `${at}.cost`, problems), ...(f.fixedSalvage ? { fixedSalvage: true } : {}), window: window() };
+        return { kind: 'abandon', id, salvage: readCost(f.cost, `${at}.cost`, problems), ...(f.fixedSalvage ? { fixedSalvage: true } : {}), window: window() };
       case 'defer':
-        return { type: 'defer', id, cost: readCost(f.cost, `${at}.cost`, problems), window: window() };
+        return { kind: 'defer', id, cost: readCost(f.cost, `${at}.cost`, problems), window: window() };
       case 'stage':
         if (f.payments.length === 0) problems[`${at}.payments`] = 'Add at least one payment.';
         return {
-          type: 'stage',
+          kind: 'stage',
           id,
           payments: f.payments.map((p, k) => ({
             at: readNumber(p.at, `${at}.payments.${k}.at`, problems, (x) => (x < 0 || x > horizon ? `Must lie between year 0 and year ${horizon}.` : null)),
             amount: readNumber(p.amount, `${at}.payments.${k}.amount`, problems),
           })),
         };
-      case 'switch':
+      case 'mothball':
         return {
-          type: 'switch',
+          kind: 'mothball',
           id,
           toScale: share(),
           cost: readCost(f.cost, `${at}.cost`, problems),

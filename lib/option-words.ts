@@ -20,7 +20,7 @@ export function describeWindow(w: ExerciseWindow | undefined): string {
 }
 
 export function describeOption(o: OptionTemplate, currency?: string): string {
-  switch (o.type) {
+  switch (o.kind) {
     case 'expand':
       return `expand by ${formatPercent(o.factor, 0)} of the project for ${describeCost(o.cost, currency)}, ${describeWindow(o.window)}`;
     case 'contract':
@@ -31,7 +31,7 @@ export function describeOption(o: OptionTemplate, currency?: string): string {
       return `invest ${describeCost(o.cost, currency)} ${describeWindow(o.window)}, or never`;
     case 'stage':
       return `pay in stages: ${o.payments.map((p) => `${formatMoney(p.amount, currency)} in year ${p.at}`).join(', ')}; stopping at any stage`;
-    case 'switch':
+    case 'mothball':
       return `switch to ${formatPercent(o.toScale, 0)} of scale for ${describeCost(o.cost, currency)} and back for ${describeCost(o.backCost, currency)}, earning ${formatMoney(o.flowPerYear ?? 0, currency)} a year while switched, ${describeWindow(o.window)}`;
   }
 }

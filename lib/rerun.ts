@@ -5,6 +5,7 @@
  * (lib/run-changes.ts). Nothing is stored: a re-run is a check, not a valuation of the case.
  */
 import 'server-only';
+import { readStoredModel } from '@/lattice';
 import { db } from '@/db';
 import { findValuationRun } from '@/db/queries/valuation-runs';
 import type { Member } from './dal';
@@ -20,7 +21,7 @@ export async function rerun(member: Member, caseId: string, runId: string, signa
   let result;
   try {
     // The options every stored run is valued with (lib/value-case.ts): the engine's defaults.
-    result = await valueInWorker(run.input, undefined, { owner: member.userId, signal });
+    result = await valueInWorker(readStoredModel(run.input), undefined, { owner: member.userId, signal });
   } catch (error) {
     if (error instanceof EngineRefusal)
       throw new AppError('unprocessable', `Today's engine refuses this run's stored model: ${error.issues[0]?.message ?? 'it is not valid'}.`);

@@ -18,6 +18,7 @@ import * as m0012 from './0012_result_hashes';
 import * as m0013 from './0013_observations';
 import * as m0014 from './0014_decisions_and_alerts';
 import * as m0015 from './0015_cross_checks';
+import * as m0016 from './0016_right_kinds';
 
 export const migrations: Record<string, Migration> = {
   '0001_auth_tables': m0001,
@@ -35,4 +36,5 @@ export const migrations: Record<string, Migration> = {
   '0013_observations': m0013,
   '0014_decisions_and_alerts': m0014,
   '0015_cross_checks': m0015,
+  '0016_right_kinds': m0016,
 };

@@ -54,7 +54,7 @@ for (const steps of [1000, 2000, 5000]) {
     riskFreeRate: 0.05,
     horizon: 1,
     steps,
-    options: [{ type: 'abandon', salvage: 100, window: { kind: 'american', from: 0, to: 1 } }],
+    options: [{ kind: 'abandon', salvage: 100, window: { kind: 'american', from: 0, to: 1 } }],
   };
   const engine = time(() => valueProject(model, { extras: false }), 21);
   const prepared = prepareModel(model);

@@ -1193,7 +1193,7 @@ export interface components {
             };
             options: ({
                 /** @constant */
-                type: "expand";
+                kind: "expand";
                 id?: string;
                 factor: number;
                 cost: number | {
@@ -1219,7 +1219,7 @@ export interface components {
                 };
             } | {
                 /** @constant */
-                type: "contract";
+                kind: "contract";
                 id?: string;
                 fraction: number;
                 savings: number | {
@@ -1245,7 +1245,7 @@ export interface components {
                 };
             } | {
                 /** @constant */
-                type: "abandon";
+                kind: "abandon";
                 id?: string;
                 salvage: number | {
                     amount: number;
@@ -1271,7 +1271,7 @@ export interface components {
                 };
             } | {
                 /** @constant */
-                type: "defer";
+                kind: "defer";
                 id?: string;
                 cost: number | {
                     amount: number;
@@ -1296,7 +1296,7 @@ export interface components {
                 };
             } | {
                 /** @constant */
-                type: "stage";
+                kind: "stage";
                 id?: string;
                 payments: {
                     at: number;
@@ -1304,7 +1304,7 @@ export interface components {
                 }[];
             } | {
                 /** @constant */
-                type: "switch";
+                kind: "mothball";
                 id?: string;
                 toScale: number;
                 cost: number | {
@@ -2325,7 +2325,7 @@ export interface operations {
                             };
                             options: ({
                                 /** @constant */
-                                type: "expand";
+                                kind: "expand";
                                 id?: string;
                                 factor: number;
                                 cost: number | {
@@ -2351,7 +2351,7 @@ export interface operations {
                                 };
                             } | {
                                 /** @constant */
-                                type: "contract";
+                                kind: "contract";
                                 id?: string;
                                 fraction: number;
                                 savings: number | {
@@ -2377,7 +2377,7 @@ export interface operations {
                                 };
                             } | {
                                 /** @constant */
-                                type: "abandon";
+                                kind: "abandon";
                                 id?: string;
                                 salvage: number | {
                                     amount: number;
@@ -2403,7 +2403,7 @@ export interface operations {
                                 };
                             } | {
                                 /** @constant */
-                                type: "defer";
+                                kind: "defer";
                                 id?: string;
                                 cost: number | {
                                     amount: number;
@@ -2428,7 +2428,7 @@ export interface operations {
                                 };
                             } | {
                                 /** @constant */
-                                type: "stage";
+                                kind: "stage";
                                 id?: string;
                                 payments: {
                                     at: number;
@@ -2436,7 +2436,7 @@ export interface operations {
                                 }[];
                             } | {
                                 /** @constant */
-                                type: "switch";
+                                kind: "mothball";
                                 id?: string;
                                 toScale: number;
                                 cost: number | {
@@ -2579,7 +2579,7 @@ export interface operations {
                     /** @default [] */
                     options?: ({
                         /** @constant */
-                        type: "expand";
+                        kind: "expand";
                         id?: string;
                         factor: number;
                         cost: number | {
@@ -2605,7 +2605,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "contract";
+                        kind: "contract";
                         id?: string;
                         fraction: number;
                         savings: number | {
@@ -2631,7 +2631,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "abandon";
+                        kind: "abandon";
                         id?: string;
                         salvage: number | {
                             amount: number;
@@ -2657,7 +2657,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "defer";
+                        kind: "defer";
                         id?: string;
                         cost: number | {
                             amount: number;
@@ -2682,7 +2682,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "stage";
+                        kind: "stage";
                         id?: string;
                         payments: {
                             at: number;
@@ -2690,7 +2690,7 @@ export interface operations {
                         }[];
                     } | {
                         /** @constant */
-                        type: "switch";
+                        kind: "mothball";
                         id?: string;
                         toScale: number;
                         cost: number | {
@@ -3043,7 +3043,7 @@ export interface operations {
                     /** @default [] */
                     options?: ({
                         /** @constant */
-                        type: "expand";
+                        kind: "expand";
                         id?: string;
                         factor: number;
                         cost: number | {
@@ -3069,7 +3069,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "contract";
+                        kind: "contract";
                         id?: string;
                         fraction: number;
                         savings: number | {
@@ -3095,7 +3095,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "abandon";
+                        kind: "abandon";
                         id?: string;
                         salvage: number | {
                             amount: number;
@@ -3121,7 +3121,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "defer";
+                        kind: "defer";
                         id?: string;
                         cost: number | {
                             amount: number;
@@ -3146,7 +3146,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "stage";
+                        kind: "stage";
                         id?: string;
                         payments: {
                             at: number;
@@ -3154,7 +3154,7 @@ export interface operations {
                         }[];
                     } | {
                         /** @constant */
-                        type: "switch";
+                        kind: "mothball";
                         id?: string;
                         toScale: number;
                         cost: number | {
@@ -4167,7 +4167,7 @@ export interface operations {
                     }[];
                     options?: ({
                         /** @constant */
-                        type: "expand";
+                        kind: "expand";
                         id?: string;
                         factor: number;
                         cost: number | {
@@ -4193,7 +4193,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "contract";
+                        kind: "contract";
                         id?: string;
                         fraction: number;
                         savings: number | {
@@ -4219,7 +4219,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "abandon";
+                        kind: "abandon";
                         id?: string;
                         salvage: number | {
                             amount: number;
@@ -4245,7 +4245,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "defer";
+                        kind: "defer";
                         id?: string;
                         cost: number | {
                             amount: number;
@@ -4270,7 +4270,7 @@ export interface operations {
                         };
                     } | {
                         /** @constant */
-                        type: "stage";
+                        kind: "stage";
                         id?: string;
                         payments: {
                             at: number;
@@ -4278,7 +4278,7 @@ export interface operations {
                         }[];
                     } | {
                         /** @constant */
-                        type: "switch";
+                        kind: "mothball";
                         id?: string;
                         toScale: number;
                         cost: number | {

@@ -19,7 +19,7 @@ import { textWidth, wrapLabel } from '../charts/wrap-label';
 import { decisionRule } from '../decision-rules';
 import { readingOfFigures } from '../figures-reading';
 import { formatChange, formatDateTime, formatPercent } from '../format';
-import { optionTypeLabels, type OptionType } from '../option-form';
+import { optionKindLabels, type OptionKind } from '../option-form';
 import { premiumSplitText } from '../premium-split';
 import { describeOption } from '../option-words';
 import type { BoardPackData, FollowThrough, RecordEvent } from './data';
@@ -393,7 +393,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
           widths={[46, 18, 18, 18]}
           rows={[
             ...r.rights.map((s) => [
-              `${s.id} (${optionTypeLabels[s.kind as OptionType] ?? s.kind})`,
+              `${s.id} (${optionKindLabels[s.kind as OptionKind] ?? s.kind})`,
               money(s.standalone, currency),
               money(s.incremental, currency),
               formatPercent(s.exerciseProbability),

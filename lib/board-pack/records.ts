@@ -6,8 +6,9 @@ import { createHash } from 'node:crypto';
 import { db } from '@/db';
 import { findSnapshotForPack, findStoredPack, followThroughBefore, insertStoredPack, listSubmissionsUpTo } from '@/db/queries/board-packs';
 import { AppError } from '../errors';
+import { readStoredCaseInput } from '../validations/case';
 import type { BoardPackData, FollowThrough, PageSize, RecordEvent } from './data';
-import { readStoredResult } from '@/lattice';
+import { readStoredModel, readStoredResult } from '@/lattice';
 
 /** Who did it, when they have left the organisation since. */
 const FORMER_MEMBER = 'a former member';
@@ -52,8 +53,8 @@ export async function boardPackData(orgId: string, snapshotId: string, pageSize:
       id: row.id,
       caseName: row.case_name,
       caseVersion: row.case_version,
-      inputs: row.inputs as BoardPackData['snapshot']['inputs'],
-      model: row.model as BoardPackData['snapshot']['model'],
+      inputs: readStoredCaseInput(row.inputs) as BoardPackData['snapshot']['inputs'],
+      model: readStoredModel(row.model),
       result: readStoredResult(row.result) as BoardPackData['snapshot']['result'],
       engineVersion: row.engine_version,
       inputHash: row.input_hash,

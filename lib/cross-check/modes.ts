@@ -49,9 +49,9 @@ function times(cost: Cost, factor: number): Cost {
 function rightIds(options: OptionTemplate[]): string[] {
   const seen = new Map<string, number>();
   return options.map((option) => {
-    const n = (seen.get(option.type) ?? 0) + 1;
-    seen.set(option.type, n);
-    return option.id ?? `${option.type}-${n}`;
+    const n = (seen.get(option.kind) ?? 0) + 1;
+    seen.set(option.kind, n);
+    return option.id ?? `${option.kind}-${n}`;
   });
 }
 
@@ -85,15 +85,15 @@ function fromTemplates(model: ProjectModel): StateGraph {
   const options = model.options ?? [];
   const ids = rightIds(options);
   const always: ExerciseWindow = { kind: 'american', from: 0, to: model.horizon };
-  const deferIndex = options.findIndex((o) => o.type === 'defer');
-  const stageIndex = options.findIndex((o) => o.type === 'stage');
+  const deferIndex = options.findIndex((o) => o.kind === 'defer');
+  const stageIndex = options.findIndex((o) => o.kind === 'stage');
 
   const plantScale = (used: readonly number[]) =>
     Math.max(
       0,
       used.reduce((scale, k) => {
         const o = options[k]!;
-        return o.type === 'expand' ? scale + o.factor : o.type === 'contract' ? scale - o.fraction : scale;
+        return o.kind === 'expand' ? scale + o.factor : o.kind === 'contract' ? scale - o.fraction : scale;
       }, 1),
     );
 
@@ -106,7 +106,7 @@ function fromTemplates(model: ProjectModel): StateGraph {
     if (known !== undefined) return known;
     let state: State;
     if (s.phase === 'running') {
-      const paused = s.paused === null ? null : (options[s.paused] as Extract<OptionTemplate, { type: 'switch' }>);
+      const paused = s.paused === null ? null : (options[s.paused] as Extract<OptionTemplate, { kind: 'mothball' }>);
       const base = plantScale(s.used);
       state = {
         name: ['running', ...s.used.map((k) => ids[k]), ...(s.paused === null ? [] : [`paused by ${ids[s.paused]}`])].join(' · '),
@@ -130,10 +130,10 @@ function fromTemplates(model: ProjectModel): StateGraph {
     const from = n;
     const add = (right: number, to: Standing, cost: Cost, window: ExerciseWindow) => moves.push({ right, from, to: stateOf(to), cost, window });
     if (s.phase === 'unbuilt') {
-      const defer = options[deferIndex] as Extract<OptionTemplate, { type: 'defer' }>;
+      const defer = options[deferIndex] as Extract<OptionTemplate, { kind: 'defer' }>;
       add(deferIndex, { phase: 'running', used: [], paused: null }, defer.cost, defer.window);
     } else if (s.phase === 'funding') {
-      const stage = options[stageIndex] as Extract<OptionTemplate, { type: 'stage' }>;
+      const stage = options[stageIndex] as Extract<OptionTemplate, { kind: 'stage' }>;
       const payment = stage.payments[s.paymentsMade]!;
       const done = s.paymentsMade + 1 === stage.payments.length;
       add(stageIndex, done ? { phase: 'running', used: [], paused: null } : { phase: 'funding', paymentsMade: s.paymentsMade + 1 }, payment.amount, {
@@ -145,12 +145,12 @@ function fromTemplates(model: ProjectModel): StateGraph {
         const used = s.used.includes(k);
         const withIt = [...s.used, k].sort((a, b) => a - b);
         // Every option type says what it can do from a running plant: the compiler refuses a type left out.
-        switch (o.type) {
+        switch (o.kind) {
           case 'abandon':
             // A sale is open whether or not the plant is paused; it sells the plant's scale as built.
             add(k, { phase: 'closed' }, times(o.salvage, o.fixedSalvage ? -1 : -plantScale(s.used)), o.window);
             break;
-          case 'switch':
+          case 'mothball':
             if (s.paused === k) add(k, { ...s, paused: null }, o.backCost, o.window ?? always);
             else if (s.paused === null) add(k, { ...s, paused: k }, o.cost, o.window ?? always);
             break;

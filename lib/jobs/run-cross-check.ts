@@ -4,6 +4,7 @@
  * model or a result is final; a thread that crashed or a worker that stopped throws, so the queue
  * runs it again (seeded: the same answer).
  */
+import { readStoredModel } from '@/lattice';
 import { db } from '@/db';
 import { findCrossCheckForJob } from '@/db/queries/cross-checks';
 import { finishJob, setJobProgress } from '@/db/queries/job-rows';
@@ -26,7 +27,7 @@ export async function runCrossCheckJob(job: CrossCheckJob): Promise<void> {
   if (!row || row.status !== 'running' || !(await setJobProgress(db, 'cross_check', { id, progress: 0 }))) return;
   const outcome = await runInThread<CrossCheckResult>({
     file: 'cross-check-worker.mjs',
-    data: { model: row.model, spec: { paths: row.paths, seed: row.seed } },
+    data: { model: readStoredModel(row.model), spec: { paths: row.paths, seed: row.seed } },
     deadlineSeconds: CROSS_CHECK_DEADLINE_SECONDS,
     onProgress: (progress) => setJobProgress(db, 'cross_check', { id, progress }),
   });

@@ -36,7 +36,7 @@ const exampleCase = {
     })),
   },
   settings: { volatility: 0.3, riskFreeRate: 0.03, steps: 60 },
-  options: [{ type: 'expand', id: 'Second line', factor: 0.4, cost: 35, window: { kind: 'american', from: 1, to: 3 } }],
+  options: [{ kind: 'expand', id: 'Second line', factor: 0.4, cost: 35, window: { kind: 'american', from: 1, to: 3 } }],
 };
 
 export const operations = {

@@ -7,7 +7,7 @@ import 'server-only';
 import { db } from '@/db';
 import { findSubmissionContext } from '@/db/queries/reviews';
 import { comparisonRows, type ComparisonRow } from '../comparison-rows';
-import type { CaseInput } from '../validations/case';
+import { readStoredCaseInput } from '../validations/case';
 import { readStoredResult } from '@/lattice';
 
 export interface VersionChanges {
@@ -28,7 +28,7 @@ export async function versionChanges(orgId: string, caseId: string): Promise<Ver
           caseVersion: returned.case_version,
           decidedAt: new Date(returned.decided_at!).toISOString(),
           rows: comparisonRows(
-            [returned.inputs as CaseInput, current.inputs as CaseInput],
+            [readStoredCaseInput(returned.inputs), readStoredCaseInput(current.inputs)],
             [readStoredResult(returned.result), readStoredResult(current.result)],
             [currency, currency],
           ).filter((row) => row.differs),

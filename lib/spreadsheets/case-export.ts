@@ -9,6 +9,7 @@ import { VALUATION_CAUTION } from '@/lib/caution';
 import type { ValuationResult } from '@/lattice';
 import { decisionRule } from '../decision-rules';
 import { formatDateTime } from '../format';
+import { optionKindLabels } from '../option-form';
 import { describeOption } from '../option-words';
 import type { CaseInput } from '../validations/case';
 import { addCashFlowSheets } from './cash-flow-workbook';
@@ -69,7 +70,7 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
   table(
     rights,
     ['Right', 'Kind', 'Terms'],
-    (c.inputs.options ?? []).map((o, k) => [o.id ?? `Right ${k + 1}`, o.type, describeOption(o, c.currency)]),
+    (c.inputs.options ?? []).map((o, k) => [o.id ?? `Right ${k + 1}`, optionKindLabels[o.kind], describeOption(o, c.currency)]),
   );
   rights.getColumn(3).width = 100;
 

@@ -1,6 +1,6 @@
 /** A case's inputs: its cash-flow schedule, valuation settings and option templates. */
 import { z } from 'zod';
-import { MAX_STEPS, optionTemplateSchema, treeKindSchema } from '@/lattice';
+import { MAX_STEPS, optionTemplateSchema, readStoredTemplates, treeKindSchema } from '@/lattice';
 import { cashFlowScheduleSchema } from '../cash-flows';
 
 export const caseSettingsSchema = z.object({
@@ -37,3 +37,9 @@ export const caseDuplicateSchema = z.object({ name: z.string().trim().min(1, 'Gi
 
 export type CaseSettings = z.infer<typeof caseSettingsSchema>;
 export type CaseInput = z.input<typeof caseInputSchema>;
+
+/** A snapshot's frozen inputs, with rights stored by an older engine read in today's shape (lattice/stored-model.ts). */
+export function readStoredCaseInput(stored: unknown): CaseInput {
+  const inputs = stored as CaseInput;
+  return { ...inputs, options: readStoredTemplates(inputs.options) };
+}

@@ -68,7 +68,7 @@ export function costFrom(cost: Cost, t: number): Cost {
 }
 
 function nameOf(o: OptionTemplate): string {
-  return o.id ?? o.type;
+  return o.id ?? o.kind;
 }
 
 /**
@@ -78,8 +78,8 @@ function nameOf(o: OptionTemplate): string {
  */
 function usedTemplateFrom(o: OptionTemplate, t: number, horizon: number): OptionTemplate {
   const atEnd: ExerciseWindow = { kind: 'european', at: horizon };
-  switch (o.type) {
-    case 'switch': {
+  switch (o.kind) {
+    case 'mothball': {
       // No window: switching back is possible at any time, as before.
       const { window, ...rest } = o;
       const back = window ? (windowFrom(window, t) ?? atEnd) : undefined;
@@ -93,12 +93,12 @@ function usedTemplateFrom(o: OptionTemplate, t: number, horizon: number): Option
 }
 
 function templateFrom(o: OptionTemplate, t: number): OptionTemplate | null {
-  switch (o.type) {
+  switch (o.kind) {
     case 'expand':
     case 'defer': {
       const window = windowFrom(o.window, t);
       if (!window) {
-        if (o.type === 'defer') throw new ClockError(`The right to invest (“${nameOf(o)}”) lapsed before this date: there is no project to follow.`);
+        if (o.kind === 'defer') throw new ClockError(`The right to invest (“${nameOf(o)}”) lapsed before this date: there is no project to follow.`);
         return null;
       }
       return { ...o, window, cost: costFrom(o.cost, t) };
@@ -115,7 +115,7 @@ function templateFrom(o: OptionTemplate, t: number): OptionTemplate | null {
       const payments = o.payments.filter((p) => p.at >= t).map((p) => ({ at: p.at - t, amount: p.amount }));
       return payments.length === 0 ? null : { ...o, payments };
     }
-    case 'switch': {
+    case 'mothball': {
       const window = o.window ? windowFrom(o.window, t) : undefined;
       if (window === null) return null;
       return { ...o, cost: costFrom(o.cost, t), backCost: costFrom(o.backCost, t), ...(window ? { window } : {}) };
@@ -139,7 +139,7 @@ export function modelAt(model: ProjectModel, t: number, observedValue: number, u
   const options = (model.options ?? []).flatMap((o, k): OptionTemplate[] => {
     const id = ids[k]!;
     if (used.declined.includes(id)) return [];
-    if (used.exercised.includes(id) && o.type === 'stage') {
+    if (used.exercised.includes(id) && o.kind === 'stage') {
       // The payment due on t was made: only later ones are left.
       const payments = o.payments.filter((p) => p.at > t).map((p) => ({ at: p.at - t, amount: p.amount }));
       return payments.length === 0 ? [] : [{ ...o, id, payments }];

@@ -26,7 +26,7 @@ import type { RightDecisionInput } from '../validations/right-decision';
 import { ClockError, modelAt, type UsedRights } from './clock';
 import { dateAfter, dateOf, yearsBetween } from './dates';
 import { rightStatuses, type RightWatch } from './status';
-import { readStoredResult } from '@/lattice';
+import { readStoredModel, readStoredResult } from '@/lattice';
 
 /** Where each right stands by the approved run's boundary alone (lib/watch/status.ts). */
 function boundaryReading(model: ProjectModel, result: ValuationResult, t: number, value: number): RightWatch[] {
@@ -62,7 +62,7 @@ export function positionOf(f: Followed, today = dateOf(new Date())) {
   }
   const options = f.model.options ?? [];
   const ids = templateIds(options);
-  const ended = options.some((o, k) => (o.type === 'abandon' && used.exercised.includes(ids[k]!)) || (o.type === 'stage' && used.declined.includes(ids[k]!)));
+  const ended = options.some((o, k) => (o.kind === 'abandon' && used.exercised.includes(ids[k]!)) || (o.kind === 'stage' && used.declined.includes(ids[k]!)));
   const valueOn = latest?.observedOn ?? f.valuationDate;
   return { asOf, t: yearsBetween(f.valuationDate, asOf), value: latest?.value ?? f.model.underlying.value, valueOn, used, recorded, ended };
 }
@@ -142,7 +142,7 @@ export async function loadFollowed(orgId: string, caseId: string): Promise<Follo
     projectId: found.project_id,
     snapshot,
     valuationDate: dateOf(snapshot.decided_at),
-    model: snapshot.model as ProjectModel,
+    model: readStoredModel(snapshot.model),
     result: readStoredResult(snapshot.result),
     observations,
     decisions,
@@ -233,7 +233,7 @@ export async function recordRightDecision(member: Member, caseId: string, rightI
   if (at.ended && input.decision !== 'postponed')
     throw new AppError('conflict', 'The project has ended (abandoned, or a stage payment declined): no right is left to use.');
   const option = f.model.options![ids.indexOf(rightId)]!;
-  if (input.decision === 'exercised' && option.type !== 'stage') {
+  if (input.decision === 'exercised' && option.kind !== 'stage') {
     // The watched model must be able to start where the decision leaves it (e.g. an expansion
     // needs the project running): the engine's own rule, asked before anything is written.
     try {
@@ -319,7 +319,7 @@ export async function listFollowed(
     out.push({
       ...row,
       valuationDate: dateOf(row.snapshot.decided_at),
-      model: row.snapshot.model as ProjectModel,
+      model: readStoredModel(row.snapshot.model),
       result: readStoredResult(row.snapshot.result),
       observations,
       decisions,

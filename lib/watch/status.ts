@@ -28,7 +28,7 @@ export interface RightWatch {
 /** The dates (in years) the right can be used on, as the next opening and the last closing from t. */
 function windowAt(o: OptionTemplate, horizon: number, t: number): { open: boolean; opensAt: number | null; closesAt: number | null } {
   const window: ExerciseWindow | undefined =
-    o.type === 'stage' ? { kind: 'bermudan', dates: o.payments.map((p) => p.at) } : o.type === 'switch' ? o.window : o.window;
+    o.kind === 'stage' ? { kind: 'bermudan', dates: o.payments.map((p) => p.at) } : o.kind === 'mothball' ? o.window : o.window;
   if (!window) return { open: true, opensAt: 0, closesAt: horizon };
   if (window.kind === 'american') return { open: window.from <= t && t <= window.to, opensAt: window.from, closesAt: window.to };
   const dates = window.kind === 'european' ? [window.at] : [...window.dates].sort((a, b) => a - b);

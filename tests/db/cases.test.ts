@@ -24,7 +24,7 @@ const content = caseInputSchema.parse({
     ],
   },
   settings: { volatility: 0.3, riskFreeRate: 0.03, steps: 100 },
-  options: [{ type: 'abandon', salvage: 60, window: { kind: 'american', from: 0, to: 1 } }],
+  options: [{ kind: 'abandon', salvage: 60, window: { kind: 'american', from: 0, to: 1 } }],
 });
 
 beforeAll(async () => {

@@ -85,7 +85,7 @@ describe('the analyst workspace', () => {
     await page.getByRole('button', { name: 'Save' }).click();
     await expect.poll(() => page.getByText('Saved as version 2.').isVisible()).toBe(true);
     const saved = await caseJson(page, caseId);
-    expect(saved.options.map((o: { type: string }) => o.type)).toEqual(['expand', 'abandon']);
+    expect(saved.options.map((o: { kind: string }) => o.kind)).toEqual(['expand', 'abandon']);
     const expected = valueProject(caseToModel(saved).model);
     await expect.poll(() => headline(page, 'Expanded NPV').innerText(), { timeout: 20_000 }).toBe(formatMoney(expected.expandedNpv, 'EUR'));
     expect(expected.optionPremium).toBeGreaterThan(0);

@@ -85,7 +85,7 @@ describe('the API through its typed client', () => {
           version: made.version,
           cashFlows: { ...made.cashFlows, rows: rows.map((r) => (r.year === 4 ? { ...r, revenue: 80 } : r)) },
           settings: made.settings,
-          options: [{ type: 'expand', id: 'Second line', factor: 0.4, cost: 35, window: { kind: 'american', from: 1, to: 3 } }],
+          options: [{ kind: 'expand', id: 'Second line', factor: 0.4, cost: 35, window: { kind: 'american', from: 1, to: 3 } }],
         },
       }),
     ).case;

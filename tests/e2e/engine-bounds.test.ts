@@ -70,9 +70,9 @@ describe('the engine under abuse', () => {
       ...smallModel,
       steps: 1500,
       options: [
-        { type: 'expand', factor: 0.5, cost: 40, window: { kind: 'american', from: 0, to: 3 } },
-        { type: 'contract', fraction: 0.3, savings: 25, window: { kind: 'american', from: 0, to: 3 } },
-        { type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 3 } },
+        { kind: 'expand', factor: 0.5, cost: 40, window: { kind: 'american', from: 0, to: 3 } },
+        { kind: 'contract', fraction: 0.3, savings: 25, window: { kind: 'american', from: 0, to: 3 } },
+        { kind: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 3 } },
       ],
     };
     const burst = await Promise.all(Array.from({ length: 6 }, () => analyst.post('/api/v1/valuations', { data: heavy, timeout: 120_000 })));

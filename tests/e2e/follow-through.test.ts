@@ -124,8 +124,8 @@ describe('following an approved case', () => {
 
   it('re-values the approved model from today: at approval, with the approved value, the figures are the approved ones; a higher value moves the expansion closer', async () => {
     const fresh = await approvedCase(`Followed kiln ${Date.now().toString(36)}`, [
-      { type: 'expand', id: 'Second kiln', factor: 0.5, cost: 70, window: { kind: 'american', from: 0, to: 3 } },
-      { type: 'abandon', id: 'Sell', salvage: 40, window: { kind: 'american', from: 0, to: 4 } },
+      { kind: 'expand', id: 'Second kiln', factor: 0.5, cost: 70, window: { kind: 'american', from: 0, to: 3 } },
+      { kind: 'abandon', id: 'Sell', salvage: 40, window: { kind: 'american', from: 0, to: 4 } },
     ]);
     const snapshot = await db
       .selectFrom('case_snapshot')
@@ -147,7 +147,7 @@ describe('following an approved case', () => {
 
   it('sends an alert once per change: near its boundary, the same value again, then into its region', async () => {
     const fresh = await approvedCase(`Alerted kiln ${Date.now().toString(36)}`, [
-      { type: 'expand', id: 'Second kiln', factor: 0.5, cost: 50, window: { kind: 'american', from: 0, to: 3 } },
+      { kind: 'expand', id: 'Second kiln', factor: 0.5, cost: 50, window: { kind: 'american', from: 0, to: 3 } },
     ]);
     // At a cost of 50 the expansion's boundary is already located at the first step after approval.
     const first = await watchOf(fresh.caseId);
@@ -178,8 +178,8 @@ describe('following an approved case', () => {
 
   it('records decisions: an exercised expansion changes the mode the model is re-valued in; final decisions are not recorded twice', async () => {
     const fresh = await approvedCase(`Decided kiln ${Date.now().toString(36)}`, [
-      { type: 'expand', id: 'Second kiln', factor: 0.5, cost: 70, window: { kind: 'american', from: 0, to: 3 } },
-      { type: 'abandon', id: 'Sell', salvage: 40, window: { kind: 'american', from: 0, to: 4 } },
+      { kind: 'expand', id: 'Second kiln', factor: 0.5, cost: 70, window: { kind: 'american', from: 0, to: 3 } },
+      { kind: 'abandon', id: 'Sell', salvage: 40, window: { kind: 'american', from: 0, to: 4 } },
     ]);
     const before = await watchOf(fresh.caseId);
     const decide = (right: string, data: unknown, who = analyst) =>
@@ -288,7 +288,7 @@ describe('following an approved case', () => {
 
   it("lists a right in its region on the portfolio's watch list, for an executive", async () => {
     const { caseId, name } = await approvedCase(`Watched kiln ${Date.now().toString(36)}`, [
-      { type: 'expand', id: 'Second kiln', factor: 0.5, cost: 70, window: { kind: 'american', from: 0, to: 3 } },
+      { kind: 'expand', id: 'Second kiln', factor: 0.5, cost: 70, window: { kind: 'american', from: 0, to: 3 } },
     ]);
     // Far above any expansion boundary: the model says expand now.
     expect((await analyst.post(`/api/v1/cases/${caseId}/observations`, { data: { date: day(0), value: 2000, source: 'offer received' } })).status()).toBe(201);

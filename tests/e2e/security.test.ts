@@ -45,7 +45,7 @@ const caseBody = {
     ],
   },
   settings: { volatility: 0.3, riskFreeRate: 0.03, steps: 40 },
-  options: [{ type: 'abandon', salvage: 60, window: { kind: 'american', from: 0, to: 2 } }],
+  options: [{ kind: 'abandon', salvage: 60, window: { kind: 'american', from: 0, to: 2 } }],
 };
 
 describe('the auth secret', () => {

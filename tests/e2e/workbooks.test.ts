@@ -7,6 +7,7 @@
 import ExcelJS from 'exceljs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
+import { optionKindLabels } from '@/lib/option-form';
 import { CASH_FLOW_SHEET } from '@/lib/spreadsheets/cash-flow-workbook';
 import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
@@ -46,6 +47,10 @@ describe('workbooks', () => {
       'Lattice',
       'Cautions',
     ]);
+    // The Rights sheet names each right's kind in the cards' words, not the engine's codes.
+    const kinds = exportBook.getWorksheet('Rights')!.getColumn(2).values.slice(2);
+    expect(kinds.length).toBeGreaterThan(0);
+    for (const kind of kinds) expect(Object.values(optionKindLabels)).toContain(kind);
 
     const before = (await (await page.request.get(`/api/v1/cases/${ids.line.caseId}`)).json()).case;
     await page.goto(`/projects/${ids.line.projectId}/cases/${ids.line.caseId}`);

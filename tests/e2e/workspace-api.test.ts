@@ -32,8 +32,8 @@ const caseBody = {
   },
   settings: { volatility: 0.35, riskFreeRate: 0.03, steps: 60 },
   options: [
-    { type: 'expand', factor: 0.5, cost: 60, window: { kind: 'american', from: 1, to: 3 } },
-    { type: 'abandon', salvage: 70, window: { kind: 'american', from: 0, to: 3 } },
+    { kind: 'expand', factor: 0.5, cost: 60, window: { kind: 'american', from: 1, to: 3 } },
+    { kind: 'abandon', salvage: 70, window: { kind: 'american', from: 0, to: 3 } },
   ],
 };
 

@@ -33,29 +33,29 @@ const cases: [string, unknown, string][] = [
   ['missing risk-free rate', { underlying: ok.underlying, horizon: 3, steps: 30 }, 'riskFreeRate is required'],
   ['unknown field', { ...ok, volatility: 0.3 }, 'model has unknown field(s) volatility'],
   [
-    'unknown option type',
-    { ...ok, options: [{ type: 'grow', window: american }] },
-    'options[0].type must be one of "expand", "contract", "abandon", "defer", "stage", "switch"',
+    'unknown kind of right',
+    { ...ok, options: [{ kind: 'grow', window: american }] },
+    'options[0].kind must be one of "expand", "contract", "abandon", "defer", "stage", "mothball", got "grow"',
   ],
   [
     'cost of the wrong kind',
-    { ...ok, options: [{ type: 'expand', factor: 0.5, cost: 'lots', window: american }] },
+    { ...ok, options: [{ kind: 'expand', factor: 0.5, cost: 'lots', window: american }] },
     'options[0].cost must be a number, {amount, growth} or a schedule',
   ],
   [
     'window past the horizon',
-    { ...ok, options: [{ type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 4 } }] },
+    { ...ok, options: [{ kind: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 4 } }] },
     'options[0].window must lie inside the horizon (0 to 3 years), ends at 4',
   ],
   [
     'window backwards',
-    { ...ok, options: [{ type: 'abandon', salvage: 50, window: { kind: 'american', from: 2, to: 1 } }] },
+    { ...ok, options: [{ kind: 'abandon', salvage: 50, window: { kind: 'american', from: 2, to: 1 } }] },
     'options[0].window.from must be ≤ options[0].window.to, got 2 > 1',
   ],
   [
     'unknown window kind',
-    { ...ok, options: [{ type: 'abandon', salvage: 50, window: { kind: 'asian', at: 1 } }] },
-    'options[0].window.kind must be one of "american", "bermudan", "european"',
+    { ...ok, options: [{ kind: 'abandon', salvage: 50, window: { kind: 'asian', at: 1 } }] },
+    'options[0].window.kind must be one of "american", "bermudan", "european", got "asian"',
   ],
   [
     'cost schedule out of order',
@@ -63,7 +63,7 @@ const cases: [string, unknown, string][] = [
       ...ok,
       options: [
         {
-          type: 'expand',
+          kind: 'expand',
           factor: 0.5,
           cost: [
             { from: 2, amount: 40 },
@@ -106,7 +106,7 @@ const cases: [string, unknown, string][] = [
   ],
   [
     'defer with a separate investment',
-    { ...ok, investment: 80, options: [{ type: 'defer', cost: 80, window: american }] },
+    { ...ok, investment: 80, options: [{ kind: 'defer', cost: 80, window: american }] },
     'investment must be omitted when a defer or stage right carries the outlay',
   ],
   [
@@ -115,7 +115,7 @@ const cases: [string, unknown, string][] = [
       ...ok,
       options: [
         {
-          type: 'stage',
+          kind: 'stage',
           payments: [
             { at: 2, amount: 10 },
             { at: 1, amount: 10 },
@@ -132,12 +132,12 @@ const cases: [string, unknown, string][] = [
   ],
   [
     'options and modes together',
-    { ...ok, modes, options: [{ type: 'abandon', salvage: 50, window: american }] },
+    { ...ok, modes, options: [{ kind: 'abandon', salvage: 50, window: american }] },
     'options cannot be combined with modes and switches',
   ],
   [
     'contract of more than everything',
-    { ...ok, options: [{ type: 'contract', fraction: 1.5, savings: 10, window: american }] },
+    { ...ok, options: [{ kind: 'contract', fraction: 1.5, savings: 10, window: american }] },
     'options[0].fraction must be ≤ 1, got 1.5',
   ],
   [
@@ -145,8 +145,8 @@ const cases: [string, unknown, string][] = [
     {
       ...ok,
       options: [
-        { type: 'abandon', id: 'exit', salvage: 50, window: american },
-        { type: 'expand', id: 'exit', factor: 1, cost: 9, window: american },
+        { kind: 'abandon', id: 'exit', salvage: 50, window: american },
+        { kind: 'expand', id: 'exit', factor: 1, cost: 9, window: american },
       ],
     },
     'options[1].id must be unique, "exit" is used twice',
@@ -188,7 +188,7 @@ describe('bad input is refused with its own message', () => {
   }, 120_000);
 
   it('through the CLI: a valid model prints the result as JSON', () => {
-    const model = { ...ok, options: [{ type: 'abandon', salvage: 60, window: american }] };
+    const model = { ...ok, options: [{ kind: 'abandon', salvage: 60, window: american }] };
     const run = spawnSync(process.execPath, ['--import', 'tsx', 'lattice/cli.ts', '-'], { cwd: root, input: JSON.stringify(model), encoding: 'utf8' });
     expect(run.status).toBe(0);
     const result = JSON.parse(run.stdout);
@@ -205,7 +205,7 @@ describe('the work of a whole valuation is priced before any is done (docs/engin
     steps: 10_000,
     investment: 80,
     options: Array.from({ length: 12 }, (_, k) => ({
-      type: 'abandon' as const,
+      kind: 'abandon' as const,
       id: `sale ${k + 1}`,
       salvage: 40 + k,
       window: { kind: 'american' as const, from: k / 2, to: 10 },
@@ -231,10 +231,10 @@ describe('the work of a whole valuation is priced before any is done (docs/engin
       ...ok,
       steps: 500,
       options: [
-        { type: 'expand', factor: 0.5, cost: 40, window: american },
-        { type: 'contract', fraction: 0.3, savings: 25, window: american },
-        { type: 'abandon', salvage: 50, window: american },
-        { type: 'switch', toScale: 0, cost: 2, backCost: 4 },
+        { kind: 'expand', factor: 0.5, cost: 40, window: american },
+        { kind: 'contract', fraction: 0.3, savings: 25, window: american },
+        { kind: 'abandon', salvage: 50, window: american },
+        { kind: 'mothball', toScale: 0, cost: 2, backCost: 4 },
       ],
     });
     expect(r.sensitivities).not.toBeNull();

@@ -25,20 +25,20 @@ function modelFrom(m: typeof market) {
     // The outlay: none, a defer whose window may open late, or stage payments.
     const outlay = fc.oneof(
       fc.constant(null),
-      fc.record({ type: fc.constant('defer' as const), cost: money, window: later.map((from) => ({ kind: 'american' as const, from, to: mk.horizon })) }),
+      fc.record({ kind: fc.constant('defer' as const), cost: money, window: later.map((from) => ({ kind: 'american' as const, from, to: mk.horizon })) }),
       fc.record({
-        type: fc.constant('stage' as const),
+        kind: fc.constant('stage' as const),
         payments: fc.tuple(money, money, later).map(([a, b, at]) => [
           { at: 0, amount: a / 3 },
           { at, amount: b / 2 },
         ]),
       }),
     );
-    const expand = fc.record({ type: fc.constant('expand' as const), factor: fc.double({ min: 0.2, max: 1, noNaN: true }), cost: money, window });
-    const contract = fc.record({ type: fc.constant('contract' as const), fraction: fc.double({ min: 0.2, max: 0.6, noNaN: true }), savings: money, window });
-    const abandon = fc.record({ type: fc.constant('abandon' as const), salvage: money, window });
+    const expand = fc.record({ kind: fc.constant('expand' as const), factor: fc.double({ min: 0.2, max: 1, noNaN: true }), cost: money, window });
+    const contract = fc.record({ kind: fc.constant('contract' as const), fraction: fc.double({ min: 0.2, max: 0.6, noNaN: true }), savings: money, window });
+    const abandon = fc.record({ kind: fc.constant('abandon' as const), salvage: money, window });
     const mothball = fc.record({
-      type: fc.constant('switch' as const),
+      kind: fc.constant('mothball' as const),
       toScale: fc.constant(0),
       cost: money.map((x) => x / 20),
       backCost: money.map((x) => x / 10),
@@ -90,8 +90,8 @@ describe('one baseline: no right is worth less than nothing', () => {
       horizon: 5,
       steps: 100,
       options: [
-        { type: 'defer', cost: 90, window: { kind: 'american', from: 2, to: 5 } },
-        { type: 'expand', factor: 0.5, cost: 50, window: { kind: 'american', from: 1, to: 5 } },
+        { kind: 'defer', cost: 90, window: { kind: 'american', from: 2, to: 5 } },
+        { kind: 'expand', factor: 0.5, cost: 50, window: { kind: 'american', from: 1, to: 5 } },
       ],
     });
     for (const sw of r.rights) expect([sw.id, sw.standalone! >= 0, sw.incremental! >= 0]).toEqual([sw.id, true, true]);
@@ -105,13 +105,13 @@ describe('one baseline: no right is worth less than nothing', () => {
       steps: 80,
       options: [
         {
-          type: 'stage',
+          kind: 'stage',
           payments: [
             { at: 0, amount: 20 },
             { at: 2, amount: 60 },
           ],
         },
-        { type: 'abandon', salvage: 40, window: { kind: 'american', from: 0, to: 4 } },
+        { kind: 'abandon', salvage: 40, window: { kind: 'american', from: 0, to: 4 } },
       ],
     });
     for (const sw of r.rights) expect([sw.id, sw.standalone! >= 0, sw.incremental! >= 0]).toEqual([sw.id, true, true]);
@@ -134,8 +134,8 @@ describe('salvage follows the scale sold', () => {
       steps: 96,
       investment: 185,
       options: [
-        { type: 'contract', fraction: 0.4, savings: 45, window: { kind: 'american', from: 1, to: 8 } },
-        { type: 'abandon', salvage: 95, window: { kind: 'american', from: 1, to: 8 } },
+        { kind: 'contract', fraction: 0.4, savings: 45, window: { kind: 'american', from: 1, to: 8 } },
+        { kind: 'abandon', salvage: 95, window: { kind: 'american', from: 1, to: 8 } },
       ],
     };
     const r = valueProject(model);

@@ -23,7 +23,7 @@ const model = fc
     horizon: fc.integer({ min: 1, max: 5 }),
     perYear: fc.integer({ min: 3, max: 20 }),
     cost: fc.double({ min: 0.3, max: 2, noNaN: true }),
-    kind: fc.constantFrom('defer', 'expand', 'abandon', 'contract', 'switch'),
+    kind: fc.constantFrom('defer', 'expand', 'abandon', 'contract', 'mothball'),
   })
   .filter((m) => m.volatility * Math.sqrt(1 / m.perYear) > (2 * m.riskFreeRate) / m.perYear)
   .map((m): ProjectModel => {
@@ -31,14 +31,14 @@ const model = fc
     const money = m.cost * m.value;
     const option =
       m.kind === 'defer'
-        ? { type: 'defer' as const, cost: money, window }
+        ? { kind: 'defer' as const, cost: money, window }
         : m.kind === 'expand'
-          ? { type: 'expand' as const, factor: 0.5, cost: money / 2, window }
+          ? { kind: 'expand' as const, factor: 0.5, cost: money / 2, window }
           : m.kind === 'abandon'
-            ? { type: 'abandon' as const, salvage: money / 2, window }
+            ? { kind: 'abandon' as const, salvage: money / 2, window }
             : m.kind === 'contract'
-              ? { type: 'contract' as const, fraction: 0.4, savings: money / 3, window }
-              : { type: 'switch' as const, toScale: 0, cost: money / 50, backCost: money / 20, flowPerYear: money / 30 };
+              ? { kind: 'contract' as const, fraction: 0.4, savings: money / 3, window }
+              : { kind: 'mothball' as const, toScale: 0, cost: money / 50, backCost: money / 20, flowPerYear: money / 30 };
     return {
       underlying: { value: m.value, volatility: m.volatility, payoutPeriods: [{ from: 0, to: m.horizon, fraction: 0.3 }] },
       riskFreeRate: m.riskFreeRate,
@@ -78,7 +78,7 @@ describe('exercise boundaries', () => {
       riskFreeRate: 0.04,
       horizon: 5,
       steps: 100,
-      options: [{ type: 'defer', cost: 100, window: { kind: 'american', from: 0, to: 5 } }],
+      options: [{ kind: 'defer', cost: 100, window: { kind: 'american', from: 0, to: 5 } }],
     };
     const r = valueProject(m, { extras: false, grid: true });
     const firstInvest = r.grid!.steps.find((s) => s.modes['waiting']!.decision.some((d) => d !== null))!.t;

@@ -28,7 +28,7 @@ const textbook: [string, ProjectModel][] = [
       riskFreeRate: 0.1,
       horizon: 5 / 12,
       steps: 50,
-      options: [{ type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 5 / 12 } }],
+      options: [{ kind: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 5 / 12 } }],
     },
   ],
   [
@@ -38,7 +38,7 @@ const textbook: [string, ProjectModel][] = [
       riskFreeRate: 0.04,
       horizon: 4,
       steps: 80,
-      options: [{ type: 'defer', cost: 100, window: { kind: 'american', from: 0, to: 4 } }],
+      options: [{ kind: 'defer', cost: 100, window: { kind: 'american', from: 0, to: 4 } }],
     },
   ],
   [
@@ -50,8 +50,8 @@ const textbook: [string, ProjectModel][] = [
       steps: 60,
       investment: 90,
       options: [
-        { type: 'expand', factor: 0.5, cost: 45, window: { kind: 'american', from: 1, to: 5 } },
-        { type: 'abandon', salvage: 60, window: { kind: 'american', from: 0, to: 5 } },
+        { kind: 'expand', factor: 0.5, cost: 45, window: { kind: 'american', from: 1, to: 5 } },
+        { kind: 'abandon', salvage: 60, window: { kind: 'american', from: 0, to: 5 } },
       ],
     },
   ],
@@ -63,7 +63,7 @@ const textbook: [string, ProjectModel][] = [
       horizon: 3,
       steps: 36,
       investment: 120,
-      options: [{ type: 'contract', fraction: 0.3, savings: 40, window: { kind: 'bermudan', dates: [1, 2, 3] } }],
+      options: [{ kind: 'contract', fraction: 0.3, savings: 40, window: { kind: 'bermudan', dates: [1, 2, 3] } }],
     },
   ],
   [
@@ -75,7 +75,7 @@ const textbook: [string, ProjectModel][] = [
       steps: 48,
       options: [
         {
-          type: 'stage',
+          kind: 'stage',
           payments: [
             { at: 0, amount: 15 },
             { at: 1, amount: 30 },
@@ -93,7 +93,7 @@ const textbook: [string, ProjectModel][] = [
       horizon: 5,
       steps: 60,
       investment: 70,
-      options: [{ type: 'switch', toScale: 0, cost: 2, backCost: 5, flowPerYear: 3 }],
+      options: [{ kind: 'mothball', toScale: 0, cost: 2, backCost: 5, flowPerYear: 3 }],
     },
   ],
 ];

@@ -25,8 +25,8 @@ const cases = [
 describe('European limits converge to Black–Scholes', () => {
   it.each(cases)('S=$S K=$K T=$T σ=$sigma r=$r', ({ S, K, T, sigma, r }) => {
     const common = { underlying: { value: S, volatility: sigma }, riskFreeRate: r, horizon: T, steps: 2000 };
-    const call: ProjectModel = { ...common, options: [{ type: 'defer', cost: K, window: { kind: 'european', at: T } }] };
-    const put: ProjectModel = { ...common, options: [{ type: 'abandon', salvage: K, window: { kind: 'european', at: T } }] };
+    const call: ProjectModel = { ...common, options: [{ kind: 'defer', cost: K, window: { kind: 'european', at: T } }] };
+    const put: ProjectModel = { ...common, options: [{ kind: 'abandon', salvage: K, window: { kind: 'european', at: T } }] };
     expectClose(valueProject(call, { extras: false }).value, blackScholes(S, K, T, sigma, r, 'call'), { abs: 0.005 }, { S, K, T, sigma, r });
     expectClose(valueProject(put, { extras: false }).value - S, blackScholes(S, K, T, sigma, r, 'put'), { abs: 0.005 }, { S, K, T, sigma, r });
   });
@@ -46,7 +46,7 @@ describe('sensitivities in the European limit', () => {
       riskFreeRate: r,
       horizon: T,
       steps: 2000,
-      options: [{ type: 'defer', cost: K, window: { kind: 'european', at: T } }],
+      options: [{ kind: 'defer', cost: K, window: { kind: 'european', at: T } }],
     };
     const rows = valueProject(model).sensitivities!;
     const spot = rows.find((x) => x.parameter === 'underlying.value')!;

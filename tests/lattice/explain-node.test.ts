@@ -14,8 +14,8 @@ const model: ProjectModel = {
   horizon: 4,
   steps: 12,
   options: [
-    { type: 'expand', factor: 0.4, cost: 35, window: { kind: 'american', from: 1, to: 4 } },
-    { type: 'abandon', salvage: 60, window: { kind: 'american', from: 0, to: 4 } },
+    { kind: 'expand', factor: 0.4, cost: 35, window: { kind: 'american', from: 1, to: 4 } },
+    { kind: 'abandon', salvage: 60, window: { kind: 'american', from: 0, to: 4 } },
   ],
 };
 

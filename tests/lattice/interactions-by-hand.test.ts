@@ -40,8 +40,8 @@ describe('interacting rights worked by hand', () => {
       horizon: 2,
       steps: 2,
       options: [
-        { type: 'expand', factor: 0.5, cost: 30, window: { kind: 'american', from: 0, to: 2 } },
-        { type: 'abandon', salvage: 70, fixedSalvage: true, window: { kind: 'american', from: 0, to: 2 } },
+        { kind: 'expand', factor: 0.5, cost: 30, window: { kind: 'american', from: 0, to: 2 } },
+        { kind: 'abandon', salvage: 70, fixedSalvage: true, window: { kind: 'american', from: 0, to: 2 } },
       ],
     };
     const r = valueProject(model, { extras: false });
@@ -81,8 +81,8 @@ describe('interacting rights worked by hand', () => {
       horizon: 2,
       steps: 2,
       options: [
-        { type: 'defer', cost: 90, window: { kind: 'american', from: 0, to: 1 } },
-        { type: 'expand', factor: 0.5, cost: 30, window: { kind: 'european', at: 2 } },
+        { kind: 'defer', cost: 90, window: { kind: 'american', from: 0, to: 1 } },
+        { kind: 'expand', factor: 0.5, cost: 30, window: { kind: 'european', at: 2 } },
       ],
     };
     const r = valueProject(model, { extras: false });
@@ -104,8 +104,8 @@ describe('interacting rights worked by hand', () => {
     // With a fixed salvage the half plant would still fetch 90: 48 + 90/1.05 = 133.714286, a
     // plant sold twice (the old rule's contract + abandon interaction was positive for this reason).
     const options = (fixedSalvage: boolean): ProjectModel['options'] => [
-      { type: 'contract', fraction: 0.5, savings: 48, window: { kind: 'european', at: 0 } },
-      { type: 'abandon', salvage: 90, fixedSalvage, window: { kind: 'european', at: 1 } },
+      { kind: 'contract', fraction: 0.5, savings: 48, window: { kind: 'european', at: 0 } },
+      { kind: 'abandon', salvage: 90, fixedSalvage, window: { kind: 'european', at: 1 } },
     ];
     const scaled = valueProject({ ...base, horizon: 1, steps: 1, options: options(false) }, { extras: false });
     expectClose(scaled.value, (p * 125 + q * 90) / 1.05, { abs: 1e-9 }, { case: 'salvage per scale' });
@@ -130,7 +130,7 @@ describe('interacting rights worked by hand', () => {
         steps: 2,
         options: [
           {
-            type: 'abandon',
+            kind: 'abandon',
             salvage: [
               { from: 0, amount: 90 },
               { from: 2, amount: 60 },
@@ -162,7 +162,7 @@ describe('interacting rights worked by hand', () => {
         ...base,
         horizon: 2,
         steps: 2,
-        options: [{ type: 'expand', factor: 0.5, cost: { amount: 30, growth: Math.log(1.1) }, window: { kind: 'american', from: 0, to: 2 } }],
+        options: [{ kind: 'expand', factor: 0.5, cost: { amount: 30, growth: Math.log(1.1) }, window: { kind: 'american', from: 0, to: 2 } }],
       },
       { extras: false },
     );
@@ -193,7 +193,7 @@ describe('interacting rights worked by hand', () => {
       tree: 'crr',
       horizon: 2,
       steps: 2,
-      options: [{ type: 'switch', toScale: 0, cost: 2, backCost: 4, flowPerYear: 8 }],
+      options: [{ kind: 'mothball', toScale: 0, cost: 2, backCost: 4, flowPerYear: 8 }],
     };
     const r = valueProject(model, { extras: false });
     expectClose(r.value, 100 + (8 - 2 - 4 / 1.05) / 1.05, { abs: 1e-9 }, { case: 'mothball + restart' });
@@ -208,8 +208,8 @@ describe('the node grid on request', () => {
     horizon: 2,
     steps: 2,
     options: [
-      { type: 'expand', factor: 0.5, cost: 30, window: { kind: 'american', from: 0, to: 2 } },
-      { type: 'abandon', salvage: 70, fixedSalvage: true, window: { kind: 'american', from: 0, to: 2 } },
+      { kind: 'expand', factor: 0.5, cost: 30, window: { kind: 'american', from: 0, to: 2 } },
+      { kind: 'abandon', salvage: 70, fixedSalvage: true, window: { kind: 'american', from: 0, to: 2 } },
     ],
   };
 

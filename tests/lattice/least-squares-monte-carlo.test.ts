@@ -210,7 +210,7 @@ const onTheMarket = (options: OptionTemplate[], investment?: number): ProjectMod
 describe('the lattice against an independent least-squares Monte Carlo', () => {
   it('abandon alone (a Bermudan put, which the lattice also matches with quantlib.js): the Monte Carlo itself is sound', () => {
     const rights: Rights = { modes: 2, order: [0, 1], start: 1, switches: [{ from: 1, to: 0, payoff: (v) => 90 - v }] };
-    const model = onTheMarket([{ type: 'abandon', salvage: 90, window: { kind: 'bermudan', dates } }], 90);
+    const model = onTheMarket([{ kind: 'abandon', salvage: 90, window: { kind: 'bermudan', dates } }], 90);
     check(rights, valueProject(model, { extras: false }).optionPremium);
   }, 120_000);
   it('expand with a growing cost, and abandon for a salvage that follows the scale', () => {
@@ -228,8 +228,8 @@ describe('the lattice against an independent least-squares Monte Carlo', () => {
     };
     const model = onTheMarket(
       [
-        { type: 'expand', factor: 0.5, cost: { amount: 50, growth: 0.05 }, window: { kind: 'bermudan', dates } },
-        { type: 'abandon', salvage: 70, window: { kind: 'bermudan', dates } },
+        { kind: 'expand', factor: 0.5, cost: { amount: 50, growth: 0.05 }, window: { kind: 'bermudan', dates } },
+        { kind: 'abandon', salvage: 70, window: { kind: 'bermudan', dates } },
       ],
       90,
     );
@@ -249,8 +249,8 @@ describe('the lattice against an independent least-squares Monte Carlo', () => {
       ],
     };
     const model = onTheMarket([
-      { type: 'defer', cost: 95, window: { kind: 'bermudan', dates } },
-      { type: 'abandon', salvage: 60, window: { kind: 'bermudan', dates } },
+      { kind: 'defer', cost: 95, window: { kind: 'bermudan', dates } },
+      { kind: 'abandon', salvage: 60, window: { kind: 'bermudan', dates } },
     ]);
     const r = valueProject(model, { extras: false });
     check(rights, r.expandedNpv);

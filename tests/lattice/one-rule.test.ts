@@ -21,18 +21,18 @@ const models = market.chain((mk) => {
   const money = fc.double({ min: 0.05 * mk.value, max: 1.3 * mk.value, noNaN: true });
   const window = windowIn(mk.horizon);
   const right = fc.oneof(
-    fc.record({ type: fc.constant('expand' as const), factor: fc.double({ min: 0.2, max: 1, noNaN: true }), cost: money, window }),
-    fc.record({ type: fc.constant('contract' as const), fraction: fc.double({ min: 0.2, max: 0.6, noNaN: true }), savings: money, window }),
-    fc.record({ type: fc.constant('abandon' as const), salvage: money, fixedSalvage: fc.boolean(), window }),
+    fc.record({ kind: fc.constant('expand' as const), factor: fc.double({ min: 0.2, max: 1, noNaN: true }), cost: money, window }),
+    fc.record({ kind: fc.constant('contract' as const), fraction: fc.double({ min: 0.2, max: 0.6, noNaN: true }), savings: money, window }),
+    fc.record({ kind: fc.constant('abandon' as const), salvage: money, fixedSalvage: fc.boolean(), window }),
     fc.record({
-      type: fc.constant('switch' as const),
+      kind: fc.constant('mothball' as const),
       toScale: fc.constantFrom(0, 0.5),
       cost: money.map((x) => x / 20),
       backCost: money.map((x) => x / 10),
       flowPerYear: money.map((x) => x / 40),
     }),
   );
-  const outlay = fc.option(fc.record({ type: fc.constant('defer' as const), cost: money, window }), { nil: null });
+  const outlay = fc.option(fc.record({ kind: fc.constant('defer' as const), cost: money, window }), { nil: null });
   return fc.tuple(outlay, fc.array(right, { minLength: 1, maxLength: 3 })).map(([defer, rights]) => {
     const options = (defer ? [defer, ...rights] : rights) as OptionTemplate[];
     const model: ProjectModel = {

@@ -35,20 +35,20 @@ const rights: { name: string; input: CaseInput; option: (at: number) => OptionTe
   {
     name: 'plant: expand by half for 95',
     input: plant,
-    option: (at) => ({ type: 'expand', factor: 0.5, cost: 95, window: { kind: 'european', at } }),
+    option: (at) => ({ kind: 'expand', factor: 0.5, cost: 95, window: { kind: 'european', at } }),
     perYear: 48,
   },
-  { name: 'plant: sell for 70', input: plant, option: (at) => ({ type: 'abandon', salvage: 70, window: { kind: 'european', at } }), perYear: 48 },
+  { name: 'plant: sell for 70', input: plant, option: (at) => ({ kind: 'abandon', salvage: 70, window: { kind: 'european', at } }), perYear: 48 },
   {
     name: 'plant: contract by 40 % for 45',
     input: plant,
-    option: (at) => ({ type: 'contract', fraction: 0.4, savings: 45, window: { kind: 'european', at } }),
+    option: (at) => ({ kind: 'contract', fraction: 0.4, savings: 45, window: { kind: 'european', at } }),
     perYear: 48,
   },
   {
     name: 'hub: build at the date for 92 growing 4 %',
     input: hub,
-    option: (at) => ({ type: 'defer', cost: { amount: 92, growth: 0.04 }, window: { kind: 'bermudan', dates: [at] } }),
+    option: (at) => ({ kind: 'defer', cost: { amount: 92, growth: 0.04 }, window: { kind: 'bermudan', dates: [at] } }),
     perYear: 36,
   },
 ];
@@ -81,7 +81,7 @@ describe('a payout spread over its period', () => {
     // by its end, and a lump on a date belongs to the step that ends there; before the date no
     // decision is open. Tolerance: rounding (1e-12 relative).
     const base = { value: 100, volatility: 0.3 };
-    const option: OptionTemplate = { type: 'abandon', salvage: 80, window: { kind: 'european', at: 1 } };
+    const option: OptionTemplate = { kind: 'abandon', salvage: 80, window: { kind: 'european', at: 1 } };
     const common = { riskFreeRate: 0.04, horizon: 2, steps: 40, options: [option] };
     const spread = valueProject({ ...common, underlying: { ...base, payoutPeriods: [{ from: 0, to: 1, fraction: 0.3 }] } }, { extras: false });
     const lump = valueProject({ ...common, underlying: { ...base, payouts: [{ at: 1, fraction: 0.3 }] } }, { extras: false });

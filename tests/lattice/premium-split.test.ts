@@ -18,7 +18,7 @@ describe('the premium split', () => {
       horizon: T,
       steps,
       investment: 90,
-      options: [{ type: 'expand', factor: 0.5, cost: K, window: { kind: 'american', from: 0, to: T } }],
+      options: [{ kind: 'expand', factor: 0.5, cost: K, window: { kind: 'american', from: 0, to: T } }],
     };
     let best = 0;
     for (let i = 0; i <= steps; i++) {
@@ -39,7 +39,7 @@ describe('the premium split', () => {
       horizon: 3,
       steps: 60,
       investment: 80,
-      options: [{ type: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 3 } }],
+      options: [{ kind: 'abandon', salvage: 50, window: { kind: 'american', from: 0, to: 3 } }],
     });
     expect(Math.abs(result.premiumSplit!.betterPlan)).toBeLessThanOrEqual(1e-9 * 100);
     expect(result.premiumSplit!.uncertainty).toBeGreaterThan(0);
@@ -53,7 +53,7 @@ describe('the premium split', () => {
       horizon: 3,
       steps: 60,
       investment: 80,
-      options: [{ type: 'abandon', id: 'Sale', salvage: 120, fixedSalvage: true, window: { kind: 'european', at: 3 } }],
+      options: [{ kind: 'abandon', id: 'Sale', salvage: 120, fixedSalvage: true, window: { kind: 'european', at: 3 } }],
     });
     expect(sure.rights[0]!.exerciseProbability).toBeGreaterThan(0.95);
     expect(sure.warnings.some((w) => w.startsWith('Sale is used with probability'))).toBe(true);
@@ -63,7 +63,7 @@ describe('the premium split', () => {
       riskFreeRate: 0.03,
       horizon: 3,
       steps: 60,
-      options: [{ type: 'defer', id: 'Build', cost: 50, window: { kind: 'american', from: 0, to: 3 } }],
+      options: [{ kind: 'defer', id: 'Build', cost: 50, window: { kind: 'american', from: 0, to: 3 } }],
     });
     expect(today.rights[0]!.exerciseTiming[0]).toEqual({ t: 0, probability: 1 });
     expect(today.warnings.some((w) => w.startsWith('Build is used with probability'))).toBe(false);

@@ -41,10 +41,10 @@ function rightsFor(horizon: number, V0: number) {
     .tuple(fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }))
     .map(([a, b]) => ({ kind: 'american' as const, from: Math.min(a, b) * horizon, to: Math.max(a, b) * horizon }));
   const money = fc.double({ min: 0.1 * V0, max: 1.5 * V0, noNaN: true });
-  const expand = fc.record({ type: fc.constant('expand' as const), factor: fc.double({ min: 0.1, max: 1, noNaN: true }), cost: money, window });
-  const contract = fc.record({ type: fc.constant('contract' as const), fraction: fc.double({ min: 0.1, max: 0.6, noNaN: true }), savings: money, window });
-  const abandon = fc.record({ type: fc.constant('abandon' as const), salvage: money, window });
-  const defer = fc.record({ type: fc.constant('defer' as const), cost: money, window });
+  const expand = fc.record({ kind: fc.constant('expand' as const), factor: fc.double({ min: 0.1, max: 1, noNaN: true }), cost: money, window });
+  const contract = fc.record({ kind: fc.constant('contract' as const), fraction: fc.double({ min: 0.1, max: 0.6, noNaN: true }), savings: money, window });
+  const abandon = fc.record({ kind: fc.constant('abandon' as const), salvage: money, window });
+  const defer = fc.record({ kind: fc.constant('defer' as const), cost: money, window });
   return fc
     .tuple(
       fc.option(expand, { nil: undefined }),
@@ -103,9 +103,9 @@ describe('lattice properties', () => {
         const before = valueProject(model, { extras: false }).value;
         const dearer = structuredClone(model);
         for (const o of dearer.options ?? []) {
-          if (o.type === 'expand' || o.type === 'defer') o.cost = (o.cost as number) * factor;
-          if (o.type === 'abandon') o.salvage = (o.salvage as number) / factor;
-          if (o.type === 'contract') o.savings = (o.savings as number) / factor;
+          if (o.kind === 'expand' || o.kind === 'defer') o.cost = (o.cost as number) * factor;
+          if (o.kind === 'abandon') o.salvage = (o.salvage as number) / factor;
+          if (o.kind === 'contract') o.savings = (o.savings as number) / factor;
         }
         const after = valueProject(dearer, { extras: false }).value;
         expect(after).toBeLessThanOrEqual(before + 1e-9 * Math.max(1, Math.abs(before)));
@@ -127,10 +127,10 @@ describe('lattice properties', () => {
         const window = { kind: 'american' as const, from: 0, to: 3 };
         const option: OptionTemplate =
           kind === 'defer'
-            ? { type: 'defer', cost: 100, window }
+            ? { kind: 'defer', cost: 100, window }
             : kind === 'expand'
-              ? { type: 'expand', factor: 0.5, cost: 50, window }
-              : { type: 'abandon', salvage: 90, window };
+              ? { kind: 'expand', factor: 0.5, cost: 50, window }
+              : { kind: 'abandon', salvage: 90, window };
         const at = (volatility: number) =>
           valueProject({ underlying: { value: V0, volatility }, riskFreeRate: 0.04, horizon: 3, steps: 200, options: [option] }, { extras: false }).value;
         expect(at(sigma * 1.5)).toBeGreaterThanOrEqual(at(sigma) - 1e-9);
@@ -150,7 +150,7 @@ describe('lattice properties', () => {
             : { kind: 'american'; from: number; to: number } | { kind: 'bermudan'; dates: number[] } | { kind: 'european'; at: number },
         ): ProjectModel => ({
           ...m,
-          options: [kind === 'defer' ? { type: 'defer', cost: strike, window } : { type: 'abandon', salvage: strike, window }],
+          options: [kind === 'defer' ? { kind: 'defer', cost: strike, window } : { kind: 'abandon', salvage: strike, window }],
         });
         const american = valueProject(make({ kind: 'american', from: 0, to: T }), { extras: false }).value;
         const bermudan = valueProject(make({ kind: 'bermudan', dates: [T / 3, (2 * T) / 3, T] }), { extras: false }).value;
@@ -169,8 +169,8 @@ describe('lattice properties', () => {
         const K = k * m.underlying.value;
         const window = { kind: 'european' as const, at: m.horizon };
         const base = { ...m, tree: kind };
-        const call = valueProject({ ...base, options: [{ type: 'defer', cost: K, window }] }, { extras: false }).value;
-        const put = valueProject({ ...base, options: [{ type: 'abandon', salvage: K, window }] }, { extras: false }).value - m.underlying.value;
+        const call = valueProject({ ...base, options: [{ kind: 'defer', cost: K, window }] }, { extras: false }).value;
+        const put = valueProject({ ...base, options: [{ kind: 'abandon', salvage: K, window }] }, { extras: false }).value - m.underlying.value;
         const parity = m.underlying.value * Math.exp(-m.underlying.payoutYield * m.horizon) - K * Math.exp(-m.riskFreeRate * m.horizon);
         expect(Math.abs(call - put - parity)).toBeLessThanOrEqual(1e-9 * m.underlying.value);
       }),
@@ -190,7 +190,7 @@ describe('lattice properties', () => {
             horizon: 2,
             steps: 50,
             tree: 'jarrow-rudd',
-            options: [{ type: 'defer', cost: K, window: { kind: 'american', from: 0, to: 2 } }],
+            options: [{ kind: 'defer', cost: K, window: { kind: 'american', from: 0, to: 2 } }],
           },
           { extras: false },
         ).value;
@@ -213,8 +213,8 @@ describe('lattice properties', () => {
           ...m,
           steps: Math.min(m.steps, 30),
           options: [
-            { type: 'abandon', salvage: early * V0, window: { kind: 'american', from: 0, to: T / 2 } },
-            { type: 'abandon', salvage: late * V0, window: { kind: 'american', from: T / 4, to: T } },
+            { kind: 'abandon', salvage: early * V0, window: { kind: 'american', from: 0, to: T / 2 } },
+            { kind: 'abandon', salvage: late * V0, window: { kind: 'american', from: T / 4, to: T } },
           ],
         });
         for (const sw of r.rights) expect(sw.incremental!).toBeLessThanOrEqual(sw.standalone! + 1e-9 * V0);
@@ -246,12 +246,12 @@ describe('the trimmed and the full rollback agree', () => {
         const amount = money * m.underlying.value;
         const option: OptionTemplate =
           kind === 'defer'
-            ? { type: 'defer', cost: amount, window }
+            ? { kind: 'defer', cost: amount, window }
             : kind === 'expand'
-              ? { type: 'expand', factor: 0.5, cost: amount, window }
+              ? { kind: 'expand', factor: 0.5, cost: amount, window }
               : kind === 'abandon'
-                ? { type: 'abandon', salvage: amount, window }
-                : { type: 'contract', fraction: 0.4, savings: amount, window };
+                ? { kind: 'abandon', salvage: amount, window }
+                : { kind: 'contract', fraction: 0.4, savings: amount, window };
         const model: ProjectModel = { ...m, options: [option] };
         const trimmed = valueProject(model, { extras: false });
         const start = kind === 'defer' ? 'waiting' : 'operating';

@@ -57,7 +57,7 @@ describe('Dixit & Pindyck (1994) ch. 5, perpetual option to invest', () => {
       riskFreeRate: r,
       horizon: 100,
       steps: 4000,
-      options: [{ type: 'defer', cost: I, window: { kind: 'american', from: 0, to: 100 } }],
+      options: [{ kind: 'defer', cost: I, window: { kind: 'american', from: 0, to: 100 } }],
     };
     const result = valueProject(model, { extras: false });
     const perpetual = (threshold - I) * (I / threshold) ** beta1;
@@ -107,7 +107,7 @@ describe('Geske (1979) compound option', () => {
       steps: 1000,
       options: [
         {
-          type: 'stage',
+          kind: 'stage',
           payments: [
             { at: t1, amount: I1 },
             { at: T2, amount: I2 },

@@ -29,8 +29,8 @@ describe('rights used before the valuation date', () => {
     // t = 1: at 125 (5/9·234.375 + 4/9·150)/1.05 = 187.5; at 80 (5/9·150 + 4/9·105)/1.05 = 123.809524 > 105.
     // t = 0: (5/9·187.5 + 4/9·123.809524)/1.05 = 151.612497; the expansion's cost is not paid again.
     const options: OptionTemplate[] = [
-      { type: 'expand', id: 'phase-2', factor: 0.5, cost: 30, window: whole },
-      { type: 'abandon', id: 'sell', salvage: 70, window: whole },
+      { kind: 'expand', id: 'phase-2', factor: 0.5, cost: 30, window: whole },
+      { kind: 'abandon', id: 'sell', salvage: 70, window: whole },
     ];
     const r = valueProject({ ...base, options, exercised: ['phase-2'] }, { extras: false });
     const up = (p * 234.375 + q * 150) / 1.05;
@@ -46,7 +46,7 @@ describe('rights used before the valuation date', () => {
     const window = whole;
     const templates: ProjectModel = {
       ...base,
-      options: [{ type: 'switch', id: 'mothball', toScale: 0, flowPerYear: -4, cost: 5, backCost: 12, window }],
+      options: [{ kind: 'mothball', id: 'mothball', toScale: 0, flowPerYear: -4, cost: 5, backCost: 12, window }],
       exercised: ['mothball'],
     };
     const raw: ProjectModel = {
@@ -68,9 +68,9 @@ describe('rights used before the valuation date', () => {
   });
 
   it('an investment already made (defer used) equals the project with no right to invest', () => {
-    const sell: OptionTemplate = { type: 'abandon', id: 'sell', salvage: 70, window: whole };
+    const sell: OptionTemplate = { kind: 'abandon', id: 'sell', salvage: 70, window: whole };
     const a = valueProject(
-      { ...base, options: [{ type: 'defer', id: 'build', cost: 90, window: { kind: 'american', from: 0, to: 1 } }, sell], exercised: ['build'] },
+      { ...base, options: [{ kind: 'defer', id: 'build', cost: 90, window: { kind: 'american', from: 0, to: 1 } }, sell], exercised: ['build'] },
       { extras: false },
     );
     const b = valueProject({ ...base, options: [sell] }, { extras: false });
@@ -78,7 +78,7 @@ describe('rights used before the valuation date', () => {
   });
 
   it('a project abandoned before the valuation date is worth nothing', () => {
-    const r = valueProject({ ...base, options: [{ type: 'abandon', id: 'sell', salvage: 70, window: whole }], exercised: ['sell'] }, { extras: false });
+    const r = valueProject({ ...base, options: [{ kind: 'abandon', id: 'sell', salvage: 70, window: whole }], exercised: ['sell'] }, { extras: false });
     expect(r.value).toBe(0);
   });
 
@@ -92,12 +92,12 @@ describe('rights used before the valuation date', () => {
       }
       return 'accepted';
     };
-    const sell: OptionTemplate = { type: 'abandon', id: 'sell', salvage: 70, window: whole };
-    const grow: OptionTemplate = { type: 'expand', id: 'grow', factor: 0.5, cost: 30, window: whole };
+    const sell: OptionTemplate = { kind: 'abandon', id: 'sell', salvage: 70, window: whole };
+    const grow: OptionTemplate = { kind: 'expand', id: 'grow', factor: 0.5, cost: 30, window: whole };
     expect(field({ ...base, options: [sell], exercised: ['nothing'] })).toBe('exercised[0]');
-    expect(field({ ...base, options: [{ type: 'stage', id: 'st', payments: [{ at: 1, amount: 10 }] }], exercised: ['st'] })).toBe('exercised[0]');
+    expect(field({ ...base, options: [{ kind: 'stage', id: 'st', payments: [{ at: 1, amount: 10 }] }], exercised: ['st'] })).toBe('exercised[0]');
     expect(field({ ...base, options: [sell, grow], exercised: ['sell', 'grow'] })).toBe('exercised[1]');
     expect(field({ ...base, exercised: ['sell'] })).toBe('exercised');
-    expect(field({ ...base, options: [{ type: 'defer', id: 'build', cost: 90, window: whole }, grow], exercised: ['grow'] })).toBe('exercised[0]');
+    expect(field({ ...base, options: [{ kind: 'defer', id: 'build', cost: 90, window: whole }, grow], exercised: ['grow'] })).toBe('exercised[0]');
   });
 });

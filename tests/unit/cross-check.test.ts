@@ -45,7 +45,7 @@ describe('cross-check: least-squares Monte Carlo', () => {
       riskFreeRate: 0.06,
       horizon: T,
       steps: 50 * T,
-      options: [{ type: 'abandon', salvage: 40, fixedSalvage: true, window: { kind: 'american', from: 0, to: T } }],
+      options: [{ kind: 'abandon', salvage: 40, fixedSalvage: true, window: { kind: 'american', from: 0, to: T } }],
     };
     const mc = leastSquaresMonteCarlo(model, { paths: 20_000, seed: 2001 });
     const published = { expandedNpv: S + fd, band: null, steps: 50 * T, engineVersion: 'Longstaff & Schwartz 2001, Table 1', rights: [] };
@@ -63,7 +63,7 @@ describe('cross-check: least-squares Monte Carlo', () => {
       riskFreeRate: r,
       horizon: T,
       steps: 20,
-      options: [{ type: 'expand', factor, cost, window: { kind: 'european', at: T } }],
+      options: [{ kind: 'expand', factor, cost, window: { kind: 'european', at: T } }],
     };
     const mc = leastSquaresMonteCarlo(model, { paths: 40_000, seed: 73 });
     const expected = V0 + factor * blackScholes(V0 * Math.exp(-delta * T), cost / factor, T, sigma, r, 'call');

@@ -4,8 +4,8 @@ import type { OptionTemplate } from '@/lattice';
 import { issueInWords } from '@/lib/issue-words';
 
 const options = [
-  { type: 'defer', id: 'Build', cost: 90, window: { kind: 'american', from: 0, to: 2 } },
-  { type: 'stage', payments: [{ at: 0, amount: 10 }] },
+  { kind: 'defer', id: 'Build', cost: 90, window: { kind: 'american', from: 0, to: 2 } },
+  { kind: 'stage', payments: [{ at: 0, amount: 10 }] },
 ] as OptionTemplate[];
 
 describe('engine messages in words', () => {

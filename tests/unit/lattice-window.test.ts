@@ -13,7 +13,7 @@ const model: ProjectModel = {
   riskFreeRate: 0.04,
   horizon: 3,
   steps: 60,
-  options: [{ type: 'abandon', id: 'sale', salvage: 80, window: { kind: 'american', from: 0, to: 3 } }],
+  options: [{ kind: 'abandon', id: 'sale', salvage: 80, window: { kind: 'american', from: 0, to: 3 } }],
 };
 const result = valueProject(model, { extras: false, grid: true });
 const grid = result.grid as NodeGrid;

@@ -22,9 +22,9 @@ describe('mode labels', () => {
       horizon: 3,
       steps: 10,
       options: [
-        { type: 'expand', id: 'Phase 2', factor: 0.5, cost: 40, window: { kind: 'american', from: 0, to: 3 } },
-        { type: 'switch', id: 'Mothball', toScale: 0, cost: 1, backCost: 2 },
-        { type: 'abandon', id: 'Sell', salvage: 50, window: { kind: 'american', from: 0, to: 3 } },
+        { kind: 'expand', id: 'Phase 2', factor: 0.5, cost: 40, window: { kind: 'american', from: 0, to: 3 } },
+        { kind: 'mothball', id: 'Mothball', toScale: 0, cost: 1, backCost: 2 },
+        { kind: 'abandon', id: 'Sell', salvage: 50, window: { kind: 'american', from: 0, to: 3 } },
       ],
     });
     for (const mode of compiled.modes) expect(modeLabel(mode.id).replace(' (sold or abandoned)', '')).not.toMatch(/[+()]/);

@@ -7,7 +7,7 @@ import { demoPortfolio } from '@/demo/portfolio';
 import { valueProject } from '@/lattice';
 import { caseToModel } from '@/lib/case-model';
 import { analyseCashFlows } from '@/lib/cash-flows';
-import { cardBasis, newOptionForm, templateToForm, toTemplates, type CardBasis, type OptionType } from '@/lib/option-form';
+import { cardBasis, newOptionForm, templateToForm, toTemplates, type CardBasis, type OptionKind } from '@/lib/option-form';
 
 const basis = (v0: number, horizon = 5): CardBasis => ({ horizon, v0, investment: 0.8 * v0, stagePayments: [{ at: 0, amount: 0.8 * v0 }] });
 
@@ -26,9 +26,9 @@ describe('option cards', () => {
   });
 
   it('start every kind of card from figures the engine accepts', () => {
-    for (const type of ['expand', 'contract', 'abandon', 'defer', 'stage', 'switch'] as OptionType[]) {
-      const { problems } = toTemplates([newOptionForm(type, basis(120))], 5);
-      expect({ type, problems }).toEqual({ type, problems: {} });
+    for (const kind of ['expand', 'contract', 'abandon', 'defer', 'stage', 'mothball'] as OptionKind[]) {
+      const { problems } = toTemplates([newOptionForm(kind, basis(120))], 5);
+      expect({ kind, problems }).toEqual({ kind, problems: {} });
     }
   });
 
@@ -72,7 +72,7 @@ describe('option cards', () => {
       [
         { ...newOptionForm('expand', b), share: '0' },
         { ...newOptionForm('contract', b), share: '150' },
-        { ...newOptionForm('switch', b), share: '-10' },
+        { ...newOptionForm('mothball', b), share: '-10' },
         { ...stage, payments: [{ at: '0', amount: '-5' }] },
       ],
       5,

@@ -23,9 +23,9 @@ const model: ProjectModel = {
   steps: 100,
   investment: 80,
   options: [
-    { type: 'expand', id: 'Second line', factor: 0.5, cost: { amount: 40, growth: 0.03 }, window: { kind: 'american', from: 1, to: 4 } },
+    { kind: 'expand', id: 'Second line', factor: 0.5, cost: { amount: 40, growth: 0.03 }, window: { kind: 'american', from: 1, to: 4 } },
     {
-      type: 'abandon',
+      kind: 'abandon',
       id: 'Sell',
       salvage: [
         { from: 0, amount: 60 },
@@ -34,8 +34,8 @@ const model: ProjectModel = {
       ],
       window: { kind: 'american', from: 0, to: 5 },
     },
-    { type: 'contract', id: 'Halve', fraction: 0.5, savings: 30, window: { kind: 'bermudan', dates: [1, 2, 3] } },
-    { type: 'expand', id: 'Early add-on', factor: 0.2, cost: 10, window: { kind: 'european', at: 1 } },
+    { kind: 'contract', id: 'Halve', fraction: 0.5, savings: 30, window: { kind: 'bermudan', dates: [1, 2, 3] } },
+    { kind: 'expand', id: 'Early add-on', factor: 0.2, cost: 10, window: { kind: 'european', at: 1 } },
   ],
 };
 
@@ -60,12 +60,12 @@ describe('the clock of a followed decision', () => {
     for (const project of demoPortfolio)
       for (const c of project.cases) {
         const { model: m } = caseToModel(c);
-        if ((m.options ?? []).some((o) => o.type === 'stage')) continue;
+        if ((m.options ?? []).some((o) => o.kind === 'stage')) continue;
         const grid = valueProject(m, { extras: false, grid: true });
         const step = Math.floor(m.steps / 2);
         const at = grid.grid!.steps[step]!;
         const j = Math.floor(step / 2);
-        const deferLapsed = (m.options ?? []).some((o) => o.type === 'defer' && windowFrom(o.window, at.t) === null);
+        const deferLapsed = (m.options ?? []).some((o) => o.kind === 'defer' && windowFrom(o.window, at.t) === null);
         if (deferLapsed) continue; // refused by the clock: a right to invest that lapsed leaves nothing to follow
         const fresh = valueProject(modelAt(m, at.t, at.underlying[j]!).model, { extras: false });
         const expected = at.modes[grid.startMode]!.value[j]!;
@@ -101,7 +101,7 @@ describe('the clock of a followed decision', () => {
 
   it('keeps a mothballed plant free to restart at any time when its switch has no window, and until the window closes when it has one', () => {
     const mothball = (window?: { kind: 'american'; from: number; to: number }) =>
-      modelAt({ ...model, options: [{ type: 'switch', id: 'Mothball', toScale: 0, cost: 2, backCost: 3, ...(window ? { window } : {}) }] }, 2, 100, {
+      modelAt({ ...model, options: [{ kind: 'mothball', id: 'Mothball', toScale: 0, cost: 2, backCost: 3, ...(window ? { window } : {}) }] }, 2, 100, {
         exercised: ['Mothball'],
         declined: [],
       }).model.options![0]!;
@@ -149,7 +149,7 @@ describe('the clock of a followed decision', () => {
     expect(() => modelAt(model, 5, 100)).toThrow(ClockError);
     expect(() => modelAt(model, -0.1, 100)).toThrow(ClockError);
     expect(() => modelAt(model, 1, 0)).toThrow(ClockError);
-    const deferred: ProjectModel = { ...model, investment: undefined, options: [{ type: 'defer', cost: 80, window: { kind: 'american', from: 0, to: 2 } }] };
+    const deferred: ProjectModel = { ...model, investment: undefined, options: [{ kind: 'defer', cost: 80, window: { kind: 'american', from: 0, to: 2 } }] };
     expect(() => modelAt(deferred, 2.5, 100)).toThrow(/lapsed/);
     expect(modelAt(deferred, 1, 100).model.options![0]).toMatchObject({ window: { kind: 'american', from: 0, to: 1 } });
   });

@@ -15,9 +15,9 @@ const below = (t: number, critical: number): BoundaryPoint => ({ t, critical, si
 const right = (id: string, boundary: BoundaryPoint[]) => ({ id, boundary }) as unknown as RightResult;
 
 const options: OptionTemplate[] = [
-  { type: 'expand', id: 'Grow', factor: 0.5, cost: 40, window: { kind: 'american', from: 1, to: 4 } },
-  { type: 'abandon', id: 'Sell', salvage: 50, window: { kind: 'american', from: 0, to: 5 } },
-  { type: 'contract', id: 'Halve', fraction: 0.5, savings: 20, window: { kind: 'european', at: 2 } },
+  { kind: 'expand', id: 'Grow', factor: 0.5, cost: 40, window: { kind: 'american', from: 1, to: 4 } },
+  { kind: 'abandon', id: 'Sell', salvage: 50, window: { kind: 'american', from: 0, to: 5 } },
+  { kind: 'contract', id: 'Halve', fraction: 0.5, savings: 20, window: { kind: 'european', at: 2 } },
 ];
 const rights = [
   right('Grow', [above(1, 150), above(1.05, 148), above(1.1, 146)]),
@@ -67,7 +67,7 @@ describe('where each right stands', () => {
     const plant = demoPortfolio.find((p) => p.name === 'Phased bio-resin plant')!.cases[0]!;
     const { model } = caseToModel(plant);
     const result = valueProject(model, { extras: false, grid: true });
-    const k = model.options!.findIndex((o) => o.type === 'expand');
+    const k = model.options!.findIndex((o) => o.kind === 'expand');
     const id = result.rights[k]!.id;
     let checked = 0;
     for (const step of result.grid!.steps) {

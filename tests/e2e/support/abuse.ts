@@ -10,7 +10,7 @@ export const smallModel = {
   horizon: 3,
   steps: 60,
   investment: 90,
-  options: [{ type: 'abandon', salvage: 70, window: { kind: 'american', from: 0, to: 3 } }],
+  options: [{ kind: 'abandon', salvage: 70, window: { kind: 'american', from: 0, to: 3 } }],
 };
 
 /** Twelve rights at 10,000 steps: far over the engine's work budget, refused before any work. */
@@ -19,7 +19,7 @@ export const twelveRightsModel = {
   horizon: 10,
   steps: 10_000,
   options: Array.from({ length: 12 }, (_, k) => ({
-    type: 'abandon',
+    kind: 'abandon',
     id: `sale ${k + 1}`,
     salvage: 40 + k,
     window: { kind: 'american', from: k / 2, to: 10 },

@@ -84,7 +84,7 @@ const longstaffSchwartz = longstaffSchwartzRows.flatMap(({ S, sigma, T, fd, euro
       what: `American put, S = ${S}, K = 40, σ = ${sigma}, T = ${T}, r = 6 %`,
       published: fd,
       tolerance: 0.005,
-      model: { ...common, steps: 500 * T, options: [{ type: 'abandon', salvage: 40, window: { kind: 'bermudan', dates: [0, ...dates] } }] },
+      model: { ...common, steps: 500 * T, options: [{ kind: 'abandon', salvage: 40, window: { kind: 'bermudan', dates: [0, ...dates] } }] },
       read: (r) => r.value - S,
     },
     {
@@ -92,7 +92,7 @@ const longstaffSchwartz = longstaffSchwartzRows.flatMap(({ S, sigma, T, fd, euro
       what: `European put, S = ${S}, K = 40, σ = ${sigma}, T = ${T}, r = 6 %`,
       published: european,
       tolerance: 0.005,
-      model: { ...common, steps: 1000 * T, options: [{ type: 'abandon', salvage: 40, window: { kind: 'european', at: T } }] },
+      model: { ...common, steps: 1000 * T, options: [{ kind: 'abandon', salvage: 40, window: { kind: 'european', at: T } }] },
       read: (r) => r.value - S,
     },
   ];

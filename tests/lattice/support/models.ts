@@ -20,7 +20,7 @@ export function abandonOnly(c: VanillaCase): ProjectModel {
     horizon: c.horizon,
     steps: c.steps,
     tree: c.tree ?? 'crr',
-    options: [{ type: 'abandon', salvage: c.strike, window: { kind: 'american', from: 0, to: c.horizon } }],
+    options: [{ kind: 'abandon', salvage: c.strike, window: { kind: 'american', from: 0, to: c.horizon } }],
   };
 }
 
@@ -32,6 +32,6 @@ export function deferOnly(c: VanillaCase): ProjectModel {
     horizon: c.horizon,
     steps: c.steps,
     tree: c.tree ?? 'crr',
-    options: [{ type: 'defer', cost: c.strike, window: { kind: 'american', from: 0, to: c.horizon } }],
+    options: [{ kind: 'defer', cost: c.strike, window: { kind: 'american', from: 0, to: c.horizon } }],
   };
 }

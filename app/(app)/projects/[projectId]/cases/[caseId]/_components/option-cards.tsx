@@ -5,17 +5,17 @@ import { get, useFieldArray, useForm, useWatch, type Control, type FieldErrors, 
 import { toNestErrors } from '@hookform/resolvers';
 import { Button } from '@/components/ui/button';
 import type { OptionTemplate } from '@/lattice';
-import { newOptionForm, type CardBasis, optionTypeLabels, templateToForm, toTemplates, type OptionForm, type OptionType } from '@/lib/option-form';
+import { newOptionForm, type CardBasis, optionKindLabels, templateToForm, toTemplates, type OptionForm, type OptionKind } from '@/lib/option-form';
 
 type Fields = { options: OptionForm[] };
 
-const explain: Record<OptionType, string> = {
+const explain: Record<OptionKind, string> = {
   expand: 'Pay a cost to scale the project up by a share of its value.',
   contract: 'Give up a share of the project for savings received.',
   abandon: 'Close the project for its salvage value.',
   defer: 'Wait before investing; the project starts once the cost is paid, or never.',
   stage: 'Each payment, on its date, buys the right to go on; skip one and the project stops.',
-  switch: 'Mothball the project (or run it at another scale) and restart it later, each for a cost.',
+  mothball: 'Mothball the project (or run it at another scale) and restart it later, each for a cost.',
 };
 
 const field = 'h-9 rounded-md border border-line-strong bg-paper-raised px-2 text-body';
@@ -282,8 +282,8 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
     void form.trigger();
   }, [horizon, form]);
 
-  const add = (type: OptionType) => {
-    list.append(newOptionForm(type, basis));
+  const add = (kind: OptionKind) => {
+    list.append(newOptionForm(kind, basis));
     void form.trigger();
   };
   const remove = (k: number) => {
@@ -301,11 +301,11 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
       {list.fields.map((card, k) => {
         const at = `options.${k}`;
         const parts = { register: form.register, control: form.control, errors, readOnly };
-        const type = card.type;
+        const kind = card.kind;
         return (
           <section
             key={card.id}
-            aria-label={`Right: ${optionTypeLabels[type]}`}
+            aria-label={`Right: ${optionKindLabels[kind]}`}
             className={`rounded-card border bg-paper-raised p-5 shadow-card ${engineProblems?.[k] ? 'border-brick-500' : 'border-line'}`}
           >
             {engineProblems?.[k] ? (
@@ -314,7 +314,7 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
               </p>
             ) : null}
             <header className="mb-4 flex flex-wrap items-start gap-3">
-              <span className="rounded bg-tide-50 px-2 py-1 text-caption font-semibold uppercase tracking-wide text-tide-700">{optionTypeLabels[type]}</span>
+              <span className="rounded bg-tide-50 px-2 py-1 text-caption font-semibold uppercase tracking-wide text-tide-700">{optionKindLabels[kind]}</span>
               <div className="flex flex-col">
                 <input
                   aria-label="Name of the right"
@@ -325,24 +325,24 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
                 />
                 <Problem errors={errors} path={`${at}.label`} />
               </div>
-              <p className="min-w-48 flex-1 pt-1.5 text-caption text-ink-muted">{explain[type]}</p>
+              <p className="min-w-48 flex-1 pt-1.5 text-caption text-ink-muted">{explain[kind]}</p>
               {readOnly ? null : (
-                <Button variant="quiet" onClick={() => remove(k)} aria-label={`Remove right ${k + 1} (${optionTypeLabels[type]})`}>
+                <Button variant="quiet" onClick={() => remove(k)} aria-label={`Remove right ${k + 1} (${optionKindLabels[kind]})`}>
                   Remove
                 </Button>
               )}
             </header>
             <div className="grid gap-5 lg:grid-cols-2">
-              {type === 'expand' || type === 'contract' || type === 'switch' ? (
+              {kind === 'expand' || kind === 'contract' || kind === 'mothball' ? (
                 <Labelled
-                  label={type === 'expand' ? 'Added scale (%)' : type === 'contract' ? 'Share given up (%)' : 'Scale while switched (%)'}
-                  hint={type === 'expand' ? '50 adds half of the current project.' : type === 'switch' ? '0 stops operations (mothballed).' : undefined}
+                  label={kind === 'expand' ? 'Added scale (%)' : kind === 'contract' ? 'Share given up (%)' : 'Scale while switched (%)'}
+                  hint={kind === 'expand' ? '50 adds half of the current project.' : kind === 'mothball' ? '0 stops operations (mothballed).' : undefined}
                 >
                   <input inputMode="decimal" readOnly={readOnly} className={`${field} w-28 text-right`} {...form.register(`options.${k}.share`)} />
                   <Problem errors={errors} path={`${at}.share`} />
                 </Labelled>
               ) : null}
-              {type === 'stage' ? (
+              {kind === 'stage' ? (
                 <StagePayments at={at} {...parts} />
               ) : (
                 <CostEditor
@@ -353,14 +353,14 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
                       contract: 'Savings received',
                       abandon: 'Salvage received',
                       defer: 'Investment cost',
-                      switch: 'Cost to switch',
+                      mothball: 'Cost to switch',
                       stage: '',
-                    }[type]
+                    }[kind]
                   }
                   {...parts}
                 />
               )}
-              {type === 'abandon' ? (
+              {kind === 'abandon' ? (
                 <label className="flex items-start gap-2 text-caption text-ink-soft">
                   <input type="checkbox" disabled={readOnly} className="mt-0.5" {...form.register(`options.${k}.fixedSalvage`)} />
                   <span>
@@ -369,7 +369,7 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
                   </span>
                 </label>
               ) : null}
-              {type === 'switch' ? (
+              {kind === 'mothball' ? (
                 <>
                   <CostEditor at={`${at}.backCost`} label="Cost to switch back" {...parts} />
                   <Labelled label="Cash flow a year while switched" hint="Savings net of upkeep; negative for a net cost.">
@@ -378,7 +378,7 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
                   </Labelled>
                 </>
               ) : null}
-              {type === 'stage' ? null : <WindowEditor at={`${at}.window`} {...parts} />}
+              {kind === 'stage' ? null : <WindowEditor at={`${at}.window`} {...parts} />}
             </div>
           </section>
         );
@@ -386,9 +386,9 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
       {readOnly ? null : (
         <div className="flex flex-wrap items-center gap-2" role="group" aria-label="Add a right">
           <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">Add a right:</span>
-          {(Object.keys(optionTypeLabels) as OptionType[]).map((type) => (
-            <Button key={type} variant="secondary" onClick={() => add(type)}>
-              {optionTypeLabels[type]}
+          {(Object.keys(optionKindLabels) as OptionKind[]).map((kind) => (
+            <Button key={kind} variant="secondary" onClick={() => add(kind)}>
+              {optionKindLabels[kind]}
             </Button>
           ))}
         </div>

@@ -10,7 +10,7 @@ import type { RightResult, ValuationResult } from '@/lattice';
 import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney, formatPercent } from '@/lib/format';
 import { premiumSplitText } from '@/lib/premium-split';
-import { optionTypeLabels, type OptionType } from '@/lib/option-form';
+import { optionKindLabels, type OptionKind } from '@/lib/option-form';
 import { palette } from '@/lib/palette';
 
 /**
@@ -92,7 +92,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
                 <Tr key={s.id}>
                   <Td>
                     <span className="font-medium">{s.id}</span>
-                    <span className="ml-2 text-caption text-ink-muted">{optionTypeLabels[s.kind as OptionType] ?? s.kind}</span>
+                    <span className="ml-2 text-caption text-ink-muted">{optionKindLabels[s.kind as OptionKind] ?? s.kind}</span>
                     <p className="mt-0.5 max-w-xl text-caption text-ink-soft">{decisionRule(s, currency).text}</p>
                   </Td>
                   <Td numeric>{formatMoney(s.standalone, currency)}</Td>
