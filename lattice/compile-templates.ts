@@ -47,14 +47,22 @@ interface Move {
 
 const keyOf = (s: State) => `${s.phase}|${s.paid}|${s.exercised}|${s.switched}`;
 
-/** Gives each template an id (its own, or `type-n`) and refuses duplicates. */
-export function templateIds(options: OptionTemplate[]): string[] {
+/**
+ * Each template's id as the result names it: its own, or `kind-n` (the n-th right of that kind).
+ * Every list of rights beside the result's figures names them so (comparison, workbook, report).
+ */
+export function rightIds(options: OptionTemplate[]): string[] {
   const counts = new Map<string, number>();
-  const ids = options.map((option) => {
+  return options.map((option) => {
     const n = (counts.get(option.kind) ?? 0) + 1;
     counts.set(option.kind, n);
     return option.id ?? `${option.kind}-${n}`;
   });
+}
+
+/** The ids of `rightIds`, refusing duplicates. */
+export function templateIds(options: OptionTemplate[]): string[] {
+  const ids = rightIds(options);
   ids.forEach((id, k) => {
     if (ids.indexOf(id) !== k) refuse(`options[${k}].id`, `must be unique, "${id}" is used twice`);
   });

@@ -5,7 +5,7 @@
 export { largestStepsWithinBudget, valueProject, type ValueOptions } from './value-project';
 export { explainNode, type NodeExplanation, type NodeRef } from './explain';
 export { prepareModel, parseModel } from './check-model';
-export { templateIds } from './compile-templates';
+export { rightIds, templateIds } from './compile-templates';
 export { ModelError, type ModelIssue } from './errors';
 export { projectModelSchema, optionTemplateSchema, costSchema, windowSchema, treeKindSchema } from './schema';
 export type { ProjectModel, OptionTemplate, Cost, ExerciseWindow, TreeKind, ModeInput, SwitchInput } from './schema';

@@ -1,18 +1,21 @@
 /**
  * The rows of a comparison of cases or of two versions of one case: headline figures, each
- * option's value and terms, the assumptions (with where the volatility comes from) and every
+ * right's value and terms, the assumptions (with where the volatility comes from) and every
  * cash-flow line year by year. A row "differs" when any value is not the first one's. Written
  * once for the compare page and workbook (lib/comparison.ts) and for the reviewer's view of what
  * changed since a version was returned (lib/review/version-changes.ts).
  */
-import type { ValuationResult } from '@/lattice';
+import { rightIds, type OptionTemplate, type ValuationResult } from '@/lattice';
 import { analyseCashFlows, type CashFlowYear } from './cash-flows';
 import { formatMoney } from './format';
 import { describeOption } from './option-words';
 import type { CaseInput } from './validations/case';
 
+/** The groups of rows, in the order they are shown. */
+export const comparisonGroups = ['Valuation', 'Rights', 'Assumptions', 'Cash flows'] as const;
+
 export interface ComparisonRow {
-  group: 'Valuation' | 'Options' | 'Assumptions' | 'Cash flows';
+  group: (typeof comparisonGroups)[number];
   label: string;
   values: (string | null)[];
   /** Raw numbers where the row is numeric, for charts and the workbook. */
@@ -50,14 +53,16 @@ export function comparisonRows(inputs: CaseInput[], results: (ValuationResult | 
   add('Valuation', 'of which flexibility under uncertainty', ...money((r) => r.premiumSplit?.uncertainty ?? null));
   add('Valuation', 'Expanded NPV', ...money((r) => r.expandedNpv));
 
-  const optionIds = [...new Set(inputs.flatMap((input) => (input.options ?? []).map((o, j) => o.id ?? `option ${j + 1}`)))];
+  // Unnamed rights go by the ids the results give them (expand-1, …), so their figures are found.
+  const idsOf = inputs.map((input) => rightIds((input.options ?? []) as OptionTemplate[]));
+  const optionIds = [...new Set(idsOf.flat())];
   for (const id of optionIds) {
-    add('Options', `${id}: incremental value`, ...money((r) => r.rights.find((s) => s.id === id)?.incremental ?? null));
+    add('Rights', `${id}: incremental value`, ...money((r) => r.rights.find((s) => s.id === id)?.incremental ?? null));
     add(
-      'Options',
+      'Rights',
       `${id}: terms`,
       inputs.map((input, k) => {
-        const template = (input.options ?? []).find((o, j) => (o.id ?? `option ${j + 1}`) === id);
+        const template = (input.options ?? [])[idsOf[k]!.indexOf(id)];
         return template ? describeOption(template, currencies[k]) : null;
       }),
     );

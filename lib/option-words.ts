@@ -2,7 +2,7 @@
  * An option's terms in one sentence, for readers who never see the option cards:
  * "expand by 50 % for EUR 95.0, any time in years 2–4".
  */
-import type { Cost, ExerciseWindow, OptionTemplate } from '@/lattice';
+import { rightIds, type Cost, type ExerciseWindow, type OptionTemplate } from '@/lattice';
 import { formatMoney, formatPercent } from './format';
 
 export function describeCost(cost: Cost, currency?: string): string {
@@ -34,4 +34,11 @@ export function describeOption(o: OptionTemplate, currency?: string): string {
     case 'mothball':
       return `switch to ${formatPercent(o.toScale, 0)} of scale for ${describeCost(o.cost, currency)} and back for ${describeCost(o.backCost, currency)}, earning ${formatMoney(o.flowPerYear ?? 0, currency)} a year while switched, ${describeWindow(o.window)}`;
   }
+}
+
+/** Each right with the id its figures go by (an unnamed one: `expand-1`, …) and its terms. */
+export function describeRights(options: OptionTemplate[] | undefined, currency?: string): { id: string; option: OptionTemplate; terms: string }[] {
+  const list = options ?? [];
+  const ids = rightIds(list);
+  return list.map((option, k) => ({ id: ids[k]!, option, terms: describeOption(option, currency) }));
 }

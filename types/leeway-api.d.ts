@@ -1518,7 +1518,7 @@ export interface components {
         };
         ComparisonRow: {
             /** @enum {string} */
-            group: "Valuation" | "Options" | "Assumptions" | "Cash flows";
+            group: "Valuation" | "Rights" | "Assumptions" | "Cash flows";
             label: string;
             /** @description Formatted for people, one per case; null where a case has no such value. */
             values: (string | null)[];

@@ -21,7 +21,7 @@ import { readingOfFigures } from '../figures-reading';
 import { formatChange, formatDateTime, formatPercent } from '../format';
 import { optionKindLabels, type OptionKind } from '../option-form';
 import { premiumSplitText } from '../premium-split';
-import { describeOption } from '../option-words';
+import { describeRights } from '../option-words';
 import type { BoardPackData, FollowThrough, RecordEvent } from './data';
 import { pdfText } from './text';
 import { palette, seriesFill } from '@/lib/palette';
@@ -373,7 +373,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
           <NpvChart data={data} width={contentWidth} />
         </View>
         <Text style={styles.h3}>Decision rules</Text>
-        {rules.length === 0 ? <Text style={styles.para}>The case holds no options: it is a now-or-never commitment.</Text> : null}
+        {rules.length === 0 ? <Text style={styles.para}>The case holds no rights: it is a now-or-never commitment.</Text> : null}
         {rules.map((rule) => (
           <Text key={rule.right} style={styles.rule}>
             {pdfText(rule.text)}
@@ -451,11 +451,11 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
             money(analysis.rows[k]?.freeCashFlow),
           ])}
         />
-        <Text style={styles.h3}>Option terms</Text>
+        <Text style={styles.h3}>Terms of the rights</Text>
         {options.length === 0 ? <Text style={styles.para}>None.</Text> : null}
-        {options.map((o, k) => (
-          <Text key={k} style={{ marginBottom: 3 }}>
-            {pdfText(`${o.id ?? `Option ${k + 1}`}: ${describeOption(o, currency)}`)}
+        {describeRights(options, currency).map((r) => (
+          <Text key={r.id} style={{ marginBottom: 3 }}>
+            {pdfText(`${r.id}: ${r.terms}`)}
           </Text>
         ))}
       </Section>

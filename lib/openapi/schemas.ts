@@ -8,6 +8,7 @@
  */
 import { z } from 'zod';
 import { cashFlowScheduleSchema } from '../cash-flows';
+import { comparisonGroups } from '../comparison-rows';
 import { caseSettingsSchema } from '../validations/case';
 import { optionTemplateSchema } from '@/lattice';
 
@@ -142,7 +143,7 @@ export const valuationResultSchema = z
 
 const comparisonRowSchema = z
   .object({
-    group: z.enum(['Valuation', 'Options', 'Assumptions', 'Cash flows']),
+    group: z.enum(comparisonGroups),
     label: z.string(),
     values: z.array(z.string().nullable()).meta({ description: 'Formatted for people, one per case; null where a case has no such value.' }),
     numbers: z.array(z.number().nullable()).optional().meta({ description: 'The raw numbers where the row is numeric.' }),

@@ -10,7 +10,7 @@ import type { ValuationResult } from '@/lattice';
 import { decisionRule } from '../decision-rules';
 import { formatDateTime } from '../format';
 import { optionKindLabels } from '../option-form';
-import { describeOption } from '../option-words';
+import { describeRights } from '../option-words';
 import type { CaseInput } from '../validations/case';
 import { addCashFlowSheets } from './cash-flow-workbook';
 import { table } from './sheet-table';
@@ -70,7 +70,7 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
   table(
     rights,
     ['Right', 'Kind', 'Terms'],
-    (c.inputs.options ?? []).map((o, k) => [o.id ?? `Right ${k + 1}`, optionKindLabels[o.kind], describeOption(o, c.currency)]),
+    describeRights(c.inputs.options, c.currency).map((r) => [r.id, optionKindLabels[r.option.kind], r.terms]),
   );
   rights.getColumn(3).width = 100;
 

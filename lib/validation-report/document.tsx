@@ -10,7 +10,7 @@ import { VALUATION_CAUTION } from '@/lib/caution';
 import { pdfText } from '../board-pack/text';
 import { assumptionRows, money, PageFooter, pdfColours, SectionPage, styles, Table } from '../board-pack/pdf-parts';
 import { formatDateTime, formatNumber, formatPercent } from '../format';
-import { describeOption } from '../option-words';
+import { describeRights } from '../option-words';
 import { premiumSplitText } from '../premium-split';
 import { volatilityMethodLabels } from '../volatility/method-words';
 import { treeLabels } from '../tree-words';
@@ -109,8 +109,8 @@ export function ValidationReportDocument({ data }: { data: ValidationReportData 
         </Para>
         <Text style={styles.h3}>Rights</Text>
         {(inputs.options ?? []).length === 0 ? <Para>None.</Para> : null}
-        {(inputs.options ?? []).map((o, k) => (
-          <Para key={k}>{`${o.id ?? `Right ${k + 1}`}: ${describeOption(o, currency)}`}</Para>
+        {describeRights(inputs.options, currency).map((r) => (
+          <Para key={r.id}>{`${r.id}: ${r.terms}`}</Para>
         ))}
       </Section>
 

@@ -7,7 +7,7 @@ import ExcelJS from 'exceljs';
 import { VALUATION_CAUTION } from '@/lib/caution';
 import { assumptionRows } from '../board-pack/pdf-parts';
 import { formatDateTime } from '../format';
-import { describeOption } from '../option-words';
+import { describeRights } from '../option-words';
 import { table } from '../spreadsheets/sheet-table';
 import { volatilityMethodLabels } from '../volatility/method-words';
 import type { ValidationReportData } from './data';
@@ -51,7 +51,7 @@ export async function validationWorkbook(data: ValidationReportData): Promise<Bu
     [
       ...assumptionRows(inputs, data.model, data.project.currency),
       ['Volatility method', source ? volatilityMethodLabels[source.method] : 'Not stated'],
-      ...(inputs.options ?? []).map((o, k) => [o.id ?? `Right ${k + 1}`, describeOption(o, data.project.currency)]),
+      ...describeRights(inputs.options, data.project.currency).map((r) => [r.id, r.terms]),
     ],
   );
   const convergence = result.convergence;

@@ -5,6 +5,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { demoPlant } from '@/demo/board-pack-data';
+import { valueProject } from '@/lattice';
+import { caseToModel } from '@/lib/case-model';
 import { comparisonRows } from '@/lib/comparison-rows';
 import type { CaseInput } from '@/lib/validations/case';
 
@@ -45,5 +47,14 @@ describe('comparisonRows', () => {
     const extra = comparisonRows([inputs, longer], [null, null], ['EUR', 'EUR']).find((r) => r.label === `Revenue, year ${last.year + 1}`)!;
     expect(extra.values).toEqual([null, String(last.revenue)]);
     expect(extra.differs).toBe(true);
+  });
+
+  it('finds the figures of unnamed rights under the ids the result gives them, in the Rights group', () => {
+    const unnamed = { ...structuredClone(inputs), options: inputs.options!.map(({ id: _id, ...o }) => o) };
+    const result = valueProject(caseToModel(unnamed).model);
+    const rows = comparisonRows([unnamed], [result], ['EUR']).filter((r) => r.group === 'Rights' && r.label.endsWith(': incremental value'));
+    expect(rows.map((r) => r.label)).toEqual(result.rights.map((r) => `${r.id}: incremental value`));
+    expect(rows.map((r) => r.numbers![0])).toEqual(result.rights.map((r) => r.incremental));
+    expect(result.rights.every((r) => r.incremental !== null)).toBe(true);
   });
 });

@@ -13,7 +13,7 @@ export default async function ComparePage() {
   if (member === 'forbidden') return <Forbidden />;
   return (
     <>
-      <PageHeader title="Compare cases" lead="NPV with and without flexibility, each option's value and the key assumptions, side by side." />
+      <PageHeader title="Compare cases" lead="NPV with and without flexibility, each right's value and the key assumptions, side by side." />
       <Suspense fallback={<LoadingBlock label="Loading" />}>
         <CompareView />
       </Suspense>

@@ -97,7 +97,7 @@ export function CaseHeader({
           <a
             href={`/api/v1/cases/${caseId}/export.xlsx`}
             className="text-tide-600 underline"
-            title="Inputs, cash flows, settings, options, results and the first lattice steps of the saved case"
+            title="Inputs, cash flows, settings, rights, results and the first lattice steps of the saved case"
           >
             Export workbook
           </a>
