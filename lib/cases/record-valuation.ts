@@ -9,12 +9,11 @@
 import { recordAudit } from '@/db/queries/audit';
 import { recordValuationRun } from '@/db/queries/valuation-runs';
 import type { Database } from '@/db';
+import type { Member } from '../dal';
 import type { CaseValuation } from '../value-case';
 
-interface Actor {
-  orgId: string;
-  userId: string;
-}
+/** Who keeps the run: the member's organisation and user (the demo seed passes its own). */
+type Actor = Pick<Member, 'orgId' | 'userId'>;
 
 type Kept = Omit<CaseValuation, 'warnings'>;
 

@@ -13,15 +13,12 @@ import { decideCase, submitCase } from '@/db/queries/reviews';
 import type { DB } from '@/db/types';
 import { recordRun } from '../cases/record-valuation';
 import { AppError } from '../errors';
-import type { RoleName } from '../permissions';
+import type { Member } from '../dal';
 import type { CaseValuation } from '../value-case';
 import { checkTransition } from './transitions';
 
-interface Actor {
-  orgId: string;
-  userId: string;
-  role: RoleName;
-}
+/** Who acts: the member's organisation, user and role (the demo seed passes its own). */
+type Actor = Pick<Member, 'orgId' | 'userId' | 'role'>;
 
 export async function recordSubmission(
   trx: Transaction<DB>,

@@ -1,21 +1,17 @@
 'use client';
 
-import { useCallback, useState } from 'react';
+import { useState } from 'react';
 import useSWR from 'swr';
 import { FieldProblems, useFieldProblemList } from '@/components/field-problems';
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { Button } from '@/components/ui/button';
 import { Tabs } from '@/components/ui/tabs';
-import { useToast } from '@/components/ui/toast';
 import type { OptionTemplate } from '@/lattice';
-import { ApiError, getJson, sendJson } from '@/lib/api-client';
+import { getJson } from '@/lib/api-client';
 import type { CaseJson } from '@/lib/case-json';
 import { useValuation } from '@/lib/engine/use-engine';
-import { formatMoney } from '@/lib/format';
 import { issueInWords } from '@/lib/issue-words';
 import { cardBasis } from '@/lib/option-form';
-import type { CaseInput } from '@/lib/validations/case';
-import type { CaseStatus } from '@/lib/review/transitions';
 import { AttachmentsPanel } from './attachments-panel';
 import { CashFlowImport } from './cash-flow-import';
 import { CashFlowSection } from './cash-flow-section';
@@ -30,6 +26,8 @@ import { ValidationReportPanel } from './validation-report-panel';
 import { WatchPanel } from './watch-panel';
 import { CaseHeader } from './case-header';
 import { ReviewPanel, type ReviewRights } from './review-panel';
+import { LiveFigures } from './live-figures';
+import { useCaseRecord } from './use-case-record';
 import { useDraftModel } from './use-draft-model';
 import { useUnsavedWarning } from './use-unsaved-warning';
 
@@ -47,14 +45,6 @@ interface Props {
 /** The case as the page loaded it: shown at once, and fetched again only after a save or a conflict. */
 type EditorProps = Props & { loaded: CaseJson };
 
-interface RunSummary {
-  id: string;
-  caseVersion: number;
-  createdAt: string;
-  createdBy: string | null;
-  expandedNpv: number;
-}
-
 export function CaseEditor({ loaded, ...props }: EditorProps) {
   const { data, error, isLoading, mutate } = useSWR<{ case: CaseJson }>(`/api/v1/cases/${props.caseId}`, getJson, {
     fallbackData: { case: loaded },
@@ -64,21 +54,6 @@ export function CaseEditor({ loaded, ...props }: EditorProps) {
   if (isLoading) return <LoadingBlock label="Loading the case" lines={8} />;
   if (error || !data) return <LoadError message={error?.message ?? 'No answer from the server.'} onRetry={() => mutate()} />;
   return <LoadedEditor key={`${data.case.id}:${data.case.version}`} {...props} initial={data.case} reload={() => mutate()} />;
-}
-
-function toInput(c: CaseJson): CaseInput {
-  return { name: c.name, cashFlows: c.cashFlows, settings: c.settings, options: c.options };
-}
-
-function Headline({ label, value, strong, busy }: { label: string; value: string; strong?: boolean; busy: boolean }) {
-  return (
-    <div className={`rounded-card border px-4 py-3 ${strong ? 'border-tide-500 bg-tide-50' : 'border-line bg-paper-raised'}`}>
-      <p className="text-caption font-medium uppercase tracking-wide text-ink-soft">{label}</p>
-      <p className={`figures mt-0.5 text-title ${busy ? 'opacity-60' : ''}`} aria-live="polite">
-        {value}
-      </p>
-    </div>
-  );
 }
 
 function LoadedEditor({
@@ -92,29 +67,18 @@ function LoadedEditor({
   reload,
   initialTab,
 }: Props & { initial: CaseJson; reload: () => void }) {
-  const toast = useToast();
-  const [draft, setDraft] = useState<CaseInput>(() => toInput(initial));
-  const [version, setVersion] = useState(initial.version);
-  const [status, setStatus] = useState<CaseStatus>(initial.status as CaseStatus);
-  const [dirty, setDirty] = useState(false);
+  const record = useCaseRecord({ caseId, currency, initial, reload });
+  const { draft, update, version, status, dirty } = record;
+  const options = (draft.options ?? []) as OptionTemplate[];
   const [invalidCells, setInvalidCells] = useState(0);
   const [optionProblems, setOptionProblems] = useState(0);
   // Fields whose text is not a valid value (components/field-problems.tsx), by label.
-  const markUnsaved = useCallback(() => setDirty(true), []);
-  const { report: reportProblem, problems: wrongFields } = useFieldProblemList(markUnsaved);
-  const [saving, setSaving] = useState(false);
-  const [valuing, setValuing] = useState(false);
-  const [conflict, setConflict] = useState<string | null>(null);
-  const runs = useSWR<{ runs: RunSummary[] }>(`/api/v1/cases/${caseId}/valuations`, getJson, { revalidateOnFocus: false });
-
-  const update = (patch: Partial<CaseInput>) => {
-    setDraft((d) => ({ ...d, ...patch }));
-    setDirty(true);
-  };
+  const { report: reportProblem, problems: wrongFields } = useFieldProblemList(record.markUnsaved);
 
   const { analysis, horizon, built, model, maxSteps } = useDraftModel(draft);
   const valuation = useValuation(model, {});
   const result = model ? valuation.result : null;
+  const notValued = 'problem' in built ? built.problem : valuation.issues ? valuation.issues.map((i) => issueInWords(i.message, options)).join('; ') : null;
 
   useUnsavedWarning(dirty);
 
@@ -128,69 +92,15 @@ function LoadedEditor({
           : draft.name.trim() === ''
             ? 'Give the case a name first.'
             : null;
+  const ignored = [
+    ...wrongFields.map(([field, problem]) => `${field}: ${problem}`),
+    ...(invalidCells > 0 ? [`${invalidCells} cash-flow cell${invalidCells > 1 ? 's are' : ' is'} not a number`] : []),
+    ...(optionProblems > 0 ? [`${optionProblems} field${optionProblems > 1 ? 's' : ''} of the rights ${optionProblems > 1 ? 'are' : 'is'} not valid`] : []),
+  ];
 
-  const save = async (): Promise<boolean> => {
-    if (blocked) {
-      toast(blocked, 'error');
-      return false;
-    }
-    setSaving(true);
-    try {
-      const { case: saved } = await sendJson<{ case: CaseJson }>('PATCH', `/api/v1/cases/${caseId}`, { ...draft, version });
-      setVersion(saved.version);
-      setStatus(saved.status as CaseStatus);
-      setDirty(false);
-      setConflict(null);
-      toast(`Saved as version ${saved.version}.`, 'success');
-      return true;
-    } catch (error) {
-      if (error instanceof ApiError && error.status === 409) setConflict(error.message);
-      else toast(error instanceof Error ? error.message : 'Saving did not work.', 'error');
-      return false;
-    } finally {
-      setSaving(false);
-    }
-  };
-
-  /** Before a submission: unsaved edits are saved first, so the reviewers see what is on screen. */
-  const readyToSubmit = async (): Promise<boolean> => {
-    if (dirty) return save();
-    if (blocked) toast(blocked, 'error');
-    return !blocked;
-  };
-
-  const valueCase = async () => {
-    if (dirty && !(await save())) return;
-    setValuing(true);
-    try {
-      const { run } = await sendJson<{ run: { result: { expandedNpv: number } } }>('POST', `/api/v1/cases/${caseId}/valuations`);
-      toast(`Valuation stored: expanded NPV ${formatMoney(run.result.expandedNpv, currency)}.`, 'success');
-      await runs.mutate();
-    } catch (error) {
-      toast(error instanceof Error ? error.message : 'Valuing did not work.', 'error');
-    } finally {
-      setValuing(false);
-    }
-  };
-
-  const latestRun = runs.data?.runs[0];
-  const busy = valuation.computing;
   // A case in review is frozen for everyone until a reviewer returns it; an approved one until
   // someone starts a revision, so no keystroke quietly turns it into a draft.
   const readOnly = !canEdit || status === 'in_review' || status === 'approved';
-  const [revising, setRevising] = useState(false);
-  const startRevision = async () => {
-    setRevising(true);
-    try {
-      const { case: revised } = await sendJson<{ case: CaseJson }>('POST', `/api/v1/cases/${caseId}/revisions`);
-      toast(`Revision started: version ${revised.version} is a draft. The approved version and its board pack stay as they are.`, 'success');
-      reload();
-    } catch (error) {
-      toast(error instanceof Error ? error.message : 'The revision could not be started.', 'error');
-    } finally {
-      setRevising(false);
-    }
-  };
 
   return (
     <FieldProblems.Provider value={reportProblem}>
@@ -204,61 +114,39 @@ function LoadedEditor({
           status={status}
           version={version}
           dirty={dirty}
-          latestRun={latestRun}
-          runsLoaded={runs.data !== undefined}
+          latestRun={record.latestRun}
+          runsLoaded={record.runsLoaded}
           readOnly={readOnly}
           canEdit={canEdit}
           canDecide={rights.canDecide}
-          saving={saving}
-          onSave={() => void save()}
-          valuing={valuing}
+          saving={record.saving}
+          onSave={() => void record.save(blocked)}
+          valuing={record.valuing}
           canValue={model !== null && blocked === null}
-          onValue={() => void valueCase()}
-          revising={revising}
-          onRevise={() => void startRevision()}
+          onValue={() => void record.valueCase(blocked)}
+          revising={record.revising}
+          onRevise={() => void record.startRevision()}
         />
-        {conflict ? (
+        {record.conflict ? (
           <div
             role="alert"
             className="flex flex-wrap items-center justify-between gap-3 rounded-md border border-brick-500 bg-brick-100 px-4 py-3 text-brick-700"
           >
-            <p>{conflict}</p>
+            <p>{record.conflict}</p>
             <Button variant="secondary" onClick={reload}>
               Load the saved version (drops my changes)
             </Button>
           </div>
         ) : null}
 
-        <div className="grid gap-4 sm:grid-cols-3">
-          <Headline label="Static NPV" value={formatMoney(result?.staticNpv, currency)} busy={busy} />
-          <Headline label="Option premium" value={formatMoney(result?.optionPremium, currency)} busy={busy} />
-          <Headline label="Expanded NPV" value={formatMoney(result?.expandedNpv, currency)} strong busy={busy} />
-        </div>
-        {wrongFields.length > 0 || invalidCells > 0 || optionProblems > 0 ? (
-          <p role="alert" className="-mt-3 rounded-md border border-brick-500 bg-brick-100 px-3 py-2 text-caption text-brick-700">
-            These figures use the last valid values, not what is on screen:{' '}
-            {[
-              ...wrongFields.map(([field, problem]) => `${field}: ${problem}`),
-              ...(invalidCells > 0 ? [`${invalidCells} cash-flow cell${invalidCells > 1 ? 's are' : ' is'} not a number`] : []),
-              ...(optionProblems > 0
-                ? [`${optionProblems} field${optionProblems > 1 ? 's' : ''} of the rights ${optionProblems > 1 ? 'are' : 'is'} not valid`]
-                : []),
-            ].join('; ')}
-            . The case cannot be saved or valued until they are fixed.
-          </p>
-        ) : null}
-        <p className="-mt-3 text-caption text-ink-muted" aria-live="polite">
-          {'problem' in built
-            ? `Not valued: ${built.problem}`
-            : valuation.issues
-              ? `Not valued: ${valuation.issues.map((i) => issueInWords(i.message, (draft.options ?? []) as OptionTemplate[])).join('; ')}`
-              : busy
-                ? 'Recomputing in your browser…'
-                : 'Computed live in your browser from the figures on screen; “Value case” stores a run on the server.'}
-          {result && analysis && Math.abs(result.staticNpv - analysis.npvAtWacc) > 0.05
-            ? ` Static NPV here is the plan without flexibility as the lattice values it: a defer cost or stage payments are discounted at the risk-free rate (the NPV at the WACC is ${formatMoney(analysis.npvAtWacc, currency)}, see Cash flows).`
-            : ''}
-        </p>
+        <LiveFigures
+          result={result}
+          currency={currency}
+          busy={valuation.computing}
+          ignored={ignored}
+          notValued={notValued}
+          npvAtWacc={analysis?.npvAtWacc ?? null}
+        />
 
         <Tabs
           initial={initialTab}
@@ -309,7 +197,7 @@ function LoadedEditor({
               content: (
                 <div className="flex flex-col gap-6">
                   <OptionCards
-                    options={(draft.options ?? []) as OptionTemplate[]}
+                    options={options}
                     horizon={horizon}
                     basis={cardBasis(analysis, horizon, draft.settings.riskFreeRate)}
                     engineProblems={'cards' in built ? built.cards : undefined}
@@ -317,7 +205,7 @@ function LoadedEditor({
                     onChange={(options, problems) => {
                       setOptionProblems(problems);
                       if (options) update({ options });
-                      else setDirty(true);
+                      else record.markUnsaved();
                     }}
                   />
                   <details className="rounded-card border border-line bg-paper-raised p-5">
@@ -336,16 +224,12 @@ function LoadedEditor({
                 <div className="flex flex-col gap-6">
                   {result ? (
                     <ResultsSection result={result} currency={currency} />
-                  ) : 'problem' in built || valuation.issues ? (
+                  ) : notValued ? (
                     <div role="alert" className="rounded-card border border-brick-500 bg-brick-100 px-5 py-4 text-brick-700">
                       <p className="font-medium">The engine cannot value this case as it stands.</p>
-                      <p className="mt-1">
-                        {'problem' in built
-                          ? built.problem
-                          : valuation.issues!.map((i) => issueInWords(i.message, (draft.options ?? []) as OptionTemplate[])).join('; ')}
-                      </p>
+                      <p className="mt-1">{notValued}</p>
                       <p className="mt-2 text-caption">
-                        Change the figure it names (Uncertainty holds the steps; Flexibility the options) and the results appear here at once.
+                        Change the figure it names (Uncertainty holds the steps; Flexibility the rights) and the results appear here at once.
                       </p>
                     </div>
                   ) : (
@@ -386,10 +270,10 @@ function LoadedEditor({
                   caseId={caseId}
                   currency={currency}
                   status={status}
-                  optionNames={((draft.options ?? []) as OptionTemplate[]).map((o, k) => o.id ?? `Right ${k + 1}`)}
+                  optionNames={options.map((o, k) => o.id ?? `Right ${k + 1}`)}
                   rights={rights}
-                  beforeSubmit={readyToSubmit}
-                  onStatus={setStatus}
+                  beforeSubmit={() => record.readyToSubmit(blocked)}
+                  onStatus={record.setStatus}
                   figures={result}
                 />
               ),
