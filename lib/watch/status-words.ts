@@ -1,6 +1,16 @@
-/** A right's standing in words, the same on the case's Watch tab and the portfolio's watch list. */
+/** A right's standing and its alerts in words, the same on the case's Watch tab, the portfolio's watch list and the Alerts page. */
+import type { WatchAlertKind } from '@/db/types';
 import { formatNumber, formatPercent } from '../format';
 import type { RightStatus } from './status';
+
+export type AlertKind = WatchAlertKind;
+
+export const alertKindWords: Record<AlertKind, string> = {
+  in_region: 'Use it now',
+  near: 'Near its boundary',
+  window_opened: 'Window opened',
+  window_closing: 'Window closing',
+};
 
 export const statusWords: Record<RightStatus, string> = {
   in_region: 'Use it now: in its region',

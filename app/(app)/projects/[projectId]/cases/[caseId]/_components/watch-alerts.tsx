@@ -1,12 +1,6 @@
-import { Table, Td, Th, Tr } from '@/components/ui/table';
-import { formatDateTime } from '@/lib/format';
+import { AlertsTable, type AlertRow } from '@/components/alerts-table';
 
-export interface CaseAlert {
-  id: string;
-  kind: 'in_region' | 'near' | 'window_opened' | 'window_closing';
-  message: string;
-  createdAt: string;
-}
+export type CaseAlert = AlertRow;
 
 /** The alerts raised on this case, newest first (the same as on the Alerts page and by e-mail). */
 export function WatchAlerts({ alerts }: { alerts: CaseAlert[] }) {
@@ -20,22 +14,7 @@ export function WatchAlerts({ alerts }: { alerts: CaseAlert[] }) {
           No alert yet: one is raised when a right comes into its region or near its boundary, or its window opens or is about to close.
         </p>
       ) : (
-        <Table caption="Alerts on this case">
-          <thead>
-            <tr>
-              <Th>Raised</Th>
-              <Th>What changed</Th>
-            </tr>
-          </thead>
-          <tbody>
-            {alerts.map((a) => (
-              <Tr key={a.id}>
-                <Td className="whitespace-nowrap">{formatDateTime(a.createdAt)}</Td>
-                <Td>{a.message}</Td>
-              </Tr>
-            ))}
-          </tbody>
-        </Table>
+        <AlertsTable caption="Alerts on this case" alerts={alerts} />
       )}
     </section>
   );
