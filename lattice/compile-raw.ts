@@ -5,6 +5,7 @@
 import type { CompiledModel } from './compiled';
 import { refuse } from './errors';
 import type { ProjectModel } from './schema';
+import { TODAY } from './window';
 
 export function compileRaw(model: ProjectModel): CompiledModel {
   const modesIn = model.modes ?? [{ id: 'operating', scale: 1 }];
@@ -43,7 +44,7 @@ export function compileRaw(model: ProjectModel): CompiledModel {
     switches,
     rights,
     start,
-    staticPlan: { mode: start, enterAt: 0, outlays: [{ at: 0, cost: investment }] },
+    staticPlan: { mode: start, enter: TODAY, outlays: [{ on: TODAY, cost: investment }] },
     staticInvestment: investment,
     upfront: investment,
   };

@@ -23,7 +23,7 @@ import { costAt, negateCost, scaleCost } from './cost';
 import { refuse } from './errors';
 import { MAX_MODES } from './limits';
 import type { Cost, ExerciseWindow, OptionTemplate, ProjectModel } from './schema';
-import { windowStart } from './window';
+import { TODAY, windowStart } from './window';
 
 type Phase = 'waiting' | 'staging' | 'operating' | 'closed';
 
@@ -231,14 +231,14 @@ export function compileTemplates(model: ProjectModel): CompiledModel {
   let staticPlan: CompiledModel['staticPlan'];
   if (deferAt >= 0) {
     const defer = options[deferAt] as Extract<OptionTemplate, { kind: 'defer' }>;
-    const at = windowStart(defer.window);
-    staticPlan = { mode: staticMode, enterAt: at, outlays: [{ at, cost: defer.cost }] };
+    staticPlan = { mode: staticMode, enter: defer.window, outlays: [{ on: defer.window, cost: defer.cost }] };
   } else if (stage) {
-    staticPlan = { mode: staticMode, enterAt: stage.payments.at(-1)!.at, outlays: stage.payments.map((p) => ({ at: p.at, cost: p.amount })) };
+    const on = (at: number): ExerciseWindow => ({ kind: 'european', at });
+    staticPlan = { mode: staticMode, enter: on(stage.payments.at(-1)!.at), outlays: stage.payments.map((p) => ({ on: on(p.at), cost: p.amount })) };
   } else {
-    staticPlan = { mode: staticMode, enterAt: 0, outlays: [{ at: 0, cost: model.investment ?? 0 }] };
+    staticPlan = { mode: staticMode, enter: TODAY, outlays: [{ on: TODAY, cost: model.investment ?? 0 }] };
   }
-  const staticInvestment = staticPlan.outlays.reduce((sum, o) => sum + costAt(o.cost, o.at) * discount(o.at), 0);
+  const staticInvestment = staticPlan.outlays.reduce((sum, o) => sum + costAt(o.cost, windowStart(o.on)) * discount(windowStart(o.on)), 0);
   const upfront = deferAt >= 0 || stage ? 0 : (model.investment ?? 0);
   return { modes, switches, rights, start, staticPlan, staticInvestment, upfront };
 }

@@ -4,7 +4,7 @@
  * results are reported for.
  */
 import type { Cost, ExerciseWindow, OptionTemplate } from './schema';
-import type { Money, Years } from './units';
+import type { Money } from './units';
 
 export interface CompiledMode {
   id: string;
@@ -41,12 +41,13 @@ export interface CompiledModel {
   rights: Right[];
   start: number;
   /**
-   * The static (no-flexibility) plan: committed today to run in `mode` from `enterAt` on and to
-   * pay `outlays`. Usually enterAt = 0 and one outlay at 0 (the investment); with a defer
-   * window opening later it is "build at the first date the window allows", and with staged
-   * payments "pay every stage and operate after the last".
+   * The static (no-flexibility) plan: committed today to run in `mode` from `enter` on and to
+   * pay `outlays`, each on the first step its window opens (lattice/window.ts, so the plan is one
+   * the lattice can follow). Usually entry today and one outlay today (the investment); with a
+   * defer window opening later it is "build at the first date the window allows", and with
+   * staged payments "pay every stage and operate after the last".
    */
-  staticPlan: { mode: number; enterAt: Years; outlays: { at: Years; cost: Cost }[] };
+  staticPlan: { mode: number; enter: ExerciseWindow; outlays: { on: ExerciseWindow; cost: Cost }[] };
   /** The static plan's outlays in present value at t = 0, for variants that build now. */
   staticInvestment: Money;
   /** The outlay charged against the lattice value to get the expanded NPV. */

@@ -11,6 +11,7 @@ export { projectModelSchema, optionTemplateSchema, costSchema, windowSchema, tre
 export type { ProjectModel, OptionTemplate, Cost, ExerciseWindow, TreeKind, ModeInput, SwitchInput } from './schema';
 export type * from './result';
 export { ENGINE_VERSION } from './version';
+export { openSteps, type Snap } from './window';
 export { readStoredResult } from './stored-result';
 export { readStoredModel, readStoredTemplates } from './stored-model';
 export { MAX_STEPS, MAX_MODES, NODE_BUDGET, MAX_DECISION_CELLS, MAX_REQUEST_CELLS } from './limits';

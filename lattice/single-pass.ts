@@ -8,7 +8,8 @@ import { exerciseProfiles } from './forward';
 import { buildPlan, type LatticePlan } from './plan';
 import type { BoundaryPoint, NodeGrid, RightResult } from './result';
 import { rollback } from './rollback';
-import type { ProjectModel } from './schema';
+import type { ExerciseWindow, ProjectModel } from './schema';
+import { firstOpenStep } from './window';
 
 export interface PassResult {
   plan: LatticePlan;
@@ -36,14 +37,14 @@ export interface PassOptions {
  * project's value after the payouts before i) plus the mode's flows from i on.
  */
 function staticNpvOf(plan: LatticePlan, compiled: CompiledModel, riskFreeRate: number): number {
-  const { mode, enterAt, outlays } = compiled.staticPlan;
-  const stepOf = (t: number) => Math.min(plan.steps, Math.max(0, Math.round(t / plan.dt)));
-  const enter = stepOf(enterAt);
+  const { mode, outlays } = compiled.staticPlan;
+  const stepOf = (on: ExerciseWindow) => firstOpenStep(on, plan.dt, plan.steps);
+  const enter = stepOf(compiled.staticPlan.enter);
   let retained = 1;
   for (let k = 0; k < enter; k++) retained *= plan.kept[k]!;
   const timeOf = (i: number) => i * plan.dt;
   const value = plan.scale[mode]! * plan.lowest[0]! * retained + plan.fixed[mode * (plan.steps + 1) + enter]! * Math.exp(-riskFreeRate * timeOf(enter));
-  const outlay = outlays.reduce((sum, o) => sum + costAt(o.cost, timeOf(stepOf(o.at))) * Math.exp(-riskFreeRate * timeOf(stepOf(o.at))), 0);
+  const outlay = outlays.reduce((sum, o) => sum + costAt(o.cost, timeOf(stepOf(o.on))) * Math.exp(-riskFreeRate * timeOf(stepOf(o.on))), 0);
   return value - outlay;
 }
 

@@ -8,6 +8,7 @@ import { templateIds } from './compile-templates';
 import { scaleCost } from './cost';
 import type { OptionTemplate, ProjectModel } from './schema';
 import type { Years } from './units';
+import { firstOpenStep, snapToStep } from './window';
 
 /**
  * The model with only the rights whose index passes `keep` (ids are kept), and whether it
@@ -25,7 +26,7 @@ export function withRights(model: ProjectModel, compiled: CompiledModel, keep: (
     const outlayRemoved = model.options.some(carriesOutlay) && !kept.some(carriesOutlay);
     if (!outlayRemoved) return { model: { ...model, options: kept }, onStaticPlan: false };
     const dt = model.horizon / model.steps;
-    const firstUse = (Math.round(compiled.staticPlan.enterAt / dt) + 1) * dt;
+    const firstUse = (firstOpenStep(compiled.staticPlan.enter, dt, model.steps) + 1) * dt;
     const options = firstUse > model.horizon ? [] : kept.flatMap((o) => clipped(o, firstUse, dt, model.horizon));
     return { model: { ...model, options, investment: 0 }, onStaticPlan: true };
   }
@@ -34,13 +35,16 @@ export function withRights(model: ProjectModel, compiled: CompiledModel, keep: (
 
 /** A right whose window opens no earlier than step time `from` (none when it closes before); dates snap to steps of `dt`. */
 function clipped(option: OptionTemplate, from: Years, dt: Years, horizon: Years): OptionTemplate[] {
-  const onOrAfter = (t: Years) => Math.round(t / dt) >= Math.round(from / dt);
+  const steps = Math.round(horizon / dt);
+  const first = snapToStep(from, dt, steps);
+  const onOrAfter = (t: Years) => snapToStep(t, dt, steps) >= first;
   if (option.kind === 'defer' || option.kind === 'stage') return [option];
   if (option.kind === 'mothball' && !option.window) return [{ ...option, window: { kind: 'american', from, to: horizon } }];
   const window = option.window!;
   switch (window.kind) {
     case 'american':
-      return !onOrAfter(window.to) ? [] : [{ ...option, window: { ...window, from: onOrAfter(window.from) ? window.from : from } }];
+      // An American window's last step is the last at or before its end (lattice/window.ts).
+      return snapToStep(window.to, dt, steps, 'earlier') < first ? [] : [{ ...option, window: { ...window, from: Math.max(window.from, from) } }];
     case 'bermudan': {
       const dates = window.dates.filter(onOrAfter);
       return dates.length === 0 ? [] : [{ ...option, window: { ...window, dates } }];

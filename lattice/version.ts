@@ -3,6 +3,8 @@
  * stored with every run. 3.0.0: the result lists its rights under `rights`, not `switches`
  * (lattice/stored-result.ts reads older runs). 4.0.0: a right names its kind under `kind`, and
  * the right to pause and restart is `mothball`, not `switch` (lattice/stored-model.ts reads
- * older models).
+ * older models). 4.1.0: an American window keeps the steps inside it (its start snaps up, its
+ * end down; lattice/window.ts), so a step count that splits a window's dates values a little less
+ * than before, never a date the window does not allow.
  */
-export const ENGINE_VERSION = 'leeway-lattice 4.0.0';
+export const ENGINE_VERSION = 'leeway-lattice 4.1.0';

@@ -23,6 +23,7 @@
  * Paths come in antithetic pairs (a draw and its negative); standard errors are computed over
  * the pairs' means. Seeded: the same model, paths and seed give the same answer.
  */
+import { openSteps } from '@/lattice';
 import type { Cost, ProjectModel } from '@/lattice/schema';
 import { normalDraws } from '../volatility/normal-draws';
 import { readStates } from './modes';
@@ -180,13 +181,9 @@ export function leastSquaresMonteCarlo(model: ProjectModel, spec: CrossCheckSpec
     return pv;
   });
   // A move pays slope·V + constant on date k.
-  const snap = (t: number) => Math.min(N, Math.max(0, Math.round(t / dt)));
   const moveData = moves.map((m) => {
-    const open = new Uint8Array(N + 1);
-    const w = m.window;
-    if (w.kind === 'american') for (let k = snap(w.from); k <= snap(w.to); k++) open[k] = 1;
-    else if (w.kind === 'bermudan') for (const d of w.dates) open[snap(d)] = 1;
-    else open[snap(w.at)] = 1;
+    // The lattice's dates: the same model decides on the same dates in both methods.
+    const open = openSteps(m.window, dt, N, 'window', []);
     const constant = new Float64Array(N + 1);
     for (let k = 0; k <= N; k++) constant[k] = ownPv[m.to]![k]! - ownPv[m.from]![k]! - amountAt(m.cost, k * dt);
     return { ...m, open, slope: states[m.to]!.scale - states[m.from]!.scale, constant };
