@@ -12,6 +12,7 @@ import { formatMoney, formatPercent } from '@/lib/format';
 import { premiumSplitText } from '@/lib/premium-split';
 import { optionKindLabels, type OptionKind } from '@/lib/option-form';
 import { palette } from '@/lib/palette';
+import { describeSnaps } from '@/lib/snap-words';
 
 /**
  * Probability of first exercise per year (summed over the steps of each year), as small bars;
@@ -144,11 +145,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
               </div>
             ))}
           </dl>
-          {result.snaps.length > 0 ? (
-            <p className="mt-3 text-caption text-ink-soft">
-              Dates moved to the nearest step: {result.snaps.map((s) => `${s.field} ${s.requested} → ${s.used.toFixed(3)}`).join('; ')}.
-            </p>
-          ) : null}
+          {result.snaps.length > 0 ? <p className="mt-3 text-caption text-ink-soft">{describeSnaps(result.snaps)}</p> : null}
         </Panel>
       </div>
       {result.warnings.length > 0 ? (
