@@ -44,7 +44,10 @@ function conventions(data: ValidationReportData): string[] {
       ? `Payouts: the cash of each of the ${periods} years is earned during its year, as a constant yield that leaves exactly the year's remaining share of V at its end. A decision on any date sees the value after the cash already earned, and the way the project is run during a step receives that step's cash.`
       : 'Payouts: none; V grows at the risk-free rate under the risk-neutral measure.',
     `Horizon: ${model.horizon} years, the schedule's last year; nothing is worth anything after it. The static plan's outlay is the present value of the capital expenditure${model.investment === undefined ? ', carried by the defer or stage right' : ''}.`,
-    describeSnaps(result.snaps) ?? "Every decision date falls on the lattice's steps.",
+    describeSnaps(
+      result.snaps,
+      result.rights.map((r) => r.id),
+    ) ?? "Every decision date falls on the lattice's steps.",
     'Rights are used at most once (a reversible switch may go back and forth); scale effects add; salvage follows the scale sold unless a fixed amount is stated; a stage payment skipped ends the project. Exercise probabilities are risk-neutral, not forecasts.',
   ];
 }

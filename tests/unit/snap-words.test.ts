@@ -12,18 +12,30 @@ const sale = (steps: number): ProjectModel => ({
   riskFreeRate: 0.04,
   horizon: 8,
   steps,
-  options: [{ kind: 'abandon', salvage: 90, window: { kind: 'american', from: 1, to: 7 } }],
+  options: [{ kind: 'abandon', id: 'Sell the plant', salvage: 90, window: { kind: 'american', from: 1, to: 7 } }],
 });
 
 describe('describeSnaps', () => {
-  it('names each moved date with where it went, and says how windows move', () => {
-    const words = describeSnaps(valueProject(sale(100), { extras: false }).snaps);
+  it('names each moved date by its right and says where it went, and how windows move', () => {
+    const r = valueProject(sale(100), { extras: false });
+    const words = describeSnaps(
+      r.snaps,
+      r.rights.map((x) => x.id),
+    );
     expect(words).toContain('a window to the steps inside it');
-    expect(words).toContain('options[0].window.from from 1.000 to 1.040');
-    expect(words).toContain('options[0].window.to from 7.000 to 6.960');
+    expect(words).toContain('“Sell the plant” window opens: year 1.000 → 1.040');
+    expect(words).toContain('“Sell the plant” window closes: year 7.000 → 6.960');
+  });
+
+  it('names Bermudan dates, stage payments and payouts by their place', () => {
+    const snap = (field: string) => describeSnaps([{ field, requested: 1, used: 1.04 }], ['Build', 'Stages']);
+    expect(snap('options[0].window.dates[2]')).toContain('“Build” date 3: year 1.000 → 1.040');
+    expect(snap('options[1].payments[0].window.at')).toContain('“Stages” payment 1:');
+    expect(snap('underlying.payouts[4].at')).toContain('payout 5:');
+    expect(snap('switches[0].window.from')).toContain('switches[0].window.from:');
   });
 
   it('says nothing when every date is on a step', () => {
-    expect(describeSnaps(valueProject(sale(96), { extras: false }).snaps)).toBeNull();
+    expect(describeSnaps(valueProject(sale(96), { extras: false }).snaps, [])).toBeNull();
   });
 });

@@ -145,7 +145,14 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
               </div>
             ))}
           </dl>
-          {result.snaps.length > 0 ? <p className="mt-3 text-caption text-ink-soft">{describeSnaps(result.snaps)}</p> : null}
+          {result.snaps.length > 0 ? (
+            <p className="mt-3 text-caption text-ink-soft">
+              {describeSnaps(
+                result.snaps,
+                result.rights.map((r) => r.id),
+              )}
+            </p>
+          ) : null}
         </Panel>
       </div>
       {result.warnings.length > 0 ? (
