@@ -293,21 +293,17 @@ export async function listComments(db: Database, { orgId, caseId }: { orgId: str
 
 /**
  * What a reviewer compares before deciding: the snapshot in review, the version last returned,
- * and an earlier approved snapshot with exactly the same inputs (compared in PostgreSQL, jsonb
- * equality, so no earlier inputs travel to the app). Null when nothing is in review.
+ * and the inputs of every approved snapshot of the case, newest first (the caller reads them in
+ * today's shape to find the same inputs approved before: jsonb equality would miss a version
+ * stored by an older engine). Null when nothing is in review.
  */
 export async function findSubmissionContext(db: Database, { orgId, caseId }: { orgId: string; caseId: string }) {
   const ofCase = db.selectFrom('case_snapshot').where('organization_id', '=', orgId).where('case_id', '=', caseId);
   const current = await ofCase.select(['id', 'inputs', 'result', 'currency']).where('status', '=', 'in_review').executeTakeFirst();
   if (!current) return null;
-  const [returned, sameApproved] = await Promise.all([
+  const [returned, approved] = await Promise.all([
     ofCase.select(['case_version', 'inputs', 'result', 'decided_at']).where('status', '=', 'returned').orderBy('submitted_at', 'desc').executeTakeFirst(),
-    ofCase
-      .select(['case_version', 'decided_at'])
-      .where('status', '=', 'approved')
-      .where(sql<boolean>`inputs = (select s.inputs from case_snapshot s where s.id = ${current.id})`)
-      .orderBy('decided_at', 'desc')
-      .executeTakeFirst(),
+    ofCase.select(['case_version', 'inputs', 'decided_at']).where('status', '=', 'approved').orderBy('decided_at', 'desc').execute(),
   ]);
-  return { current, returned, sameApproved };
+  return { current, returned, approved };
 }

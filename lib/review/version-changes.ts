@@ -7,7 +7,7 @@ import 'server-only';
 import { db } from '@/db';
 import { findSubmissionContext } from '@/db/queries/reviews';
 import { comparisonRows, type ComparisonRow } from '../comparison-rows';
-import { readStoredCaseInput } from '../validations/case';
+import { readStoredCaseInput, sameStoredInputs } from '../validations/case';
 import { readStoredResult } from '@/lattice';
 
 export interface VersionChanges {
@@ -20,7 +20,8 @@ export interface VersionChanges {
 export async function versionChanges(orgId: string, caseId: string): Promise<VersionChanges | null> {
   const found = await findSubmissionContext(db, { orgId, caseId });
   if (!found) return null;
-  const { current, returned, sameApproved: same } = found;
+  const { current, returned, approved } = found;
+  const same = approved.find((a) => sameStoredInputs(a.inputs, current.inputs));
   const currency = current.currency ?? '';
   return {
     sinceReturned: returned

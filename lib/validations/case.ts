@@ -1,4 +1,5 @@
 /** A case's inputs: its cash-flow schedule, valuation settings and option templates. */
+import canonicalize from 'canonicalize';
 import { z } from 'zod';
 import { MAX_STEPS, optionTemplateSchema, readStoredTemplates, treeKindSchema } from '@/lattice';
 import { cashFlowScheduleSchema } from '../cash-flows';
@@ -42,4 +43,14 @@ export type CaseInput = z.input<typeof caseInputSchema>;
 export function readStoredCaseInput(stored: unknown): CaseInput {
   const inputs = stored as CaseInput;
   return { ...inputs, options: readStoredTemplates(inputs.options) };
+}
+
+/**
+ * Whether two snapshots froze the same inputs, whichever engine version stored them: both are
+ * read in today's shape first, so a version approved before leeway-lattice 4.0.0 (rights under
+ * `type`, `switch`) still counts as the same inputs as an unchanged resubmission. Compared in
+ * canonical JSON (RFC 8785), so key order does not matter, as in PostgreSQL's jsonb.
+ */
+export function sameStoredInputs(a: unknown, b: unknown): boolean {
+  return canonicalize(readStoredCaseInput(a)) === canonicalize(readStoredCaseInput(b));
 }

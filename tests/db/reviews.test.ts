@@ -1,16 +1,21 @@
 /**
  * The review workflow on a real PostgreSQL: transitions through the queries the routes use, two
  * reviewers approving at once (exactly one wins), a snapshot that stays byte-identical when the
- * case is edited afterwards, and a case in review that cannot be saved.
+ * case is edited afterwards, a case in review that cannot be saved, and a resubmission that
+ * recognises its inputs in an approval stored by an older engine.
  */
 import { checkTransition } from '@/lib/review/transitions';
 import { sql } from 'kysely';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { db } from '@/db';
 import { createCase, saveCase, startRevision } from '@/db/queries/cases';
 import { createProject } from '@/db/queries/projects';
 import { decideCase, submitCase } from '@/db/queries/reviews';
+import { versionChanges } from '@/lib/review/version-changes';
 import { minimalCase, seededDemo } from './support/demo';
+
+// version-changes.ts is server-only; here it runs in plain Node against the test database.
+vi.mock('server-only', () => ({}));
 
 let kestrel = '';
 let harrow = '';
@@ -25,7 +30,7 @@ async function freshCase() {
   return (await createCase(db, { orgId: kestrel, projectId: project.id, createdBy: analyst, content }))!;
 }
 
-const submit = (caseId: string, caseVersion = 1) =>
+const submit = (caseId: string, caseVersion = 1, inputs: object = content) =>
   db.transaction().execute((trx) =>
     submitCase(trx, {
       orgId: kestrel,
@@ -33,7 +38,7 @@ const submit = (caseId: string, caseVersion = 1) =>
       allowed: (status) => checkTransition('analyst', 'submit', status),
       userId: analyst,
       caseVersion,
-      frozen,
+      frozen: { ...frozen, inputs },
       recommendation: 'Proceed (test).',
     }),
   );
@@ -136,5 +141,28 @@ describe('review workflow', () => {
     const edited = await saveCase(db, { orgId: kestrel, caseId: c.id, expectedVersion: 2, content: change });
     expect(edited).toMatchObject({ ok: true, row: { status: 'draft', version: 3 } });
     expect(await bytes()).toBe(before);
+  });
+
+  it('recognises inputs approved before in engine 3.x’s shape, and only the same inputs', async () => {
+    const window = { kind: 'american', from: 0, to: 4 };
+    // As engine 3.x stored them (`type`, `switch`), and as migration 0016 writes the draft (key order differs too).
+    const rights3x = [
+      { type: 'expand', id: 'Phase 2', factor: 0.5, cost: 30, window },
+      { type: 'switch', toScale: 0, cost: 1, backCost: 2, window },
+    ];
+    const rightsToday = [
+      { kind: 'expand', id: 'Phase 2', factor: 0.5, cost: 30, window },
+      { window, backCost: 2, cost: 1, toScale: 0, kind: 'mothball', id: 'switch-1' },
+    ];
+    const resubmit = async (options: object[]) => {
+      const c = await freshCase();
+      expect((await submit(c.id, 1, { ...content, options: rights3x })).ok).toBe(true);
+      expect(await approve(c.id)).toMatchObject({ ok: true });
+      await startRevision(db, { orgId: kestrel, caseId: c.id });
+      expect((await submit(c.id, 2, { ...content, options })).ok).toBe(true);
+      return (await versionChanges(kestrel, c.id))!.sameAsApproved;
+    };
+    expect(await resubmit(rightsToday)).toMatchObject({ caseVersion: 1 });
+    expect(await resubmit([rightsToday[0]!, { ...rightsToday[1]!, backCost: 2.5 }])).toBeNull();
   });
 });
