@@ -81,11 +81,18 @@ describe('the analyst workspace', () => {
     await page.getByRole('button', { name: 'Expand', exact: true }).click();
     await page.getByRole('button', { name: 'Abandon', exact: true }).click();
     await expect.poll(() => page.getByLabel('Name of the right').count()).toBe(2);
+    // The abandonment is left unnamed: the engine names it by its kind (abandon-1).
+    await page.getByLabel('Name of the right').nth(1).click();
+    await page.keyboard.press('Control+A');
+    await page.keyboard.press('Backspace');
 
     await page.getByRole('button', { name: 'Save' }).click();
     await expect.poll(() => page.getByText('Saved as version 2.').isVisible()).toBe(true);
     const saved = await caseJson(page, caseId);
-    expect(saved.options.map((o: { kind: string }) => o.kind)).toEqual(['expand', 'abandon']);
+    expect(saved.options.map((o: { kind: string; id?: string }) => [o.kind, o.id])).toEqual([
+      ['expand', 'Expand'],
+      ['abandon', undefined],
+    ]);
     const expected = valueProject(caseToModel(saved).model);
     await expect.poll(() => headline(page, 'Expanded NPV').innerText(), { timeout: 20_000 }).toBe(formatMoney(expected.expandedNpv, 'EUR'));
     expect(expected.optionPremium).toBeGreaterThan(0);
@@ -100,6 +107,13 @@ describe('the analyst workspace', () => {
           .isVisible(),
       )
       .toBe(true);
+    await expect.poll(() => page.getByRole('cell', { name: /^abandon-1/ }).isVisible()).toBe(true);
+
+    // The discussion names each right as the results do, an unnamed one by the engine's id.
+    await page.getByRole('tab', { name: 'Review' }).click();
+    await expect
+      .poll(() => page.getByLabel('About').locator('option').allTextContents(), { timeout: 20_000 })
+      .toEqual(expect.arrayContaining(['Right: Expand', 'Right: abandon-1']));
 
     await page.getByRole('tab', { name: 'Lattice', exact: true }).click();
     const node = page.getByRole('button', { name: /^Step 1, node 1:/ });

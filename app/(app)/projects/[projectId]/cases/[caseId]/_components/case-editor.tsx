@@ -6,7 +6,7 @@ import { FieldProblems, useFieldProblemList } from '@/components/field-problems'
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { Button } from '@/components/ui/button';
 import { Tabs } from '@/components/ui/tabs';
-import type { OptionTemplate } from '@/lattice';
+import { rightIds, type OptionTemplate } from '@/lattice';
 import { getJson } from '@/lib/api-client';
 import type { CaseJson } from '@/lib/case-json';
 import { useValuation } from '@/lib/engine/use-engine';
@@ -270,7 +270,7 @@ function LoadedEditor({
                   caseId={caseId}
                   currency={currency}
                   status={status}
-                  optionNames={options.map((o, k) => o.id ?? `Right ${k + 1}`)}
+                  rightIds={rightIds(options)}
                   rights={rights}
                   beforeSubmit={() => record.readyToSubmit(blocked)}
                   onStatus={record.setStatus}

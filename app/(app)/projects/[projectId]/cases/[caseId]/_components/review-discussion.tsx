@@ -25,15 +25,16 @@ const baseSections: [string, string][] = [
 ];
 
 /** The reviewers' and analyst's discussion of a case, each comment about the whole case, a tab, or one right. */
-export function ReviewDiscussion({ caseId, optionNames, canComment }: { caseId: string; optionNames: string[]; canComment: boolean }) {
+export function ReviewDiscussion({ caseId, rightIds, canComment }: { caseId: string; rightIds: string[]; canComment: boolean }) {
   const toast = useToast();
   const comments = useSWR<{ comments: Comment[] }>(`/api/v1/cases/${caseId}/comments`, getJson);
   const [section, setSection] = useState('general');
   const [body, setBody] = useState('');
   const [busy, setBusy] = useState(false);
-  // Section keys are the API's (`option:<name>` names a right); the words are the screen's.
-  const sections: [string, string][] = [...baseSections, ...optionNames.map((n): [string, string] => [`option:${n}`, `Right: ${n}`])];
-  const sectionLabel = (s: string) => sections.find(([k]) => k === s)?.[1] ?? s;
+  // Section keys are the API's (`option:<id>` names a right by the id the results use); the words
+  // are the screen's. A comment on a right since removed or renamed still says which right it was.
+  const sections: [string, string][] = [...baseSections, ...rightIds.map((n): [string, string] => [`option:${n}`, `Right: ${n}`])];
+  const sectionLabel = (s: string) => sections.find(([k]) => k === s)?.[1] ?? s.replace(/^option:/, 'Right: ');
 
   const comment = async () => {
     setBusy(true);

@@ -32,7 +32,7 @@ interface Props {
   caseId: string;
   currency: string;
   status: CaseStatus;
-  optionNames: string[];
+  rightIds: string[];
   rights: ReviewRights;
   /** Saves pending edits first; false when saving did not work. */
   beforeSubmit: () => Promise<boolean>;
@@ -46,7 +46,7 @@ interface Props {
  * and the actions the signed-in role may take (submit; approve or return with a reason), plus
  * the board pack of the latest approved snapshot.
  */
-export function ReviewPanel({ caseId, currency, status, optionNames, rights, beforeSubmit, onStatus, figures }: Props) {
+export function ReviewPanel({ caseId, currency, status, rightIds, rights, beforeSubmit, onStatus, figures }: Props) {
   const toast = useToast();
   const history = useSWR<{ status: CaseStatus; snapshots: Snapshot[]; changes: VersionChangesJson | null }>(`/api/v1/cases/${caseId}/snapshots`, getJson);
   const [busy, setBusy] = useState<null | ReviewAction>(null);
@@ -169,7 +169,7 @@ export function ReviewPanel({ caseId, currency, status, optionNames, rights, bef
           ) : null}
         </section>
       </div>
-      <ReviewDiscussion caseId={caseId} optionNames={optionNames} canComment={rights.canComment} />
+      <ReviewDiscussion caseId={caseId} rightIds={rightIds} canComment={rights.canComment} />
       <ReviewHistory snapshots={snapshots} currency={currency} />
       <SubmitDialog
         open={submitting}
