@@ -9,7 +9,7 @@
  * side: for those the side follows the right's kind (rights that add scale or start the project
  * are used when the value is high), as it did then.
  */
-import type { BoundaryPoint, RightResult } from '@/lattice';
+import type { BoundaryPoint, OptionTemplate, RightResult } from '@/lattice';
 import { formatMoney } from './format';
 
 type Side = 'above' | 'below' | 'between';
@@ -27,6 +27,15 @@ export interface DecisionRule {
 }
 
 const usedWhenHigh = new Set(['expand', 'defer', 'stage']);
+/** Every kind of right has its verb: a kind added to the engine without one does not compile. */
+const verbs: Record<OptionTemplate['kind'], string> = {
+  expand: 'Expand',
+  contract: 'Contract',
+  abandon: 'Abandon',
+  defer: 'Invest',
+  stage: 'Pay the stage',
+  mothball: 'Mothball',
+};
 const years = (t: number) => (Math.abs(t - Math.round(t)) < 1e-9 ? String(Math.round(t)) : t.toFixed(1));
 
 /** The engine's side and critical value, or the engine 1.x reading of the same point. */
@@ -38,7 +47,7 @@ function located(point: BoundaryPoint, kind: string): { side: Side | 'anywhere';
 
 export function decisionRule(s: Pick<RightResult, 'id' | 'kind' | 'boundary' | 'exerciseProbability'>, currency?: string): DecisionRule {
   const read = s.boundary.map((b) => ({ t: b.t, ...located(b, s.kind) }));
-  const verb = { expand: 'Expand', contract: 'Contract', abandon: 'Abandon', defer: 'Invest', stage: 'Pay the stage', switch: 'Switch' }[s.kind] ?? 'Exercise';
+  const verb = verbs[s.kind as OptionTemplate['kind']] ?? 'Exercise';
   const sides = read.filter((p) => p.side !== 'anywhere' && p.critical !== null);
   const side: Side = (sides[0]?.side as Side | undefined) ?? (usedWhenHigh.has(s.kind) ? 'above' : 'below');
   const points = sides.filter((p) => p.side === side).map((p) => ({ t: p.t, threshold: p.critical! }));

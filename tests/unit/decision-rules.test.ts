@@ -1,6 +1,6 @@
 /** Decision rules in words, from exercise boundaries (wording: common practice, no source). */
 import { describe, expect, it } from 'vitest';
-import type { BoundaryPoint } from '@/lattice';
+import { readStoredResult, type BoundaryPoint } from '@/lattice';
 import { decisionRule } from '@/lib/decision-rules';
 
 const above = (t: number, critical: number): BoundaryPoint => ({ t, critical, side: 'above', low: critical, high: null });
@@ -46,6 +46,16 @@ describe('decision rules', () => {
     expect(decisionRule({ id: 'Phase 2', kind: 'expand', exerciseProbability: 0.2, boundary: stored }).text).toBe(
       'Expand (Phase 2) in year 2 when the project is worth more than 240.0.',
     );
+  });
+
+  it('words a mothball right with its own verb, as stored by engine 3.x too', () => {
+    // Engine 4.0.0 renamed the kind `switch` to `mothball`; the verb map kept the old key, so the
+    // demo line's rule read "Exercise (Mothball) …".
+    const rule = (stored: unknown) => decisionRule(readStoredResult(stored).rights[0]!).text;
+    const right = { id: 'Pause the line', exerciseProbability: 0.3, boundary: [below(1, 4.1), below(5, 0.1)] };
+    const expected = 'Mothball (Pause the line) between years 1 and 5 when the project is worth less than 4.1 (year 1) to 0.1 (year 5).';
+    expect(rule({ rights: [{ ...right, kind: 'mothball' }] })).toBe(expected);
+    expect(rule({ switches: [{ ...right, kind: 'switch' }] })).toBe(expected);
   });
 
   it('says when a right is never used', () => {
