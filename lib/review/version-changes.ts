@@ -7,7 +7,7 @@ import 'server-only';
 import { db } from '@/db';
 import { findSubmissionContext } from '@/db/queries/reviews';
 import { comparisonRows, type ComparisonRow } from '../comparison-rows';
-import { readStoredCaseInput, sameStoredInputs } from '../validations/case';
+import { readStoredCaseInput, storedInputsKey } from '../validations/case';
 import { readStoredResult } from '@/lattice';
 
 export interface VersionChanges {
@@ -21,7 +21,8 @@ export async function versionChanges(orgId: string, caseId: string): Promise<Ver
   const found = await findSubmissionContext(db, { orgId, caseId });
   if (!found) return null;
   const { current, returned, approved } = found;
-  const same = approved.find((a) => sameStoredInputs(a.inputs, current.inputs));
+  const currentKey = storedInputsKey(current.inputs);
+  const same = approved.find((a) => storedInputsKey(a.inputs) === currentKey);
   const currency = current.currency ?? '';
   return {
     sinceReturned: returned

@@ -46,11 +46,11 @@ export function readStoredCaseInput(stored: unknown): CaseInput {
 }
 
 /**
- * Whether two snapshots froze the same inputs, whichever engine version stored them: both are
- * read in today's shape first, so a version approved before leeway-lattice 4.0.0 (rights under
- * `type`, `switch`) still counts as the same inputs as an unchanged resubmission. Compared in
- * canonical JSON (RFC 8785), so key order does not matter, as in PostgreSQL's jsonb.
+ * A snapshot's frozen inputs as one text, equal for equal inputs whichever engine version stored
+ * them: read in today's shape first, so a version approved before leeway-lattice 4.0.0 (rights
+ * under `type`, `switch`) matches an unchanged resubmission. Canonical JSON (RFC 8785), so key
+ * order does not matter, as in PostgreSQL's jsonb.
  */
-export function sameStoredInputs(a: unknown, b: unknown): boolean {
-  return canonicalize(readStoredCaseInput(a)) === canonicalize(readStoredCaseInput(b));
+export function storedInputsKey(stored: unknown): string {
+  return canonicalize(readStoredCaseInput(stored)) ?? '';
 }
