@@ -40,6 +40,12 @@ export interface RightResult {
   /** Exercise region per step where it is used, from the mode where the right is first available. */
   boundary: BoundaryPoint[];
   /**
+   * The decisions the first use leads to, in order, each from the mode the previous one enters,
+   * with its own boundary: a stage right's later payments, a mothball right's restart. Absent
+   * when there are none (and in runs before engine 4.2.0).
+   */
+  followUps?: SwitchPath[];
+  /**
    * Every compiled path of the right (from mode → to mode) with its own boundary; only when asked
    * for (`ValueOptions.paths`): a right usable from several modes repeats its boundary per mode,
    * which was two thirds of a 500-step answer while nothing but the primary one is read.

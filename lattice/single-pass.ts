@@ -48,6 +48,25 @@ function staticNpvOf(plan: LatticePlan, compiled: CompiledModel, riskFreeRate: n
   return value - outlay;
 }
 
+/**
+ * The switches a right's first use leads to, in order: from the mode its primary switch enters,
+ * the right's own switch out of it, and so on until none is left or a move returns to a mode
+ * already passed (a stage right's later payments; a mothball right's restart).
+ */
+function followUpsOf(compiled: CompiledModel, own: number[], primary: number | undefined): number[] {
+  if (primary === undefined) return [];
+  const passed = new Set([compiled.switches[primary]!.from]);
+  const chain: number[] = [];
+  for (let k = primary; !passed.has(compiled.switches[k]!.to);) {
+    passed.add(compiled.switches[k]!.to);
+    const next = own.find((n) => compiled.switches[n]!.from === compiled.switches[k]!.to);
+    if (next === undefined) break;
+    chain.push(next);
+    k = next;
+  }
+  return chain;
+}
+
 export function singlePass(model: ProjectModel, compiled: CompiledModel, options: PassOptions = {}): PassResult {
   const plan = buildPlan(model, compiled);
   const width = plan.steps + 1;
@@ -88,6 +107,14 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
         if (probability > 1e-15) timing.push({ t: i * plan.dt, probability });
       });
       const boundary = primary === undefined ? [] : boundaryOf(primary);
+      // A follow-up is reachable only after the decision before it was first possible (a line
+      // cannot restart before it could be paused), so its boundary starts after that step.
+      let after = boundary[0]?.t ?? Infinity;
+      const followUps = followUpsOf(compiled, own, primary).map((k) => {
+        const reachable = boundaryOf(k).filter((b) => b.t > after + 1e-12);
+        after = reachable[0]?.t ?? Infinity;
+        return { from: compiled.modes[compiled.switches[k]!.from]!.id, to: compiled.modes[compiled.switches[k]!.to]!.id, boundary: reachable };
+      });
       const paths = options.paths
         ? own.map((k) => ({
             from: compiled.modes[compiled.switches[k]!.from]!.id,
@@ -103,6 +130,7 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
         exerciseProbability: profile.probability,
         exerciseTiming: timing,
         boundary,
+        ...(followUps.length > 0 ? { followUps } : {}),
         ...(paths ? { paths } : {}),
       });
     });

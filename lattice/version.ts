@@ -5,6 +5,8 @@
  * the right to pause and restart is `mothball`, not `switch` (lattice/stored-model.ts reads
  * older models). 4.1.0: an American window keeps the steps inside it (its start snaps up, its
  * end down; lattice/window.ts), so a step count that splits a window's dates values a little less
- * than before, never a date the window does not allow.
+ * than before, never a date the window does not allow. 4.2.0: a right's result lists the
+ * decisions its first use leads to (`followUps`: a stage right's later payments, a mothball
+ * right's restart) with their boundaries; no figure changes.
  */
-export const ENGINE_VERSION = 'leeway-lattice 4.1.0';
+export const ENGINE_VERSION = 'leeway-lattice 4.2.0';

@@ -1,9 +1,11 @@
 /**
  * Decision rules in words, from a right's exercise boundary as the engine returns it: "Expand
  * (Phase 2) between years 2 and 4 when the project is worth more than 240.0 (year 2) to 265.5
- * (year 4)". The engine says on which side of its critical value each step's region lies; this
- * module only words and formats it. Shared by the results page, the workbook and the board pack,
- * so all three print the same rule for the same run.
+ * (year 4)", then one sentence for each decision the first use leads to ("Pay the stage (Pilot
+ * funding, payment 2) in year 1 when …", "Restart (Mothball) …"). The engine says on which side
+ * of its critical value each step's region lies; this module only words and formats it. Shared
+ * by the results page, the workbook and the board pack, so all three print the same rule for the
+ * same run.
  *
  * Results stored by engine 1.x carry only the exercised nodes' range (`low`, `high`), not the
  * side: for those the side follows the right's kind (rights that add scale or start the project
@@ -24,6 +26,8 @@ export interface DecisionRule {
   first: { t: number; threshold: number } | null;
   last: { t: number; threshold: number } | null;
   text: string;
+  /** The decisions the first use leads to, one sentence each (a stage right's later payments, a mothball right's restart). */
+  followUps: string[];
 }
 
 const usedWhenHigh = new Set(['expand', 'defer', 'stage']);
@@ -36,6 +40,8 @@ const verbs: Record<OptionTemplate['kind'], string> = {
   stage: 'Pay the stage',
   mothball: 'Mothball',
 };
+/** The verb of what follows a first use; one-shot rights have none. */
+const followUpVerbs: Partial<Record<OptionTemplate['kind'], string>> = { stage: 'Pay the stage', mothball: 'Restart' };
 const years = (t: number) => (Math.abs(t - Math.round(t)) < 1e-9 ? String(Math.round(t)) : t.toFixed(1));
 
 /** The engine's side and critical value, or the engine 1.x reading of the same point. */
@@ -45,23 +51,44 @@ function located(point: BoundaryPoint, kind: string): { side: Side | 'anywhere';
   return { side, critical: side === 'above' ? point.low : point.high };
 }
 
-export function decisionRule(s: Pick<RightResult, 'id' | 'kind' | 'boundary' | 'exerciseProbability'>, currency?: string): DecisionRule {
-  const read = s.boundary.map((b) => ({ t: b.t, ...located(b, s.kind) }));
+export function decisionRule(s: Pick<RightResult, 'id' | 'kind' | 'boundary' | 'exerciseProbability' | 'followUps'>, currency?: string): DecisionRule {
   const verb = verbs[s.kind as OptionTemplate['kind']] ?? 'Exercise';
+  const rule = ruleFor(s.boundary, s.kind, `${verb} (${s.id})`, currency);
+  const base = { right: s.id, kind: s.kind, side: rule.side, points: rule.points, first: rule.first, last: rule.last, followUps: followUpRules(s, currency) };
+  if (s.exerciseProbability === 0 || s.boundary.length === 0)
+    return { ...base, followUps: [], text: `${s.id}: never exercised on this lattice; it adds no value as specified.` };
+  return { ...base, text: rule.text };
+}
+
+/** The decisions the first use leads to (engine 4.2.0 on), one sentence each: a stage right's later payments, a mothball right's restart. */
+function followUpRules(s: Pick<RightResult, 'id' | 'kind' | 'followUps'>, currency?: string): string[] {
+  return (s.followUps ?? []).map((f, k) => {
+    const name = s.kind === 'stage' ? `${s.id}, payment ${k + 2}` : s.id;
+    if (f.boundary.length === 0) return `${name}: ${s.kind === 'stage' ? 'never paid' : 'never used'} on this lattice.`;
+    return ruleFor(f.boundary, s.kind, `${followUpVerbs[s.kind as OptionTemplate['kind']] ?? 'Then'} (${name})`, currency).text;
+  });
+}
+
+/** One boundary in words: "<action> between years a and b when the project is worth more than …". */
+function ruleFor(boundary: BoundaryPoint[], kind: string, action: string, currency?: string) {
+  const read = boundary.map((b) => ({ t: b.t, ...located(b, kind) }));
   const sides = read.filter((p) => p.side !== 'anywhere' && p.critical !== null);
-  const side: Side = (sides[0]?.side as Side | undefined) ?? (usedWhenHigh.has(s.kind) ? 'above' : 'below');
+  const side: Side = (sides[0]?.side as Side | undefined) ?? (usedWhenHigh.has(kind) ? 'above' : 'below');
   const points = sides.filter((p) => p.side === side).map((p) => ({ t: p.t, threshold: p.critical! }));
   const first = points[0] ?? null;
   const last = points.at(-1) ?? null;
-  const base = { right: s.id, kind: s.kind, side, points, first, last };
-  if (s.exerciseProbability === 0 || read.length === 0) return { ...base, text: `${s.id}: never exercised on this lattice; it adds no value as specified.` };
   const span = (a: number, b: number) => (a === b ? `in year ${years(a)}` : `between years ${years(a)} and ${years(b)}`);
-  if (!first || !last) return { ...base, text: `${verb} (${s.id}) ${span(read[0]!.t, read.at(-1)!.t)} whatever the project is worth.` };
+  if (!first || !last) return { side, points, first, last, text: `${action} ${span(read[0]?.t ?? 0, read.at(-1)?.t ?? 0)} whatever the project is worth.` };
   const comparison = { above: 'is worth more than', below: 'is worth less than', between: 'is worth more than' }[side];
   const level =
     Math.abs(first.threshold - last.threshold) < 0.005 * Math.max(1, Math.abs(first.threshold))
       ? formatMoney(first.threshold, currency)
       : `${formatMoney(first.threshold, currency)} (year ${years(first.t)}) to ${formatMoney(last.threshold, currency)} (year ${years(last.t)})`;
   const band = side === 'between' ? ', up to a ceiling above which it waits' : '';
-  return { ...base, text: `${verb} (${s.id}) ${span(first.t, last.t)} when the project ${comparison} ${level}${band}.` };
+  return { side, points, first, last, text: `${action} ${span(first.t, last.t)} when the project ${comparison} ${level}${band}.` };
 }
+
+/** The rule and then each decision it leads to: a line each on screen, */
+export const ruleLines = (rule: DecisionRule) => [rule.text, ...rule.followUps];
+/** and one paragraph in the workbook's cell and the board pack. */
+export const ruleInFull = (rule: DecisionRule) => ruleLines(rule).join(' ');

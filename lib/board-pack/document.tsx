@@ -16,7 +16,7 @@ import { layoutNpvComparison } from '../charts/npv-comparison';
 import { layoutTornado } from '../charts/tornado';
 import { layoutWaterfall, waterfallSteps } from '../charts/waterfall';
 import { textWidth, wrapLabel } from '../charts/wrap-label';
-import { decisionRule } from '../decision-rules';
+import { decisionRule, ruleInFull } from '../decision-rules';
 import { readingOfFigures } from '../figures-reading';
 import { formatChange, formatDateTime, formatPercent } from '../format';
 import { optionKindLabels, type OptionKind } from '../option-form';
@@ -376,7 +376,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
         {rules.length === 0 ? <Text style={styles.para}>The case holds no rights: it is a now-or-never commitment.</Text> : null}
         {rules.map((rule) => (
           <Text key={rule.right} style={styles.rule}>
-            {pdfText(rule.text)}
+            {pdfText(ruleInFull(rule))}
           </Text>
         ))}
         <Text style={styles.caution}>{pdfText(VALUATION_CAUTION)}</Text>

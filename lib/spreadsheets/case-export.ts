@@ -7,7 +7,7 @@
 import ExcelJS from 'exceljs';
 import { VALUATION_CAUTION } from '@/lib/caution';
 import type { ValuationResult } from '@/lattice';
-import { decisionRule } from '../decision-rules';
+import { decisionRule, ruleInFull } from '../decision-rules';
 import { formatDateTime } from '../format';
 import { optionKindLabels } from '../option-form';
 import { describeRights } from '../option-words';
@@ -78,7 +78,7 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
   table(
     results,
     ['Right', 'Kind', 'Stand-alone value', 'Incremental value', 'Probability ever exercised', 'Decision rule'],
-    c.result.rights.map((r) => [r.id, r.kind, r.standalone, r.incremental, r.exerciseProbability, decisionRule(r, c.currency).text]),
+    c.result.rights.map((r) => [r.id, r.kind, r.standalone, r.incremental, r.exerciseProbability, ruleInFull(decisionRule(r, c.currency))]),
   );
   results.getColumn(6).width = 100;
 

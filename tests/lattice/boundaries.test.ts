@@ -6,12 +6,13 @@
  *   points with low above high, and its rule began in year 0.0 where the first exercise is
  *   later);
  * - a step appears only where the right is used there;
- * - the demo plant's expansion boundary converges as steps grow.
+ * - the demo plant's expansion boundary converges as steps grow;
+ * - a right lists the decisions its first use leads to (stage payments, a restart).
  * Tolerances are rounding except where stated.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { valueProject, type ProjectModel } from '@/lattice';
+import { valueProject, type ProjectModel, type RightResult } from '@/lattice';
 import { demoPortfolio } from '@/demo/portfolio';
 import { caseToModel } from '@/lib/case-model';
 
@@ -131,5 +132,42 @@ describe('exercise boundaries', () => {
     // Abandonment can be used from several modes: its other paths are there.
     const abandon = full.rights.find((s) => s.kind === 'abandon')!;
     expect(abandon.paths!.length).toBeGreaterThan(1);
+  });
+
+  it('lists the decisions a first use leads to: a stage right’s later payments, a mothball right’s restart', () => {
+    const demo = (name: string) => caseToModel(demoPortfolio.find((p) => p.name === name)!.cases[0]!).model;
+    const pathOf = (s: RightResult, from: string, to: string) => s.paths!.find((p) => p.from === from && p.to === to);
+
+    // The pilot line pays 10 now, 18 in year 1 and 32 in year 2, each payment buying the next stage.
+    const pilot = valueProject(demo('Staged pilot line'), { extras: false, paths: true }).rights[0]!;
+    expect(pilot.followUps!.map((f) => f.boundary.map((b) => b.t))).toEqual([[1], [2]]);
+    expect(pilot.followUps!.at(-1)!.to).toBe('operating');
+    for (const f of pilot.followUps!) expect(f).toEqual(pathOf(pilot, f.from, f.to));
+    // Pay-the-stage regions exist in every mode of the tree, but a payment is reachable only after
+    // the one before it: no follow-up point lies at or before the first point of the decision before.
+    const reachable = (s: RightResult) =>
+      s.followUps!.every((f, k) => f.boundary.every((b) => b.t > (k === 0 ? s.boundary : s.followUps![k - 1]!.boundary)[0]!.t));
+    expect(reachable(pilot)).toBe(true);
+    // Paying the last stage buys the whole project, so it is paid exactly when V is worth more than
+    // the payment: a call at its expiry (common practice, no source).
+    expect(pilot.followUps![1]!.boundary[0]).toMatchObject({ side: 'above', critical: 32 });
+
+    // The older line can be mothballed and restarted: the restart leads back to where the pause began.
+    const line = valueProject(demo('Older extrusion line'), { extras: false, paths: true }).rights;
+    const mothball = line.find((s) => s.kind === 'mothball')!;
+    const pause = mothball.paths!.find((p) => JSON.stringify(p.boundary) === JSON.stringify(mothball.boundary))!;
+    const restart = pathOf(mothball, pause.to, pause.from)!;
+    const firstPause = mothball.boundary[0]!.t;
+    expect(firstPause).toBeGreaterThan(0);
+    expect(mothball.followUps).toEqual([{ ...restart, boundary: restart.boundary.filter((b) => b.t > firstPause) }]);
+    // The restart region reaches back before the first pause in the tree; the rule leaves that out.
+    expect(restart.boundary[0]!.t).toBeLessThan(firstPause);
+    expect(reachable(mothball)).toBe(true);
+    expect(mothball.followUps![0]!.boundary.length).toBeGreaterThan(0);
+
+    // One-shot rights lead to nothing further, and no right's follow-ups need `paths` to be asked for.
+    expect(line.find((s) => s.kind === 'abandon')!.followUps).toBeUndefined();
+    const lean = valueProject(demo('Older extrusion line'), { extras: false }).rights;
+    expect(lean.map((s) => s.followUps)).toEqual(line.map((s) => s.followUps));
   });
 });

@@ -1,7 +1,7 @@
 /** Decision rules in words, from exercise boundaries (wording: common practice, no source). */
 import { describe, expect, it } from 'vitest';
 import { readStoredResult, type BoundaryPoint } from '@/lattice';
-import { decisionRule } from '@/lib/decision-rules';
+import { decisionRule, ruleInFull, ruleLines } from '@/lib/decision-rules';
 
 const above = (t: number, critical: number): BoundaryPoint => ({ t, critical, side: 'above', low: critical, high: null });
 const below = (t: number, critical: number): BoundaryPoint => ({ t, critical, side: 'below', low: null, high: critical });
@@ -56,6 +56,34 @@ describe('decision rules', () => {
     const expected = 'Mothball (Pause the line) between years 1 and 5 when the project is worth less than 4.1 (year 1) to 0.1 (year 5).';
     expect(rule({ rights: [{ ...right, kind: 'mothball' }] })).toBe(expected);
     expect(rule({ switches: [{ ...right, kind: 'switch' }] })).toBe(expected);
+  });
+
+  it('adds a sentence for each decision the first use leads to: later stage payments, a restart', () => {
+    const stage = decisionRule({
+      id: 'Pilot',
+      kind: 'stage',
+      exerciseProbability: 1,
+      boundary: [{ t: 0, critical: null, side: 'anywhere', low: null, high: null }],
+      followUps: [
+        { from: 'due 2', to: 'due 3', boundary: [above(1, 47.85)] },
+        { from: 'due 3', to: 'operating', boundary: [] },
+      ],
+    });
+    expect(ruleLines(stage)).toEqual([
+      'Pay the stage (Pilot) in year 0 whatever the project is worth.',
+      'Pay the stage (Pilot, payment 2) in year 1 when the project is worth more than 47.9.',
+      'Pilot, payment 3: never paid on this lattice.',
+    ]);
+    const mothball = decisionRule({
+      id: 'Pause',
+      kind: 'mothball',
+      exerciseProbability: 0.3,
+      boundary: [below(1, 4)],
+      followUps: [{ from: 'paused', to: 'operating', boundary: [above(2, 9), above(3, 9.01)] }],
+    });
+    expect(ruleInFull(mothball)).toBe(
+      'Mothball (Pause) in year 1 when the project is worth less than 4.0. Restart (Pause) between years 2 and 3 when the project is worth more than 9.0.',
+    );
   });
 
   it('says when a right is never used', () => {

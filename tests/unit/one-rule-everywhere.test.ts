@@ -1,41 +1,62 @@
 /**
  * One case, one decision rule: the text the results page shows for a stored run (read back as
  * PostgreSQL's jsonb returns it), the workbook's Results sheet and the board pack print the same
- * words for every right. Before, the workbook showed the grid's first exercise (year 0.8) and
- * the pack a rule from "year 0.0". The demo plant (invented figures).
+ * words for every right, with the decisions a first use leads to (a stage right's later
+ * payments, a mothball right's restart). Before, the workbook showed the grid's first exercise
+ * (year 0.8) and the pack a rule from "year 0.0". The demo's cases (invented figures).
  */
 import ExcelJS from 'exceljs';
 import { describe, expect, it } from 'vitest';
+import { demoBoardPackData } from '@/demo/board-pack-data';
+import { demoPortfolio } from '@/demo/portfolio';
 import { valueProject, type ValuationResult } from '@/lattice';
-import { decisionRule } from '@/lib/decision-rules';
+import { caseToModel } from '@/lib/case-model';
+import { decisionRule, ruleInFull } from '@/lib/decision-rules';
+import { renderBoardPack } from '@/lib/board-pack/render';
 import { caseWorkbook } from '@/lib/spreadsheets/case-export';
-import { demoPlant, pdfText, renderPlantPack } from './support/demo-pack';
+import type { CaseInput } from '@/lib/validations/case';
+import { pdfText } from './support/demo-pack';
+
+/** The rules of a stored run, and the same rules as the workbook and the board pack print them. */
+async function rulesEverywhere(inputs: CaseInput) {
+  const stored = JSON.parse(JSON.stringify(valueProject(caseToModel(inputs).model, { grid: { steps: 4 } }))) as ValuationResult;
+  const rules = stored.rights.map((s) => decisionRule(s, 'EUR'));
+  const book = new ExcelJS.Workbook();
+  await book.xlsx.load(
+    (await caseWorkbook({
+      projectName: 'Plant',
+      currency: 'EUR',
+      caseName: inputs.name,
+      version: 1,
+      status: 'approved',
+      inputs,
+      result: stored,
+      valuedAt: new Date(0).toISOString(),
+    })) as never,
+  );
+  const sheet = book.getWorksheet('Results')!;
+  const fromWorkbook = stored.rights.map((_, k) => String(sheet.getRow(k + 2).getCell(6).value));
+  const pack = pdfText(await renderBoardPack(demoBoardPackData('A4', { inputs, result: stored })));
+  return { rules, fromWorkbook, pack };
+}
+
+const demoCase = (name: string) => demoPortfolio.find((p) => p.name === name)!.cases[0]!;
 
 describe('the decision rule of a case', () => {
   it('reads the same from the stored run, the workbook and the board pack', async () => {
-    const { inputs, model } = demoPlant();
-    const stored = JSON.parse(JSON.stringify(valueProject(model, { grid: { steps: 4 } }))) as ValuationResult;
-    const rules = stored.rights.map((s) => decisionRule(s, 'EUR').text);
+    const { rules, fromWorkbook, pack } = await rulesEverywhere(demoCase('Phased bio-resin plant'));
     expect(rules.length).toBe(2);
-
-    const book = new ExcelJS.Workbook();
-    await book.xlsx.load(
-      (await caseWorkbook({
-        projectName: 'Plant',
-        currency: 'EUR',
-        caseName: inputs.name,
-        version: 1,
-        status: 'approved',
-        inputs,
-        result: stored,
-        valuedAt: new Date(0).toISOString(),
-      })) as never,
-    );
-    const sheet = book.getWorksheet('Results')!;
-    const fromWorkbook = stored.rights.map((_, k) => String(sheet.getRow(k + 2).getCell(6).value));
-    expect(fromWorkbook).toEqual(rules);
-
-    const pack = pdfText(await renderPlantPack(model, stored));
-    for (const rule of rules) expect(pack).toContain(rule);
+    expect(fromWorkbook).toEqual(rules.map((r) => r.text));
+    for (const rule of rules) expect(pack).toContain(rule.text);
   }, 60_000);
+
+  it('carries the decisions a first use leads to into all three: later stage payments, a restart', async () => {
+    for (const name of ['Staged pilot line', 'Older extrusion line']) {
+      const { rules, fromWorkbook, pack } = await rulesEverywhere(demoCase(name));
+      const followed = rules.filter((r) => r.followUps.length > 0);
+      expect(followed.length).toBe(1);
+      expect(fromWorkbook).toEqual(rules.map(ruleInFull));
+      for (const line of rules.flatMap((r) => [r.text, ...r.followUps])) expect(pack).toContain(line);
+    }
+  }, 120_000);
 });

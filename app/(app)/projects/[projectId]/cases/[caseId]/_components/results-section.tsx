@@ -7,7 +7,7 @@ import { WaterfallChart } from '@/components/charts/waterfall-chart';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import { ValuationCaution } from '@/components/valuation-caution';
 import type { RightResult, ValuationResult } from '@/lattice';
-import { decisionRule } from '@/lib/decision-rules';
+import { decisionRule, ruleLines } from '@/lib/decision-rules';
 import { formatMoney, formatPercent } from '@/lib/format';
 import { premiumSplitText } from '@/lib/premium-split';
 import { optionKindLabels, type OptionKind } from '@/lib/option-form';
@@ -94,7 +94,11 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
                   <Td>
                     <span className="font-medium">{s.id}</span>
                     <span className="ml-2 text-caption text-ink-muted">{optionKindLabels[s.kind as OptionKind] ?? s.kind}</span>
-                    <p className="mt-0.5 max-w-xl text-caption text-ink-soft">{decisionRule(s, currency).text}</p>
+                    {ruleLines(decisionRule(s, currency)).map((text) => (
+                      <p key={text} className="mt-0.5 max-w-xl text-caption text-ink-soft">
+                        {text}
+                      </p>
+                    ))}
                   </Td>
                   <Td numeric>{formatMoney(s.standalone, currency)}</Td>
                   <Td numeric>{formatMoney(s.incremental, currency)}</Td>
