@@ -73,6 +73,8 @@ export const auth = betterAuth({
   },
   advanced: {
     ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] },
+    // The session and its user in one query, not two: every signed-in request reads them.
+    database: { joins: true },
   },
   hooks: {
     before: createAuthMiddleware(async (ctx) => {
