@@ -16,18 +16,22 @@ import { formatMoney } from './format';
 
 type Side = 'above' | 'below' | 'between';
 
-export interface DecisionRule {
-  right: string;
-  kind: string;
+/** One decision's boundary read and worded. */
+export interface RuleReading {
   /** 'above': used when the value is at least the threshold; 'below': at most; 'between': inside a band from it. */
   side: Side;
-  /** The critical value at each step where the right is used on that side. */
+  /** The critical value at each step where the decision is taken on that side. */
   points: { t: number; threshold: number }[];
   first: { t: number; threshold: number } | null;
   last: { t: number; threshold: number } | null;
   text: string;
-  /** The decisions the first use leads to, one sentence each (a stage right's later payments, a mothball right's restart). */
-  followUps: string[];
+}
+
+export interface DecisionRule extends RuleReading {
+  right: string;
+  kind: string;
+  /** The decisions the first use leads to, each read and worded (a stage right's later payments, a mothball right's restart). */
+  followUps: RuleReading[];
 }
 
 const usedWhenHigh = new Set(['expand', 'defer', 'stage']);
@@ -54,23 +58,23 @@ function located(point: BoundaryPoint, kind: string): { side: Side | 'anywhere';
 export function decisionRule(s: Pick<RightResult, 'id' | 'kind' | 'boundary' | 'exerciseProbability' | 'followUps'>, currency?: string): DecisionRule {
   const verb = verbs[s.kind as OptionTemplate['kind']] ?? 'Exercise';
   const rule = ruleFor(s.boundary, s.kind, `${verb} (${s.id})`, currency);
-  const base = { right: s.id, kind: s.kind, side: rule.side, points: rule.points, first: rule.first, last: rule.last, followUps: followUpRules(s, currency) };
   if (s.exerciseProbability === 0 || s.boundary.length === 0)
-    return { ...base, followUps: [], text: `${s.id}: never exercised on this lattice; it adds no value as specified.` };
-  return { ...base, text: rule.text };
+    return { right: s.id, kind: s.kind, ...rule, followUps: [], text: `${s.id}: never exercised on this lattice; it adds no value as specified.` };
+  return { right: s.id, kind: s.kind, ...rule, followUps: followUpRules(s, currency) };
 }
 
-/** The decisions the first use leads to (engine 4.2.0 on), one sentence each: a stage right's later payments, a mothball right's restart. */
-function followUpRules(s: Pick<RightResult, 'id' | 'kind' | 'followUps'>, currency?: string): string[] {
+/** The decisions the first use leads to (engine 4.2.0 on): a stage right's later payments, a mothball right's restart. */
+function followUpRules(s: Pick<RightResult, 'id' | 'kind' | 'followUps'>, currency?: string): RuleReading[] {
   return (s.followUps ?? []).map((f, k) => {
     const name = s.kind === 'stage' ? `${s.id}, payment ${k + 2}` : s.id;
-    if (f.boundary.length === 0) return `${name}: ${s.kind === 'stage' ? 'never paid' : 'never used'} on this lattice.`;
-    return ruleFor(f.boundary, s.kind, `${followUpVerbs[s.kind as OptionTemplate['kind']] ?? 'Then'} (${name})`, currency).text;
+    const rule = ruleFor(f.boundary, s.kind, `${followUpVerbs[s.kind as OptionTemplate['kind']] ?? 'Then'} (${name})`, currency);
+    if (f.boundary.length === 0) return { ...rule, text: `${name}: ${s.kind === 'stage' ? 'never paid' : 'never used'} on this lattice.` };
+    return rule;
   });
 }
 
 /** One boundary in words: "<action> between years a and b when the project is worth more than …". */
-function ruleFor(boundary: BoundaryPoint[], kind: string, action: string, currency?: string) {
+function ruleFor(boundary: BoundaryPoint[], kind: string, action: string, currency?: string): RuleReading {
   const read = boundary.map((b) => ({ t: b.t, ...located(b, kind) }));
   const sides = read.filter((p) => p.side !== 'anywhere' && p.critical !== null);
   const side: Side = (sides[0]?.side as Side | undefined) ?? (usedWhenHigh.has(kind) ? 'above' : 'below');
@@ -89,6 +93,6 @@ function ruleFor(boundary: BoundaryPoint[], kind: string, action: string, curren
 }
 
 /** The rule and then each decision it leads to: a line each on screen, */
-export const ruleLines = (rule: DecisionRule) => [rule.text, ...rule.followUps];
+export const ruleLines = (rule: DecisionRule) => [rule.text, ...rule.followUps.map((f) => f.text)];
 /** and one paragraph in the workbook's cell and the board pack. */
 export const ruleInFull = (rule: DecisionRule) => ruleLines(rule).join(' ');

@@ -11,8 +11,9 @@ import { axisTicks } from '@/lib/charts/axis';
 const dashes = ['', '6 3', '2 3', '8 3 2 3', '1 2', '10 4'];
 
 /**
- * The exercise boundary over time: for each right, the critical project value at each step
- * where it is used, on the side the engine reports (lib/decision-rules.ts). Lines differ by
+ * The exercise boundary over time: for each right and each decision its first use leads to, the
+ * critical project value at each step where it is taken, on the side the engine reports
+ * (lib/decision-rules.ts). Lines differ by
  * dash as well as colour, and are named in the legend. Following a case, it also shades each
  * right's region (the side where it is used) and draws the observed values over time.
  */
@@ -35,10 +36,14 @@ export function BoundaryChart({
   const { ref, width } = useWidth<HTMLDivElement>();
   const height = 280;
   const margin = { top: 16, right: 24, bottom: 36, left: 64 };
-  const series = rights.map((s, k) => {
-    const rule = decisionRule(s, currency);
-    return { s, k, rule, points: rule.points.map((p) => ({ t: p.t, v: p.threshold })) };
-  });
+  // One line per decision: each right's first use, then the decisions it leads to (a stage
+  // right's later payments, a mothball right's restart), each with its own colour and dash.
+  const series = rights
+    .flatMap((s) => {
+      const rule = decisionRule(s, currency);
+      return [rule, ...rule.followUps].map((reading, n) => ({ key: `${s.id}-${n}`, primary: n === 0, rule: reading }));
+    })
+    .map((x, k) => ({ ...x, k, points: x.rule.points.map((p) => ({ t: p.t, v: p.threshold })) }));
   const values = series
     .flatMap((x) => x.points.map((p) => p.v))
     .concat(v0)
@@ -77,10 +82,10 @@ export function BoundaryChart({
           {v0Label} {formatMoney(v0)}
         </text>
         {observed
-          ? series.map(({ s, k, rule, points }) =>
-              points.length > 1 && (rule.side === 'above' || rule.side === 'below') ? (
+          ? series.map(({ key, primary, k, rule, points }) =>
+              primary && points.length > 1 && (rule.side === 'above' || rule.side === 'below') ? (
                 <path
-                  key={`${s.id}-region`}
+                  key={`${key}-region`}
                   d={
                     area<{ t: number; v: number }>()
                       .x((p) => x(p.t))
@@ -101,8 +106,8 @@ export function BoundaryChart({
             ))}
           </g>
         ) : null}
-        {series.map(({ s, k, points }) => (
-          <g key={s.id}>
+        {series.map(({ key, k, points }) => (
+          <g key={key}>
             {points.length > 1 ? (
               <path
                 d={path(points) ?? ''}
@@ -126,8 +131,8 @@ export function BoundaryChart({
             The project value as observed; each right&rsquo;s shaded side is where it is used.
           </li>
         ) : null}
-        {series.map(({ s, k, rule }) => (
-          <li key={s.id} className="flex items-start gap-2">
+        {series.map(({ key, k, rule }) => (
+          <li key={key} className="flex items-start gap-2">
             <svg width="28" height="10" aria-hidden className="mt-1 shrink-0">
               <line x1="0" x2="28" y1="5" y2="5" stroke={seriesStrong[k % seriesStrong.length]} strokeWidth="2" strokeDasharray={dashes[k % dashes.length]} />
             </svg>

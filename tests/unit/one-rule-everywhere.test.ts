@@ -11,7 +11,7 @@ import { demoBoardPackData } from '@/demo/board-pack-data';
 import { demoPortfolio } from '@/demo/portfolio';
 import { valueProject, type ValuationResult } from '@/lattice';
 import { caseToModel } from '@/lib/case-model';
-import { decisionRule, ruleInFull } from '@/lib/decision-rules';
+import { decisionRule, ruleInFull, ruleLines } from '@/lib/decision-rules';
 import { renderBoardPack } from '@/lib/board-pack/render';
 import { caseWorkbook } from '@/lib/spreadsheets/case-export';
 import type { CaseInput } from '@/lib/validations/case';
@@ -56,7 +56,7 @@ describe('the decision rule of a case', () => {
       const followed = rules.filter((r) => r.followUps.length > 0);
       expect(followed.length).toBe(1);
       expect(fromWorkbook).toEqual(rules.map(ruleInFull));
-      for (const line of rules.flatMap((r) => [r.text, ...r.followUps])) expect(pack).toContain(line);
+      for (const line of rules.flatMap(ruleLines)) expect(pack).toContain(line);
     }
   }, 120_000);
 });
