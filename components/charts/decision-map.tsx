@@ -2,10 +2,9 @@
 
 import { scaleLinear, scaleLog } from 'd3';
 import type { NodeGrid } from '@/lattice';
-import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
-import { axisTicks } from '@/lib/charts/axis';
+import { axisTicks, logAxisTicks } from '@/lib/charts/axis';
 
 /**
  * The decision map of one mode over the whole lattice: every node placed by time and project
@@ -55,14 +54,11 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
             );
           }),
         )}
-        {y
-          .ticks(4)
-          .filter((t) => Math.log10(t) % 1 === 0)
-          .map((t) => (
-            <text key={t} x={margin.left - 8} y={y(t)} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
-              {formatMoney(t, undefined, t < 1 ? 2 : 0)}
-            </text>
-          ))}
+        {logAxisTicks(y, 4).map((t) => (
+          <text key={t.value} x={margin.left - 8} y={t.at} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
+            {t.label}
+          </text>
+        ))}
         {axisTicks(x, 8).map((t) => (
           <text key={t.value} x={t.at} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
             {t.label}

@@ -39,6 +39,9 @@ describe('the lattice window', () => {
     expect(await chosen.getAttribute('aria-label')).toMatch(new RegExp(`^Step ${step}, node \\d+: .*decision: Sell the plant$`));
     const inspector = page.getByRole('region', { name: 'Node inspector' });
     await expect.poll(async () => (await inspector.textContent()) ?? '', { timeout: 30_000 }).toMatch(new RegExp(`Step ${step}, node`, 'i'));
+    // Modes in words, as the mode menu names them, not the engine's ids ("closed", "operating+Phase 2").
+    expect(await inspector.textContent()).toContain('Sell the plant (to Closed (sold or abandoned)): worth');
+    expect(await inspector.textContent()).toMatch(/· Operating/i);
     const from = Number(await page.getByLabel('From step').inputValue());
     expect(step).toBeGreaterThanOrEqual(from);
 

@@ -1,7 +1,7 @@
 /** Axis labels never repeat: decimals follow the tick spacing (the convergence axis read "20.1" twice). */
-import { scaleLinear } from 'd3';
+import { scaleLinear, scaleLog } from 'd3';
 import { describe, expect, it } from 'vitest';
-import { axisTicks } from '@/lib/charts/axis';
+import { axisTicks, logAxisTicks } from '@/lib/charts/axis';
 import { tickDigits } from '@/lib/charts/tick-digits';
 import { formatMoney } from '@/lib/format';
 
@@ -33,5 +33,16 @@ describe('tick labels', () => {
     expect(small.map((t) => t.at)).toEqual([0, 25, 50, 75, 100]);
     const wide = axisTicks(scaleLinear().domain([-1500, 1500]).range([0, 300]), 6);
     expect(wide.map((t) => t.label)).toEqual(['−1,500', '−1,000', '−500', '0', '500', '1,000', '1,500']);
+  });
+
+  it('label a log axis by powers of ten, none alike', () => {
+    // The older extrusion line's decision map spans about 10⁻⁸ to 300: its labels read "100, 1, 0.01, 0.00, 0.00, 0.00".
+    const wide = logAxisTicks(scaleLog().domain([2e-8, 300]).range([300, 0]), 4);
+    // d3 keeps every second power at this count.
+    expect(wide.map((t) => t.label)).toEqual(['10⁻⁶', '10⁻⁴', '0.01', '1', '100']);
+    expect(logAxisTicks(scaleLog().domain([5e-4, 2]).range([300, 0]), 4).map((t) => t.label)).toEqual(['0.001', '0.01', '0.1', '1']);
+    const narrow = logAxisTicks(scaleLog().domain([20, 3000]).range([300, 0]), 4);
+    expect(narrow.map((t) => t.label)).toEqual(['100', '1,000']);
+    expect(narrow[0]!.at).toBeCloseTo(300 * (1 - Math.log(100 / 20) / Math.log(3000 / 20)), 9);
   });
 });

@@ -2,6 +2,7 @@
 
 import type { ModelIssue, NodeExplanation } from '@/lattice';
 import { formatNumber } from '@/lib/format';
+import { modeLabel } from '@/lib/mode-words';
 
 const n4 = (x: number) => formatNumber(x, 4);
 
@@ -24,7 +25,7 @@ export function NodeInspector({ explanation, issues, computing }: { explanation:
     <div className="flex flex-col gap-4 text-body" aria-live="polite">
       <div>
         <p className="text-caption uppercase tracking-wide text-ink-muted">
-          Step {e.step}, node {e.node} · year {e.t.toFixed(3)} · mode {e.mode}
+          Step {e.step}, node {e.node} · year {e.t.toFixed(3)} · {modeLabel(e.mode)}
         </p>
         <p className="figures mt-1">
           Project value V = <strong>{n4(e.underlying)}</strong>; value with flexibility W = <strong>{n4(e.value)}</strong>
@@ -73,7 +74,7 @@ export function NodeInspector({ explanation, issues, computing }: { explanation:
           <ul className="figures mt-1 list-disc pl-5">
             {e.alternatives.map((a) => (
               <li key={a.right + a.to}>
-                {a.right} (to {a.to}): worth {n4(a.worth)} after its cost{' '}
+                {a.right} (to {modeLabel(a.to)}): worth {n4(a.worth)} after its cost{' '}
                 {a === e.decision || (e.decision && a.right === e.decision.right && a.to === e.decision.to) ? '— taken' : ''}
               </li>
             ))}
