@@ -16,7 +16,7 @@ const parts: Record<string, string> = {
   savings: 'savings',
   payments: 'payment',
   amount: 'amount',
-  backCost: 'cost to switch back',
+  backCost: 'cost to restart',
 };
 
 export function issueInWords(message: string, options: OptionTemplate[]): string {

@@ -7,8 +7,7 @@ import { formatMoney, formatPercent } from './format';
 
 export function describeCost(cost: Cost, currency?: string): string {
   if (typeof cost === 'number') return formatMoney(cost, currency);
-  if (Array.isArray(cost))
-    return cost.map((s, k) => `${formatMoney(s.amount, currency)} ${k === 0 ? `from year ${s.from}` : `from year ${s.from}`}`).join(', then ');
+  if (Array.isArray(cost)) return cost.map((s) => `${formatMoney(s.amount, currency)} from year ${s.from}`).join(', then ');
   return `${formatMoney(cost.amount, currency)} growing ${formatPercent(cost.growth)} a year`;
 }
 
@@ -32,7 +31,7 @@ export function describeOption(o: OptionTemplate, currency?: string): string {
     case 'stage':
       return `pay in stages: ${o.payments.map((p) => `${formatMoney(p.amount, currency)} in year ${p.at}`).join(', ')}; stopping at any stage`;
     case 'mothball':
-      return `switch to ${formatPercent(o.toScale, 0)} of scale for ${describeCost(o.cost, currency)} and back for ${describeCost(o.backCost, currency)}, earning ${formatMoney(o.flowPerYear ?? 0, currency)} a year while switched, ${describeWindow(o.window)}`;
+      return `mothball to ${formatPercent(o.toScale, 0)} of scale for ${describeCost(o.cost, currency)} and restart for ${describeCost(o.backCost, currency)}, with a cash flow of ${formatMoney(o.flowPerYear ?? 0, currency)} a year while mothballed, ${describeWindow(o.window)}`;
   }
 }
 

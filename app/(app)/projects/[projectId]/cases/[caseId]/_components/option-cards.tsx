@@ -335,7 +335,7 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
             <div className="grid gap-5 lg:grid-cols-2">
               {kind === 'expand' || kind === 'contract' || kind === 'mothball' ? (
                 <Labelled
-                  label={kind === 'expand' ? 'Added scale (%)' : kind === 'contract' ? 'Share given up (%)' : 'Scale while switched (%)'}
+                  label={kind === 'expand' ? 'Added scale (%)' : kind === 'contract' ? 'Share given up (%)' : 'Scale while mothballed (%)'}
                   hint={kind === 'expand' ? '50 adds half of the current project.' : kind === 'mothball' ? '0 stops operations (mothballed).' : undefined}
                 >
                   <input inputMode="decimal" readOnly={readOnly} className={`${field} w-28 text-right`} {...form.register(`options.${k}.share`)} />
@@ -353,7 +353,7 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
                       contract: 'Savings received',
                       abandon: 'Salvage received',
                       defer: 'Investment cost',
-                      mothball: 'Cost to switch',
+                      mothball: 'Cost to mothball',
                       stage: '',
                     }[kind]
                   }
@@ -371,8 +371,8 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
               ) : null}
               {kind === 'mothball' ? (
                 <>
-                  <CostEditor at={`${at}.backCost`} label="Cost to switch back" {...parts} />
-                  <Labelled label="Cash flow a year while switched" hint="Savings net of upkeep; negative for a net cost.">
+                  <CostEditor at={`${at}.backCost`} label="Cost to restart" {...parts} />
+                  <Labelled label="Cash flow a year while mothballed" hint="Savings net of upkeep; negative for a net cost.">
                     <input inputMode="decimal" readOnly={readOnly} className={`${field} w-28 text-right`} {...form.register(`options.${k}.flowPerYear`)} />
                     <Problem errors={errors} path={`${at}.flowPerYear`} />
                   </Labelled>
