@@ -1,5 +1,5 @@
 /**
- * A linear axis's ticks, for the web charts and the board pack alike: d3's round values, where
+ * An axis's ticks, for the web charts and the board pack alike: d3's round values, where
  * each sits on the scale, and its label with just enough decimals to tell neighbours apart
  * (lib/charts/tick-digits.ts; grouped thousands and a true minus sign by lib/format.ts). The
  * charts draw these with their own primitives (SVG on the web, react-pdf in the pack) and never

@@ -28,6 +28,14 @@ describe('re-valuing the portfolio', () => {
       await db.updateTable('valuation_run').set({ engine_version: 'leeway-lattice 1.9.0' }).where('id', '=', latest.id).execute();
     }
 
+    // A reader who may not re-value is still told which row an older engine computed.
+    const executive = await signedInPage('executive@kestrelbay.example');
+    await executive.page.goto('/portfolio');
+    const row = executive.page.getByRole('row').filter({ hasText: 'Older extrusion line' });
+    await expect.poll(async () => (await row.textContent()) ?? '', { timeout: 30_000 }).toContain('computed by leeway-lattice 1.9.0, before today’s engine');
+    expect(await executive.page.getByRole('region', { name: 'Re-value figures' }).count()).toBe(0);
+    await executive.context.close();
+
     const { context, page } = await signedInPage('analyst@kestrelbay.example');
     await page.goto('/portfolio');
     const region = page.getByRole('region', { name: 'Re-value figures' });

@@ -15,6 +15,7 @@ import {
 } from '@tanstack/react-table';
 import Link from 'next/link';
 import { useState } from 'react';
+import { ENGINE_VERSION } from '@/lattice';
 import { formatDate, formatMoney } from '@/lib/format';
 import type { ProjectSummaryJson } from '@/lib/project-summary';
 
@@ -89,9 +90,17 @@ const columns = helper.columns([
     enableGlobalFilter: false,
     cell: (info) => {
       const latest = info.row.original.latest;
-      return latest
-        ? `${formatDate(latest.valuedAt)} · ${latest.caseName} v${latest.caseVersion}${latest.caseVersion < latest.currentVersion ? ' (edited since)' : ''}`
-        : 'Not yet valued';
+      if (!latest) return 'Not yet valued';
+      return (
+        <>
+          {formatDate(latest.valuedAt)} · {latest.caseName} v{latest.caseVersion}
+          {latest.caseVersion < latest.currentVersion ? ' (edited since)' : ''}
+          {/* Every reader of the list is told, not only those who may re-value (the banner above). */}
+          {latest.engineVersion !== ENGINE_VERSION ? (
+            <span className="block text-caption text-ember-700">computed by {latest.engineVersion}, before today&rsquo;s engine</span>
+          ) : null}
+        </>
+      );
     },
   }),
 ]);
