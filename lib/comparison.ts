@@ -26,6 +26,8 @@ export interface ComparedCase {
   /** The case version the figures are of, and the case's version now. */
   figuresVersion: number | null;
   version: number;
+  /** The engine that computed the figures (null when not valued yet). */
+  engineVersion: string | null;
   staticNpv: number | null;
   optionPremium: number | null;
   expandedNpv: number | null;
@@ -59,6 +61,7 @@ export async function compareCases(orgId: string, caseIds: string[]): Promise<Co
     valuedAt: runOf.get(c.id) ? new Date(runOf.get(c.id)!.created_at).toISOString() : null,
     figuresVersion: runOf.get(c.id)?.case_version ?? null,
     version: c.version,
+    engineVersion: runOf.get(c.id)?.engine_version ?? null,
     staticNpv: results[k]?.staticNpv ?? null,
     optionPremium: results[k]?.optionPremium ?? null,
     expandedNpv: results[k]?.expandedNpv ?? null,
@@ -70,8 +73,16 @@ export async function compareCases(orgId: string, caseIds: string[]): Promise<Co
     values: cases.map((c) => statusLabels[c.status]),
     differs: cases.some((c) => c.status !== cases[0]!.status),
   };
+  // Figures from different engine versions can differ for that reason alone: say which computed each.
+  const engineRow: ComparisonRow = {
+    group: 'Valuation',
+    label: 'Computed by',
+    values: cases.map((c) => c.engineVersion ?? 'not valued yet'),
+    differs: cases.some((c) => c.engineVersion !== cases[0]!.engineVersion),
+  };
   const rows = [
     statusRow,
+    engineRow,
     ...comparisonRows(
       inputs,
       results,

@@ -1727,6 +1727,8 @@ export interface components {
                 /** @description The case version the figures are of. */
                 figuresVersion: number | null;
                 version: number;
+                /** @description The engine that computed the figures (docs/engine.md); null when not valued yet. */
+                engineVersion: string | null;
                 staticNpv: number | null;
                 optionPremium: number | null;
                 expandedNpv: number | null;

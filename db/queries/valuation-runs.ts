@@ -94,7 +94,7 @@ export async function latestRunsOfCases(db: Database, { orgId, caseIds }: { orgI
   if (caseIds.length === 0) return [];
   return db
     .selectFrom('valuation_run')
-    .select(['case_id', 'result', 'created_at', 'case_version'])
+    .select(['case_id', 'result', 'created_at', 'case_version', 'engine_version'])
     .distinctOn('case_id')
     .where('organization_id', '=', orgId)
     .where('case_id', 'in', caseIds)

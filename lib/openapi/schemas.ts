@@ -308,6 +308,7 @@ export const comparisonSchema = z
         valuedAt: dateTime.nullable(),
         figuresVersion: z.int().nullable().meta({ description: 'The case version the figures are of.' }),
         version: z.int(),
+        engineVersion: z.string().nullable().meta({ description: 'The engine that computed the figures (docs/engine.md); null when not valued yet.' }),
         staticNpv: money.nullable(),
         optionPremium: money.nullable(),
         expandedNpv: money.nullable(),

@@ -58,6 +58,31 @@ describe('comparing cases', () => {
     await context.close();
   });
 
+  it('says which engine computed each case’s figures, and marks one older than today’s', async () => {
+    const runs = await Promise.all(
+      plantCases.map((id) =>
+        db.selectFrom('valuation_run').select(['id', 'engine_version']).where('case_id', '=', id).orderBy('created_at', 'desc').executeTakeFirstOrThrow(),
+      ),
+    );
+    const older = runs[1]!;
+    await db.updateTable('valuation_run').set({ engine_version: 'leeway-lattice 1.9.0' }).where('id', '=', older.id).execute();
+    try {
+      const { context, page } = await signedInPage('executive@kestrelbay.example');
+      await page.goto(`/compare?cases=${plantCases.join(',')}`);
+      const api = await (await page.request.get(`/api/v1/compare?cases=${plantCases.join(',')}`)).json();
+      expect(api.cases.map((c: { engineVersion: string }) => c.engineVersion)).toEqual([runs[0]!.engine_version, 'leeway-lattice 1.9.0']);
+      const engines = api.rows.find((r: { label: string }) => r.label === 'Computed by');
+      expect([engines.values, engines.differs]).toEqual([[runs[0]!.engine_version, 'leeway-lattice 1.9.0'], true]);
+      const header = page.getByRole('columnheader', { name: /Volatile demand/ });
+      await expect
+        .poll(async () => (await header.textContent()) ?? '', { timeout: 30_000 })
+        .toContain('computed by leeway-lattice 1.9.0, before today’s engine');
+      await context.close();
+    } finally {
+      await db.updateTable('valuation_run').set({ engine_version: older.engine_version }).where('id', '=', older.id).execute();
+    }
+  });
+
   it('refuses another organisation, and fewer than two or more than four cases', async () => {
     const outsider = await signedInPage('owner@harrowfen.example');
     expect((await outsider.page.request.get(`/api/v1/compare?cases=${plantCases.join(',')}`)).status()).toBe(404);

@@ -6,6 +6,7 @@ import useSWR from 'swr';
 import { NpvComparisonChart } from '@/components/charts/npv-comparison-chart';
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { ValuationCaution } from '@/components/valuation-caution';
+import { ENGINE_VERSION } from '@/lattice';
 import { getJson } from '@/lib/api-client';
 
 interface CaseOption {
@@ -26,6 +27,7 @@ interface ComparisonJson {
     expandedNpv: number | null;
     valuedAt: string | null;
     figuresVersion: number | null;
+    engineVersion: string | null;
     version: number;
   }[];
   rows: { group: string; label: string; values: (string | null)[]; differs: boolean }[];
@@ -126,6 +128,9 @@ export function CompareView() {
                             ? 'not valued yet'
                             : `figures of v${c.figuresVersion}${c.figuresVersion < c.version ? ` (now v${c.version}, not yet valued)` : ''}`}
                         </span>
+                        {c.engineVersion !== null && c.engineVersion !== ENGINE_VERSION ? (
+                          <span className="block text-caption font-normal text-ember-700">computed by {c.engineVersion}, before today&rsquo;s engine</span>
+                        ) : null}
                       </th>
                     ))}
                   </tr>
