@@ -34,6 +34,9 @@ describe('re-valuing the portfolio', () => {
     const row = executive.page.getByRole('row').filter({ hasText: 'Older extrusion line' });
     await expect.poll(async () => (await row.textContent()) ?? '', { timeout: 30_000 }).toContain('computed by leeway-lattice 1.9.0, before today’s engine');
     expect(await executive.page.getByRole('region', { name: 'Re-value figures' }).count()).toBe(0);
+    await executive.page.goto('/projects');
+    const card = executive.page.getByRole('listitem').filter({ hasText: 'Older extrusion line' });
+    await expect.poll(async () => (await card.textContent()) ?? '', { timeout: 30_000 }).toContain('computed by leeway-lattice 1.9.0, before today’s engine');
     await executive.context.close();
 
     const { context, page } = await signedInPage('analyst@kestrelbay.example');
@@ -51,6 +54,21 @@ describe('re-valuing the portfolio', () => {
     expect(request.total).toBeGreaterThanOrEqual(2);
     await context.close();
   }, 150_000);
+
+  it('re-values one case from its project page, where the older engine is named', async () => {
+    const { caseId, projectId } = await demoCase('Staged pilot line', 'Higher hurdle rate');
+    const latest = await db.selectFrom('valuation_run').select('id').where('case_id', '=', caseId).orderBy('created_at', 'desc').executeTakeFirstOrThrow();
+    await db.updateTable('valuation_run').set({ engine_version: 'leeway-lattice 1.9.0' }).where('id', '=', latest.id).execute();
+
+    const { context, page } = await signedInPage('analyst@kestrelbay.example');
+    await page.goto(`/projects/${projectId}`);
+    const row = page.getByRole('row').filter({ hasText: 'Higher hurdle rate' });
+    await expect.poll(async () => (await row.textContent()) ?? '', { timeout: 30_000 }).toContain('computed by leeway-lattice 1.9.0, before today’s engine');
+    await row.getByRole('button', { name: "Re-value Higher hurdle rate with today's engine" }).click();
+    await expect.poll(() => latestEngine(caseId), { timeout: 60_000, interval: 500 }).toBe(ENGINE_VERSION);
+    await expect.poll(async () => (await row.textContent()) ?? '', { timeout: 30_000 }).not.toContain('before today’s engine');
+    await context.close();
+  }, 120_000);
 
   it('refuses a second re-valuation while one is running', async () => {
     const { context, page } = await signedInPage('admin@kestrelbay.example');

@@ -6,7 +6,7 @@ import useSWR from 'swr';
 import { NpvComparisonChart } from '@/components/charts/npv-comparison-chart';
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { ValuationCaution } from '@/components/valuation-caution';
-import { ENGINE_VERSION } from '@/lattice';
+import { OlderEngineNote } from '@/components/older-engine-note';
 import { getJson } from '@/lib/api-client';
 
 interface CaseOption {
@@ -128,9 +128,7 @@ export function CompareView() {
                             ? 'not valued yet'
                             : `figures of v${c.figuresVersion}${c.figuresVersion < c.version ? ` (now v${c.version}, not yet valued)` : ''}`}
                         </span>
-                        {c.engineVersion !== null && c.engineVersion !== ENGINE_VERSION ? (
-                          <span className="block text-caption font-normal text-ember-700">computed by {c.engineVersion}, before today&rsquo;s engine</span>
-                        ) : null}
+                        <OlderEngineNote engineVersion={c.engineVersion} />
                       </th>
                     ))}
                   </tr>

@@ -15,7 +15,7 @@ import {
 } from '@tanstack/react-table';
 import Link from 'next/link';
 import { useState } from 'react';
-import { ENGINE_VERSION } from '@/lattice';
+import { OlderEngineNote } from '@/components/older-engine-note';
 import { formatDate, formatMoney } from '@/lib/format';
 import type { ProjectSummaryJson } from '@/lib/project-summary';
 
@@ -96,9 +96,7 @@ const columns = helper.columns([
           {formatDate(latest.valuedAt)} · {latest.caseName} v{latest.caseVersion}
           {latest.caseVersion < latest.currentVersion ? ' (edited since)' : ''}
           {/* Every reader of the list is told, not only those who may re-value (the banner above). */}
-          {latest.engineVersion !== ENGINE_VERSION ? (
-            <span className="block text-caption text-ember-700">computed by {latest.engineVersion}, before today&rsquo;s engine</span>
-          ) : null}
+          <OlderEngineNote engineVersion={latest.engineVersion} />
         </>
       );
     },

@@ -4,6 +4,7 @@ import Link from 'next/link';
 import useSWR from 'swr';
 import { EmptyState } from '@/components/empty-state';
 import { LoadError, LoadingBlock } from '@/components/load-state';
+import { OlderEngineNote } from '@/components/older-engine-note';
 import { getJson } from '@/lib/api-client';
 import { formatDate, formatMoney } from '@/lib/format';
 import type { ProjectSummaryJson } from '@/lib/project-summary';
@@ -51,6 +52,7 @@ export function ProjectList({ canCreate }: { canCreate: boolean }) {
               {p.latest
                 ? `base case v${p.latest.caseVersion} valued ${formatDate(p.latest.valuedAt)}${p.latest.caseVersion < p.latest.currentVersion ? ' (edited since)' : ''}`
                 : 'not valued yet'}
+              <OlderEngineNote engineVersion={p.latest?.engineVersion} />
             </p>
           </Link>
         </li>

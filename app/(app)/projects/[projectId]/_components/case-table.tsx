@@ -11,6 +11,7 @@ import { LoadError, LoadingBlock } from '@/components/load-state';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
 import { Input } from '@/components/ui/input';
+import { OlderEngineNote } from '@/components/older-engine-note';
 import { StatusBadge } from '@/components/status-badge';
 import { Table, Td, Th, Tr } from '@/components/ui/table';
 import type { CaseStatus } from '@/lib/review/transitions';
@@ -126,19 +127,16 @@ export function CaseTable(props: { projectId: string; currency: string; canEdit:
                     <>
                       <span className="figures">v{c.latest.caseVersion}</span> · {formatDate(c.latest.valuedAt)}
                       {c.latest.caseVersion < c.version ? <span className="block text-caption text-ember-700">edited since: not yet valued</span> : null}
-                      {c.latest.engineVersion !== ENGINE_VERSION ? (
-                        <span className="block text-caption text-ember-700">
-                          computed by {c.latest.engineVersion}, before today&rsquo;s engine
-                          {canEdit && c.status !== 'in_review' ? (
-                            <>
-                              {' '}
-                              <Button variant="quiet" busy={busy} onClick={() => revalue(c)} aria-label={`Re-value ${c.name} with today's engine`}>
-                                Re-value
-                              </Button>
-                            </>
-                          ) : null}
-                        </span>
-                      ) : null}
+                      <OlderEngineNote engineVersion={c.latest.engineVersion}>
+                        {canEdit && c.status !== 'in_review' ? (
+                          <>
+                            {' '}
+                            <Button variant="quiet" busy={busy} onClick={() => revalue(c)} aria-label={`Re-value ${c.name} with today's engine`}>
+                              Re-value
+                            </Button>
+                          </>
+                        ) : null}
+                      </OlderEngineNote>
                     </>
                   ) : (
                     <span className="text-ink-muted">Not yet</span>
