@@ -10,11 +10,19 @@
  * - a right lists the decisions its first use leads to (stage payments, a restart).
  * Tolerances are rounding except where stated.
  */
+import { createRequire } from 'node:module';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { valueProject, type ProjectModel, type RightResult } from '@/lattice';
 import { demoPortfolio } from '@/demo/portfolio';
 import { caseToModel } from '@/lib/case-model';
+import { expectClose } from './support/check';
+import { normalCdf, normalPdf } from './support/normal';
+
+const require = createRequire(import.meta.url);
+const { blackScholes } = require('black-scholes') as {
+  blackScholes: (s: number, k: number, t: number, v: number, r: number, callPut: 'call' | 'put') => number;
+};
 
 const model = fc
   .record({
@@ -169,5 +177,49 @@ describe('exercise boundaries', () => {
     expect(line.find((s) => s.kind === 'abandon')!.followUps).toBeUndefined();
     const lean = valueProject(demo('Older extrusion line'), { extras: false }).rights;
     expect(lean.map((s) => s.followUps)).toEqual(line.map((s) => s.followUps));
+  });
+
+  it('places a stage right’s second payment where the compound option’s critical value lies', () => {
+    // Three payments on a project with no payout before year 2: paying 18 in year 1 buys a
+    // European call on V (strike 32, one year), so it is worth paying exactly when that call is
+    // worth more than 18. The critical value solves BS(V*, 32, 1 year) = 18 (Geske 1979, J.
+    // Financial Economics 7(1), the compound option's inner condition; from memory), priced by
+    // the `black-scholes` package. Tolerance: the lattice's call value at 2000 steps is within
+    // 0.005 of Black–Scholes (tests/lattice/european-limits), which moves the root by at most
+    // 0.005 ÷ delta; linear interpolation between nodes a spacing h apart adds at most
+    // Γ·h²/(8·delta) (the call's curvature over one spacing).
+    const sigma = 0.4;
+    const r = 0.03;
+    const model: ProjectModel = {
+      underlying: { value: 60, volatility: sigma },
+      riskFreeRate: r,
+      horizon: 2,
+      steps: 2000,
+      options: [
+        {
+          kind: 'stage',
+          id: 'Pilot',
+          payments: [
+            { at: 0, amount: 10 },
+            { at: 1, amount: 18 },
+            { at: 2, amount: 32 },
+          ],
+        },
+      ],
+    };
+    const pilot = valueProject(model, { extras: false }).rights[0]!;
+    const [second, third] = pilot.followUps!;
+    expect(second!.boundary.map((b) => [b.t, b.side])).toEqual([[1, 'above']]);
+    expect(third!.boundary.map((b) => [b.t, b.side, b.critical])).toEqual([[2, 'above', 32]]);
+
+    const call = (v: number) => blackScholes(v, 32, 1, sigma, r, 'call');
+    let [low, high] = [1, 200];
+    for (let k = 0; k < 200; k++) [low, high] = call((low + high) / 2) > 18 ? [low, (low + high) / 2] : [(low + high) / 2, high];
+    const critical = (low + high) / 2;
+    const d1 = (Math.log(critical / 32) + r + (sigma * sigma) / 2) / sigma;
+    const delta = normalCdf(d1);
+    const gamma = normalPdf(d1) / (critical * sigma);
+    const h = critical * (Math.exp(sigma * Math.sqrt(2 / 2000)) - 1);
+    expectClose(second!.boundary[0]!.critical!, critical, { abs: 0.005 / delta + (gamma * h * h) / (8 * delta) }, { critical, delta, gamma, h });
   });
 });
