@@ -19,7 +19,9 @@ beforeAll(async () => {
       .select('case.id')
       .where('project.name', '=', 'Phased bio-resin plant')
       .where('case.name', 'in', ['Base case', 'Volatile demand'])
+      // The seed creates both cases in one transaction (the same created_at): the name breaks the tie.
       .orderBy('case.created_at')
+      .orderBy('case.name')
       .execute()
   ).map((c) => c.id);
 });
