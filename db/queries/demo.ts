@@ -4,6 +4,7 @@
  * Nothing in the app calls these.
  */
 import { randomUUID } from 'node:crypto';
+import { sql } from 'kysely';
 import type { Database } from '../index';
 
 export async function findOrganisationIdBySlug(db: Database, { slug }: { slug: string }): Promise<string | undefined> {
@@ -44,11 +45,18 @@ export async function ensureMembership(db: Database, { orgId, userId, role }: { 
   if (!membership) await db.insertInto('member').values({ id: randomUUID(), organizationId: orgId, userId, role, createdAt: new Date() }).execute();
 }
 
-/** Dates the project, its cases and their runs at `built`, as if they had been made then. */
+/**
+ * Dates the project, its cases and their runs from `built`, as if they had been made then. Each
+ * record keeps its distance from the project's first case, so the order they were made in stays:
+ * the first case is the project's base case (db/queries/summaries.ts), and with one date for all
+ * the base case was whichever the database listed first.
+ */
 export async function dateProjectRecords(trx: Database, { projectId, built }: { projectId: string; built: Date }): Promise<void> {
   await trx.updateTable('project').set({ created_at: built, updated_at: built }).where('id', '=', projectId).execute();
   const caseIds = (await trx.selectFrom('case').select('id').where('project_id', '=', projectId).execute()).map((c) => c.id);
   if (caseIds.length === 0) return;
-  await trx.updateTable('case').set({ created_at: built, updated_at: built }).where('id', 'in', caseIds).execute();
-  await trx.updateTable('valuation_run').set({ created_at: built }).where('case_id', 'in', caseIds).execute();
+  const first = sql<Date>`(select min(created_at) from "case" where project_id = ${projectId})`;
+  const moved = sql<Date>`${built}::timestamptz + (created_at - ${first})`;
+  await trx.updateTable('valuation_run').set({ created_at: moved }).where('case_id', 'in', caseIds).execute();
+  await trx.updateTable('case').set({ created_at: moved, updated_at: moved }).where('id', 'in', caseIds).execute();
 }

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { demoPortfolio } from '@/demo/portfolio';
 import { seedDemo } from '@/demo/seed';
+import { listProjectSummaries } from '@/db/queries/summaries';
 
 describe('demo seed', () => {
   it('creates both organisations and five users, and changes nothing the second time', async () => {
@@ -49,6 +50,25 @@ describe('demo seed', () => {
       .groupBy('case.id')
       .execute();
     expect(cases.map((c) => Number(c.runs))).toEqual([1, 1, 1, 1, 1, 1, 1, 1]);
+  });
+
+  it('heads every project with its base case: the case made first, even in a project dated in the past', async () => {
+    const kestrel = (await db.selectFrom('organization').select('id').where('slug', '=', 'kestrel-bay-materials').executeTakeFirstOrThrow()).id;
+    const summaries = await listProjectSummaries(db, { orgId: kestrel });
+    const demoNames = new Set(demoPortfolio.map((p) => p.name));
+    const heads = summaries.filter((p) => demoNames.has(p.name)).map((p) => [p.name, p.latest?.caseName]);
+    // The plant is dated two years back (its followed approval); its two cases once shared one date.
+    expect(heads).toEqual(demoPortfolio.map((p) => [p.name, p.cases[0]!.name]).sort((a, b) => a[0]!.localeCompare(b[0]!)));
+    const dates = await db
+      .selectFrom('case')
+      .innerJoin('project', 'project.id', 'case.project_id')
+      .select(['project.name', 'case.created_at'])
+      .where('project.name', 'in', [...demoNames])
+      .execute();
+    for (const name of demoNames) {
+      const made = dates.filter((d) => d.name === name).map((d) => +d.created_at);
+      expect(new Set(made).size).toBe(made.length);
+    }
   });
 
   it("approves the plant's base case with its board pack, and leaves the hub's base case waiting for review", async () => {
