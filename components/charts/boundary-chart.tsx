@@ -13,9 +13,9 @@ const dashes = ['', '6 3', '2 3', '8 3 2 3', '1 2', '10 4'];
 /**
  * The exercise boundary over time: for each right and each decision its first use leads to, the
  * critical project value at each step where it is taken, on the side the engine reports
- * (lib/decision-rules.ts). Lines differ by
- * dash as well as colour, and are named in the legend. Following a case, it also shades each
- * right's region (the side where it is used) and draws the observed values over time.
+ * (lib/decision-rules.ts). Lines differ by dash as well as colour, and are named in the legend.
+ * Following a case, it also shades each right's region (the side where it is used) and draws
+ * the observed values over time.
  */
 export function BoundaryChart({
   rights,
