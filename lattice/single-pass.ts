@@ -84,8 +84,13 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
       result.decisions && compiled.rights.length > 0
         ? exerciseProfiles(plan, result.decisions, rightOfSwitch, compiled.rights.length, compiled.start)
         : compiled.rights.map(() => ({ probability: 0, byStep: new Float64Array(width) }));
+    // Read once per switch: a follow-up's switch is read again for `paths`.
+    const read = new Map<number, BoundaryPoint[]>();
     const boundaryOf = (s: number): BoundaryPoint[] => {
+      const known = read.get(s);
+      if (known) return known;
       const points: BoundaryPoint[] = [];
+      read.set(s, points);
       if (!result.boundaryLow || !result.boundaryHigh) return points;
       for (let i = 0; i < width; i++) {
         const lowEdge = result.boundaryLow[s * width + i]!;
@@ -119,7 +124,7 @@ export function singlePass(model: ProjectModel, compiled: CompiledModel, options
         ? own.map((k) => ({
             from: compiled.modes[compiled.switches[k]!.from]!.id,
             to: compiled.modes[compiled.switches[k]!.to]!.id,
-            boundary: k === primary ? boundary : boundaryOf(k),
+            boundary: boundaryOf(k),
           }))
         : undefined;
       rights.push({

@@ -51,21 +51,24 @@ export async function compareCases(orgId: string, caseIds: string[]): Promise<Co
   const ordered = caseIds.map((id) => byId.get(id)!);
   const results = ordered.map((c) => (runOf.has(c.id) ? readStoredResult(runOf.get(c.id)!.result) : null));
   const inputs = ordered.map((c) => ({ name: c.name, cashFlows: c.cash_flows, settings: c.settings, options: c.options }) as CaseInput);
-  const cases: ComparedCase[] = ordered.map((c, k) => ({
-    id: c.id,
-    projectId: c.project_id,
-    projectName: c.project_name,
-    caseName: c.name,
-    currency: c.currency,
-    status: c.status,
-    valuedAt: runOf.get(c.id) ? new Date(runOf.get(c.id)!.created_at).toISOString() : null,
-    figuresVersion: runOf.get(c.id)?.case_version ?? null,
-    version: c.version,
-    engineVersion: runOf.get(c.id)?.engine_version ?? null,
-    staticNpv: results[k]?.staticNpv ?? null,
-    optionPremium: results[k]?.optionPremium ?? null,
-    expandedNpv: results[k]?.expandedNpv ?? null,
-  }));
+  const cases: ComparedCase[] = ordered.map((c, k) => {
+    const run = runOf.get(c.id);
+    return {
+      id: c.id,
+      projectId: c.project_id,
+      projectName: c.project_name,
+      caseName: c.name,
+      currency: c.currency,
+      status: c.status,
+      valuedAt: run ? new Date(run.created_at).toISOString() : null,
+      figuresVersion: run?.case_version ?? null,
+      version: c.version,
+      engineVersion: run?.engine_version ?? null,
+      staticNpv: results[k]?.staticNpv ?? null,
+      optionPremium: results[k]?.optionPremium ?? null,
+      expandedNpv: results[k]?.expandedNpv ?? null,
+    };
+  });
 
   const statusRow: ComparisonRow = {
     group: 'Valuation',
