@@ -4,6 +4,7 @@
  * generic message (the details go to the server log, never to the client).
  */
 import { z } from 'zod';
+import { hasBrand } from './bundle-brand';
 
 export const errorStatus = {
   bad_request: 400,
@@ -20,7 +21,16 @@ export const errorStatus = {
 
 export type ErrorCode = keyof typeof errorStatus;
 
+const appErrorBrand: unique symbol = Symbol.for('leeway.AppError');
+
 export class AppError extends Error {
+  readonly [appErrorBrand] = true;
+
+  /** True for an AppError made by any bundle's copy of this module (lib/bundle-brand.ts). */
+  static [Symbol.hasInstance](value: unknown): value is AppError {
+    return hasBrand(value, appErrorBrand);
+  }
+
   constructor(
     readonly code: ErrorCode,
     message: string,

@@ -17,9 +17,19 @@ import os from 'node:os';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { ModelIssue, ValuationResult, ValueOptions } from '@/lattice';
+import { hasBrand } from '../bundle-brand';
 import { AppError } from '../errors';
 
+const refusalBrand: unique symbol = Symbol.for('leeway.EngineRefusal');
+
 export class EngineRefusal extends Error {
+  readonly [refusalBrand] = true;
+
+  /** True for a refusal made by any bundle's copy of this module (lib/bundle-brand.ts). */
+  static [Symbol.hasInstance](value: unknown): value is EngineRefusal {
+    return hasBrand(value, refusalBrand);
+  }
+
   constructor(readonly issues: ModelIssue[]) {
     super(issues.map((i) => i.message).join('; '));
   }
