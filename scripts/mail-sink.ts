@@ -32,11 +32,13 @@ const server = new SMTPServer({
           html: typeof parsed.html === 'string' ? parsed.html : null,
           attachments: parsed.attachments.map((a) => ({ filename: a.filename ?? '', contentType: a.contentType, size: a.size })),
         };
-        await fs.mkdir(dir, { recursive: true });
+        // Messages hold sign-in, reset and invitation links: readable by this account only.
+        await fs.mkdir(dir, { recursive: true, mode: 0o700 });
+        await fs.chmod(dir, 0o700);
         // Written aside and renamed into place (atomic on one file system): a reader — the local
         // inbox, the e2e tests — never sees a message half written.
         const file = path.join(dir, `${id}.json`);
-        await fs.writeFile(`${file}.partial`, JSON.stringify(mail, null, 2));
+        await fs.writeFile(`${file}.partial`, JSON.stringify(mail, null, 2), { mode: 0o600 });
         await fs.rename(`${file}.partial`, file);
         callback();
       })

@@ -5,13 +5,14 @@
  * a person at this machine.
  */
 import { spawn } from 'node:child_process';
-import { statSync, readFileSync } from 'node:fs';
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import path from 'node:path';
 import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { closeBrowser, newContext, openBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
-import { BASE_URL } from './support/env';
+import { BASE_URL, E2E_MAIL_DIR } from './support/env';
 import { firstLink, waitForMail } from './support/mail';
 
 const contexts: BrowserContext[] = [];
@@ -88,6 +89,20 @@ describe('the local inbox', () => {
     const answer = await page.goto('/inbox');
     expect(answer?.status()).toBe(200);
     expect(await page.getByRole('heading', { name: 'Local inbox' }).isVisible()).toBe(true);
+  });
+
+  it('keeps each message, whose links sign people in, readable by this account only', async () => {
+    // They were world-readable (0644 in a 0755 folder): any account on the machine could take a reset link.
+    const address = `private-mail-${Date.now()}@example.test`;
+    const visitor = await newContext();
+    contexts.push(visitor);
+    const signUp = await visitor.request.post('/api/auth/sign-up/email', { data: { name: 'Pat Private', email: address, password: 'quiet-harbour-lantern-71' } });
+    expect(signUp.status()).toBe(200);
+    await waitForMail(address, /Confirm your e-mail/);
+    expect(statSync(E2E_MAIL_DIR).mode & 0o077).toBe(0);
+    const names = readdirSync(E2E_MAIL_DIR);
+    expect(names.length).toBeGreaterThan(0);
+    for (const name of names) expect(statSync(path.join(E2E_MAIL_DIR, name)).mode & 0o077).toBe(0);
   });
 });
 
