@@ -184,7 +184,11 @@ async function refusals() {
   check('a refused model, after a page made the engine pool', refused[0] === 422, `portfolio ${portfolio.status}, then ${refused[0]}`);
   const statuses = await burst({ ...smallModel, steps: 3000 }, 8);
   const counts = [...new Set(statuses)].map((s) => `${s} × ${statuses.filter((x) => x === s).length}`).join(', ');
-  check('eight at once from one person: four valued, the rest told to wait', statuses.every((s) => s === 200 || s === 429) && statuses.includes(429), `answers: ${counts}`);
+  check(
+    'eight at once from one person: four valued, the rest told to wait',
+    statuses.every((s) => s === 200 || s === 429) && statuses.includes(429),
+    `answers: ${counts}`,
+  );
   const deep = api('/api/v1/valuations', { method: 'POST', body: deeplyNestedBody });
   const twelve = api('/api/v1/valuations', { method: 'POST', body: JSON.stringify(twelveRightsModel) });
   const latencies = await Promise.all([smallValuationMs(), smallValuationMs(), smallValuationMs()]);

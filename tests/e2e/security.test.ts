@@ -96,7 +96,9 @@ describe('the local inbox', () => {
     const address = `private-mail-${Date.now()}@example.test`;
     const visitor = await newContext();
     contexts.push(visitor);
-    const signUp = await visitor.request.post('/api/auth/sign-up/email', { data: { name: 'Pat Private', email: address, password: 'quiet-harbour-lantern-71' } });
+    const signUp = await visitor.request.post('/api/auth/sign-up/email', {
+      data: { name: 'Pat Private', email: address, password: 'quiet-harbour-lantern-71' },
+    });
     expect(signUp.status()).toBe(200);
     await waitForMail(address, /Confirm your e-mail/);
     expect(statSync(E2E_MAIL_DIR).mode & 0o077).toBe(0);
