@@ -10,6 +10,7 @@ import { ENGINE_VERSION, type ProjectModel } from '@/lattice';
 import { enginePoolStats, valueInWorker } from './engine/pool';
 import { AppError } from './errors';
 import { queueHealth, type QueueHealth } from './jobs/queue-health';
+import { sharedFor } from './shared-answer';
 
 /** A valuation small enough to answer in milliseconds: it proves a worker is alive. */
 const canary: ProjectModel = {
@@ -51,9 +52,16 @@ async function jobsCheck(): Promise<QueueHealth | null> {
   }
 }
 
-export async function healthReport() {
+async function check() {
   const [database, engine, jobs] = await Promise.all([databaseCheck(), engineCheck(), jobsCheck()]);
   // A queue with no worker delays e-mail and simulations but serves every page: reported, not failed.
   const healthy = database.database === 'ok' && engine.engine !== 'unavailable';
   return { healthy, report: { status: healthy ? 'ok' : 'degraded', ...database, ...engine, queue: enginePoolStats(), jobs, engineVersion: ENGINE_VERSION } };
 }
+
+/**
+ * The report, checked at most once a second and shared by every request meanwhile: the route
+ * needs no sign-in, and a flood of it held the database pool (two queries each) and the engine's
+ * queue (a canary each) from signed-in work.
+ */
+export const healthReport = sharedFor(1_000, check);
