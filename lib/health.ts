@@ -60,8 +60,9 @@ async function check() {
 }
 
 /**
- * The report, checked at most once a second and shared by every request meanwhile: the route
- * needs no sign-in, and a flood of it held the database pool (two queries each) and the engine's
- * queue (a canary each) from signed-in work.
+ * The report, one check at a time shared by every request meanwhile, and a healthy one kept for
+ * a second: the route needs no sign-in, and a flood of it held the database pool (two queries
+ * each) and the engine's queue (a canary each) from signed-in work. A degraded report is not
+ * kept, so a recovery shows on the next request.
  */
-export const healthReport = sharedFor(1_000, check);
+export const healthReport = sharedFor(1_000, check, (answer) => answer.healthy);

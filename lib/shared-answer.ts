@@ -1,12 +1,22 @@
 /**
- * One run at a time, its answer shared by every caller for `ms` after it started: callers
- * meanwhile get the same promise instead of a run each. For checks anyone may ask for often,
- * such as the health check, which needs no sign-in and costs two queries and a valuation.
+ * One run at a time, shared by every caller: callers while it runs get its promise instead of a
+ * run each, and an answer `reusable` says may be kept is reused for `ms` after its run started.
+ * For checks anyone may ask for often, such as the health check (no sign-in; two queries and a
+ * valuation each), which keeps a healthy report for a second but reports a failed one only
+ * while it is checked, so a recovery shows at once.
  */
-export function sharedFor<T>(ms: number, run: () => Promise<T>, now: () => number = Date.now): () => Promise<T> {
-  let latest: { startedAt: number; answer: Promise<T> } | undefined;
+export function sharedFor<T>(ms: number, run: () => Promise<T>, reusable: (answer: T) => boolean = () => true, now: () => number = Date.now): () => Promise<T> {
+  let latest: { startedAt: number; answer: Promise<T>; settled: boolean; keep: boolean } | undefined;
   return () => {
-    if (!latest || now() - latest.startedAt >= ms) latest = { startedAt: now(), answer: run() };
-    return latest.answer;
+    const current = latest && (!latest.settled || (latest.keep && now() - latest.startedAt < ms));
+    if (!current) {
+      const entry = { startedAt: now(), answer: run(), settled: false, keep: false };
+      entry.answer.then(
+        (answer) => Object.assign(entry, { settled: true, keep: reusable(answer) }),
+        () => (entry.settled = true),
+      );
+      latest = entry;
+    }
+    return latest!.answer;
   };
 }

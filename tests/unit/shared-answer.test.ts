@@ -1,10 +1,13 @@
 /**
- * sharedFor (lib/shared-answer.ts), which keeps a flood of health checks to one check a second:
- * callers within the window share one run; after it, a new run starts; a failed run is shared
- * too and then retried. The clock is the test's own.
+ * sharedFor (lib/shared-answer.ts), which keeps a flood of health checks to one check at a time
+ * and a healthy report to one check a second: callers share a run while it runs; a kept answer
+ * is reused within the window and a new run starts after it; an answer not to be kept, or a
+ * failure, is shared only while its run is going. The clock is the test's own.
  */
 import { describe, expect, it } from 'vitest';
 import { sharedFor } from '@/lib/shared-answer';
+
+const settle = () => new Promise((r) => setTimeout(r, 0));
 
 describe('sharedFor', () => {
   it('runs once for every caller within the window, then again', async () => {
@@ -13,6 +16,7 @@ describe('sharedFor', () => {
     const ask = sharedFor(
       1_000,
       async () => ++runs,
+      undefined,
       () => clock,
     );
     const first = await Promise.all(Array.from({ length: 50 }, ask));
@@ -25,23 +29,53 @@ describe('sharedFor', () => {
     expect(runs).toBe(2);
   });
 
-  it('shares a run still going, and a failure, only within the window', async () => {
+  it('shares a run still going, however long it takes', async () => {
     let clock = 0;
     let runs = 0;
-    let finish!: () => void;
+    let finish!: (n: number) => void;
     const ask = sharedFor(
       1_000,
-      () => {
-        runs++;
-        return runs === 1 ? new Promise<number>((_, reject) => (finish = () => reject(new Error('database down')))) : Promise.resolve(runs);
-      },
+      () => (++runs === 1 ? new Promise<number>((resolve) => (finish = resolve)) : Promise.resolve(runs)),
+      undefined,
       () => clock,
     );
-    const waiting = [ask(), ask(), ask()];
+    const waiting = [ask(), ask()];
+    clock = 5_000;
+    waiting.push(ask());
     expect(runs).toBe(1);
-    finish();
-    for (const answer of waiting) await expect(answer).rejects.toThrow('database down');
-    clock = 1_500;
-    expect(await ask()).toBe(2);
+    finish(1);
+    expect(await Promise.all(waiting)).toEqual([1, 1, 1]);
+  });
+
+  it('does not keep an answer it is told not to, nor a failure, once the run is over', async () => {
+    let clock = 0;
+    const answers = ['degraded', 'ok'];
+    let runs = 0;
+    const ask = sharedFor(
+      1_000,
+      async () => answers[runs++]!,
+      (a) => a === 'ok',
+      () => clock,
+    );
+    const during = [ask(), ask()];
+    expect(await Promise.all(during)).toEqual(['degraded', 'degraded']);
+    await settle();
+    clock = 10;
+    expect(await ask()).toBe('ok');
+    await settle();
+    clock = 20;
+    expect(await ask()).toBe('ok');
+    expect(runs).toBe(2);
+
+    let failures = 0;
+    const failing = sharedFor(
+      1_000,
+      () => Promise.reject(new Error(`database down ${++failures}`)),
+      undefined,
+      () => 0,
+    );
+    await expect(Promise.all([failing(), failing()])).rejects.toThrow('database down 1');
+    await settle();
+    await expect(failing()).rejects.toThrow('database down 2');
   });
 });
