@@ -7,18 +7,22 @@
  * never on a client's X-Forwarded-For; a per-account backoff after repeated wrong passwords;
  * common passwords refused; every other session ends when a password is reset or changed; the
  * reset mail is sent after the answer, so the answer takes as long whether or not the account
- * exists; and only a user who belongs to no organisation may create one, through any door.
+ * exists; the demo's published password opens its accounts only on a server no other machine
+ * can reach, and no one may choose it; and only a user who belongs to no organisation may create
+ * one, through any door.
  */
 import { betterAuth } from 'better-auth';
 import { APIError, createAuthMiddleware, isAPIError } from 'better-auth/api';
 import { nextCookies } from 'better-auth/next-js';
 import { organization } from 'better-auth/plugins';
 import { db, pool } from '@/db';
+import { DEMO_PASSWORD } from '@/demo/organisations';
 import { findFirstMembership, INVITATION_LIFETIME_MS } from '@/db/queries/members';
 import { CLIENT_ADDRESS_HEADER } from './client-address';
 import { COMMON_PASSWORD_MESSAGE, isCommonPassword } from './common-passwords';
 import { authSecret, env } from './env';
 import { queueInvitationMail } from './invitation-mail';
+import { listensOnLoopbackOnly } from './listen-host';
 import { linkMail, queueMail } from './mail';
 import { ac, roles } from './permissions';
 import { addSignInFailure, clearSignInFailures } from '@/db/queries/sign-in-failures';
@@ -82,6 +86,15 @@ export const auth = betterAuth({
       const password = field ? (ctx.body as Record<string, unknown> | undefined)?.[field] : undefined;
       if (typeof password === 'string' && isCommonPassword(password))
         throw new APIError('BAD_REQUEST', { message: COMMON_PASSWORD_MESSAGE, code: 'COMMON_PASSWORD' });
+      if (password === DEMO_PASSWORD)
+        throw new APIError('BAD_REQUEST', { message: 'This is the demo’s published password; choose your own.', code: 'PUBLISHED_PASSWORD' });
+      // The demo accounts' password is in the README: it opens them only while no other machine can
+      // reach this server. Listening wider (HOST=0.0.0.0) with the demo seeded let anyone in as its admin.
+      if (ctx.path === '/sign-in/email' && ctx.body?.password === DEMO_PASSWORD && !listensOnLoopbackOnly())
+        throw new APIError('FORBIDDEN', {
+          message: 'The demo’s published password works only while Leeway listens on this machine alone. Reset this account’s password to sign in.',
+          code: 'PUBLISHED_PASSWORD',
+        });
       if (ctx.path === '/sign-in/email' && typeof ctx.body?.email === 'string') {
         const wait = await secondsUntilAllowed(db, ctx.body.email);
         if (wait > 0)

@@ -5,6 +5,7 @@
  * a person at this machine.
  */
 import { spawn } from 'node:child_process';
+import { randomBytes, randomInt } from 'node:crypto';
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import type { BrowserContext } from 'playwright-core';
@@ -12,7 +13,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { closeBrowser, newContext, openBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
-import { BASE_URL, E2E_MAIL_DIR } from './support/env';
+import { BASE_URL, DEMO_PASSWORD, E2E_MAIL_DIR } from './support/env';
 import { firstLink, waitForMail } from './support/mail';
 
 const contexts: BrowserContext[] = [];
@@ -77,6 +78,45 @@ describe('the auth secret', () => {
     expect(output).toMatch(/refusing to start: BETTER_AUTH_SECRET is a published value/);
     expect(code).toBe(1);
   });
+});
+
+describe("the demo's published password", () => {
+  it('opens no account on a server other machines can reach, and no one may choose it', async () => {
+    const port = 3198;
+    const url = `http://127.0.0.1:${port}`;
+    const child = spawn(process.execPath, ['.data/serve.mjs'], {
+      env: {
+        ...process.env,
+        HOST: '0.0.0.0',
+        PORT: String(port),
+        APP_URL: url,
+        TRUSTED_PROXIES: '127.0.0.1',
+        BETTER_AUTH_SECRET: randomBytes(32).toString('base64url'),
+      },
+      stdio: 'ignore',
+    });
+    try {
+      await expect.poll(async () => (await fetch(`${url}/sign-in`).catch(() => null))?.status, { timeout: 60_000, interval: 500 }).toBe(200);
+      const refused = await fetch(`${url}/api/auth/sign-in/email`, {
+        method: 'POST',
+        // Its own address for the per-address sign-in limit, as the browser contexts have.
+        headers: { 'content-type': 'application/json', origin: url, 'x-forwarded-for': `198.18.${randomInt(256)}.${1 + randomInt(254)}` },
+        body: JSON.stringify({ email: 'analyst@kestrelbay.example', password: DEMO_PASSWORD }),
+      });
+      expect(refused.status).toBe(403);
+      expect((await refused.json()).code).toBe('PUBLISHED_PASSWORD');
+    } finally {
+      child.kill('SIGKILL');
+    }
+    // The e2e server listens on loopback only: there every test signs in with it. Choosing it is refused.
+    const visitor = await newContext();
+    contexts.push(visitor);
+    const chosen = await visitor.request.post('/api/auth/sign-up/email', {
+      data: { name: 'Dana Demo', email: `published-${Date.now()}@example.test`, password: DEMO_PASSWORD },
+    });
+    expect(chosen.status()).toBe(400);
+    expect((await chosen.json()).code).toBe('PUBLISHED_PASSWORD');
+  }, 120_000);
 });
 
 describe('the local inbox', () => {
