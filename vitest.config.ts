@@ -22,6 +22,9 @@ export default defineConfig({
           setupFiles: ['tests/db/setup.ts'],
           env: {
             PG_DATABASE: process.env.PG_TEST_DATABASE ?? 'leeway_test',
+            // The auth library is called in-process, as by a server listening on loopback only
+            // (what scripts/serve.ts says for `npm start`; lib/listen-host.ts).
+            LEEWAY_LISTEN_HOST: '127.0.0.1',
             ...(process.env.TEST_DATABASE_URL ? { DATABASE_URL: process.env.TEST_DATABASE_URL } : {}),
           },
         },
