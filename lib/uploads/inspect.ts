@@ -58,13 +58,13 @@ export function declaredUnpackedSize(bytes: Uint8Array): number {
 }
 
 /** Checks an upload's size, that its content is what its name says and one of `allowed`; returns its kind. */
-export function inspectUpload(name: string, bytes: Uint8Array, allowed: UploadKind[]): UploadKind {
+export function inspectUpload<K extends UploadKind>(name: string, bytes: Uint8Array, allowed: K[]): K {
   if (bytes.length === 0) throw new AppError('unprocessable', 'The file is empty.');
   if (bytes.length > MAX_UPLOAD_BYTES) throw new AppError('too_large', `The file is over the ${MAX_UPLOAD_BYTES / 1024 / 1024} MB limit.`);
   const byName = extensionKinds[name.toLowerCase().split('.').pop() ?? ''];
   const byContent = contentKind(bytes);
   const names = allowed.map((k) => k.toUpperCase()).join(', ');
-  if (!byName || !allowed.includes(byName)) throw new AppError('unprocessable', `“${name}” is not one of the accepted types (${names}).`);
+  if (!byName || !(allowed as UploadKind[]).includes(byName)) throw new AppError('unprocessable', `“${name}” is not one of the accepted types (${names}).`);
   if (byContent !== byName)
     throw new AppError(
       'unprocessable',
@@ -72,5 +72,5 @@ export function inspectUpload(name: string, bytes: Uint8Array, allowed: UploadKi
     );
   if (byContent === 'xlsx' && declaredUnpackedSize(bytes) > MAX_UNPACKED_BYTES)
     throw new AppError('too_large', `The workbook would unpack to more than ${MAX_UNPACKED_BYTES / 1024 / 1024} MB; Leeway does not open it.`);
-  return byContent;
+  return byContent as K;
 }

@@ -8,7 +8,8 @@ import 'server-only';
 import { AppError } from '../errors';
 import { observationSchema } from '../validations/observation';
 import { HistoryError } from '../volatility/history';
-import { readCsvSeries, readXlsxSeries, type PlacedPoint } from '../volatility/read-series';
+import type { PlacedPoint } from '../volatility/read-series';
+import { readSeriesUpload } from '../uploads/read-in-thread';
 import { inspectUpload } from '../uploads/inspect';
 
 /** More values than anyone follows a project with; a bound on the work one upload can ask for. */
@@ -18,7 +19,7 @@ export async function readObservationFile(name: string, bytes: Uint8Array): Prom
   const kind = inspectUpload(name, bytes, ['csv', 'xlsx']);
   let points: PlacedPoint[];
   try {
-    points = kind === 'csv' ? readCsvSeries(new TextDecoder().decode(bytes)) : await readXlsxSeries(bytes);
+    points = await readSeriesUpload(kind, bytes);
   } catch (error) {
     if (error instanceof HistoryError) throw new AppError('unprocessable', error.message, { file: [error.message] });
     throw error;

@@ -7,7 +7,7 @@ import { historyJsonSchema } from '@/lib/validations/volatility';
 import { AppError } from '@/lib/errors';
 import { inspectUpload } from '@/lib/uploads/inspect';
 import { estimateFromHistory, HistoryError, type HistoryPoint } from '@/lib/volatility/history';
-import { readCsvSeries, readXlsxSeries } from '@/lib/volatility/read-series';
+import { readSeriesUpload } from '@/lib/uploads/read-in-thread';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -17,7 +17,7 @@ async function seriesFrom(request: Request): Promise<{ series: HistoryPoint[]; s
   if (type.startsWith('multipart/form-data')) {
     const { file, bytes } = await readUploadForm(request, { what: 'the history', choose: 'Choose a CSV or XLSX file.' });
     const kind = inspectUpload(file.name, bytes, ['csv', 'xlsx']);
-    const placed = kind === 'csv' ? readCsvSeries(new TextDecoder().decode(bytes)) : await readXlsxSeries(bytes);
+    const placed = await readSeriesUpload(kind, bytes);
     return { series: placed.map(({ date, value }) => ({ date, value })), source: file.name };
   }
   return { series: historyJsonSchema.parse(await readJson(request)).series, source: 'series sent as JSON' };

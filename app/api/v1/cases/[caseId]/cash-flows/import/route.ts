@@ -6,8 +6,8 @@ import { readUploadForm } from '@/lib/uploads/read-form';
 import { presentCase } from '@/lib/case-response';
 import { analyseCashFlows, type CashFlowSchedule } from '@/lib/cash-flows';
 import { AppError } from '@/lib/errors';
-import { readCashFlowWorkbook } from '@/lib/spreadsheets/cash-flow-workbook';
 import { inspectUpload } from '@/lib/uploads/inspect';
+import { readCashFlowUpload } from '@/lib/uploads/read-in-thread';
 import { readCase, saveCase } from '@/lib/cases/service';
 
 export const dynamic = 'force-dynamic';
@@ -17,7 +17,7 @@ export const POST = withAuth<{ caseId: string }>(async ({ member, params, reques
   const stored = await readCase(member, params.caseId);
   const { form, file, bytes } = await readUploadForm(request, { what: 'the workbook', choose: 'Choose an XLSX file.' });
   inspectUpload(file.name, bytes, ['xlsx']);
-  const read = await readCashFlowWorkbook(bytes);
+  const read = await readCashFlowUpload(bytes);
   if (!read.ok)
     throw new AppError('unprocessable', `The workbook has ${read.problems.length} problem${read.problems.length > 1 ? 's' : ''}; nothing was imported.`, {
       file: read.problems,

@@ -1,0 +1,76 @@
+/**
+ * Uploaded workbooks and series are read in a worker thread (.data/upload-worker.mjs, from
+ * lib/uploads/worker-entry.ts), never on the server's event loop: a 5 MB workbook of 200,000
+ * rows, inside the upload limits, held that loop for 7.6 s and grew the process by 2.4 GB, and
+ * any member may send one. The thread has its own heap limit and a deadline; at most two files
+ * are read at once (the machine's cores), and a third upload is told to try again.
+ */
+import path from 'node:path';
+import { Worker } from 'node:worker_threads';
+import type { WorkbookRead } from '../spreadsheets/cash-flow-workbook';
+import type { PlacedPoint } from '../volatility/read-series';
+import { AppError } from '../errors';
+import { HistoryError } from '../volatility/history';
+
+export type UploadReader = 'cash-flows' | 'series-csv' | 'series-xlsx';
+type Answer = { ok: true; value: unknown } | { ok: false; refusal: string } | { ok: false; error: string };
+
+const AT_ONCE = 2;
+const DEADLINE_MS = 20_000;
+/** Enough for the most values a history may hold (100,000 rows, even with five more columns: 4.6 s here; 256 MB was not). */
+const HEAP_MB = 512;
+
+declare global {
+  // One count per process: Next.js may load this module more than once (lib/bundle-brand.ts).
+  var leewayUploadsReading: number | undefined;
+}
+
+const tooBig = () =>
+  new AppError('unprocessable', 'The file is too large to read; send only the rows and columns Leeway needs.', {
+    file: ['Too large to read.'],
+  });
+
+function inThread(reader: UploadReader, bytes: Uint8Array): Promise<unknown> {
+  return new Promise((resolve, reject) => {
+    const worker = new Worker(path.join(/*turbopackIgnore: true*/ process.cwd(), '.data', 'upload-worker.mjs'), {
+      workerData: { reader, bytes },
+      resourceLimits: { maxOldGenerationSizeMb: HEAP_MB },
+    });
+    const finish = (settle: () => void) => {
+      clearTimeout(deadline);
+      worker.removeAllListeners();
+      void worker.terminate();
+      settle();
+    };
+    const deadline = setTimeout(
+      () => finish(() => reject(new AppError('unprocessable', 'The file took too long to read; send a smaller one.', { file: ['Took too long to read.'] }))),
+      DEADLINE_MS,
+    );
+    worker.once('message', (answer: Answer) =>
+      finish(() => {
+        if (answer.ok) resolve(answer.value);
+        else if ('refusal' in answer) reject(new HistoryError(answer.refusal));
+        else reject(new Error(`upload-worker.mjs: ${answer.error}`));
+      }),
+    );
+    worker.once('error', (error: Error & { code?: string }) => finish(() => reject(error.code === 'ERR_WORKER_OUT_OF_MEMORY' ? tooBig() : error)));
+    worker.once('exit', () => finish(() => reject(new Error('upload-worker.mjs stopped before answering'))));
+  });
+}
+
+async function read(reader: UploadReader, bytes: Uint8Array): Promise<unknown> {
+  const reading = globalThis.leewayUploadsReading ?? 0;
+  if (reading >= AT_ONCE) throw new AppError('rate_limited', 'Other files are being read right now; try again in a few seconds.', undefined, 3);
+  globalThis.leewayUploadsReading = reading + 1;
+  try {
+    return await inThread(reader, bytes);
+  } finally {
+    globalThis.leewayUploadsReading = (globalThis.leewayUploadsReading ?? 1) - 1;
+  }
+}
+
+export const readCashFlowUpload = (bytes: Uint8Array) => read('cash-flows', bytes) as Promise<WorkbookRead>;
+
+/** Dated values from a CSV or XLSX; a file the reader turns down rejects with a HistoryError. */
+export const readSeriesUpload = (kind: 'csv' | 'xlsx', bytes: Uint8Array) =>
+  read(kind === 'csv' ? 'series-csv' : 'series-xlsx', bytes) as Promise<PlacedPoint[]>;
