@@ -15,62 +15,79 @@ import { HistoryError } from '../volatility/history';
 export type UploadReader = 'cash-flows' | 'series-csv' | 'series-xlsx';
 type Answer = { ok: true; value: unknown } | { ok: false; refusal: string } | { ok: false; error: string };
 
-const AT_ONCE = 2;
-const DEADLINE_MS = 20_000;
-/** Enough for the most values a history may hold (100,000 rows, even with five more columns: 4.6 s here; 256 MB was not). */
-const HEAP_MB = 512;
+/** How reading runs; tests give a stand-in worker file, a short deadline and a small heap. */
+export interface ReadLimits {
+  file: string;
+  atOnce: number;
+  deadlineMs: number;
+  heapMb: number;
+}
+
+const defaults = (): ReadLimits => ({
+  file: path.join(/*turbopackIgnore: true*/ process.cwd(), '.data', 'upload-worker.mjs'),
+  atOnce: 2,
+  deadlineMs: 20_000,
+  // Enough for the most values a history may hold (100,000 rows, even with five more columns:
+  // 4.6 s here; 256 MB was not).
+  heapMb: 512,
+});
 
 declare global {
   // One count per process: Next.js may load this module more than once (lib/bundle-brand.ts).
   var leewayUploadsReading: number | undefined;
 }
 
-const tooBig = () =>
-  new AppError('unprocessable', 'The file is too large to read; send only the rows and columns Leeway needs.', {
-    file: ['Too large to read.'],
-  });
+const unreadable = (message: string, field: string) => new AppError('unprocessable', message, { file: [field] });
 
-function inThread(reader: UploadReader, bytes: Uint8Array): Promise<unknown> {
+function inThread(reader: UploadReader, bytes: Uint8Array, limits: ReadLimits): Promise<unknown> {
   return new Promise((resolve, reject) => {
-    const worker = new Worker(path.join(/*turbopackIgnore: true*/ process.cwd(), '.data', 'upload-worker.mjs'), {
-      workerData: { reader, bytes },
-      resourceLimits: { maxOldGenerationSizeMb: HEAP_MB },
-    });
+    const worker = new Worker(limits.file, { workerData: { reader, bytes }, resourceLimits: { maxOldGenerationSizeMb: limits.heapMb } });
     const finish = (settle: () => void) => {
       clearTimeout(deadline);
       worker.removeAllListeners();
+      // An 'error' with no listener would throw in this process: keep one while the thread stops.
+      worker.on('error', () => undefined);
       void worker.terminate();
       settle();
     };
     const deadline = setTimeout(
-      () => finish(() => reject(new AppError('unprocessable', 'The file took too long to read; send a smaller one.', { file: ['Took too long to read.'] }))),
-      DEADLINE_MS,
+      () => finish(() => reject(unreadable('The file took too long to read; send a smaller one.', 'Took too long to read.'))),
+      limits.deadlineMs,
     );
     worker.once('message', (answer: Answer) =>
       finish(() => {
         if (answer.ok) resolve(answer.value);
         else if ('refusal' in answer) reject(new HistoryError(answer.refusal));
-        else reject(new Error(`upload-worker.mjs: ${answer.error}`));
+        else reject(new Error(`upload reader: ${answer.error}`));
       }),
     );
-    worker.once('error', (error: Error & { code?: string }) => finish(() => reject(error.code === 'ERR_WORKER_OUT_OF_MEMORY' ? tooBig() : error)));
-    worker.once('exit', () => finish(() => reject(new Error('upload-worker.mjs stopped before answering'))));
+    worker.once('error', (error: Error & { code?: string }) =>
+      finish(() =>
+        reject(
+          error.code === 'ERR_WORKER_OUT_OF_MEMORY'
+            ? unreadable('The file is too large to read; send only the rows and columns Leeway needs.', 'Too large to read.')
+            : error,
+        ),
+      ),
+    );
+    worker.once('exit', () => finish(() => reject(new Error('upload reader stopped before answering'))));
   });
 }
 
-async function read(reader: UploadReader, bytes: Uint8Array): Promise<unknown> {
+/** Reads an upload in a thread; refused with 429 while `atOnce` others are being read. */
+export async function readInThread(reader: UploadReader, bytes: Uint8Array, limits: ReadLimits = defaults()): Promise<unknown> {
   const reading = globalThis.leewayUploadsReading ?? 0;
-  if (reading >= AT_ONCE) throw new AppError('rate_limited', 'Other files are being read right now; try again in a few seconds.', undefined, 3);
+  if (reading >= limits.atOnce) throw new AppError('rate_limited', 'Other files are being read right now; try again in a few seconds.', undefined, 3);
   globalThis.leewayUploadsReading = reading + 1;
   try {
-    return await inThread(reader, bytes);
+    return await inThread(reader, bytes, limits);
   } finally {
     globalThis.leewayUploadsReading = (globalThis.leewayUploadsReading ?? 1) - 1;
   }
 }
 
-export const readCashFlowUpload = (bytes: Uint8Array) => read('cash-flows', bytes) as Promise<WorkbookRead>;
+export const readCashFlowUpload = (bytes: Uint8Array) => readInThread('cash-flows', bytes) as Promise<WorkbookRead>;
 
 /** Dated values from a CSV or XLSX; a file the reader turns down rejects with a HistoryError. */
 export const readSeriesUpload = (kind: 'csv' | 'xlsx', bytes: Uint8Array) =>
-  read(kind === 'csv' ? 'series-csv' : 'series-xlsx', bytes) as Promise<PlacedPoint[]>;
+  readInThread(kind === 'csv' ? 'series-csv' : 'series-xlsx', bytes) as Promise<PlacedPoint[]>;
