@@ -18,9 +18,10 @@ declare global {
 /**
  * One pool per process, kept on globalThis: Next.js loads this module once for pages and once for
  * route handlers (and again on a hot reload in development), and a pool per copy held up to 20
- * connections where 10 was meant (measured on `npm start` after the load script). Bounded waits: a connection
- * that cannot be had in 5 s, or a statement running over 30 s, fails that request (503 or 500)
- * instead of holding it. An idle client whose server went away emits 'error' on the pool; it is
+ * connections where 10 was meant (measured on `npm start` after the load script).
+ *
+ * Bounded waits: a connection that cannot be had in 5 s, or a statement running over 30 s, fails
+ * that request (503 or 500) instead of holding it. An idle client whose server went away emits 'error' on the pool; it is
  * logged and dropped, and the pool reconnects when PostgreSQL is back, with no restart.
  */
 function newPool(): pg.Pool {

@@ -186,7 +186,7 @@ async function refusals() {
   const statuses = await burst({ ...smallModel, steps: 3000 }, 8);
   const counts = [...new Set(statuses)].map((s) => `${s} × ${statuses.filter((x) => x === s).length}`).join(', ');
   check(
-    'eight at once from one person: four valued, the rest told to wait',
+    'eight at once from one person: those past their share told to wait, none 500',
     statuses.every((s) => s === 200 || s === 429) && statuses.includes(429),
     `answers: ${counts}`,
   );

@@ -1,9 +1,10 @@
 /**
  * Uploaded workbooks and series are read in a worker thread (.data/upload-worker.mjs, from
- * lib/uploads/worker-entry.ts), never on the server's event loop: a 5 MB workbook of 200,000
- * rows, inside the upload limits, held that loop for 7.6 s and grew the process by 2.4 GB, and
- * any member may send one. The thread has its own heap limit and a deadline; at most two files
- * are read at once (the machine's cores), and a third upload is told to try again.
+ * lib/uploads/worker-entry.ts), never on the server's event loop: a workbook of 200,000 rows,
+ * inside the upload limits and sendable by any member, took 7.6 s to read and needs more than
+ * 512 MB of heap, and while it was read on that loop a small valuation waited 5.8 s. The thread
+ * has its own heap limit and a deadline; at most two files are read at once, and a third upload
+ * is told to try again.
  */
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
