@@ -344,6 +344,26 @@ describe('accounts', () => {
     expect((await fresh.request.post('/api/auth/sign-in/email', { data: { email, password: second } })).status()).toBe(200);
   });
 
+  it("say on the sign-in form how long an account must wait after wrong passwords, in the server's words", async () => {
+    // The form said "wait a minute" for every 429, and "confirm your e-mail" for every 403.
+    const email = `backoff-${Date.now()}@example.test`;
+    const visitor = await newContext();
+    contexts.push(visitor);
+    for (let k = 0; k < 5; k++) {
+      const wrong = await visitor.request.post('/api/auth/sign-in/email', {
+        data: { email, password: 'not the password' },
+        headers: { 'x-forwarded-for': `198.19.${randomInt(256)}.${1 + randomInt(254)}` },
+      });
+      expect(wrong.status()).toBe(401);
+    }
+    const page = await visitor.newPage();
+    await page.goto('/sign-in');
+    await page.getByLabel('E-mail').pressSequentially(email, { delay: 5 });
+    await page.getByLabel('Password').pressSequentially('still not the password', { delay: 5 });
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.getByText(/Too many wrong passwords for this account\. Try again in \d+ seconds/).count(), { timeout: 30_000 }).toBe(1);
+  });
+
   it('answer a reset request as fast whether or not the account exists (the mail is sent after)', async () => {
     const context = await newContext();
     contexts.push(context);
