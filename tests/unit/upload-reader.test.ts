@@ -1,15 +1,17 @@
 /**
- * Uploads are read in a thread that frees its place on every path (lib/uploads/read-in-thread.ts).
- * A stand-in worker written here answers, refuses, fails, exits, hangs or runs out of memory on
- * demand (the bytes say which), so each path is exercised without exceljs: after every failure
- * a plain read still answers, and a third read while two hang is told to wait (429).
+ * Uploads are read in a bounded thread that gives its place back on every path
+ * (lib/uploads/read-in-thread.ts on lib/threads/bounded.ts). A stand-in worker written here
+ * answers, refuses, fails, exits, hangs or runs out of memory on demand (the bytes say which), so
+ * each path is exercised without exceljs: after every failure a plain read still answers; a third
+ * read while two run waits for a place, and one more than may wait is refused (429).
  */
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { AppError } from '@/lib/errors';
-import { readInThread, type ReadLimits } from '@/lib/uploads/read-in-thread';
+import { threadPlaces, type ThreadLimits } from '@/lib/threads/bounded';
+import { readInThread } from '@/lib/uploads/read-in-thread';
 import { HistoryError } from '@/lib/volatility/history';
 
 const file = path.join(mkdtempSync(path.join(tmpdir(), 'leeway-upload-')), 'worker.mjs');
@@ -27,9 +29,8 @@ else parentPort.postMessage({ ok: true, value: { reader: workerData.reader, what
 `,
 );
 
-const limits: ReadLimits = { file, atOnce: 2, deadlineMs: 1_000, heapMb: 16 };
-const bytes = (what: string) => new TextEncoder().encode(what);
-const read = (what: string) => readInThread('series-csv', bytes(what), limits);
+const limits: ThreadLimits = { file, atOnce: 2, waiting: 1, waitMs: 5_000, deadlineMs: 1_000, heapMb: 16 };
+const read = (what: string, within = limits) => readInThread('series-csv', new TextEncoder().encode(what), within);
 const plainReadAnswers = async () => expect(await read('rows')).toEqual({ reader: 'series-csv', what: 'rows' });
 
 describe('reading an upload in a thread', () => {
@@ -38,22 +39,33 @@ describe('reading an upload in a thread', () => {
     await expect(read('refuse')).rejects.toBeInstanceOf(HistoryError);
   });
 
-  it('frees its place after a failure, a crash, an exit, a deadline and running out of memory', async () => {
+  it('gives its place back after a failure, a crash, an exit, a deadline and running out of memory', async () => {
     await expect(read('fail')).rejects.toThrow('a bug');
     await expect(read('crash')).rejects.toThrow('boom');
     await expect(read('exit')).rejects.toThrow('stopped before answering');
     await expect(read('hang')).rejects.toMatchObject({ code: 'unprocessable', message: expect.stringMatching(/too long/) });
     await expect(read('memory')).rejects.toMatchObject({ code: 'unprocessable', message: expect.stringMatching(/too large/) });
-    expect(globalThis.leewayUploadsReading).toBe(0);
+    expect(threadPlaces('upload')).toEqual({ running: 0, waiting: 0 });
     await plainReadAnswers();
   }, 30_000);
 
-  it('tells a third reader to wait while two files are being read', async () => {
+  it('lets a third read wait for a place, refuses one more than may wait, and one that waits too long', async () => {
     const hanging = [read('hang'), read('hang')];
-    const third = await read('rows').catch((error: unknown) => error);
-    expect(third).toBeInstanceOf(AppError);
-    expect(third).toMatchObject({ code: 'rate_limited', retryAfter: 3 });
+    const third = read('rows');
+    await new Promise((r) => setTimeout(r, 100));
+    expect(threadPlaces('upload')).toEqual({ running: 2, waiting: 1 });
+    const fourth = await read('rows').catch((error: unknown) => error);
+    expect(fourth).toBeInstanceOf(AppError);
+    expect(fourth).toMatchObject({ code: 'rate_limited', retryAfter: 3 });
+    // The hanging reads reach their deadline; the waiting one is handed a place and answers.
     for (const h of hanging) await expect(h).rejects.toMatchObject({ code: 'unprocessable' });
+    expect(await third).toEqual({ reader: 'series-csv', what: 'rows' });
+
+    const impatient = { ...limits, waitMs: 200 };
+    const busy = [read('hang'), read('hang')];
+    await expect(read('rows', impatient)).rejects.toMatchObject({ code: 'rate_limited' });
+    for (const h of busy) await expect(h).rejects.toMatchObject({ code: 'unprocessable' });
+    expect(threadPlaces('upload')).toEqual({ running: 0, waiting: 0 });
     await plainReadAnswers();
   }, 30_000);
 });
