@@ -101,7 +101,7 @@ export async function inBoundedThread(kind: string, workerData: unknown, limits:
   }
 }
 
-/** Tasks of a kind running and waiting here (for tests and health). */
+/** Tasks of a kind running and waiting in this process (the tests read it). */
 export function threadPlaces(kind: string): { running: number; waiting: number } {
   const places = placesOf(kind);
   return { running: places.running, waiting: places.queue.length };
