@@ -5,13 +5,13 @@
  * a person at this machine.
  */
 import { spawn } from 'node:child_process';
-import { randomBytes, randomInt } from 'node:crypto';
+import { randomBytes } from 'node:crypto';
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
-import { closeBrowser, newContext, openBrowser, signedInPage } from './support/browser';
+import { closeBrowser, newContext, openBrowser, signedInPage, visitorAddress } from './support/browser';
 import { demoCase } from './support/demo';
 import { BASE_URL, DEMO_PASSWORD, E2E_MAIL_DIR } from './support/env';
 import { firstLink, waitForMail } from './support/mail';
@@ -100,7 +100,7 @@ describe("the demo's published password", () => {
       const refused = await fetch(`${url}/api/auth/sign-in/email`, {
         method: 'POST',
         // Its own address for the per-address sign-in limit, as the browser contexts have.
-        headers: { 'content-type': 'application/json', origin: url, 'x-forwarded-for': `198.18.${randomInt(256)}.${1 + randomInt(254)}` },
+        headers: { 'content-type': 'application/json', origin: url, 'x-forwarded-for': visitorAddress() },
         body: JSON.stringify({ email: 'analyst@kestrelbay.example', password: DEMO_PASSWORD }),
       });
       expect(refused.status).toBe(403);
@@ -352,7 +352,7 @@ describe('accounts', () => {
     for (let k = 0; k < 5; k++) {
       const wrong = await visitor.request.post('/api/auth/sign-in/email', {
         data: { email, password: 'not the password' },
-        headers: { 'x-forwarded-for': `198.19.${randomInt(256)}.${1 + randomInt(254)}` },
+        headers: { 'x-forwarded-for': visitorAddress() },
       });
       expect(wrong.status()).toBe(401);
     }

@@ -32,16 +32,21 @@ export async function closeBrowser() {
   browser = null;
 }
 
+/**
+ * A random address of the 198.18.0.0/15 benchmarking range (a header only; no traffic goes
+ * there): a client sending it as X-Forwarded-For counts against the sign-in rate limit on its own.
+ */
+export const visitorAddress = () => `198.${18 + randomInt(2)}.${randomInt(256)}.${1 + randomInt(254)}`;
+
 export async function newContext(): Promise<BrowserContext> {
   const b = await openBrowser();
   return b.newContext({
     baseURL: BASE_URL,
     viewport: { width: 1280, height: 800 },
-    // A random address of the 198.18.0.0/15 benchmarking range (a header only; no traffic goes
-    // there): every context, in every test file, counts against the sign-in rate limit on its own.
+    // Every context, in every test file, has an address of its own (visitorAddress).
     // The app's own Origin, as a browser sends it: API calls from page.request would otherwise
     // carry none, and the app refuses state-changing requests without it (lib/same-origin.ts).
-    extraHTTPHeaders: { 'x-forwarded-for': `198.${18 + randomInt(2)}.${randomInt(256)}.${1 + randomInt(254)}`, origin: BASE_URL },
+    extraHTTPHeaders: { 'x-forwarded-for': visitorAddress(), origin: BASE_URL },
   });
 }
 
