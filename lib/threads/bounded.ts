@@ -3,10 +3,7 @@
  * `atOnce` tasks of a kind in this process: one more waits for a place (up to `waitMs`, at most
  * `waiting` of them), and past that is refused (429 with Retry-After), so a download link
  * rarely meets a refusal and a burst never runs side by side.
- * Request-time threads use it: reading uploads (lib/uploads/read-in-thread.ts) and rendering
- * PDFs (lib/board-pack/pdf-thread.ts). Unbounded, 24 validation reports asked for at once by one
- * read-only member rendered side by side: the server grew from 0.3 to 1.7 GB and a small
- * valuation waited 1.6 s.
+ * Uploads are read through it (lib/uploads/read-in-thread.ts).
  */
 import { Worker } from 'node:worker_threads';
 import { AppError } from '../errors';
