@@ -13,8 +13,14 @@ import { AppError } from '../errors';
 import { API_KEY_REQUESTS_PER_MINUTE } from './limits';
 import { hashApiKey, looksLikeApiKey } from './secret';
 
-// Counted in this process: Leeway serves from one Node process; the engine's own limits are per organisation.
-const limiter = new RateLimiterMemory({ points: API_KEY_REQUESTS_PER_MINUTE, duration: 60 });
+declare global {
+  // Counted once per process, kept on globalThis: Next.js may load this module more than once
+  // (lib/bundle-brand.ts), and a count per copy would let a key make its share in each.
+  var leewayApiKeyLimiter: RateLimiterMemory | undefined;
+}
+globalThis.leewayApiKeyLimiter ??= new RateLimiterMemory({ points: API_KEY_REQUESTS_PER_MINUTE, duration: 60 });
+/** Requests per key per minute in this process; the engine's own limits are per organisation. */
+export const limiter: RateLimiterMemory = globalThis.leewayApiKeyLimiter;
 
 /** Last use is written at most once a minute per key, not on every request. */
 const TOUCH_AFTER_MS = 60_000;
