@@ -8,7 +8,8 @@
  *   1. A body nested 100,000 deep and twelve rights at 10,000 steps are refused, while a small
  *      valuation still answers in under 2 s, also while a 200,000-row workbook is read; a
  *      refused model and one person's fifth valuation at once answer 422 and 429 even when a
- *      page made the engine pool.
+ *      page made the engine pool. Twenty-four validation reports asked for at once render two at
+ *      a time, and the server stays under 1 GB.
  *   2. A worker killed with SIGKILL in the middle of a Monte Carlo estimate: the queue's
  *      maintenance notices after the job's deadline and another worker runs it to the end.
  *   3. PostgreSQL killed with SIGKILL under a stream of writes and started again: every write
@@ -117,13 +118,11 @@ const api = (path: string, init: RequestInit = {}) =>
     headers: { 'content-type': 'application/json', origin: base, cookie, ...(init.headers ?? {}) },
   });
 
-async function signIn() {
-  const answer = await api('/api/auth/sign-in/email', {
-    method: 'POST',
-    body: JSON.stringify({ email: 'analyst@kestrelbay.example', password: 'leeway-demo-2026' }),
-  });
-  if (!answer.ok) throw new Error(`sign-in answered ${answer.status}`);
-  cookie = answer.headers
+/** A demo member's session cookie. */
+async function signedIn(email: string): Promise<string> {
+  const answer = await api('/api/auth/sign-in/email', { method: 'POST', body: JSON.stringify({ email, password: 'leeway-demo-2026' }) });
+  if (!answer.ok) throw new Error(`sign-in as ${email} answered ${answer.status}`);
+  return answer.headers
     .getSetCookie()
     .map((c) => c.split(';')[0])
     .join('; ');
@@ -223,6 +222,42 @@ async function refusals() {
   );
 }
 
+/** The process's resident memory in MB (Linux's /proc). */
+const residentMb = (pid: number) => Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${pid}/status`, 'utf8'))?.[1]) / 1024;
+
+/**
+ * Four members ask for six validation reports each at once: each is valued (each member's
+ * share of the engine answers the rest 429) and rendered in a thread. Side by side, 24 renders
+ * took the server from 0.3 to 1.7 GB and a small valuation waited 1.6 s; bounded to two at once
+ * (lib/threads/bounded.ts), the server's memory stays under 1 GB: its own ~0.3 GB and two renders.
+ */
+async function documentsAtOnce(caseId: string, app: ChildProcess) {
+  const members = await Promise.all(['analyst', 'reviewer', 'executive', 'admin'].map((role) => signedIn(`${role}@kestrelbay.example`)));
+  const before = residentMb(app.pid!);
+  let peak = before;
+  let answered = false;
+  const sampler = (async () => {
+    for (; !answered; await sleep(100)) peak = Math.max(peak, residentMb(app.pid!));
+  })();
+  const report = (member: string) =>
+    fetch(`${base}/api/v1/cases/${caseId}/validation-report`, { headers: { cookie: member }, signal: AbortSignal.timeout(120_000) }).then(
+      async (r) => (await r.arrayBuffer(), r.status),
+      (error: Error) => error.name,
+    );
+  const reports = Promise.all(members.flatMap((member) => Array.from({ length: 6 }, () => report(member))));
+  void reports.finally(() => (answered = true));
+  const meanwhile: number[] = [];
+  while (!answered) meanwhile.push(await smallValuationMs());
+  const statuses = await reports;
+  await sampler;
+  const counts = [...new Set(statuses)].map((s) => `${s} × ${statuses.filter((x) => x === s).length}`).join(', ');
+  check(
+    'twenty-four validation reports at once are rendered two at a time',
+    statuses.includes(200) && statuses.every((s) => s === 200 || s === 429) && peak < 1024 && Math.max(...meanwhile) < 2_000,
+    `answers: ${counts}; the server ${Math.round(before)} MB, at most ${Math.round(peak)} MB (limit 1,024); ${meanwhile.length} small valuations meanwhile, the slowest ${Math.max(...meanwhile)} ms (limit 2,000 ms)`,
+  );
+}
+
 async function workerKilled(caseId: string, worker: ChildProcess): Promise<ChildProcess> {
   console.log('\n2. A worker killed mid-job');
   const id = await startEstimate(caseId);
@@ -318,12 +353,13 @@ async function main() {
   // A page, not /api/health: the health check's canary would make the engine pool in the
   // route bundle first (see refusals()).
   await until('the app answers', async () => ((await fetch(`${base}/sign-in`)).ok ? true : undefined), 60_000);
-  await signIn();
+  cookie = await signedIn('analyst@kestrelbay.example');
   const { projects } = await (await api('/api/v1/projects')).json();
   const { cases } = await (await api(`/api/v1/projects/${projects[0].id}/cases`)).json();
   const caseId: string = cases[0].id;
 
   await refusals();
+  await documentsAtOnce(caseId, app);
   worker = await workerKilled(caseId, worker);
   await databaseKilled(caseId);
   await terminated(caseId, app, worker);

@@ -1,19 +1,31 @@
 /**
  * Renders a PDF in a worker thread (an entry bundled into .data/ by
- * scripts/build-engine-worker.sh), so rendering never blocks a request's event loop. The entry
- * answers `{ ok: true, pdf }` or `{ ok: false, error }`.
+ * scripts/build-engine-worker.sh), so rendering never blocks a request's event loop: at most two
+ * renders at once in a process, sixteen more waiting up to 30 s (a download link cannot show a
+ * "try again"), each with a heap limit and a deadline (lib/threads/bounded.ts). The entry answers
+ * `{ ok: true, pdf }` or `{ ok: false, error }`.
  */
 import path from 'node:path';
-import { Worker } from 'node:worker_threads';
+import { AppError } from '../errors';
+import { inBoundedThread } from '../threads/bounded';
 
-export function renderPdfInThread(file: string, data: unknown): Promise<Buffer> {
-  return new Promise((resolve, reject) => {
-    const worker = new Worker(path.join(/*turbopackIgnore: true*/ process.cwd(), '.data', file), { workerData: data });
-    worker.once('message', (answer: { ok: true; pdf: Uint8Array } | { ok: false; error: string }) => {
-      void worker.terminate();
-      if (answer.ok) resolve(Buffer.from(answer.pdf));
-      else reject(new Error(`${file}: rendering failed: ${answer.error}`));
-    });
-    worker.once('error', reject);
-  });
+const refusals = {
+  busy: 'Other documents are being rendered right now; try again in a few seconds.',
+  tooLong: () => new AppError('unavailable', 'Rendering the document took too long; try again in a moment.', undefined, 10),
+  tooLarge: () => new AppError('unavailable', 'The document needed more memory than a render may use.'),
+};
+
+/** The rendered PDF; a `signal` that fires (the download was closed) stops the render or its wait. */
+export async function renderPdfInThread(file: string, data: unknown, signal?: AbortSignal): Promise<Buffer> {
+  const limits = {
+    file: path.join(/*turbopackIgnore: true*/ process.cwd(), '.data', file),
+    atOnce: 2,
+    waiting: 16,
+    waitMs: 30_000,
+    deadlineMs: 60_000,
+    heapMb: 512,
+  };
+  const answer = (await inBoundedThread('pdf', data, limits, refusals, signal)) as { ok: true; pdf: Uint8Array } | { ok: false; error: string };
+  if (answer.ok) return Buffer.from(answer.pdf);
+  throw new Error(`${file}: rendering failed: ${answer.error}`);
 }

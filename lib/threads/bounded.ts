@@ -3,7 +3,10 @@
  * `atOnce` tasks of a kind in this process: one more waits for a place (up to `waitMs`, at most
  * `waiting` of them), and past that is refused (429 with Retry-After), so a download link
  * rarely meets a refusal and a burst never runs side by side.
- * Uploads are read through it (lib/uploads/read-in-thread.ts).
+ * Request-time threads use it: reading uploads (lib/uploads/read-in-thread.ts) and rendering
+ * PDFs (lib/board-pack/pdf-thread.ts). Unbounded, 24 validation reports asked for at once by one
+ * read-only member rendered side by side: the server grew from 0.3 to 1.7 GB and a small
+ * valuation waited 1.6 s.
  */
 import { Worker } from 'node:worker_threads';
 import { AppError } from '../errors';
@@ -43,21 +46,30 @@ function placesOf(kind: string): Places {
   return all.get(kind)!;
 }
 
-async function takePlace(places: Places, limits: ThreadLimits, busy: () => AppError): Promise<void> {
+const cancelled = () => new AppError('bad_request', 'The request was cancelled.');
+
+async function takePlace(places: Places, limits: ThreadLimits, busy: () => AppError, signal?: AbortSignal): Promise<void> {
+  if (signal?.aborted) throw cancelled();
   if (places.running < limits.atOnce) {
     places.running++;
     return;
   }
   if (places.queue.length >= limits.waiting) throw busy();
   await new Promise<void>((resolve, reject) => {
+    const leave = (error: AppError) => {
+      clearTimeout(timer);
+      signal?.removeEventListener('abort', onAbort);
+      places.queue.splice(places.queue.indexOf(handOver), 1);
+      reject(error);
+    };
     const handOver = () => {
       clearTimeout(timer);
+      signal?.removeEventListener('abort', onAbort);
       resolve();
     };
-    const timer = setTimeout(() => {
-      places.queue.splice(places.queue.indexOf(handOver), 1);
-      reject(busy());
-    }, limits.waitMs);
+    const onAbort = () => leave(cancelled());
+    const timer = setTimeout(() => leave(busy()), limits.waitMs);
+    signal?.addEventListener('abort', onAbort, { once: true });
     places.queue.push(handOver);
   });
 }
@@ -69,11 +81,13 @@ function givePlace(places: Places) {
   else places.running--;
 }
 
-function inThread(workerData: unknown, limits: ThreadLimits, refusals: ThreadRefusals): Promise<unknown> {
+function inThread(workerData: unknown, limits: ThreadLimits, refusals: ThreadRefusals, signal?: AbortSignal): Promise<unknown> {
   return new Promise((resolve, reject) => {
     const worker = new Worker(limits.file, { workerData, resourceLimits: { maxOldGenerationSizeMb: limits.heapMb } });
+    const onAbort = () => finish(() => reject(cancelled()));
     const finish = (settle: () => void) => {
       clearTimeout(deadline);
+      signal?.removeEventListener('abort', onAbort);
       worker.removeAllListeners();
       // An 'error' with no listener would throw in this process: keep one while the thread stops.
       worker.on('error', () => undefined);
@@ -84,15 +98,27 @@ function inThread(workerData: unknown, limits: ThreadLimits, refusals: ThreadRef
     worker.once('message', (answer: unknown) => finish(() => resolve(answer)));
     worker.once('error', (error: Error & { code?: string }) => finish(() => reject(error.code === 'ERR_WORKER_OUT_OF_MEMORY' ? refusals.tooLarge() : error)));
     worker.once('exit', () => finish(() => reject(new Error(`${limits.file} stopped before answering`))));
+    // A caller that goes away (a closed download) stops its thread and frees the place.
+    signal?.addEventListener('abort', onAbort, { once: true });
+    if (signal?.aborted) onAbort();
   });
 }
 
-/** The thread's first message, once a place is free (see above). */
-export async function inBoundedThread(kind: string, workerData: unknown, limits: ThreadLimits, refusals: ThreadRefusals): Promise<unknown> {
+/**
+ * The thread's first message, once a place is free (see above). A caller whose `signal` fires
+ * leaves the wait, or has its thread stopped, and is answered "cancelled".
+ */
+export async function inBoundedThread(
+  kind: string,
+  workerData: unknown,
+  limits: ThreadLimits,
+  refusals: ThreadRefusals,
+  signal?: AbortSignal,
+): Promise<unknown> {
   const places = placesOf(kind);
-  await takePlace(places, limits, () => new AppError('rate_limited', refusals.busy, undefined, 3));
+  await takePlace(places, limits, () => new AppError('rate_limited', refusals.busy, undefined, 3), signal);
   try {
-    return await inThread(workerData, limits, refusals);
+    return await inThread(workerData, limits, refusals, signal);
   } finally {
     givePlace(places);
   }

@@ -14,7 +14,7 @@ const filename = (caseName: string, version: number, extension: string) => `${ca
 
 export async function validationReportPdf(member: Member, caseId: string, pageSize: PageSize, signal?: AbortSignal) {
   const data = await gatherValidationReport(member, caseId, pageSize, signal);
-  return { pdf: await renderPdfInThread('validation-report-worker.mjs', data), filename: filename(data.caseName, data.caseVersion, 'pdf') };
+  return { pdf: await renderPdfInThread('validation-report-worker.mjs', data, signal), filename: filename(data.caseName, data.caseVersion, 'pdf') };
 }
 
 export async function validationReportWorkbook(member: Member, caseId: string, signal?: AbortSignal) {
@@ -29,7 +29,7 @@ export async function attachValidationReport(member: Member, caseId: string, sig
     caseId,
     async () => {
       const data = await gatherValidationReport(member, caseId, 'A4', signal);
-      const pdf = await renderPdfInThread('validation-report-worker.mjs', data);
+      const pdf = await renderPdfInThread('validation-report-worker.mjs', data, signal);
       return { filename: filename(data.caseName, data.caseVersion, 'pdf'), kind: 'pdf' as const, data: pdf, detail: { version: data.caseVersion } };
     },
     'case.attach_validation_report',

@@ -3,14 +3,15 @@
  * (lib/uploads/read-in-thread.ts on lib/threads/bounded.ts). A stand-in worker written here
  * answers, refuses, fails, exits, hangs or runs out of memory on demand (the bytes say which), so
  * each path is exercised without exceljs: after every failure a plain read still answers; a third
- * read while two run waits for a place, and one more than may wait is refused (429).
+ * read while two run waits for a place, and one more than may wait is refused (429); a caller
+ * that goes away (a closed download) leaves the wait or has its thread stopped.
  */
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { AppError } from '@/lib/errors';
-import { threadPlaces, type ThreadLimits } from '@/lib/threads/bounded';
+import { inBoundedThread, threadPlaces, type ThreadLimits } from '@/lib/threads/bounded';
 import { readInThread } from '@/lib/uploads/read-in-thread';
 import { HistoryError } from '@/lib/volatility/history';
 
@@ -68,4 +69,32 @@ describe('reading an upload in a thread', () => {
     expect(threadPlaces('upload')).toEqual({ running: 0, waiting: 0 });
     await plainReadAnswers();
   }, 30_000);
+
+  it('lets a caller that goes away leave the wait, or stops its thread, and frees the place', async () => {
+    // The deadline is far off, so only the signal can stop these threads within the test's time.
+    const patient = { ...limits, deadlineMs: 60_000 };
+    const refusals = { busy: 'busy', tooLong: () => new AppError('unavailable', 'too long'), tooLarge: () => new AppError('unavailable', 'too large') };
+    const run = (what: string, signal: AbortSignal) => inBoundedThread('closed-download', { bytes: new TextEncoder().encode(what) }, patient, refusals, signal);
+    const places = () => threadPlaces('closed-download');
+    const [first, second, third] = [new AbortController(), new AbortController(), new AbortController()];
+    const hanging = [run('hang', first.signal), run('hang', second.signal)];
+    const waiting = run('rows', third.signal);
+    await new Promise((r) => setTimeout(r, 100));
+    expect(places()).toEqual({ running: 2, waiting: 1 });
+
+    third.abort();
+    await expect(waiting).rejects.toMatchObject({ code: 'bad_request', message: 'The request was cancelled.' });
+    expect(places()).toEqual({ running: 2, waiting: 0 });
+    first.abort();
+    await expect(hanging[0]).rejects.toMatchObject({ code: 'bad_request' });
+    expect(places()).toEqual({ running: 1, waiting: 0 });
+    second.abort();
+    await expect(hanging[1]).rejects.toMatchObject({ code: 'bad_request' });
+    expect(places()).toEqual({ running: 0, waiting: 0 });
+
+    // Gone before it asked: no thread is started.
+    await expect(run('rows', AbortSignal.abort())).rejects.toMatchObject({ code: 'bad_request' });
+    expect(places()).toEqual({ running: 0, waiting: 0 });
+    expect(await run('rows', new AbortController().signal)).toEqual({ ok: true, value: { reader: undefined, what: 'rows' } });
+  }, 10_000);
 });
