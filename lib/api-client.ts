@@ -50,3 +50,24 @@ export async function sendJson<T>(method: 'POST' | 'PATCH' | 'DELETE', url: stri
 export async function sendForm<T>(url: string, form: FormData): Promise<T> {
   return parse<T>(await fetch(url, { method: 'POST', body: form, headers: { accept: 'application/json' } }));
 }
+
+/** The file name a Content-Disposition header gives, its UTF-8 form (`filename*`) first. */
+export function filenameOf(header: string | null): string | null {
+  if (!header) return null;
+  const encoded = /filename\*=UTF-8''([^;\s]+)/i.exec(header)?.[1];
+  if (encoded) {
+    try {
+      return decodeURIComponent(encoded);
+    } catch {
+      // A malformed escape: the plain name below is the server's other spelling of it.
+    }
+  }
+  return /filename="([^"]*)"/i.exec(header)?.[1] ?? null;
+}
+
+/** GET a file (a PDF, a workbook) with the name the server gives it; a refusal becomes an ApiError. */
+export async function getFile(url: string): Promise<{ blob: Blob; filename: string | null }> {
+  const res = await fetch(url);
+  if (!res.ok) await parse(res);
+  return { blob: await res.blob(), filename: filenameOf(res.headers.get('content-disposition')) };
+}

@@ -159,6 +159,23 @@ describe('review workflow', () => {
     expect(letter.status()).toBe(200);
     expect(letter.headers()['content-type']).toBe('application/pdf');
     expect((await page.request.get(`/api/v1/cases/${caseId}/board-pack?size=A3`)).status()).toBe(422);
+
+    // A refused download says why beside its link, and the page stays: here the Letter pack is
+    // answered as the server answers when renders are busy (lib/board-pack/pdf-thread.ts).
+    const busy = 'Other documents are being rendered right now; try again in a few seconds.';
+    await page.route('**/board-pack?size=LETTER', (route) =>
+      route.fulfill({
+        status: 429,
+        headers: { 'retry-after': '3' },
+        contentType: 'application/json',
+        body: JSON.stringify({ error: { code: 'rate_limited', message: busy } }),
+      }),
+    );
+    const where = page.url();
+    await page.getByRole('link', { name: 'Board pack (PDF, US Letter)' }).focus();
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.getByRole('alert').filter({ hasText: busy }).isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(page.url()).toBe(where);
     await context.close();
   });
 

@@ -8,6 +8,7 @@ import { LoadError, LoadingBlock } from '@/components/load-state';
 import { ValuationCaution } from '@/components/valuation-caution';
 import { OlderEngineNote } from '@/components/older-engine-note';
 import { getJson } from '@/lib/api-client';
+import { DownloadLink } from '@/components/ui/download-link';
 
 interface CaseOption {
   id: string;
@@ -104,12 +105,12 @@ export function CompareView() {
                 <input type="checkbox" checked={onlyDifferences} onChange={(e) => setOnlyDifferences(e.target.checked)} className="h-4 w-4" />
                 Only rows that differ
               </label>
-              <a
+              <DownloadLink
                 href={`/api/v1/compare.xlsx?cases=${selected.join(',')}`}
                 className="inline-flex items-center rounded-md border border-line-strong bg-paper-raised px-4 py-2 font-medium hover:bg-paper-sunk"
               >
                 Download as a workbook
-              </a>
+              </DownloadLink>
             </div>
             <div className="overflow-x-auto rounded-card border border-line bg-paper-raised shadow-card">
               <table className="w-full border-collapse text-left text-body">

@@ -18,6 +18,7 @@ import { useState } from 'react';
 import { OlderEngineNote } from '@/components/older-engine-note';
 import { formatDate, formatMoney } from '@/lib/format';
 import type { ProjectSummaryJson } from '@/lib/project-summary';
+import { DownloadLink } from '@/components/ui/download-link';
 
 const features = tableFeatures({
   rowSortingFeature,
@@ -124,13 +125,13 @@ function ApprovalCell({ project }: { project: ProjectSummaryJson }) {
       <span className="block text-caption text-ink-soft">
         {approved.caseName} v{approved.caseVersion} · {formatMoney(approved.expandedNpv, project.currency)}
       </span>
-      <a
+      <DownloadLink
         href={`/api/v1/cases/${approved.caseId}/board-pack?size=A4`}
         className="text-caption font-medium text-tide-600 underline underline-offset-2"
-        aria-label={`Board pack of ${project.name}, ${approved.caseName} version ${approved.caseVersion} (PDF)`}
+        label={`Board pack of ${project.name}, ${approved.caseName} version ${approved.caseVersion} (PDF)`}
       >
         Board pack (PDF)
-      </a>
+      </DownloadLink>
       {waiting ? <span className="block text-caption text-ink-muted">{waiting}</span> : null}
     </div>
   );

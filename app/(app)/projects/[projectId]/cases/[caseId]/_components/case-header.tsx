@@ -5,6 +5,7 @@ import { StatusBadge } from '@/components/status-badge';
 import { Button } from '@/components/ui/button';
 import { formatDateTime } from '@/lib/format';
 import type { CaseStatus } from '@/lib/review/transitions';
+import { DownloadLink } from '@/components/ui/download-link';
 
 interface Props {
   caseId: string;
@@ -94,13 +95,13 @@ export function CaseHeader({
           </p>
         </div>
         <div className="flex flex-wrap items-center gap-3">
-          <a
+          <DownloadLink
             href={`/api/v1/cases/${caseId}/export.xlsx`}
             className="text-tide-600 underline"
             title="Inputs, cash flows, settings, rights, results and the first lattice steps of the saved case"
           >
             Export workbook
-          </a>
+          </DownloadLink>
           {readOnly && canEdit && status === 'approved' ? (
             <div className="flex flex-wrap items-center gap-3 rounded-md bg-paper-sunk px-3 py-2 text-caption text-ink-soft">
               <span>Approved: changing it starts a revision, a new draft version. The approved version and its board pack stay as they are.</span>

@@ -17,6 +17,7 @@ import { SubmitDialog } from './submit-dialog';
 import { VersionChanges, type VersionChangesJson } from './version-changes';
 import { ReviewDiscussion } from './review-discussion';
 import { ReviewHistory, type Snapshot } from './review-history';
+import { DownloadLink } from '@/components/ui/download-link';
 
 export interface ReviewRights {
   canSubmit: boolean;
@@ -147,18 +148,18 @@ export function ReviewPanel({ caseId, currency, status, rightIds, rights, before
             ) : null}
             {approved ? (
               <>
-                <a
+                <DownloadLink
                   className="inline-flex items-center rounded-md border border-line-strong px-4 py-2 font-medium hover:bg-paper-sunk"
                   href={`/api/v1/cases/${caseId}/board-pack?size=A4`}
                 >
                   Board pack (PDF, A4)
-                </a>
-                <a
+                </DownloadLink>
+                <DownloadLink
                   className="inline-flex items-center rounded-md border border-line-strong px-4 py-2 font-medium hover:bg-paper-sunk"
                   href={`/api/v1/cases/${caseId}/board-pack?size=LETTER`}
                 >
                   Board pack (PDF, US Letter)
-                </a>
+                </DownloadLink>
               </>
             ) : null}
           </div>

@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { mutate } from 'swr';
 import { Button } from '@/components/ui/button';
 import { ApiError, sendJson } from '@/lib/api-client';
+import { DownloadLink } from '@/components/ui/download-link';
 
 const link = 'inline-flex items-center rounded-md border border-line-strong px-4 py-2 font-medium hover:bg-paper-sunk';
 
@@ -41,15 +42,15 @@ export function ValidationReportPanel({ caseId, canAttach, unsaved }: { caseId: 
         {unsaved ? ' It reports the saved version: save first to include your changes.' : ''}
       </p>
       <div className="flex flex-wrap gap-3">
-        <a className={link} href={`/api/v1/cases/${caseId}/validation-report?size=A4`}>
+        <DownloadLink className={link} href={`/api/v1/cases/${caseId}/validation-report?size=A4`}>
           Validation report (PDF, A4)
-        </a>
-        <a className={link} href={`/api/v1/cases/${caseId}/validation-report?size=LETTER`}>
+        </DownloadLink>
+        <DownloadLink className={link} href={`/api/v1/cases/${caseId}/validation-report?size=LETTER`}>
           Validation report (PDF, US Letter)
-        </a>
-        <a className={link} href={`/api/v1/cases/${caseId}/validation-report.xlsx`}>
+        </DownloadLink>
+        <DownloadLink className={link} href={`/api/v1/cases/${caseId}/validation-report.xlsx`}>
           Validation workbook (XLSX)
-        </a>
+        </DownloadLink>
         {canAttach ? (
           <Button variant="secondary" busy={busy} disabled={busy} onClick={() => void attach()}>
             Keep it with the case’s documents
