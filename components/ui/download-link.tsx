@@ -50,7 +50,7 @@ export function DownloadLink({
     }
   };
   return (
-    <span className="inline-flex flex-col gap-1">
+    <span className="inline-flex flex-col items-start gap-1">
       <a href={href} className={className} title={title} aria-label={label} aria-busy={busy || undefined} onClick={(event) => void download(event)}>
         {children}
       </a>
