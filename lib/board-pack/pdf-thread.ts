@@ -1,9 +1,9 @@
 /**
  * Renders a PDF in a worker thread (an entry bundled into .data/ by
  * scripts/build-engine-worker.sh), so rendering never blocks a request's event loop: at most two
- * renders at once in a process, sixteen more waiting up to 30 s (a download link cannot show a
- * "try again"), each with a heap limit and a deadline (lib/threads/bounded.ts). The entry answers
- * `{ ok: true, pdf }` or `{ ok: false, error }`.
+ * renders at once in a process, sixteen more waiting up to 30 s (so a burst of downloads mostly
+ * waits rather than being told to try again), each with a heap limit and a deadline
+ * (lib/threads/bounded.ts). The entry answers `{ ok: true, pdf }` or `{ ok: false, error }`.
  */
 import path from 'node:path';
 import { AppError } from '../errors';
