@@ -159,5 +159,15 @@ describe('the portfolio and project pages', () => {
     const xlsx = await executive.page.request.get('/api/v1/portfolio.xlsx');
     expect(xlsx.status()).toBe(200);
     expect(xlsx.headers()['content-type']).toContain('spreadsheetml');
+
+    // The portfolio page's CSV link saves the same file under the server's name.
+    await executive.page.goto('/portfolio');
+    const download = executive.page.waitForEvent('download');
+    await executive.page.getByRole('link', { name: 'CSV', exact: true }).click();
+    const saved = await download;
+    expect(saved.suggestedFilename()).toBe('Leeway portfolio.csv');
+    const { readFileSync } = await import('node:fs');
+    expect(readFileSync((await saved.path())!, 'utf8')).toBe(await csv.text());
+    await executive.context.close();
   });
 });

@@ -12,6 +12,7 @@ import { formatMoney } from '@/lib/format';
 import type { ProjectSummaryJson } from '@/lib/project-summary';
 import { PortfolioTable } from './portfolio-table';
 import { RevaluePortfolio } from './revalue-portfolio';
+import { DownloadLink } from '@/components/ui/download-link';
 
 function Figure({ label, value, note }: { label: string; value: string; note?: string }) {
   return (
@@ -78,13 +79,13 @@ export function PortfolioView({ canCreate }: { canCreate: boolean }) {
           <h2 id="portfolio-table">Projects</h2>
           <p className="text-caption text-ink-soft">
             Approved figures per project:{' '}
-            <a href="/api/v1/portfolio.csv" className="text-tide-600 underline" download>
+            <DownloadLink href="/api/v1/portfolio.csv" className="text-tide-600 underline">
               CSV
-            </a>{' '}
+            </DownloadLink>{' '}
             ·{' '}
-            <a href="/api/v1/portfolio.xlsx" className="text-tide-600 underline" download>
+            <DownloadLink href="/api/v1/portfolio.xlsx" className="text-tide-600 underline">
               Workbook
-            </a>
+            </DownloadLink>
           </p>
         </div>
         <PortfolioTable projects={projects} />
