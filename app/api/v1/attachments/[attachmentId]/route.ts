@@ -3,6 +3,7 @@ import { NextResponse } from 'next/server';
 import { withAuth } from '@/lib/api';
 import { readAttachment, removeAttachment } from '@/lib/attachments';
 import { operations } from '@/lib/openapi/operations';
+import { attachmentDisposition } from '@/lib/content-disposition';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -21,7 +22,7 @@ export const GET = withAuth<Params>(async ({ member, params }) => {
     headers: {
       'content-type': contentTypes[found.kind],
       // Always a download, never rendered in the app's origin; the browser must not guess another type.
-      'content-disposition': `attachment; filename="${found.filename.replace(/[^\w .()-]/g, '_')}"`,
+      'content-disposition': attachmentDisposition(found.filename),
       'x-content-type-options': 'nosniff',
       'cache-control': 'no-store',
     },

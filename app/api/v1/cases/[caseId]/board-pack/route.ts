@@ -4,6 +4,7 @@ import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import { pageSizeSchema } from '@/lib/validations/review';
 import { latestBoardPack } from '@/lib/board-pack/store';
+import { attachmentDisposition } from '@/lib/content-disposition';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -11,11 +12,11 @@ export const runtime = 'nodejs';
 export const GET = withAuth<{ caseId: string }>(async ({ member, params, request }) => {
   const size = pageSizeSchema.parse((request.nextUrl.searchParams.get('size') ?? 'A4').toUpperCase());
   const { caseName, pdf, sha256 } = await latestBoardPack(member, params.caseId, size);
-  const filename = `${caseName} - board pack (${size === 'A4' ? 'A4' : 'Letter'}).pdf`.replace(/[^\w .()-]/g, '_');
+  const filename = `${caseName} - board pack (${size === 'A4' ? 'A4' : 'Letter'}).pdf`;
   return new Response(new Uint8Array(pdf), {
     headers: {
       'content-type': 'application/pdf',
-      'content-disposition': `attachment; filename="${filename}"`,
+      'content-disposition': attachmentDisposition(filename),
       etag: `"${sha256}"`,
       'cache-control': 'no-store',
     },

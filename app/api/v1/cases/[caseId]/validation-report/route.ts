@@ -3,6 +3,7 @@ import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
 import { validationReportPdf } from '@/lib/validation-report/produce';
 import { pageSizeSchema } from '@/lib/validations/review';
+import { attachmentDisposition } from '@/lib/content-disposition';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
@@ -13,7 +14,7 @@ export const GET = withAuth<{ caseId: string }>(async ({ member, params, request
   return new Response(new Uint8Array(pdf), {
     headers: {
       'content-type': 'application/pdf',
-      'content-disposition': `attachment; filename="${filename.replace(/[^\w .()-]/g, '_')}"; filename*=UTF-8''${encodeURIComponent(filename)}`,
+      'content-disposition': attachmentDisposition(filename),
       'cache-control': 'no-store',
     },
   });
