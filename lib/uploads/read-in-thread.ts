@@ -34,16 +34,19 @@ const refusals = {
   tooLarge: () => unreadable('The file is too large to read; send only the rows and columns Leeway needs.', 'Too large to read.'),
 };
 
-/** Reads an upload in a thread; a file the reader turns down rejects with a HistoryError. */
-export async function readInThread(reader: UploadReader, bytes: Uint8Array, limits: ThreadLimits = defaults()): Promise<unknown> {
-  const answer = (await inBoundedThread('upload', { reader, bytes }, limits, refusals)) as Answer;
+/**
+ * Reads an upload in a thread; a file the reader turns down rejects with a HistoryError. The
+ * request's `signal` stops the read when the sender goes away.
+ */
+export async function readInThread(reader: UploadReader, bytes: Uint8Array, limits: ThreadLimits = defaults(), signal?: AbortSignal): Promise<unknown> {
+  const answer = (await inBoundedThread('upload', { reader, bytes }, limits, refusals, signal)) as Answer;
   if (answer.ok) return answer.value;
   if ('refusal' in answer) throw new HistoryError(answer.refusal);
   throw new Error(`upload reader: ${answer.error}`);
 }
 
-export const readCashFlowUpload = (bytes: Uint8Array) => readInThread('cash-flows', bytes) as Promise<WorkbookRead>;
+export const readCashFlowUpload = (bytes: Uint8Array, signal?: AbortSignal) => readInThread('cash-flows', bytes, defaults(), signal) as Promise<WorkbookRead>;
 
 /** Dated values from a CSV or XLSX; a file the reader turns down rejects with a HistoryError. */
-export const readSeriesUpload = (kind: 'csv' | 'xlsx', bytes: Uint8Array) =>
-  readInThread(kind === 'csv' ? 'series-csv' : 'series-xlsx', bytes) as Promise<PlacedPoint[]>;
+export const readSeriesUpload = (kind: 'csv' | 'xlsx', bytes: Uint8Array, signal?: AbortSignal) =>
+  readInThread(kind === 'csv' ? 'series-csv' : 'series-xlsx', bytes, defaults(), signal) as Promise<PlacedPoint[]>;

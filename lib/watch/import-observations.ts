@@ -15,11 +15,11 @@ import { inspectUpload } from '../uploads/inspect';
 /** More values than anyone follows a project with; a bound on the work one upload can ask for. */
 export const MAX_IMPORTED_OBSERVATIONS = 2000;
 
-export async function readObservationFile(name: string, bytes: Uint8Array): Promise<PlacedPoint[]> {
+export async function readObservationFile(name: string, bytes: Uint8Array, signal?: AbortSignal): Promise<PlacedPoint[]> {
   const kind = inspectUpload(name, bytes, ['csv', 'xlsx']);
   let points: PlacedPoint[];
   try {
-    points = await readSeriesUpload(kind, bytes);
+    points = await readSeriesUpload(kind, bytes, signal);
   } catch (error) {
     if (error instanceof HistoryError) throw new AppError('unprocessable', error.message, { file: [error.message] });
     throw error;

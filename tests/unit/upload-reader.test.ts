@@ -97,4 +97,14 @@ describe('reading an upload in a thread', () => {
     expect(places()).toEqual({ running: 0, waiting: 0 });
     expect(await run('rows', new AbortController().signal)).toEqual({ ok: true, value: { reader: undefined, what: 'rows' } });
   }, 10_000);
+
+  it('stops reading an upload whose sender went away', async () => {
+    const gone = new AbortController();
+    const reading = readInThread('series-csv', new TextEncoder().encode('hang'), { ...limits, deadlineMs: 60_000 }, gone.signal);
+    await new Promise((r) => setTimeout(r, 100));
+    expect(threadPlaces('upload')).toEqual({ running: 1, waiting: 0 });
+    gone.abort();
+    await expect(reading).rejects.toMatchObject({ code: 'bad_request' });
+    expect(threadPlaces('upload')).toEqual({ running: 0, waiting: 0 });
+  }, 10_000);
 });

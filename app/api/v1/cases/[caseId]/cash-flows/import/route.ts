@@ -17,7 +17,7 @@ export const POST = withAuth<{ caseId: string }>(async ({ member, params, reques
   const stored = await readCase(member, params.caseId);
   const { form, file, bytes } = await readUploadForm(request, { what: 'the workbook', choose: 'Choose an XLSX file.' });
   inspectUpload(file.name, bytes, ['xlsx']);
-  const read = await readCashFlowUpload(bytes);
+  const read = await readCashFlowUpload(bytes, request.signal);
   if (!read.ok)
     throw new AppError('unprocessable', `The workbook has ${read.problems.length} problem${read.problems.length > 1 ? 's' : ''}; nothing was imported.`, {
       file: read.problems,

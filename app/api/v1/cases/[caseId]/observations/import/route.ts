@@ -15,7 +15,7 @@ export const POST = withAuth<{ caseId: string }>(async ({ member, params, reques
       what: 'the dated values',
       choose: 'Choose a CSV or XLSX file: dates in the first column, values in the second.',
     });
-    return { points: await readObservationFile(file.name, bytes), file: file.name };
+    return { points: await readObservationFile(file.name, bytes, request.signal), file: file.name };
   });
   return NextResponse.json(recorded, { status: 201 });
 }, operations.importObservations);
