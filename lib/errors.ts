@@ -43,6 +43,9 @@ export class AppError extends Error {
   }
 }
 
+/** What a caller that went away (its request's signal fired) is answered, wherever its work was. */
+export const requestCancelled = () => new AppError('bad_request', 'The request was cancelled.');
+
 /**
  * PostgreSQL or its connection is down (connection refused or reset, server shutting down, pool
  * timeout), found on the error or on its causes (the auth library wraps the driver's error).

@@ -239,8 +239,9 @@ async function documentsAtOnce(caseId: string, app: ChildProcess) {
   const sampler = (async () => {
     for (; !answered; await sleep(100)) peak = Math.max(peak, residentMb(app.pid!));
   })();
-  const report = (member: string) =>
-    fetch(`${base}/api/v1/cases/${caseId}/validation-report`, { headers: { cookie: member }, signal: AbortSignal.timeout(120_000) }).then(
+  /** A validation report's status, or the error's name when the download was closed first. */
+  const report = (member: string, closeAfterMs = 120_000) =>
+    fetch(`${base}/api/v1/cases/${caseId}/validation-report`, { headers: { cookie: member }, signal: AbortSignal.timeout(closeAfterMs) }).then(
       async (r) => (await r.arrayBuffer(), r.status),
       (error: Error) => error.name,
     );
@@ -260,14 +261,7 @@ async function documentsAtOnce(caseId: string, app: ChildProcess) {
   // Downloads closed while they wait or render give their places back: the next report does not
   // wait behind them (it waited 23 s when the render's wait ignored the request's signal; one
   // report alone takes about 2.5 s here).
-  const closed = await Promise.all(
-    Array.from({ length: 18 }, () =>
-      fetch(`${base}/api/v1/cases/${caseId}/validation-report`, { headers: { cookie: members[2]! }, signal: AbortSignal.timeout(1_500) }).then(
-        (r) => r.status,
-        (error: Error) => error.name,
-      ),
-    ),
-  );
+  const closed = await Promise.all(Array.from({ length: 18 }, () => report(members[2]!, 1_500)));
   const started = Date.now();
   const next = await report(members[2]!);
   const nextMs = Date.now() - started;

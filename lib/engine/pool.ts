@@ -18,7 +18,7 @@ import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { ModelIssue, ValuationResult, ValueOptions } from '@/lattice';
 import { hasBrand } from '../bundle-brand';
-import { AppError } from '../errors';
+import { AppError, requestCancelled } from '../errors';
 
 const refusalBrand: unique symbol = Symbol.for('leeway.EngineRefusal');
 
@@ -110,7 +110,7 @@ export class EnginePool {
 
   private enqueue(input: unknown, options: ValueOptions | undefined, run: RunOptions, asJson: boolean): Promise<ValuationResult | string> {
     return new Promise((resolve, reject) => {
-      if (run.signal?.aborted) return reject(new AppError('bad_request', 'The request was cancelled.'));
+      if (run.signal?.aborted) return reject(requestCancelled());
       const waiting = this.queue.length;
       if (waiting >= QUEUE_LIMIT)
         return reject(new AppError('rate_limited', `The engine has ${waiting} valuations waiting; try again in a few seconds.`, undefined, 5));
@@ -118,7 +118,7 @@ export class EnginePool {
       if (mine >= PER_OWNER_LIMIT)
         return reject(new AppError('rate_limited', `You already have ${mine} valuations running or waiting; wait for them to finish.`, undefined, 2));
       const id = this.nextId++;
-      const onAbort = () => this.cancel(job, new AppError('bad_request', 'The request was cancelled.'));
+      const onAbort = () => this.cancel(job, requestCancelled());
       const job: Job = {
         id,
         input,

@@ -9,7 +9,7 @@
  * valuation waited 1.6 s.
  */
 import { Worker } from 'node:worker_threads';
-import { AppError } from '../errors';
+import { AppError, requestCancelled } from '../errors';
 
 export interface ThreadLimits {
   /** The bundled entry (an absolute path). */
@@ -46,10 +46,8 @@ function placesOf(kind: string): Places {
   return all.get(kind)!;
 }
 
-const cancelled = () => new AppError('bad_request', 'The request was cancelled.');
-
 async function takePlace(places: Places, limits: ThreadLimits, busy: () => AppError, signal?: AbortSignal): Promise<void> {
-  if (signal?.aborted) throw cancelled();
+  if (signal?.aborted) throw requestCancelled();
   if (places.running < limits.atOnce) {
     places.running++;
     return;
@@ -67,7 +65,7 @@ async function takePlace(places: Places, limits: ThreadLimits, busy: () => AppEr
       signal?.removeEventListener('abort', onAbort);
       resolve();
     };
-    const onAbort = () => leave(cancelled());
+    const onAbort = () => leave(requestCancelled());
     const timer = setTimeout(() => leave(busy()), limits.waitMs);
     signal?.addEventListener('abort', onAbort, { once: true });
     places.queue.push(handOver);
@@ -84,7 +82,7 @@ function givePlace(places: Places) {
 function inThread(workerData: unknown, limits: ThreadLimits, refusals: ThreadRefusals, signal?: AbortSignal): Promise<unknown> {
   return new Promise((resolve, reject) => {
     const worker = new Worker(limits.file, { workerData, resourceLimits: { maxOldGenerationSizeMb: limits.heapMb } });
-    const onAbort = () => finish(() => reject(cancelled()));
+    const onAbort = () => finish(() => reject(requestCancelled()));
     const finish = (settle: () => void) => {
       clearTimeout(deadline);
       signal?.removeEventListener('abort', onAbort);

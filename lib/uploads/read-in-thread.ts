@@ -38,15 +38,19 @@ const refusals = {
  * Reads an upload in a thread; a file the reader turns down rejects with a HistoryError. The
  * request's `signal` stops the read when the sender goes away.
  */
-export async function readInThread(reader: UploadReader, bytes: Uint8Array, limits: ThreadLimits = defaults(), signal?: AbortSignal): Promise<unknown> {
+export async function readInThread(
+  reader: UploadReader,
+  bytes: Uint8Array,
+  { limits = defaults(), signal }: { limits?: ThreadLimits; signal?: AbortSignal } = {},
+): Promise<unknown> {
   const answer = (await inBoundedThread('upload', { reader, bytes }, limits, refusals, signal)) as Answer;
   if (answer.ok) return answer.value;
   if ('refusal' in answer) throw new HistoryError(answer.refusal);
   throw new Error(`upload reader: ${answer.error}`);
 }
 
-export const readCashFlowUpload = (bytes: Uint8Array, signal?: AbortSignal) => readInThread('cash-flows', bytes, defaults(), signal) as Promise<WorkbookRead>;
+export const readCashFlowUpload = (bytes: Uint8Array, signal?: AbortSignal) => readInThread('cash-flows', bytes, { signal }) as Promise<WorkbookRead>;
 
 /** Dated values from a CSV or XLSX; a file the reader turns down rejects with a HistoryError. */
 export const readSeriesUpload = (kind: 'csv' | 'xlsx', bytes: Uint8Array, signal?: AbortSignal) =>
-  readInThread(kind === 'csv' ? 'series-csv' : 'series-xlsx', bytes, defaults(), signal) as Promise<PlacedPoint[]>;
+  readInThread(kind === 'csv' ? 'series-csv' : 'series-xlsx', bytes, { signal }) as Promise<PlacedPoint[]>;

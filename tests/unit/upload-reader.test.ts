@@ -31,7 +31,7 @@ else parentPort.postMessage({ ok: true, value: { reader: workerData.reader, what
 );
 
 const limits: ThreadLimits = { file, atOnce: 2, waiting: 1, waitMs: 5_000, deadlineMs: 1_000, heapMb: 16 };
-const read = (what: string, within = limits) => readInThread('series-csv', new TextEncoder().encode(what), within);
+const read = (what: string, within = limits) => readInThread('series-csv', new TextEncoder().encode(what), { limits: within });
 const plainReadAnswers = async () => expect(await read('rows')).toEqual({ reader: 'series-csv', what: 'rows' });
 
 describe('reading an upload in a thread', () => {
@@ -100,7 +100,7 @@ describe('reading an upload in a thread', () => {
 
   it('stops reading an upload whose sender went away', async () => {
     const gone = new AbortController();
-    const reading = readInThread('series-csv', new TextEncoder().encode('hang'), { ...limits, deadlineMs: 60_000 }, gone.signal);
+    const reading = readInThread('series-csv', new TextEncoder().encode('hang'), { limits: { ...limits, deadlineMs: 60_000 }, signal: gone.signal });
     await new Promise((r) => setTimeout(r, 100));
     expect(threadPlaces('upload')).toEqual({ running: 1, waiting: 0 });
     gone.abort();
