@@ -1,6 +1,6 @@
 'use client';
 
-import { useId, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
+import { useId, useRef, useState, type KeyboardEvent, type MouseEvent, type ReactNode } from 'react';
 
 export interface Tab {
   id: string;
@@ -10,16 +10,37 @@ export interface Tab {
   lazy?: boolean;
 }
 
-/** Tabs with the WAI-ARIA keyboard model: arrow keys move between tabs, Home and End jump. */
+/** The address of a tab: the page's own, with `?tab=` naming it (the page reads it to open that tab). */
+export const tabHref = (id: string) => `?tab=${encodeURIComponent(id)}`;
+
+/**
+ * Tabs with the WAI-ARIA keyboard model: arrow keys move between tabs, Home and End jump.
+ * Each tab is a link to the page with that tab open. Once the page's script runs, a click
+ * switches in place and only rewrites the address (so a reload or a shared address opens the
+ * same tab); a click before then, on a slow machine, still opens the tab by loading its address,
+ * where a button would have done nothing.
+ */
 export function Tabs({ tabs, initial }: { tabs: Tab[]; initial?: string }) {
-  const [active, setActiveState] = useState(initial ?? tabs[0]?.id);
-  const [opened, setOpened] = useState(() => new Set([initial ?? tabs[0]?.id]));
+  // An address may name a tab that is not there (an old link, a typo): the first tab opens then.
+  const first = tabs.find((tab) => tab.id === initial)?.id ?? tabs[0]?.id;
+  const [active, setActiveState] = useState(first);
+  const [opened, setOpened] = useState(() => new Set([first]));
   const setActive = (id: string | undefined) => {
     setActiveState(id);
-    if (id !== undefined && !opened.has(id)) setOpened(new Set([...opened, id]));
+    if (id === undefined) return;
+    if (!opened.has(id)) setOpened(new Set([...opened, id]));
+    const address = new URL(window.location.href);
+    address.searchParams.set('tab', id);
+    window.history.replaceState(window.history.state, '', address);
   };
   const base = useId();
-  const refs = useRef<(HTMLButtonElement | null)[]>([]);
+  const refs = useRef<(HTMLAnchorElement | null)[]>([]);
+  const onClick = (event: MouseEvent, id: string) => {
+    // A new window or tab (modifier keys, middle button) keeps the link's own behaviour.
+    if (event.button !== 0 || event.metaKey || event.ctrlKey || event.shiftKey || event.altKey) return;
+    event.preventDefault();
+    setActive(id);
+  };
   const onKey = (event: KeyboardEvent, index: number) => {
     const last = tabs.length - 1;
     const next =
@@ -35,7 +56,9 @@ export function Tabs({ tabs, initial }: { tabs: Tab[]; initial?: string }) {
             ? 0
             : event.key === 'End'
               ? last
-              : -1;
+              : event.key === ' '
+                ? index
+                : -1;
     if (next < 0) return;
     event.preventDefault();
     setActive(tabs[next]!.id);
@@ -45,22 +68,23 @@ export function Tabs({ tabs, initial }: { tabs: Tab[]; initial?: string }) {
     <div>
       <div role="tablist" className="flex gap-1 border-b border-line">
         {tabs.map((tab, index) => (
-          <button
+          <a
             key={tab.id}
             ref={(el) => {
               refs.current[index] = el;
             }}
+            href={tabHref(tab.id)}
             role="tab"
             id={`${base}-tab-${tab.id}`}
             aria-selected={active === tab.id}
             aria-controls={`${base}-panel-${tab.id}`}
             tabIndex={active === tab.id ? 0 : -1}
-            onClick={() => setActive(tab.id)}
+            onClick={(e) => onClick(e, tab.id)}
             onKeyDown={(e) => onKey(e, index)}
             className={`-mb-px border-b-2 px-4 py-2 text-body ${active === tab.id ? 'border-tide-500 font-medium text-ink' : 'border-transparent text-ink-soft hover:text-ink'}`}
           >
             {tab.label}
-          </button>
+          </a>
         ))}
       </div>
       {tabs.map((tab) => (

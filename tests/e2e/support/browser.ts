@@ -3,7 +3,7 @@
  * client address header, so the sign-in rate limit (per address) counts each context separately.
  */
 import { randomInt } from 'node:crypto';
-import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Page } from 'playwright-core';
 import { expect } from 'vitest';
 import { BASE_URL, DEMO_PASSWORD } from './env';
 
@@ -38,9 +38,10 @@ export async function closeBrowser() {
  */
 export const visitorAddress = () => `198.${18 + randomInt(2)}.${randomInt(256)}.${1 + randomInt(254)}`;
 
-export async function newContext(): Promise<BrowserContext> {
+export async function newContext(options: BrowserContextOptions = {}): Promise<BrowserContext> {
   const b = await openBrowser();
   return b.newContext({
+    ...options,
     baseURL: BASE_URL,
     viewport: { width: 1280, height: 800 },
     // Every context, in every test file, has an address of its own (visitorAddress).

@@ -31,7 +31,7 @@ export default async function CasePage({
       projectName={project.name}
       currency={project.currency}
       canEdit={roleAllows(member.role, { case: ['update'] })}
-      initialTab={tab === 'watch' ? 'watch' : undefined}
+      initialTab={typeof tab === 'string' ? tab : undefined}
       rights={{
         canSubmit: roleAllows(member.role, { case: ['submit'] }),
         canDecide: roleAllows(member.role, { review: ['decide'] }),

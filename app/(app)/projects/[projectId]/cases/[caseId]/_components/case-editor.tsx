@@ -38,7 +38,7 @@ interface Props {
   currency: string;
   canEdit: boolean;
   rights: ReviewRights;
-  /** The tab to open first (a link from an alert opens the Watch tab). */
+  /** The tab to open first, named by the address's `?tab=` (a link from an alert opens the Watch tab). */
   initialTab?: string;
 }
 
