@@ -20,3 +20,23 @@ export function sharedFor<T>(ms: number, run: () => Promise<T>, reusable: (answe
     return latest!.answer;
   };
 }
+
+declare global {
+  // One map per process: Next.js may load this module more than once (lib/bundle-brand.ts).
+  var leewaySharedRuns: Map<string, Promise<unknown>> | undefined;
+}
+
+/**
+ * One run per key at a time in this process: a caller who comes while the key's run is going
+ * gets that run's promise, its answer or its failure; nothing is kept once it settles. For work
+ * that ends stored, such as rendering a board pack the first time: two downloads at once render
+ * it once.
+ */
+export function sharedWhileRunning<T>(key: string, run: () => Promise<T>): Promise<T> {
+  const runs = (globalThis.leewaySharedRuns ??= new Map());
+  const going = runs.get(key) as Promise<T> | undefined;
+  if (going) return going;
+  const answer = run().finally(() => runs.delete(key));
+  runs.set(key, answer);
+  return answer;
+}

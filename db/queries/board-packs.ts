@@ -84,7 +84,7 @@ export async function findStoredPack(db: Database, { orgId, snapshotId, pageSize
     .executeTakeFirst();
 }
 
-/** Keeps a rendered pack; when two first requests race, both rendered the same bytes and the first insert wins. */
+/** Keeps a rendered pack; when two first requests race the first insert wins (saveBoardPack then answers the stored bytes). */
 export async function insertStoredPack(db: Database, args: { orgId: string; snapshotId: string; pageSize: PageSize; pdf: Buffer; sha256: string }) {
   await db
     .insertInto('board_pack')

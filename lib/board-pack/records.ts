@@ -84,9 +84,13 @@ export async function findBoardPack(orgId: string, snapshotId: string, pageSize:
   return findStoredPack(db, { orgId, snapshotId, pageSize });
 }
 
-/** Stores a rendered pack with its SHA-256 (db/queries/board-packs.ts keeps the first of two racing inserts). */
+/**
+ * Stores a rendered pack with its SHA-256 and answers the stored one: of two racing inserts
+ * (another process rendered it too) db/queries/board-packs.ts keeps the first, and every
+ * download of a snapshot's pack is then those bytes.
+ */
 export async function saveBoardPack(orgId: string, snapshotId: string, pageSize: PageSize, pdf: Buffer): Promise<{ pdf: Buffer; sha256: string }> {
   const sha256 = createHash('sha256').update(pdf).digest('hex');
   await insertStoredPack(db, { orgId, snapshotId, pageSize, pdf, sha256 });
-  return { pdf, sha256 };
+  return (await findBoardPack(orgId, snapshotId, pageSize)) ?? { pdf, sha256 };
 }

@@ -9,16 +9,23 @@ import { latestApprovedSnapshot } from '@/db/queries/reviews';
 import { requireCase } from '../cases/require-case';
 import type { Member } from '../dal';
 import { AppError } from '../errors';
+import { sharedWhileRunning } from '../shared-answer';
 import type { PageSize } from './data';
 import { renderPdfInThread } from './pdf-thread';
 import { boardPackData, findBoardPack, saveBoardPack } from './records';
 
-/** The stored pack for the snapshot and page size, rendering and storing it the first time. */
-export async function ensureBoardPack(orgId: string, snapshotId: string, pageSize: PageSize): Promise<{ pdf: Buffer; sha256: string }> {
-  const stored = await findBoardPack(orgId, snapshotId, pageSize);
-  if (stored) return stored;
-  const pdf = await renderPdfInThread('board-pack-worker.mjs', await boardPackData(orgId, snapshotId, pageSize));
-  return saveBoardPack(orgId, snapshotId, pageSize, pdf);
+/**
+ * The stored pack for the snapshot and page size, rendering and storing it the first time. Two
+ * requests in this process while it renders share the one render (a render is seconds of a
+ * thread and a place among two).
+ */
+export function ensureBoardPack(orgId: string, snapshotId: string, pageSize: PageSize): Promise<{ pdf: Buffer; sha256: string }> {
+  return sharedWhileRunning(`board-pack:${orgId}:${snapshotId}:${pageSize}`, async () => {
+    const stored = await findBoardPack(orgId, snapshotId, pageSize);
+    if (stored) return stored;
+    const pdf = await renderPdfInThread('board-pack-worker.mjs', await boardPackData(orgId, snapshotId, pageSize));
+    return saveBoardPack(orgId, snapshotId, pageSize, pdf);
+  });
 }
 
 /** The board pack of the case's latest approved version, for a member of its organisation. */

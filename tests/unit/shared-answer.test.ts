@@ -1,11 +1,14 @@
 /**
- * sharedFor (lib/shared-answer.ts), which keeps a flood of health checks to one check at a time
+ * sharedWhileRunning (lib/shared-answer.ts), which lets two first downloads of a board pack
+ * render it once: callers with the same key share the run going, its answer or its failure, and
+ * a new run starts once it has settled; other keys run on their own.
+ * sharedFor, which keeps a flood of health checks to one check at a time
  * and a healthy report to one check a second: callers share a run while it runs; a kept answer
  * is reused within the window and a new run starts after it; an answer not to be kept, or a
  * failure, is shared only while its run is going. The clock is the test's own.
  */
 import { describe, expect, it } from 'vitest';
-import { sharedFor } from '@/lib/shared-answer';
+import { sharedFor, sharedWhileRunning } from '@/lib/shared-answer';
 
 const settle = () => new Promise((r) => setTimeout(r, 0));
 
@@ -77,5 +80,42 @@ describe('sharedFor', () => {
     await expect(Promise.all([failing(), failing()])).rejects.toThrow('database down 1');
     await settle();
     await expect(failing()).rejects.toThrow('database down 2');
+  });
+});
+
+describe('sharedWhileRunning', () => {
+  it('shares the run going for a key, and only while it goes', async () => {
+    const runs: string[] = [];
+    let release!: () => void;
+    const gate = new Promise<void>((r) => (release = r));
+    const render = (key: string) => async () => {
+      runs.push(key);
+      await gate;
+      return `${key} #${runs.length}`;
+    };
+    const asked = [
+      sharedWhileRunning('pack:A4', render('pack:A4')),
+      sharedWhileRunning('pack:A4', render('pack:A4')),
+      sharedWhileRunning('pack:LETTER', render('pack:LETTER')),
+    ];
+    release();
+    expect(await Promise.all(asked)).toEqual(['pack:A4 #2', 'pack:A4 #2', 'pack:LETTER #2']);
+    expect(runs).toEqual(['pack:A4', 'pack:LETTER']);
+    expect(await sharedWhileRunning('pack:A4', render('pack:A4'))).toBe('pack:A4 #3');
+    expect(runs).toEqual(['pack:A4', 'pack:LETTER', 'pack:A4']);
+  });
+
+  it('gives a failure to every caller of that run, and runs again afterwards', async () => {
+    let runs = 0;
+    const failing = async () => {
+      runs++;
+      await settle();
+      throw new Error('render failed');
+    };
+    const both = [sharedWhileRunning('failing', failing), sharedWhileRunning('failing', failing)];
+    for (const asked of both) await expect(asked).rejects.toThrow('render failed');
+    expect(runs).toBe(1);
+    await expect(sharedWhileRunning('failing', failing)).rejects.toThrow('render failed');
+    expect(runs).toBe(2);
   });
 });
