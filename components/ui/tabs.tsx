@@ -11,7 +11,7 @@ export interface Tab {
 }
 
 /** The address of a tab: the page's own, with `?tab=` naming it (the page reads it to open that tab). */
-export const tabHref = (id: string) => `?tab=${encodeURIComponent(id)}`;
+const tabHref = (id: string) => `?tab=${encodeURIComponent(id)}`;
 
 /**
  * Tabs with the WAI-ARIA keyboard model: arrow keys move between tabs, Home and End jump.
