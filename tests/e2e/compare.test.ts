@@ -2,6 +2,7 @@
  * The comparison: the page reads its cases from the URL and marks differences; the API answers
  * 2–4 cases of the organisation (404 for another organisation's, 422 for one or five); the
  * workbook holds the same figures as numbers, and text that looks like a formula is neutralised.
+ * An organisation with fewer than two cases is told how to make a second.
  */
 import ExcelJS from 'exceljs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -93,5 +94,29 @@ describe('comparing cases', () => {
     expect((await outsider.page.request.get('/api/v1/compare?cases=a,b,c,d,e')).status()).toBe(422);
     expect((await outsider.page.request.get('/api/v1/compare')).status()).toBe(422);
     await outsider.context.close();
+  });
+
+  it('tells an organisation with no case, then one, how to get two', async () => {
+    // Harrow Fen, the second demo organisation, has no projects (the seed's); the test leaves none.
+    const { context, page } = await signedInPage('owner@harrowfen.example');
+    await page.goto('/compare');
+    await expect.poll(() => page.getByRole('heading', { name: 'No cases to compare yet' }).isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(await page.getByRole('link', { name: 'a new project' }).getAttribute('href')).toBe('/projects');
+
+    const project = (await (await page.request.post('/api/v1/projects', { data: { name: 'Harbour crane (e2e)' } })).json()).project as { id: string };
+    try {
+      const rows = [0, 1, 2].map((year) => ({ year, revenue: year ? 40 : 0, operatingCost: year ? 10 : 0, capex: year ? 0 : 60, tax: 0, workingCapital: 0 }));
+      const made = await page.request.post(`/api/v1/projects/${project.id}/cases`, {
+        data: { name: 'Base case', cashFlows: { wacc: 0.09, rows }, settings: { volatility: 0.3, riskFreeRate: 0.03, steps: 40 }, options: [] },
+      });
+      expect(made.status()).toBe(201);
+      await page.reload();
+      await expect.poll(() => page.getByRole('heading', { name: 'One case so far' }).isVisible(), { timeout: 30_000 }).toBe(true);
+      expect(await page.getByText('“Base case” of Harbour crane (e2e) is the only one').isVisible()).toBe(true);
+      expect(await page.getByRole('link', { name: 'its project’s page' }).getAttribute('href')).toBe(`/projects/${project.id}`);
+    } finally {
+      expect((await page.request.delete(`/api/v1/projects/${project.id}`)).status()).toBe(204);
+      await context.close();
+    }
   });
 });

@@ -1,9 +1,11 @@
 'use client';
 
+import Link from 'next/link';
 import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { useState } from 'react';
 import useSWR from 'swr';
 import { NpvComparisonChart } from '@/components/charts/npv-comparison-chart';
+import { EmptyState } from '@/components/empty-state';
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { ValuationCaution } from '@/components/valuation-caution';
 import { OlderEngineNote } from '@/components/older-engine-note';
@@ -36,11 +38,47 @@ interface ComparisonJson {
 
 const MAX = 4;
 
+/** An organisation with no case, or one: nothing to compare yet, and the way to a second case. */
+function TooFewCases({ only, canCreate }: { only: CaseOption | undefined; canCreate: boolean }) {
+  if (!only)
+    return (
+      <EmptyState title="No cases to compare yet">
+        {canCreate ? (
+          <>
+            A comparison needs two cases. Start with{' '}
+            <Link href="/projects" className="text-tide-600 underline">
+              a new project
+            </Link>{' '}
+            and give it two cases, a base case and a variant.
+          </>
+        ) : (
+          'When analysts have made two cases, you can set them side by side here.'
+        )}
+      </EmptyState>
+    );
+  return (
+    <EmptyState title="One case so far">
+      A comparison needs two cases; “{only.name}” of {only.projectName} is the only one.{' '}
+      {canCreate ? (
+        <>
+          Duplicate it on{' '}
+          <Link href={`/projects/${only.projectId}`} className="text-tide-600 underline">
+            its project’s page
+          </Link>{' '}
+          and change what you want to weigh.
+        </>
+      ) : (
+        'When analysts make another, you can set them side by side here.'
+      )}
+    </EmptyState>
+  );
+}
+
 /**
  * Two to four cases side by side. The selection lives in the URL (?cases=…), so a comparison can
  * be shared by sending the link; rows where the cases differ are marked in words and by tone.
  */
-export function CompareView() {
+export function CompareView({ canCreate }: { canCreate: boolean }) {
   const router = useRouter();
   const pathname = usePathname();
   const params = useSearchParams();
@@ -59,6 +97,7 @@ export function CompareView() {
   if (all.isLoading) return <LoadingBlock label="Loading cases" />;
   if (all.error || !all.data) return <LoadError message={all.error?.message ?? 'No answer from the server.'} onRetry={() => all.mutate()} />;
   const projects = [...new Map(all.data.cases.map((c) => [c.projectId, c.projectName])).entries()];
+  if (all.data.cases.length < 2) return <TooFewCases only={all.data.cases[0]} canCreate={canCreate} />;
 
   return (
     <div className="grid gap-8 xl:grid-cols-[18rem_minmax(0,1fr)]">
