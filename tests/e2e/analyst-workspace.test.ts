@@ -132,7 +132,10 @@ describe('the analyst workspace', () => {
     // Duplicate on the project page, then raise the copy's volatility.
     await page.getByRole('link', { name: 'Test resin line' }).click();
     await page.getByRole('button', { name: 'Duplicate Base case' }).click();
-    await page.getByLabel('Case name').fill('Volatile demand');
+    // The suggested name ("Base case (copy)") is selected as the dialog opens: typing replaces it.
+    await expect.poll(() => page.getByLabel('Case name').inputValue(), { timeout: 30_000 }).toBe('Base case (copy)');
+    await page.getByLabel('Case name').pressSequentially('Volatile demand', { delay: 20 });
+    expect(await page.getByLabel('Case name').inputValue()).toBe('Volatile demand');
     await page.getByRole('button', { name: 'Duplicate', exact: true }).click();
     await page.getByRole('link', { name: 'Volatile demand' }).click();
     await page.waitForURL(/\/cases\//);

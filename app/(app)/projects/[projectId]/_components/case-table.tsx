@@ -182,6 +182,8 @@ export function CaseTable(props: { projectId: string; currency: string; canEdit:
             <Input
               label="Case name"
               autoFocus
+              // A suggested name is selected as the dialog opens, so what a person types replaces it.
+              onFocus={(e) => e.currentTarget.select()}
               value={name}
               onChange={(e) => setName(e.target.value)}
               hint={pending?.kind === 'duplicate' ? 'The copy is edited independently of the original.' : 'A scenario, e.g. “Base case” or “Slow ramp-up”.'}

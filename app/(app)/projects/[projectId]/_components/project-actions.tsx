@@ -78,7 +78,16 @@ export function ProjectActions({ projectId, name, description, status }: Props) 
         >
           {dialog === 'rename' ? (
             <>
-              <Input label="Project name" autoFocus required maxLength={120} value={draftName} onChange={(e) => setDraftName(e.target.value)} />
+              <Input
+                label="Project name"
+                autoFocus
+                // The current name is selected as the dialog opens: typing replaces it, an arrow key keeps it.
+                onFocus={(e) => e.currentTarget.select()}
+                required
+                maxLength={120}
+                value={draftName}
+                onChange={(e) => setDraftName(e.target.value)}
+              />
               <Input
                 label="Description"
                 maxLength={2000}
