@@ -9,6 +9,7 @@ import { latestApprovedSnapshot } from '@/db/queries/reviews';
 import { requireCase } from '../cases/require-case';
 import type { Member } from '../dal';
 import { AppError } from '../errors';
+import { readProject } from '../projects/service';
 import { sharedWhileRunning } from '../shared-answer';
 import type { PageSize } from './data';
 import { renderPdfInThread } from './pdf-thread';
@@ -33,5 +34,6 @@ export async function latestBoardPack(member: Member, caseId: string, pageSize: 
   const found = await requireCase(db, member.orgId, caseId);
   const snapshot = await latestApprovedSnapshot(db, { orgId: member.orgId, caseId: found.id });
   if (!snapshot) throw new AppError('not_found', 'This case has no approved snapshot yet, so there is no board pack.');
-  return { caseName: found.name, ...(await ensureBoardPack(member.orgId, snapshot.id, pageSize)) };
+  const project = await readProject(member, found.project_id);
+  return { projectName: project.name, caseName: found.name, ...(await ensureBoardPack(member.orgId, snapshot.id, pageSize)) };
 }

@@ -10,16 +10,18 @@ import type { Member } from '../dal';
 import { gatherValidationReport } from './gather';
 import { validationWorkbook } from './workbook';
 
-const filename = (caseName: string, version: number, extension: string) => `${caseName} - validation report v${version}.${extension}`;
+/** Named by project and case, like the case's workbook and its board pack. */
+const filename = (data: { project: { name: string }; caseName: string; caseVersion: number }, extension: string) =>
+  `${data.project.name} - ${data.caseName} - validation report v${data.caseVersion}.${extension}`;
 
 export async function validationReportPdf(member: Member, caseId: string, pageSize: PageSize, signal?: AbortSignal) {
   const data = await gatherValidationReport(member, caseId, pageSize, signal);
-  return { pdf: await renderPdfInThread('validation-report-worker.mjs', data, signal), filename: filename(data.caseName, data.caseVersion, 'pdf') };
+  return { pdf: await renderPdfInThread('validation-report-worker.mjs', data, signal), filename: filename(data, 'pdf') };
 }
 
 export async function validationReportWorkbook(member: Member, caseId: string, signal?: AbortSignal) {
   const data = await gatherValidationReport(member, caseId, 'A4', signal);
-  return { bytes: await validationWorkbook(data), filename: filename(data.caseName, data.caseVersion, 'xlsx') };
+  return { bytes: await validationWorkbook(data), filename: filename(data, 'xlsx') };
 }
 
 /** Renders the A4 report and keeps it with the case (Documents), audited as such. */
@@ -30,7 +32,7 @@ export async function attachValidationReport(member: Member, caseId: string, sig
     async () => {
       const data = await gatherValidationReport(member, caseId, 'A4', signal);
       const pdf = await renderPdfInThread('validation-report-worker.mjs', data, signal);
-      return { filename: filename(data.caseName, data.caseVersion, 'pdf'), kind: 'pdf' as const, data: pdf, detail: { version: data.caseVersion } };
+      return { filename: filename(data, 'pdf'), kind: 'pdf' as const, data: pdf, detail: { version: data.caseVersion } };
     },
     'case.attach_validation_report',
   );

@@ -145,7 +145,7 @@ describe('the API through its typed client', () => {
     const caseId = ids.case;
     const path = { caseId };
     ok(await viewer.GET('/api/v1/projects', {}));
-    ok(await viewer.GET('/api/v1/projects/{projectId}', { params: { path: { projectId: ids.project } } }));
+    const project = ok(await viewer.GET('/api/v1/projects/{projectId}', { params: { path: { projectId: ids.project } } })).project;
     ok(
       await analyst.PATCH('/api/v1/projects/{projectId}', {
         params: { path: { projectId: ids.project } },
@@ -218,7 +218,7 @@ describe('the API through its typed client', () => {
     ok(await viewer.GET('/api/v1/cases/{caseId}/validation-report', { params: { path: crossPath, query: { size: 'LETTER' } }, parseAs: 'arrayBuffer' }));
     ok(await viewer.GET('/api/v1/cases/{caseId}/validation-report.xlsx', { params: { path: crossPath }, parseAs: 'arrayBuffer' }));
     const kept = ok(await reviewer.POST('/api/v1/cases/{caseId}/validation-report/attachments', { params: { path: crossPath } })).attachment;
-    expect([kept.kind, kept.filename]).toEqual(['pdf', `${other.name} - validation report v${other.version}.pdf`]);
+    expect([kept.kind, kept.filename]).toEqual(['pdf', `${project.name} - ${other.name} - validation report v${other.version}.pdf`]);
     const checks = ok(await viewer.GET('/api/v1/cases/{caseId}/cross-checks', { params: { path: crossPath } })).crossChecks;
     expect(checks.map((c) => [c.id, c.status])).toEqual([
       [small.id, 'done'],

@@ -8,6 +8,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
 import { db } from '@/db';
+import { filenameOf } from '@/lib/api-client';
 import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
 
@@ -48,6 +49,8 @@ describe('the portfolio and project pages', () => {
     expect(href).toBe(`/api/v1/cases/${approved.case_id}/board-pack?size=A4`);
     const pdf = await executive.page.request.get(href!);
     expect([pdf.status(), pdf.headers()['content-type']]).toEqual([200, 'application/pdf']);
+    // Named by project and case: every project's pack of its "Base case" would otherwise share one name.
+    expect(filenameOf(pdf.headers()['content-disposition']!)).toBe(`Phased bio-resin plant - ${approved.case_name} - board pack (A4).pdf`);
     // A project with nothing approved says so instead of showing a link.
     expect(
       await executive.page

@@ -11,8 +11,9 @@ export const runtime = 'nodejs';
 
 export const GET = withAuth<{ caseId: string }>(async ({ member, params, request }) => {
   const size = pageSizeSchema.parse((request.nextUrl.searchParams.get('size') ?? 'A4').toUpperCase());
-  const { caseName, pdf, sha256 } = await latestBoardPack(member, params.caseId, size);
-  const filename = `${caseName} - board pack (${size === 'A4' ? 'A4' : 'Letter'}).pdf`;
+  const { projectName, caseName, pdf, sha256 } = await latestBoardPack(member, params.caseId, size);
+  // Named by project and case, like the case's workbook: packs of several projects' base cases do not collide.
+  const filename = `${projectName} - ${caseName} - board pack (${size === 'A4' ? 'A4' : 'Letter'}).pdf`;
   return new Response(new Uint8Array(pdf), {
     headers: {
       'content-type': 'application/pdf',
