@@ -104,6 +104,35 @@ describe('the portfolio and project pages', () => {
     await admin.context.close();
   }, 120_000);
 
+  it('lets an analyst delete a project never submitted, and tells why one with an approval cannot be', async () => {
+    const analyst = await signedInPage('analyst@kestrelbay.example');
+    const made = await analyst.page.request.post('/api/v1/projects', { data: { name: 'Scrap trial (test)' } });
+    expect(made.status()).toBe(201);
+    const { project } = await made.json();
+    await analyst.page.goto(`/projects/${project.id}`);
+    await analyst.page.getByRole('button', { name: 'Delete…' }).click();
+    await analyst.page.getByRole('button', { name: 'Delete project' }).click();
+    await analyst.page.waitForURL(/\/projects$/, { timeout: 30_000 });
+    expect((await analyst.page.request.get(`/api/v1/projects/${project.id}`)).status()).toBe(404);
+
+    // The demo plant has an approved case: the server refuses, the dialog says why, nothing goes.
+    await analyst.page.goto(`/projects/${plant.projectId}`);
+    await analyst.page.getByRole('button', { name: 'Delete…' }).click();
+    await analyst.page.getByRole('button', { name: 'Delete project' }).click();
+    await expect
+      .poll(
+        () =>
+          analyst.page
+            .getByRole('dialog')
+            .getByText(/archive it instead of deleting it/)
+            .isVisible(),
+        { timeout: 30_000 },
+      )
+      .toBe(true);
+    expect((await analyst.page.request.get(`/api/v1/projects/${plant.projectId}`)).status()).toBe(200);
+    await analyst.context.close();
+  }, 120_000);
+
   it('fits a ten-year cash-flow grid at 1280 px with year 0 beside the labels', async () => {
     const analyst = await signedInPage('analyst@kestrelbay.example');
     const { project } = await (await analyst.page.request.post('/api/v1/projects', { data: { name: 'Ten-year grid (test)' } })).json();

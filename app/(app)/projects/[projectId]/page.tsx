@@ -31,7 +31,13 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         lead={project.status === 'archived' ? `Archived. ${project.description}`.trim() : project.description || undefined}
         actions={
           roleAllows(member.role, { project: ['update'] }) ? (
-            <ProjectActions projectId={project.id} name={project.name} description={project.description} status={project.status} />
+            <ProjectActions
+              projectId={project.id}
+              name={project.name}
+              description={project.description}
+              status={project.status}
+              canDelete={roleAllows(member.role, { project: ['delete'] })}
+            />
           ) : undefined
         }
       />
