@@ -110,6 +110,8 @@ describe('the portfolio and project pages', () => {
     expect(made.status()).toBe(201);
     const { project } = await made.json();
     await analyst.page.goto(`/projects/${project.id}`);
+    // The cases load once the page's script runs; the buttons work from then on (a click before is lost).
+    await expect.poll(() => analyst.page.getByRole('heading', { name: 'No cases yet' }).isVisible(), { timeout: 30_000 }).toBe(true);
     await analyst.page.getByRole('button', { name: 'Delete…' }).click();
     await analyst.page.getByRole('button', { name: 'Delete project' }).click();
     await analyst.page.waitForURL(/\/projects$/, { timeout: 30_000 });
@@ -117,6 +119,7 @@ describe('the portfolio and project pages', () => {
 
     // The demo plant has an approved case: the server refuses, the dialog says why, nothing goes.
     await analyst.page.goto(`/projects/${plant.projectId}`);
+    await expect.poll(() => analyst.page.getByRole('link', { name: 'Base case', exact: true }).isVisible(), { timeout: 30_000 }).toBe(true);
     await analyst.page.getByRole('button', { name: 'Delete…' }).click();
     await analyst.page.getByRole('button', { name: 'Delete project' }).click();
     await expect
