@@ -25,13 +25,11 @@ export function Tabs({ tabs, initial }: { tabs: Tab[]; initial?: string }) {
   const first = tabs.find((tab) => tab.id === initial)?.id ?? tabs[0]?.id;
   const [active, setActiveState] = useState(first);
   const [opened, setOpened] = useState(() => new Set([first]));
-  const setActive = (id: string | undefined) => {
+  const setActive = (id: string) => {
     setActiveState(id);
-    if (id === undefined) return;
     if (!opened.has(id)) setOpened(new Set([...opened, id]));
-    const address = new URL(window.location.href);
-    address.searchParams.set('tab', id);
-    window.history.replaceState(window.history.state, '', address);
+    // The same address as the tab's link, so a click before or after the script leaves the same one.
+    window.history.replaceState(window.history.state, '', tabHref(id));
   };
   const base = useId();
   const refs = useRef<(HTMLAnchorElement | null)[]>([]);

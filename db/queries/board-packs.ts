@@ -84,11 +84,16 @@ export async function findStoredPack(db: Database, { orgId, snapshotId, pageSize
     .executeTakeFirst();
 }
 
-/** Keeps a rendered pack; when two first requests race the first insert wins (saveBoardPack then answers the stored bytes). */
+/**
+ * Keeps a rendered pack; when two first requests race the first insert wins. True when this one
+ * was stored (saveBoardPack reads the stored pack back only when it was not).
+ */
 export async function insertStoredPack(db: Database, args: { orgId: string; snapshotId: string; pageSize: PageSize; pdf: Buffer; sha256: string }) {
-  await db
+  const stored = await db
     .insertInto('board_pack')
     .values({ organization_id: args.orgId, snapshot_id: args.snapshotId, page_size: args.pageSize, pdf: args.pdf, sha256: args.sha256 })
     .onConflict((c) => c.columns(['snapshot_id', 'page_size']).doNothing())
-    .execute();
+    .returning('snapshot_id')
+    .executeTakeFirst();
+  return stored !== undefined;
 }

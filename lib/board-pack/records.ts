@@ -91,6 +91,6 @@ export async function findBoardPack(orgId: string, snapshotId: string, pageSize:
  */
 export async function saveBoardPack(orgId: string, snapshotId: string, pageSize: PageSize, pdf: Buffer): Promise<{ pdf: Buffer; sha256: string }> {
   const sha256 = createHash('sha256').update(pdf).digest('hex');
-  await insertStoredPack(db, { orgId, snapshotId, pageSize, pdf, sha256 });
+  if (await insertStoredPack(db, { orgId, snapshotId, pageSize, pdf, sha256 })) return { pdf, sha256 };
   return (await findBoardPack(orgId, snapshotId, pageSize)) ?? { pdf, sha256 };
 }

@@ -32,8 +32,7 @@ export function ensureBoardPack(orgId: string, snapshotId: string, pageSize: Pag
 /** The board pack of the case's latest approved version, for a member of its organisation. */
 export async function latestBoardPack(member: Member, caseId: string, pageSize: PageSize) {
   const found = await requireCase(db, member.orgId, caseId);
-  const snapshot = await latestApprovedSnapshot(db, { orgId: member.orgId, caseId: found.id });
+  const [snapshot, project] = await Promise.all([latestApprovedSnapshot(db, { orgId: member.orgId, caseId: found.id }), readProject(member, found.project_id)]);
   if (!snapshot) throw new AppError('not_found', 'This case has no approved snapshot yet, so there is no board pack.');
-  const project = await readProject(member, found.project_id);
   return { projectName: project.name, caseName: found.name, ...(await ensureBoardPack(member.orgId, snapshot.id, pageSize)) };
 }
