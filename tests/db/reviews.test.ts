@@ -1,8 +1,9 @@
 /**
  * The review workflow on a real PostgreSQL: transitions through the queries the routes use, two
  * reviewers approving at once (exactly one wins), a snapshot that stays byte-identical when the
- * case is edited afterwards, a case in review that cannot be saved, and a resubmission that
- * recognises its inputs in an approval stored by an older engine.
+ * case is edited afterwards, a case in review that cannot be saved, a resubmission that
+ * recognises its inputs in an approval stored by an older engine, and one stored board pack per
+ * approval and page size whichever render stores it first.
  */
 import { checkTransition } from '@/lib/review/transitions';
 import { sql } from 'kysely';
@@ -11,6 +12,7 @@ import { db } from '@/db';
 import { createCase, saveCase, startRevision } from '@/db/queries/cases';
 import { createProject } from '@/db/queries/projects';
 import { decideCase, submitCase } from '@/db/queries/reviews';
+import { saveBoardPack } from '@/lib/board-pack/records';
 import { versionChanges } from '@/lib/review/version-changes';
 import { minimalCase, seededDemo } from './support/demo';
 
@@ -115,6 +117,20 @@ describe('review workflow', () => {
     expect(outcomes.find((o) => !o.ok)).toMatchObject({ code: 'conflict' });
     const decided = await db.selectFrom('case_snapshot').select('status').where('case_id', '=', c.id).execute();
     expect(decided).toEqual([{ status: 'approved' }]);
+  });
+
+  it('keeps the first stored board pack, and answers it to a render that stored second', async () => {
+    const c = await freshCase();
+    await submit(c.id);
+    await approve(c.id);
+    const snapshot = await db.selectFrom('case_snapshot').select('id').where('case_id', '=', c.id).executeTakeFirstOrThrow();
+    const first = await saveBoardPack(kestrel, snapshot.id, 'A4', Buffer.from('%PDF- first render'));
+    // Another process rendered the same pack meanwhile (here with other bytes): it gets the stored one.
+    const second = await saveBoardPack(kestrel, snapshot.id, 'A4', Buffer.from('%PDF- second render'));
+    expect(second.pdf.toString()).toBe('%PDF- first render');
+    expect(second.sha256).toBe(first.sha256);
+    const stored = await db.selectFrom('board_pack').select('sha256').where('snapshot_id', '=', snapshot.id).execute();
+    expect(stored).toEqual([{ sha256: first.sha256 }]);
   });
 
   it('keeps a snapshot byte-identical when the case is revised and edited afterwards, and refuses saves while in review or approved', async () => {
