@@ -1,7 +1,7 @@
 'use client';
 
 import Link from 'next/link';
-import { usePathname, useRouter, useSearchParams } from 'next/navigation';
+import { usePathname, useSearchParams } from 'next/navigation';
 import { useState } from 'react';
 import useSWR from 'swr';
 import { NpvComparisonChart } from '@/components/charts/npv-comparison-chart';
@@ -79,7 +79,6 @@ function TooFewCases({ only, canCreate }: { only: CaseOption | undefined; canCre
  * be shared by sending the link; rows where the cases differ are marked in words and by tone.
  */
 export function CompareView({ canCreate }: { canCreate: boolean }) {
-  const router = useRouter();
   const pathname = usePathname();
   const params = useSearchParams();
   const selected = (params.get('cases') ?? '').split(',').filter(Boolean).slice(0, MAX);
@@ -91,7 +90,10 @@ export function CompareView({ canCreate }: { canCreate: boolean }) {
 
   const toggle = (id: string) => {
     const next = selected.includes(id) ? selected.filter((x) => x !== id) : [...selected, id].slice(0, MAX);
-    router.replace(next.length ? `${pathname}?cases=${next.join(',')}` : pathname, { scroll: false });
+    // The address changes in the browser only: Next.js syncs useSearchParams with it at once, where
+    // router.replace would wait for the server, leaving the box unticked meanwhile and a second tick,
+    // read from the old address, dropping the first (seen with 400 ms of latency).
+    window.history.replaceState(null, '', next.length ? `${pathname}?cases=${next.join(',')}` : pathname);
   };
 
   if (all.isLoading) return <LoadingBlock label="Loading cases" />;
