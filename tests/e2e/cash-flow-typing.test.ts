@@ -2,8 +2,8 @@
  * Figures typed into the cash-flow grid are the figures used: "23.5" typed key by key, slowly,
  * is 23.5 (it became 235 when the grid re-rendered "23." as "23"); a comma that may be a decimal
  * comma is flagged with how to write it, not guessed; a block copied from a spreadsheet
- * (tab-separated, two lines and three years) pastes from the cell it lands in. The demo case is
- * invented.
+ * (tab-separated, two lines and three years) pastes from the cell it lands in; a figure typed
+ * while a save is on its way stays unsaved. The demo case is invented.
  */
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -77,5 +77,29 @@ describe('typing into the cash-flow grid', () => {
         [32.5, 17],
         [33, 18.25],
       ]);
+  });
+
+  it('keeps a figure typed while a save is on its way marked unsaved, and saves it next', async () => {
+    // Before, the save's answer marked the whole draft saved, so a figure typed meanwhile was lost
+    // without a warning on leaving the page. 2 s of latency leaves time to type one, even on a loaded machine.
+    const cdp = await context.newCDPSession(page);
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 2000, downloadThroughput: -1, uploadThroughput: -1 });
+    const version = (await (await page.request.get(`/api/v1/cases/${caseId}`)).json()).case.version as number;
+    await typeSlowly(cell('Revenue', 4), '41');
+    await page.getByRole('button', { name: 'Save' }).click();
+    await cell('Revenue', 5).click();
+    await cell('Revenue', 5).press('ControlOrMeta+a');
+    await cell('Revenue', 5).pressSequentially('52');
+    await cell('Revenue', 5).press('Tab');
+    // An earlier save's message may still be showing: this one names the next version.
+    await expect.poll(() => page.getByText(`Saved as version ${version + 1}`, { exact: false }).isVisible(), { timeout: 20_000 }).toBe(true);
+    expect(await page.getByText('· unsaved changes').isVisible()).toBe(true);
+    expect(await page.getByText('the changes made since are not saved yet', { exact: false }).isVisible()).toBe(true);
+    expect((await stored())[4]!.revenue).toBe(41);
+    expect((await stored())[5]!.revenue).not.toBe(52);
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
+    await page.getByRole('button', { name: 'Save' }).click();
+    await expect.poll(async () => (await stored())[5]!.revenue, { timeout: 20_000 }).toBe(52);
+    expect(await page.getByText('· saved').isVisible()).toBe(true);
   });
 });

@@ -7,7 +7,7 @@
  * (409) and kept as a conflict for the editor to show; every other failure is a toast, and the
  * draft stays as typed.
  */
-import { useCallback, useState } from 'react';
+import { useCallback, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { useToast } from '@/components/ui/toast';
 import { ApiError, getJson, sendJson } from '@/lib/api-client';
@@ -40,11 +40,17 @@ export function useCaseRecord({ caseId, currency, initial, reload }: { caseId: s
   const [conflict, setConflict] = useState<string | null>(null);
   const runs = useSWR<{ runs: RunSummary[] }>(`/api/v1/cases/${caseId}/valuations`, getJson, { revalidateOnFocus: false });
 
+  // Counts edits, so a save that answers after the user typed on does not call those edits saved.
+  const edits = useRef(0);
   const update = (patch: Partial<CaseInput>) => {
     setDraft((d) => ({ ...d, ...patch }));
+    edits.current += 1;
     setDirty(true);
   };
-  const markUnsaved = useCallback(() => setDirty(true), []);
+  const markUnsaved = useCallback(() => {
+    edits.current += 1;
+    setDirty(true);
+  }, []);
 
   /** `blocked` says why the draft cannot be saved as it stands (a field that is not a value), or null. */
   const save = async (blocked: string | null): Promise<boolean> => {
@@ -53,13 +59,16 @@ export function useCaseRecord({ caseId, currency, initial, reload }: { caseId: s
       return false;
     }
     setSaving(true);
+    const editsSent = edits.current;
     try {
       const { case: saved } = await sendJson<{ case: CaseJson }>('PATCH', `/api/v1/cases/${caseId}`, { ...draft, version });
       setVersion(saved.version);
       setStatus(saved.status as CaseStatus);
-      setDirty(false);
+      // Edits typed while the save was on its way are not in it: the draft stays unsaved.
+      const typedOn = edits.current !== editsSent;
+      setDirty(typedOn);
       setConflict(null);
-      toast(`Saved as version ${saved.version}.`, 'success');
+      toast(typedOn ? `Saved as version ${saved.version}; the changes made since are not saved yet.` : `Saved as version ${saved.version}.`, 'success');
       return true;
     } catch (error) {
       if (error instanceof ApiError && error.status === 409) setConflict(error.message);
