@@ -61,7 +61,7 @@ export function WatchDecisions({
         reason: form.reason,
       });
       toast(`Recorded: “${nameOf(form.right)}” ${form.decision} on ${form.date}.`, 'success');
-      setForm({ ...form, reason: '' });
+      setForm((f) => ({ ...f, reason: '' }));
       await onRecorded();
     } catch (error) {
       if (error instanceof ApiError) {

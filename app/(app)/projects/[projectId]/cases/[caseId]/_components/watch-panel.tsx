@@ -83,7 +83,7 @@ export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; cu
     try {
       await sendJson('POST', `/api/v1/cases/${caseId}/observations`, { date: form.date, value: value.value, source: form.source, note: form.note });
       toast(`Recorded ${formatMoney(value.value, currency)} on ${form.date}.`, 'success');
-      setForm({ ...form, value: '', note: '' });
+      setForm((f) => ({ ...f, value: '', note: '' }));
       await watch.mutate();
     } catch (error) {
       if (error instanceof ApiError) {
