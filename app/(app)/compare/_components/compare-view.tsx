@@ -116,6 +116,7 @@ export function CompareView({ canCreate }: { canCreate: boolean }) {
                 <label key={c.id} className="flex items-center gap-2 py-0.5 text-body">
                   <input
                     type="checkbox"
+                    value={c.id}
                     checked={selected.includes(c.id)}
                     disabled={!selected.includes(c.id) && selected.length >= MAX}
                     onChange={() => toggle(c.id)}
