@@ -70,7 +70,11 @@ export function ReviewQueue() {
           <QueueTable rows={waiting.data.cases} />
         )}
       </section>
-      {decided.data && decided.data.cases.length > 0 ? (
+      {decided.isLoading ? (
+        <LoadingBlock label="Loading the decided cases" lines={2} />
+      ) : decided.error ? (
+        <LoadError message={`The decided cases did not load: ${decided.error.message}`} onRetry={() => decided.mutate()} />
+      ) : decided.data && decided.data.cases.length > 0 ? (
         <section aria-labelledby="decided">
           <h2 id="decided" className="mb-3">
             Decided

@@ -2,6 +2,7 @@
 
 import { useState } from 'react';
 import useSWR from 'swr';
+import { LoadError, LoadingBlock } from '@/components/load-state';
 import { Button } from '@/components/ui/button';
 import { useToast } from '@/components/ui/toast';
 import { getJson, sendJson } from '@/lib/api-client';
@@ -54,7 +55,11 @@ export function ReviewDiscussion({ caseId, rightIds, canComment }: { caseId: str
       <h3 id="comments-heading" className="mb-3 text-body font-semibold">
         Discussion
       </h3>
-      {comments.data?.comments.length ? (
+      {comments.isLoading ? (
+        <LoadingBlock label="Loading the discussion" lines={2} />
+      ) : comments.error || !comments.data ? (
+        <LoadError message={comments.error?.message ?? 'No answer from the server.'} onRetry={() => comments.mutate()} />
+      ) : comments.data.comments.length ? (
         <ol className="mb-4 flex flex-col gap-3">
           {comments.data.comments.map((c) => (
             <li key={c.id} className="border-l-2 border-tide-300 pl-3">

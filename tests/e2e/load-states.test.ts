@@ -1,0 +1,67 @@
+/**
+ * A panel whose data does not come says so and offers to try again; while it loads it shows
+ * that it is loading. It never shows an empty state in place of data it has not read: before,
+ * a case's discussion said "No comments yet." while its comments loaded and when they failed,
+ * and the review queue left its decided cases out without a word when they failed.
+ */
+import type { Page } from 'playwright-core';
+import { afterAll, describe, expect, it } from 'vitest';
+import { db } from '@/db';
+import { closeBrowser, signedInPage } from './support/browser';
+import { demoCase } from './support/demo';
+
+afterAll(async () => {
+  await closeBrowser();
+  await db.destroy();
+});
+
+/** Answers `pattern` with a 503 until the returned function is called. */
+async function failing(page: Page, pattern: RegExp): Promise<() => Promise<void>> {
+  const handler = (route: Parameters<Parameters<Page['route']>[1]>[0]) =>
+    route.fulfill({ status: 503, contentType: 'application/json', body: JSON.stringify({ error: { code: 'unavailable', message: 'Try again shortly.' } }) });
+  await page.route(pattern, handler);
+  return () => page.unroute(pattern, handler);
+}
+
+/**
+ * Presses Try again. The data fetcher also retries on its own a few seconds after a failure, so
+ * on a slow machine the button may already have gone with the error: either way the data comes.
+ */
+async function tryAgain(scope: Pick<Page, 'getByRole'>) {
+  const button = scope.getByRole('button', { name: 'Try again' });
+  if (await button.isVisible()) await button.click({ timeout: 5_000 }).catch(() => undefined);
+}
+
+describe('load states', () => {
+  it("a case's discussion says when its comments could not be read, and reads them on request", async () => {
+    const hub = await demoCase('Cold-storage hub', 'Base case');
+    const { context, page } = await signedInPage('reviewer@kestrelbay.example');
+    const comments = new RegExp(`/api/v1/cases/${hub.caseId}/comments$`);
+    const recover = await failing(page, comments);
+    await page.goto(`${hub.url}?tab=review`);
+    const discussion = page.getByRole('region', { name: 'Discussion' });
+    await expect.poll(() => discussion.getByRole('alert').isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(await discussion.getByText('Try again shortly.').isVisible()).toBe(true);
+    expect(await discussion.getByText('No comments yet.').count()).toBe(0);
+
+    await recover();
+    const stored = (await (await page.request.get(`/api/v1/cases/${hub.caseId}/comments`)).json()).comments as { body: string }[];
+    await tryAgain(discussion);
+    // While they load again the panel says so; then the comments stored are shown, or that there are none.
+    const shown = stored.length ? discussion.getByText(stored[0]!.body.split('\n')[0]!, { exact: false }).first() : discussion.getByText('No comments yet.');
+    await expect.poll(() => shown.isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(await discussion.getByRole('alert').count()).toBe(0);
+    await context.close();
+  });
+
+  it('the review queue says when its decided cases could not be read', async () => {
+    const { context, page } = await signedInPage('reviewer@kestrelbay.example');
+    const recover = await failing(page, /\/api\/v1\/reviews\?status=approved,returned$/);
+    await page.goto('/review');
+    await expect.poll(() => page.getByText('The decided cases did not load: Try again shortly.').isVisible(), { timeout: 30_000 }).toBe(true);
+    await recover();
+    await tryAgain(page);
+    await expect.poll(() => page.getByRole('heading', { name: 'Decided' }).isVisible(), { timeout: 30_000 }).toBe(true);
+    await context.close();
+  });
+});
