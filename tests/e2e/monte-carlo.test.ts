@@ -1,8 +1,8 @@
 /**
  * Monte Carlo volatility as the analyst runs it: mark uncertain lines, run a million paths off
  * the request thread while the progress bar moves, read both estimates and apply the conditional
- * one, which the case records with its seed. A run can be cancelled; roles and organisations are
- * respected.
+ * one, which the case records with its seed. A double click starts one run; a run can be
+ * cancelled; roles and organisations are respected.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
@@ -48,6 +48,30 @@ describe('Monte Carlo volatility', () => {
     const saved = (await (await page.request.get(`/api/v1/cases/${caseId}`)).json()).case;
     expect(saved.settings.volatilitySource.method).toBe('monte-carlo');
     expect(saved.settings.volatilitySource.note).toContain('1,000,000 paths, seed 2026');
+    await context.close();
+  });
+
+  it('starts one simulation for a double click on a slow connection', async () => {
+    // Before, the button took clicks until the first one's answer came back: a second click
+    // started a second job, and the page lost sight of the first, which ran on unseen.
+    const { context, page } = await signedInPage('analyst@kestrelbay.example');
+    await page.goto(`${caseUrl}?tab=uncertainty`);
+    const run = page.getByRole('button', { name: 'Run the simulation' });
+    await expect.poll(() => run.isEnabled(), { timeout: 30_000 }).toBe(true);
+    const starts: string[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'POST' && r.url().endsWith('/api/v1/volatility/simulations')) starts.push(r.url());
+    });
+    const cdp = await context.newCDPSession(page);
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 1000, downloadThroughput: -1, uploadThroughput: -1 });
+    await run.dblclick();
+    const bar = page.getByRole('progressbar', { name: 'Simulation progress' });
+    await expect.poll(() => bar.isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(starts).toHaveLength(1);
+    // The one run (the default 100,000 paths) ends, and the button takes a click again.
+    await expect.poll(() => page.getByText('Done', { exact: true }).isVisible(), { timeout: 60_000 }).toBe(true);
+    expect(starts).toHaveLength(1);
+    expect(await run.isEnabled()).toBe(true);
     await context.close();
   });
 

@@ -56,6 +56,7 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
   const [seed, setSeed] = useState(() => String(Math.floor(Math.random() * 1_000_000)));
   const [jobId, setJobId] = useState<string | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
+  const [starting, setStarting] = useState(false);
   const job = useSWR<Job>(jobId ? `/api/v1/volatility/simulations/${jobId}` : null, getJson, {
     refreshInterval: (latest) => (latest && latest.status !== 'running' ? 0 : 400),
   });
@@ -65,6 +66,7 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
 
   const start = async () => {
     setProblem(null);
+    setStarting(true);
     try {
       const spec = {
         drivers: chosen.map((line) => ({
@@ -81,6 +83,8 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
       setJobId(id);
     } catch (error) {
       setProblem(error instanceof Error ? error.message : 'The simulation did not start.');
+    } finally {
+      setStarting(false);
     }
   };
 
@@ -95,6 +99,8 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
   };
 
   const state = job.data;
+  // From the click until the job ends: a second click meanwhile would start a second job and lose sight of the first.
+  const running = starting || (jobId !== null && (state ? state.status === 'running' : !job.error));
   const result = state?.status === 'done' ? state.result : null;
   const describe = () => chosen.map((l) => `${lineLabels[l].toLowerCase()} ${drivers[l].distribution} ${drivers[l].spread} % a year`).join(', ');
 
@@ -191,12 +197,12 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
           <span className="text-caption font-medium uppercase tracking-wide text-ink-soft">Seed (same seed, same result)</span>
           <input inputMode="numeric" value={seed} onChange={(e) => setSeed(e.target.value)} className={`${field} w-32 text-right`} />
         </label>
-        <Button variant="secondary" onClick={() => void start()} disabled={state?.status === 'running' || chosen.length === 0}>
+        <Button variant="secondary" onClick={() => void start()} busy={starting} disabled={running || chosen.length === 0}>
           Run the simulation
         </Button>
         {unsaved ? <span className="text-caption text-ember-700">Uses the saved cash flows: save first to include your changes.</span> : null}
       </div>
-      <FormProblem message={problem} />
+      <FormProblem message={problem ?? (!state && job.error ? `The simulation's progress could not be read (${(job.error as Error).message}).` : null)} />
       {state ? (
         <div className="flex flex-col gap-2" aria-live="polite">
           <JobProgress
