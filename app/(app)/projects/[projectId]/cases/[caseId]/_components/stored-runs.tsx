@@ -128,6 +128,9 @@ export function StoredRuns({ caseId, currency, canRerun }: { caseId: string; cur
           </tbody>
         </Table>
       )}
+      {runs.data.runs.length > 10 ? (
+        <p className="mt-2 text-caption text-ink-muted">The latest 10 of {runs.data.runs.length} stored runs; the API lists them all.</p>
+      ) : null}
       {problem ? (
         <p role="alert" className="mt-3 text-brick-700">
           {problem}
