@@ -1,11 +1,13 @@
 /**
  * An admin changes the organisation's defaults on the settings page, typing as a person does:
  * the server action saves them (with its audit entry), a reload shows them, and a value the
- * schema refuses is named at its field and saves nothing. Real browser, server and database.
+ * schema refuses is named at its field and saves nothing; a save that cannot reach the server says
+ * so. Real browser, server and database.
  * Harrow Fen's owner is used so that the Kestrel Bay defaults other tests read stay as seeded;
  * the figures are put back at the end.
  */
 import { afterAll, describe, expect, it } from 'vitest';
+import { NO_ANSWER } from '@/lib/reach-action';
 import { closeBrowser, signedInPage } from './support/browser';
 
 afterAll(closeBrowser);
@@ -43,6 +45,27 @@ describe('organisation defaults', () => {
     await expect.poll(() => page.getByText('Organisation defaults saved.').count()).toBeGreaterThan(0);
     await page.reload();
     await expect.poll(() => wacc.inputValue()).toBe(before.wacc);
+    await context.close();
+  });
+
+  it('says so when the server cannot be reached, and keeps what was typed', async () => {
+    // Before, a save whose request never arrived threw in the page and the form said nothing.
+    const { context, page } = await signedInPage('owner@harrowfen.example');
+    await page.goto('/settings');
+    const save = page.getByRole('button', { name: 'Save defaults' });
+    await expect.poll(() => save.isEnabled(), { timeout: 30_000 }).toBe(true);
+    const wacc = page.getByLabel('WACC (% a year)');
+    const before = await wacc.inputValue();
+    await context.setOffline(true);
+    await wacc.fill('');
+    await wacc.pressSequentially('11.5');
+    await save.click();
+    await expect.poll(() => page.getByText(NO_ANSWER).isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(await wacc.inputValue()).toBe('11.5');
+    expect(await save.isEnabled()).toBe(true);
+    await context.setOffline(false);
+    await page.reload();
+    await expect.poll(() => wacc.inputValue()).toBe(before);
     await context.close();
   });
 });

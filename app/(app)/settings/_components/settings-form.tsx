@@ -9,6 +9,7 @@ import { monthNames } from '@/lib/format';
 import { readNumberText } from '@/lib/number-text';
 import { settingsSchema, type SettingsInput } from '@/lib/validations/settings';
 import { updateSettingsAction } from '../actions';
+import { reachAction } from '@/lib/reach-action';
 
 /** What the fields hold: rates typed as percentages. The schema (shared with the server) sees fractions. */
 interface SettingsFields {
@@ -62,7 +63,7 @@ export function SettingsForm({ initial }: { initial: SettingsInput }) {
   const field = (name: keyof SettingsFields) => ({ defaultValue: defaults[name], ...form.register(name) });
   const { errors, isSubmitting } = form.formState;
   const onSubmit = form.handleSubmit(async (fields) => {
-    const result = await updateSettingsAction(toInput(fields));
+    const result = await reachAction(() => updateSettingsAction(toInput(fields)));
     if (result.ok) return toast(result.message, 'success');
     for (const [field, messages] of Object.entries(result.fields ?? {})) form.setError(field as keyof SettingsFields, { message: messages[0] });
     toast(result.message, 'error');

@@ -10,6 +10,7 @@ import { Button } from '@/components/ui/button';
 import { Input } from '@/components/ui/input';
 import { organisationCreateSchema } from '@/lib/validations/auth';
 import { createOrganisationAction } from '../actions';
+import { reachAction } from '@/lib/reach-action';
 
 export function CreateOrganisationForm() {
   const router = useRouter();
@@ -17,7 +18,7 @@ export function CreateOrganisationForm() {
   const form = useForm<z.infer<typeof organisationCreateSchema>>({ resolver: zodResolver(organisationCreateSchema), defaultValues: { name: '' } });
   const { errors, isSubmitting } = form.formState;
   const onSubmit = form.handleSubmit(async (values) => {
-    const result = await createOrganisationAction(values);
+    const result = await reachAction(() => createOrganisationAction(values));
     if (result.ok) {
       router.push('/settings');
       router.refresh();

@@ -3,6 +3,7 @@
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { useToast } from '@/components/ui/toast';
+import { reachAction } from '@/lib/reach-action';
 import { cancelInvitationAction } from '../actions';
 
 export function CancelInvitationButton({ invitationId, email }: { invitationId: string; email: string }) {
@@ -15,7 +16,7 @@ export function CancelInvitationButton({ invitationId, email }: { invitationId: 
       aria-label={`Cancel the invitation to ${email}`}
       onClick={async () => {
         setBusy(true);
-        const result = await cancelInvitationAction(invitationId);
+        const result = await reachAction(() => cancelInvitationAction(invitationId));
         setBusy(false);
         toast(result.message, result.ok ? 'success' : 'error');
       }}

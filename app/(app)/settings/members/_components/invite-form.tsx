@@ -9,13 +9,14 @@ import { useToast } from '@/components/ui/toast';
 import { roleLabels, roleNames } from '@/lib/permissions';
 import { inviteSchema, type Invite } from '@/lib/validations/auth';
 import { inviteMemberAction } from '../actions';
+import { reachAction } from '@/lib/reach-action';
 
 export function InviteForm() {
   const toast = useToast();
   const form = useForm<Invite>({ resolver: zodResolver(inviteSchema), defaultValues: { email: '', role: 'analyst' } });
   const { errors, isSubmitting } = form.formState;
   const onSubmit = form.handleSubmit(async (values) => {
-    const result = await inviteMemberAction(values);
+    const result = await reachAction(() => inviteMemberAction(values));
     if (result.ok) {
       toast(result.message, 'success');
       form.reset({ email: '', role: values.role });

@@ -6,6 +6,7 @@ import { Select } from '@/components/ui/select';
 import { useToast } from '@/components/ui/toast';
 import { roleLabels, roleNames } from '@/lib/permissions';
 import { changeRoleAction, removeMemberAction } from '../actions';
+import { reachAction } from '@/lib/reach-action';
 
 export function MemberRoleSelect({ memberId, role, name, disabled }: { memberId: string; role: string; name: string; disabled: boolean }) {
   const toast = useToast();
@@ -21,7 +22,7 @@ export function MemberRoleSelect({ memberId, role, name, disabled }: { memberId:
       onChange={async (event) => {
         const next = event.target.value;
         setBusy(true);
-        const result = await changeRoleAction({ memberId, role: next });
+        const result = await reachAction(() => changeRoleAction({ memberId, role: next }));
         setBusy(false);
         if (result.ok) setValue(next);
         toast(result.message, result.ok ? 'success' : 'error');
@@ -38,7 +39,7 @@ export function RemoveMemberButton({ memberId, name }: { memberId: string; name:
       ariaLabel={`Remove ${name}`}
       title={`Remove ${name}?`}
       onConfirm={async () => {
-        const result = await removeMemberAction(memberId);
+        const result = await reachAction(() => removeMemberAction(memberId));
         toast(result.message, result.ok ? 'success' : 'error');
       }}
     >
