@@ -1,8 +1,12 @@
 /**
  * The browser's side of the JSON API: every page fetches and writes through `/api/v1` with
  * these, so errors arrive in one shape. A non-2xx answer becomes an `ApiError` carrying the
- * server's code, message and field messages, ready to show to the user.
+ * server's code, message and field messages, ready to show to the user; a request that gets no
+ * answer at all (offline, a dropped connection) becomes one with status 0 and words, not the
+ * browser's "Failed to fetch".
  */
+import { NO_ANSWER } from './reach-action';
+
 export class ApiError extends Error {
   constructor(
     readonly status: number,
@@ -20,6 +24,15 @@ export class ApiError extends Error {
   }
 }
 
+async function request(url: string, init?: RequestInit): Promise<Response> {
+  try {
+    return await fetch(url, init);
+  } catch (error) {
+    if ((error as Error | null)?.name === 'AbortError') throw error;
+    throw new ApiError(0, 'no_answer', NO_ANSWER);
+  }
+}
+
 async function parse<T>(res: Response): Promise<T> {
   if (res.status === 204) return undefined as T;
   const body = await res.json().catch(() => null);
@@ -32,13 +45,13 @@ async function parse<T>(res: Response): Promise<T> {
 
 /** GET a JSON resource (SWR's fetcher). */
 export async function getJson<T>(url: string): Promise<T> {
-  return parse<T>(await fetch(url, { headers: { accept: 'application/json' } }));
+  return parse<T>(await request(url, { headers: { accept: 'application/json' } }));
 }
 
 /** Send a JSON body with POST, PATCH or DELETE. */
 export async function sendJson<T>(method: 'POST' | 'PATCH' | 'DELETE', url: string, body?: unknown): Promise<T> {
   return parse<T>(
-    await fetch(url, {
+    await request(url, {
       method,
       headers: body === undefined ? { accept: 'application/json' } : { 'content-type': 'application/json', accept: 'application/json' },
       body: body === undefined ? undefined : JSON.stringify(body),
@@ -48,7 +61,7 @@ export async function sendJson<T>(method: 'POST' | 'PATCH' | 'DELETE', url: stri
 
 /** POST a multipart form (file uploads); errors arrive as ApiError with the server's field messages. */
 export async function sendForm<T>(url: string, form: FormData): Promise<T> {
-  return parse<T>(await fetch(url, { method: 'POST', body: form, headers: { accept: 'application/json' } }));
+  return parse<T>(await request(url, { method: 'POST', body: form, headers: { accept: 'application/json' } }));
 }
 
 /** The file name a Content-Disposition header gives, its UTF-8 form (`filename*`) first. */
@@ -67,7 +80,7 @@ export function filenameOf(header: string | null): string | null {
 
 /** GET a file (a PDF, a workbook) with the name the server gives it; a refusal becomes an ApiError. */
 export async function getFile(url: string): Promise<{ blob: Blob; filename: string | null }> {
-  const res = await fetch(url);
+  const res = await request(url);
   if (!res.ok) await parse(res);
   return { blob: await res.blob(), filename: filenameOf(res.headers.get('content-disposition')) };
 }

@@ -2,11 +2,13 @@
  * A panel whose data does not come says so and offers to try again; while it loads it shows
  * that it is loading. It never shows an empty state in place of data it has not read: before,
  * a case's discussion said "No comments yet." while its comments loaded and when they failed,
- * and the review queue left its decided cases out without a word when they failed.
+ * and the review queue left its decided cases out without a word when they failed. A request
+ * that gets no answer at all says so in words.
  */
 import type { Page } from 'playwright-core';
 import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
+import { NO_ANSWER } from '@/lib/reach-action';
 import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
 
@@ -62,6 +64,23 @@ describe('load states', () => {
     await recover();
     await tryAgain(page);
     await expect.poll(() => page.getByRole('heading', { name: 'Decided' }).isVisible(), { timeout: 30_000 }).toBe(true);
+    await context.close();
+  });
+
+  it('a comment sent offline says the server did not answer, and stays typed', async () => {
+    // Before, the toast read the browser's own words for a failed request: "Failed to fetch".
+    const hub = await demoCase('Cold-storage hub', 'Base case');
+    const { context, page } = await signedInPage('reviewer@kestrelbay.example');
+    await page.goto(`${hub.url}?tab=review`);
+    const discussion = page.getByRole('region', { name: 'Discussion' });
+    const box = discussion.getByLabel('Comment');
+    await expect.poll(() => box.isVisible(), { timeout: 30_000 }).toBe(true);
+    await context.setOffline(true);
+    await box.pressSequentially('Is the salvage value net of removal costs?');
+    await discussion.getByRole('button', { name: 'Add comment' }).click();
+    await expect.poll(() => page.getByText(NO_ANSWER).isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(await box.inputValue()).toBe('Is the salvage value net of removal costs?');
+    await context.setOffline(false);
     await context.close();
   });
 });
