@@ -2,10 +2,12 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { authClient } from '@/lib/auth-client';
+import { useToast } from '@/components/ui/toast';
+import { authClient, noAnswer } from '@/lib/auth-client';
 
 export function SignOutButton() {
   const router = useRouter();
+  const toast = useToast();
   const [busy, setBusy] = useState(false);
   return (
     <button
@@ -14,7 +16,13 @@ export function SignOutButton() {
       className="text-body text-ink-soft underline hover:text-ink"
       onClick={async () => {
         setBusy(true);
-        await authClient.signOut();
+        const { error } = await authClient.signOut();
+        // The server never heard it: still signed in, so say so rather than show the sign-in page
+        // over a live session. Any answer (a session already gone is refused 400) ends it here.
+        if (noAnswer(error)) {
+          setBusy(false);
+          return toast(error.message, 'error');
+        }
         router.push('/sign-in');
         router.refresh();
       }}

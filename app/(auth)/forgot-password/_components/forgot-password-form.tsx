@@ -7,7 +7,7 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { Input } from '@/components/ui/input';
-import { authClient } from '@/lib/auth-client';
+import { authClient, noAnswer } from '@/lib/auth-client';
 import { forgotPasswordSchema } from '@/lib/validations/auth';
 
 export function ForgotPasswordForm() {
@@ -20,7 +20,9 @@ export function ForgotPasswordForm() {
     setProblem(null);
     const { error } = await authClient.requestPasswordReset({ email, redirectTo: '/reset-password' });
     if (error?.status === 429) return setProblem('Too many requests. Please wait a minute and try again.');
-    // The same answer whether or not the address has an account, so none can be discovered.
+    // The server answers the same whether or not the address has an account, so none can be
+    // discovered; an error is a failure to send, never "no such account".
+    if (error) return setProblem(noAnswer(error) ? error.message : 'The reset link could not be sent. Please try again.');
     setSent(true);
   });
 

@@ -8,7 +8,7 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { Input } from '@/components/ui/input';
-import { authClient } from '@/lib/auth-client';
+import { authClient, noAnswer } from '@/lib/auth-client';
 import { resetPasswordSchema } from '@/lib/validations/auth';
 
 export function ResetPasswordForm({ token }: { token: string }) {
@@ -20,6 +20,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   const onSubmit = form.handleSubmit(async ({ password }) => {
     setProblem(null);
     const { error } = await authClient.resetPassword({ newPassword: password, token });
+    if (noAnswer(error)) return setProblem(error.message);
     if (error) return setProblem('This reset link has expired or was already used. Ask for a new one.');
     router.push('/sign-in?reset=1');
   });
