@@ -3,13 +3,15 @@
  * that it is loading. It never shows an empty state in place of data it has not read: before,
  * a case's discussion said "No comments yet." while its comments loaded and when they failed,
  * and the review queue left its decided cases out without a word when they failed. A request
- * that gets no answer at all says so in words.
+ * that gets no answer at all says so in words, signing in and out included, and words typed
+ * while a comment travels stay in its box.
  */
 import type { Page } from 'playwright-core';
 import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { NO_ANSWER } from '@/lib/reach-action';
-import { closeBrowser, signedInPage } from './support/browser';
+import { closeBrowser, newContext, signedInPage } from './support/browser';
+import { DEMO_PASSWORD } from './support/env';
 import { demoCase } from './support/demo';
 
 afterAll(async () => {
@@ -81,6 +83,52 @@ describe('load states', () => {
     await expect.poll(() => page.getByText(NO_ANSWER).isVisible(), { timeout: 30_000 }).toBe(true);
     expect(await box.inputValue()).toBe('Is the salvage value net of removal costs?');
     await context.setOffline(false);
+    await context.close();
+  });
+
+  it('a comment sent on a slow connection leaves the words typed after it in the box', async () => {
+    // Before, the answer emptied the box, taking with it what was typed while the comment travelled.
+    const hub = await demoCase('Cold-storage hub', 'Base case');
+    const { context, page } = await signedInPage('reviewer@kestrelbay.example');
+    await page.goto(`${hub.url}?tab=review`);
+    const discussion = page.getByRole('region', { name: 'Discussion' });
+    const box = discussion.getByLabel('Comment');
+    await expect.poll(() => box.isVisible(), { timeout: 30_000 }).toBe(true);
+    const first = `Is the year-4 capex quote firm? (${Date.now()})`;
+    await box.pressSequentially(first);
+    const cdp = await context.newCDPSession(page);
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 2000, downloadThroughput: -1, uploadThroughput: -1 });
+    await discussion.getByRole('button', { name: 'Add comment' }).click();
+    await box.pressSequentially(' And the salvage?');
+    // The comment is in the list (not only in the box, whose text would match too).
+    await expect.poll(() => discussion.getByRole('listitem').filter({ hasText: first }).isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(await box.inputValue()).toBe('And the salvage?');
+    await context.close();
+  });
+
+  it('signing in and out offline say the server did not answer; signing out then leaves the session alone', async () => {
+    // Before, the auth library's client threw on a request that got no answer and the form said nothing.
+    const context = await newContext();
+    const page = await context.newPage();
+    await page.goto('/sign-in');
+    const signInButton = page.getByRole('button', { name: 'Sign in' });
+    await expect.poll(() => signInButton.isEnabled(), { timeout: 30_000 }).toBe(true);
+    await page.getByLabel('E-mail').fill('reviewer@kestrelbay.example');
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
+    await context.setOffline(true);
+    await signInButton.click();
+    await expect.poll(() => page.getByText(NO_ANSWER).isVisible(), { timeout: 30_000 }).toBe(true);
+    await context.setOffline(false);
+    await signInButton.click();
+    await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'), { timeout: 30_000 });
+
+    const signOut = page.getByRole('button', { name: 'Sign out' });
+    await expect.poll(() => signOut.isVisible(), { timeout: 30_000 }).toBe(true);
+    await context.setOffline(true);
+    await signOut.click();
+    await expect.poll(() => page.getByText(NO_ANSWER).isVisible(), { timeout: 30_000 }).toBe(true);
+    await context.setOffline(false);
+    expect((await page.request.get('/api/v1/cases')).status()).toBe(200);
     await context.close();
   });
 });

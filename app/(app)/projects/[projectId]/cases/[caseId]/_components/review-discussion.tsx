@@ -41,7 +41,8 @@ export function ReviewDiscussion({ caseId, rightIds, canComment }: { caseId: str
     setBusy(true);
     try {
       await sendJson('POST', `/api/v1/cases/${caseId}/comments`, { section, body });
-      setBody('');
+      // What was sent leaves the box; words typed after it meanwhile stay for the next comment.
+      setBody((now) => (now.startsWith(body) ? now.slice(body.length).trimStart() : now));
       await comments.mutate();
     } catch (error) {
       toast(error instanceof Error ? error.message : 'The comment was not saved.', 'error');
