@@ -8,8 +8,8 @@ import { useToast } from '@/components/ui/toast';
 import { monthNames } from '@/lib/format';
 import { readNumberText } from '@/lib/number-text';
 import { settingsSchema, type SettingsInput } from '@/lib/validations/settings';
-import { updateSettingsAction } from '../actions';
 import { reachAction } from '@/lib/reach-action';
+import { updateSettingsAction } from '../actions';
 
 /** What the fields hold: rates typed as percentages. The schema (shared with the server) sees fractions. */
 interface SettingsFields {

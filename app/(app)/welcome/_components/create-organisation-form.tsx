@@ -9,8 +9,8 @@ import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { Input } from '@/components/ui/input';
 import { organisationCreateSchema } from '@/lib/validations/auth';
-import { createOrganisationAction } from '../actions';
 import { reachAction } from '@/lib/reach-action';
+import { createOrganisationAction } from '../actions';
 
 export function CreateOrganisationForm() {
   const router = useRouter();

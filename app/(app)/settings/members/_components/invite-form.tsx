@@ -8,8 +8,8 @@ import { Select } from '@/components/ui/select';
 import { useToast } from '@/components/ui/toast';
 import { roleLabels, roleNames } from '@/lib/permissions';
 import { inviteSchema, type Invite } from '@/lib/validations/auth';
-import { inviteMemberAction } from '../actions';
 import { reachAction } from '@/lib/reach-action';
+import { inviteMemberAction } from '../actions';
 
 export function InviteForm() {
   const toast = useToast();

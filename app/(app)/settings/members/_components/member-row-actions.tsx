@@ -5,8 +5,8 @@ import { ConfirmAction } from '@/components/confirm-action';
 import { Select } from '@/components/ui/select';
 import { useToast } from '@/components/ui/toast';
 import { roleLabels, roleNames } from '@/lib/permissions';
-import { changeRoleAction, removeMemberAction } from '../actions';
 import { reachAction } from '@/lib/reach-action';
+import { changeRoleAction, removeMemberAction } from '../actions';
 
 export function MemberRoleSelect({ memberId, role, name, disabled }: { memberId: string; role: string; name: string; disabled: boolean }) {
   const toast = useToast();
