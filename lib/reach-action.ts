@@ -7,6 +7,7 @@
  */
 import type { ActionResult } from './action';
 
+/** What every page says of a request that got no answer: here, in the API client and in the auth client. */
 export const NO_ANSWER = 'No answer from the server: check your connection and try again.';
 
 export async function reachAction(call: () => Promise<ActionResult>): Promise<ActionResult> {
