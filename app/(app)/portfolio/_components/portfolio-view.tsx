@@ -74,6 +74,11 @@ export function PortfolioView({ canCreate }: { canCreate: boolean }) {
           note={oneCurrency ? 'Static NPV + option premium' : mixed}
         />
       </div>
+      {oneCurrency && valued.length > 1 ? (
+        <p className="-mt-5 text-caption text-ink-muted">
+          Totals add the unrounded figures, so one can differ slightly from the sum of the rounded rows below.
+        </p>
+      ) : null}
       <section aria-labelledby="portfolio-table">
         <div className="mb-3 flex flex-wrap items-baseline justify-between gap-3">
           <h2 id="portfolio-table">Projects</h2>

@@ -62,7 +62,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
     <div className="flex flex-col gap-6">
       <Panel
         title="From static to expanded NPV"
-        note="Each right's stand-alone value (the right alone on the project), then what they are worth together beyond that: negative when they substitute, positive when they complement."
+        note="Each right's stand-alone value (the right alone on the project), then what they are worth together beyond that: negative when they substitute, positive when they complement. The bars add up exactly before their labels are rounded."
       >
         <WaterfallChart result={result} currency={currency} />
       </Panel>
