@@ -403,7 +403,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
         />
         {/* A heading and its chart stay on one page: a block that does not fit starts the next one. */}
         <View wrap={false}>
-          <Text style={styles.h3}>From static to expanded NPV ({currency})</Text>
+          <Text style={styles.h3}>From static to expanded NPV ({currency}; the bars add up exactly before their labels are rounded)</Text>
           <WaterfallPdf data={data} width={contentWidth} />
         </View>
         <View wrap={false}>
