@@ -36,6 +36,17 @@ async function tryAgain(scope: Pick<Page, 'getByRole'>) {
   if (await button.isVisible()) await button.click({ timeout: 5_000 }).catch(() => undefined);
 }
 
+/** The reviewer on the hub case's Review tab, its discussion loaded and its comment box ready. */
+async function hubDiscussion() {
+  const hub = await demoCase('Cold-storage hub', 'Base case');
+  const { context, page } = await signedInPage('reviewer@kestrelbay.example');
+  await page.goto(`${hub.url}?tab=review`);
+  const discussion = page.getByRole('region', { name: 'Discussion' });
+  const box = discussion.getByLabel('Comment');
+  await expect.poll(() => box.isVisible(), { timeout: 30_000 }).toBe(true);
+  return { context, page, discussion, box };
+}
+
 describe('load states', () => {
   it("a case's discussion says when its comments could not be read, and reads them on request", async () => {
     const hub = await demoCase('Cold-storage hub', 'Base case');
@@ -71,12 +82,7 @@ describe('load states', () => {
 
   it('a comment sent offline says the server did not answer, and stays typed', async () => {
     // Before, the toast read the browser's own words for a failed request: "Failed to fetch".
-    const hub = await demoCase('Cold-storage hub', 'Base case');
-    const { context, page } = await signedInPage('reviewer@kestrelbay.example');
-    await page.goto(`${hub.url}?tab=review`);
-    const discussion = page.getByRole('region', { name: 'Discussion' });
-    const box = discussion.getByLabel('Comment');
-    await expect.poll(() => box.isVisible(), { timeout: 30_000 }).toBe(true);
+    const { context, page, discussion, box } = await hubDiscussion();
     await context.setOffline(true);
     await box.pressSequentially('Is the salvage value net of removal costs?');
     await discussion.getByRole('button', { name: 'Add comment' }).click();
@@ -88,12 +94,7 @@ describe('load states', () => {
 
   it('a comment sent on a slow connection leaves the words typed after it in the box', async () => {
     // Before, the answer emptied the box, taking with it what was typed while the comment travelled.
-    const hub = await demoCase('Cold-storage hub', 'Base case');
-    const { context, page } = await signedInPage('reviewer@kestrelbay.example');
-    await page.goto(`${hub.url}?tab=review`);
-    const discussion = page.getByRole('region', { name: 'Discussion' });
-    const box = discussion.getByLabel('Comment');
-    await expect.poll(() => box.isVisible(), { timeout: 30_000 }).toBe(true);
+    const { context, page, discussion, box } = await hubDiscussion();
     const first = `Is the year-4 capex quote firm? (${Date.now()})`;
     await box.pressSequentially(first);
     const cdp = await context.newCDPSession(page);
