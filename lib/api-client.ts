@@ -5,7 +5,7 @@
  * answer at all (offline, a dropped connection) becomes one with status 0 and words, not the
  * browser's "Failed to fetch".
  */
-import { NO_ANSWER } from './reach-action';
+import { fetchOr, NO_ANSWER } from './reach-action';
 
 export class ApiError extends Error {
   constructor(
@@ -24,13 +24,10 @@ export class ApiError extends Error {
   }
 }
 
-async function request(url: string, init?: RequestInit): Promise<Response> {
-  try {
-    return await fetch(url, init);
-  } catch (error) {
-    if ((error as Error | null)?.name === 'AbortError') throw error;
+function request(url: string, init?: RequestInit): Promise<Response> {
+  return fetchOr(url, init, () => {
     throw new ApiError(0, 'no_answer', NO_ANSWER);
-  }
+  });
 }
 
 async function parse<T>(res: Response): Promise<T> {

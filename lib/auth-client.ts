@@ -3,20 +3,13 @@
 import { organizationClient } from 'better-auth/client/plugins';
 import { createAuthClient } from 'better-auth/react';
 import { ac, roles } from './permissions';
-import { NO_ANSWER } from './reach-action';
+import { fetchOr, NO_ANSWER } from './reach-action';
 
 /**
  * fetch, with no answer at all (offline, a dropped connection) answered as a 503 that says so in
  * the auth library's error shape: the client would throw instead, and a form would say nothing.
  */
-const answeringFetch: typeof fetch = async (input, init) => {
-  try {
-    return await fetch(input, init);
-  } catch (error) {
-    if ((error as Error | null)?.name === 'AbortError') throw error;
-    return Response.json({ code: 'NO_ANSWER', message: NO_ANSWER }, { status: 503 });
-  }
-};
+const answeringFetch: typeof fetch = (input, init) => fetchOr(input, init, () => Response.json({ code: 'NO_ANSWER', message: NO_ANSWER }, { status: 503 }));
 
 export const authClient = createAuthClient({ fetchOptions: { customFetchImpl: answeringFetch }, plugins: [organizationClient({ ac, roles })] });
 

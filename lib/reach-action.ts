@@ -3,7 +3,8 @@
  * ActionResult whatever happens on the server (lib/action.ts), but when the request never gets
  * there or its answer never comes back (a dropped connection, a server restarting, an action the
  * page's older script no longer finds) the call throws instead, and the form would say nothing.
- * This answers that as a failure in words as well.
+ * This answers that as a failure in words as well, and `fetchOr` does the same for the API
+ * client and the auth client's requests.
  */
 import type { ActionResult } from './action';
 
@@ -15,5 +16,18 @@ export async function reachAction(call: () => Promise<ActionResult>): Promise<Ac
     return await call();
   } catch {
     return { ok: false, message: NO_ANSWER };
+  }
+}
+
+/**
+ * fetch, or `instead()` when the request got no answer. An abort is passed on: the page asked
+ * for it and says nothing of it.
+ */
+export async function fetchOr(input: RequestInfo | URL, init: RequestInit | undefined, instead: () => Response): Promise<Response> {
+  try {
+    return await fetch(input, init);
+  } catch (error) {
+    if ((error as Error | null)?.name === 'AbortError') throw error;
+    return instead();
   }
 }
