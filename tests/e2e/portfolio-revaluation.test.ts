@@ -1,8 +1,9 @@
 /**
  * Re-valuing a portfolio is a job: in Chromium an analyst sees that some stored figures come from
  * an older engine, starts the re-valuation, watches its progress, and every stale case gets a run
- * of today's engine, made by a worker from the queue. A second request while one runs is refused
- * (409); the executive may read progress but not start one (tests/e2e/route-matrix.test.ts).
+ * of today's engine, made by a worker from the queue; a double click starts one job. A second
+ * request while one runs is refused (409); the executive may read progress but not start one
+ * (tests/e2e/route-matrix.test.ts).
  */
 import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
@@ -43,10 +44,20 @@ describe('re-valuing the portfolio', () => {
     await page.goto('/portfolio');
     const region = page.getByRole('region', { name: 'Re-value figures' });
     await expect.poll(() => region.isVisible(), { timeout: 30_000 }).toBe(true);
-    await region.getByRole('button', { name: 'Re-value them all' }).click();
+    // A double click on a slow connection starts one job. Before, the button took clicks until
+    // the first answer came, and the second was refused with a 409 whose "already running"
+    // replaced the first job's progress.
+    const starts: string[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'POST' && r.url().endsWith('/api/v1/portfolio/revaluations')) starts.push(r.url());
+    });
+    const cdp = await context.newCDPSession(page);
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 1000, downloadThroughput: -1, uploadThroughput: -1 });
+    await region.getByRole('button', { name: 'Re-value them all' }).dblclick();
     const status = region.getByRole('status');
     await expect.poll(async () => (await status.textContent()) ?? '', { timeout: 90_000, interval: 500 }).toMatch(/^Re-valued \d+ of \d+ cases/);
     expect(await status.textContent()).toMatch(/^Re-valued (\d+) of \1 cases with today's engine\.$/);
+    expect(starts).toHaveLength(1);
     for (const { caseId } of stale) expect(await latestEngine(caseId)).toBe(ENGINE_VERSION);
 
     const request = await db.selectFrom('portfolio_revaluation').selectAll().orderBy('created_at', 'desc').executeTakeFirstOrThrow();
