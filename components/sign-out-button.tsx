@@ -3,17 +3,19 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useToast } from '@/components/ui/toast';
+import { useInteractive } from '@/components/ui/use-interactive';
 import { authClient, noAnswer } from '@/lib/auth-client';
 
 export function SignOutButton() {
   const router = useRouter();
   const toast = useToast();
   const [busy, setBusy] = useState(false);
+  const interactive = useInteractive();
   return (
     <button
       type="button"
-      disabled={busy}
-      className="text-body text-ink-soft underline hover:text-ink"
+      disabled={busy || !interactive}
+      className="text-body text-ink-soft underline hover:text-ink disabled:cursor-not-allowed disabled:text-ink-muted"
       onClick={async () => {
         setBusy(true);
         const { error } = await authClient.signOut();

@@ -1,6 +1,7 @@
 'use client';
 
-import { useSyncExternalStore, type ButtonHTMLAttributes } from 'react';
+import type { ButtonHTMLAttributes } from 'react';
+import { useInteractive } from './use-interactive';
 
 type Variant = 'primary' | 'secondary' | 'danger' | 'quiet';
 
@@ -16,21 +17,6 @@ export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   busy?: boolean;
 }
 
-const noChange = () => () => undefined;
-
-/**
- * False in the server's HTML and while React takes the page over, true after: a form sent before
- * then is sent by the browser itself, as a GET of the page with the fields in its address (a key's
- * name, a figure), and what was typed is lost. A submit button waits for it.
- */
-function useInteractive(): boolean {
-  return useSyncExternalStore(
-    noChange,
-    () => true,
-    () => false,
-  );
-}
-
 /** A button that says when it is working (`busy`) and cannot be pressed twice meanwhile. */
 export function Button({ variant = 'primary', busy = false, className = '', children, disabled, type = 'button', ...rest }: ButtonProps) {
   const interactive = useInteractive();
@@ -38,7 +24,7 @@ export function Button({ variant = 'primary', busy = false, className = '', chil
     <button
       type={type}
       className={`inline-flex items-center justify-center gap-2 rounded-md px-4 py-2 text-body font-medium transition-colors disabled:cursor-not-allowed ${styles[variant]} ${className}`}
-      disabled={disabled || busy || (type === 'submit' && !interactive)}
+      disabled={disabled || busy || !interactive}
       aria-busy={busy || undefined}
       {...rest}
     >

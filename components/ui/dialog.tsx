@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useRef, type ReactNode } from 'react';
+import { useEffect, useId, useRef, type ReactNode } from 'react';
 
 export interface DialogProps {
   open: boolean;
@@ -13,10 +13,12 @@ export interface DialogProps {
 
 /**
  * A modal built on the native <dialog>: focus is trapped and restored, Escape closes it, and
- * the page behind is inert, all by the browser.
+ * the page behind is inert, all by the browser. Its title names it: an id of its own, since a page
+ * holds several (a project's page has four, which all took the first one's name).
  */
 export function Dialog({ open, title, onClose, children, size = 'normal' }: DialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
   useEffect(() => {
     const dialog = ref.current;
     if (!dialog) return;
@@ -27,10 +29,10 @@ export function Dialog({ open, title, onClose, children, size = 'normal' }: Dial
     <dialog
       ref={ref}
       onClose={onClose}
-      aria-labelledby="dialog-title"
+      aria-labelledby={titleId}
       className={`m-auto w-full ${size === 'wide' ? 'max-w-5xl' : 'max-w-md'} rounded-card border border-line bg-paper-raised p-6 text-ink shadow-card backdrop:bg-ink/40`}
     >
-      <h2 id="dialog-title" className="mb-4">
+      <h2 id={titleId} className="mb-4">
         {title}
       </h2>
       {children}

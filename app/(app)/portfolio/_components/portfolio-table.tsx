@@ -19,6 +19,7 @@ import { OlderEngineNote } from '@/components/older-engine-note';
 import { formatDate, formatMoney } from '@/lib/format';
 import type { ProjectSummaryJson } from '@/lib/project-summary';
 import { DownloadLink } from '@/components/ui/download-link';
+import { useInteractive } from '@/components/ui/use-interactive';
 
 const features = tableFeatures({
   rowSortingFeature,
@@ -140,6 +141,8 @@ function ApprovalCell({ project }: { project: ProjectSummaryJson }) {
 /** The organisation's projects with their headline figures: sortable by any column, filterable by name, owner and status. */
 export function PortfolioTable({ projects }: { projects: ProjectSummaryJson[] }) {
   const [search, setSearch] = useState('');
+  // Sorting is this page's script: its headers wait for it.
+  const interactive = useInteractive();
   const [status, setStatus] = useState('');
   const table = useTable({
     features,
@@ -194,6 +197,7 @@ export function PortfolioTable({ projects }: { projects: ProjectSummaryJson[] })
                       <button
                         type="button"
                         onClick={header.column.getToggleSortingHandler()}
+                        disabled={!interactive}
                         className="inline-flex items-center gap-1 uppercase hover:text-ink"
                       >
                         <table.FlexRender header={header} />
