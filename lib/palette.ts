@@ -5,7 +5,7 @@
  * colours that never carry meaning alone (labels always accompany them).
  */
 export const palette = {
-  ink: { DEFAULT: '#16232d', soft: '#3c4b57', muted: '#66737d' },
+  ink: { DEFAULT: '#16232d', soft: '#3c4b57', muted: '#5c6973' },
   paper: { DEFAULT: '#f6f4ef', raised: '#ffffff', sunk: '#ece8df' },
   line: { DEFAULT: '#d9d3c7', strong: '#b9b1a2' },
   tide: { 50: '#e9f4f4', 100: '#cfe7e8', 300: '#7fbcc0', 500: '#23727a', 600: '#1c5f66', 700: '#164c52' },

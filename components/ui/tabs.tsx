@@ -87,6 +87,8 @@ export function Tabs({ tabs, initial }: { tabs: Tab[]; initial?: string }) {
       </div>
       {tabs.map((tab) => (
         <div key={tab.id} role="tabpanel" id={`${base}-panel-${tab.id}`} aria-labelledby={`${base}-tab-${tab.id}`} hidden={active !== tab.id} className="pt-4">
+          {/* The panel's heading, for those who move by headings: its sections are h3s under it. */}
+          <h2 className="sr-only">{tab.label}</h2>
           {!tab.lazy || opened.has(tab.id) ? tab.content : null}
         </div>
       ))}

@@ -36,7 +36,7 @@ describe('the lattice window', () => {
     expect(step).toBeGreaterThan(10);
     // The chosen node is in the window, pressed, and it takes that right.
     const chosen = page.locator('[role="button"][aria-pressed="true"]');
-    expect(await chosen.getAttribute('aria-label')).toMatch(new RegExp(`^Step ${step}, node \\d+: .*decision: Sell the plant$`));
+    expect(await chosen.getAttribute('aria-label')).toMatch(new RegExp(`^V .* W .*: step ${step}, node \\d+, .*decision: Sell the plant$`));
     const inspector = page.getByRole('region', { name: 'Node inspector' });
     await expect.poll(async () => (await inspector.textContent()) ?? '', { timeout: 30_000 }).toMatch(new RegExp(`Step ${step}, node`, 'i'));
     // Modes in words, as the mode menu names them, not the engine's ids ("closed", "operating+Phase 2").
@@ -62,7 +62,7 @@ describe('the lattice window', () => {
     await node.focus();
     await page.keyboard.press('Enter');
     expect(await node.getAttribute('aria-pressed')).toBe('true');
-    expect(await node.getAttribute('aria-label')).toMatch(/^Step 30, node \d+:/);
+    expect(await node.getAttribute('aria-label')).toMatch(/^V .* W .*: step 30, node \d+,/);
 
     // The timing of each right's first use, year by year, opens by keyboard too (not a hover tooltip only).
     await page.getByRole('tab', { name: 'Results' }).click();

@@ -71,17 +71,21 @@ export function CaseHeader({
           {readOnly ? (
             <h1>{name}</h1>
           ) : (
-            <label className="flex flex-col">
-              <span className="sr-only">Case name</span>
-              <input
-                value={name}
-                onChange={(e) => onName(e.target.value)}
-                maxLength={120}
-                // As wide as the name (within the page), so a long name is never cut off.
-                size={Math.max(12, name.length + 2)}
-                className="-ml-2 max-w-full rounded-md border border-transparent bg-transparent px-2 py-1 text-title hover:border-line focus:border-tide-500"
-              />
-            </label>
+            // The page's heading is the name being edited (for those who move by headings).
+            <>
+              <h1 className="sr-only">{name || 'Untitled case'}</h1>
+              <label className="flex flex-col">
+                <span className="sr-only">Case name</span>
+                <input
+                  value={name}
+                  onChange={(e) => onName(e.target.value)}
+                  maxLength={120}
+                  // As wide as the name (within the page), so a long name is never cut off.
+                  size={Math.max(12, name.length + 2)}
+                  className="-ml-2 max-w-full rounded-md border border-transparent bg-transparent px-2 py-1 text-title hover:border-line focus:border-tide-500"
+                />
+              </label>
+            </>
           )}
           <p className="flex flex-wrap items-center gap-2 text-caption text-ink-muted">
             <StatusBadge status={status} />

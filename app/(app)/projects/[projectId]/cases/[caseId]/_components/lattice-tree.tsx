@@ -17,6 +17,9 @@ interface Props {
   decisionOrder: string[];
 }
 
+/** A node's decision as it fits the node: a long name cut at 14 characters. */
+const shownDecision = (decision: string | null) => (decision ? `▶ ${decision.length > 15 ? `${decision.slice(0, 14)}…` : decision}` : 'continue');
+
 /**
  * A window onto the lattice as a tree (lib/charts/lattice-window.ts): each node shows the
  * project's value (V) and the mode's value with flexibility (W), and names the decision taken
@@ -101,7 +104,9 @@ export function LatticeTree({ grid, mode, frame, selected, onSelect, decisionOrd
                 role="button"
                 tabIndex={0}
                 aria-pressed={isSelected}
-                aria-label={`Step ${n.step}, node ${n.node}: project value ${formatNumber(n.underlying)}, value with flexibility ${formatNumber(n.value)}, ${n.decision ? `decision: ${n.decision}` : 'continue'}`}
+                // What the node shows comes first, in its words (so a voice command naming it finds it), then
+                // what it means. The texts end in a space so that, read together, they are those words.
+                aria-label={`V ${formatNumber(n.underlying)} W ${formatNumber(n.value)} ${shownDecision(n.decision)}: step ${n.step}, node ${n.node}, project value ${formatNumber(n.underlying)}, value with flexibility ${formatNumber(n.value)}${n.decision ? `, decision: ${n.decision}` : ''}`}
                 onClick={() => onSelect({ step: n.step, node: n.node })}
                 onKeyDown={(e) => {
                   if (e.key === 'Enter' || e.key === ' ') {
@@ -120,13 +125,13 @@ export function LatticeTree({ grid, mode, frame, selected, onSelect, decisionOrd
                   strokeWidth={isSelected ? 2.5 : 1}
                 />
                 <text x="8" y="16" className="figures fill-ink-soft text-[11px]">
-                  V {formatNumber(n.underlying)}
+                  V {formatNumber(n.underlying)}{' '}
                 </text>
                 <text x="8" y="31" className="figures fill-ink text-[12px] font-semibold">
-                  W {formatNumber(n.value)}
+                  W {formatNumber(n.value)}{' '}
                 </text>
                 <text x="8" y="45" className="fill-ink-soft text-[10px]">
-                  {n.decision ? `▶ ${n.decision.length > 15 ? `${n.decision.slice(0, 14)}…` : n.decision}` : 'continue'}
+                  {shownDecision(n.decision)}
                 </text>
               </g>
             );
