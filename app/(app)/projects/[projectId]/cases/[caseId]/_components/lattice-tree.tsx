@@ -97,6 +97,10 @@ export function LatticeTree({ grid, mode, frame, selected, onSelect, decisionOrd
           ))}
           {layout.nodes.map((n) => {
             const isSelected = selected?.step === n.step && selected.node === n.node;
+            // Each figure and the decision are written once: the node shows them and its name repeats them.
+            const underlying = formatNumber(n.underlying);
+            const value = formatNumber(n.value);
+            const shown = shownDecision(n.decision);
             return (
               <g
                 key={`${n.step}:${n.node}`}
@@ -106,7 +110,7 @@ export function LatticeTree({ grid, mode, frame, selected, onSelect, decisionOrd
                 aria-pressed={isSelected}
                 // What the node shows comes first, in its words (so a voice command naming it finds it), then
                 // what it means. The texts end in a space so that, read together, they are those words.
-                aria-label={`V ${formatNumber(n.underlying)} W ${formatNumber(n.value)} ${shownDecision(n.decision)}: step ${n.step}, node ${n.node}, project value ${formatNumber(n.underlying)}, value with flexibility ${formatNumber(n.value)}${n.decision ? `, decision: ${n.decision}` : ''}`}
+                aria-label={`V ${underlying} W ${value} ${shown}: step ${n.step}, node ${n.node}, project value ${underlying}, value with flexibility ${value}${n.decision ? `, decision: ${n.decision}` : ''}`}
                 onClick={() => onSelect({ step: n.step, node: n.node })}
                 onKeyDown={(e) => {
                   if (e.key === 'Enter' || e.key === ' ') {
@@ -125,13 +129,13 @@ export function LatticeTree({ grid, mode, frame, selected, onSelect, decisionOrd
                   strokeWidth={isSelected ? 2.5 : 1}
                 />
                 <text x="8" y="16" className="figures fill-ink-soft text-[11px]">
-                  V {formatNumber(n.underlying)}{' '}
+                  V {underlying}{' '}
                 </text>
                 <text x="8" y="31" className="figures fill-ink text-[12px] font-semibold">
-                  W {formatNumber(n.value)}{' '}
+                  W {value}{' '}
                 </text>
                 <text x="8" y="45" className="fill-ink-soft text-[10px]">
-                  {shownDecision(n.decision)}
+                  {shown}
                 </text>
               </g>
             );
