@@ -116,7 +116,7 @@ describe('the analyst workspace', () => {
       .toEqual(expect.arrayContaining(['Right: Expand', 'Right: abandon-1']));
 
     await page.getByRole('tab', { name: 'Lattice', exact: true }).click();
-    const node = page.getByRole('button', { name: /^Step 1, node 1:/ });
+    const node = page.getByRole('button', { name: /: step 1, node 1,/ });
     await expect.poll(() => node.count(), { timeout: 20_000 }).toBe(1);
     await node.focus();
     await page.keyboard.press('Enter');
