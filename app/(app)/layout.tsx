@@ -13,13 +13,15 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
   if (!viewer) redirect('/sign-in');
   const items = viewer.role ? navigationFor(viewer.role) : [];
   return (
-    <div className="flex min-h-screen">
-      <aside className="flex w-rail shrink-0 flex-col border-r border-line bg-paper-raised px-4 py-6">
+    // Below md (768 px) the rail becomes a band across the top, so a phone or a narrow window
+    // keeps its full width for the figures.
+    <div className="flex min-h-screen flex-col md:flex-row">
+      <aside className="flex w-full shrink-0 flex-col border-b border-line bg-paper-raised px-4 py-4 md:w-rail md:border-b-0 md:border-r md:py-6">
         <div className="px-3">
           <Wordmark />
         </div>
         {viewer.orgName ? (
-          <p className="mt-6 px-3 text-caption uppercase tracking-wide text-ink-muted" data-testid="organisation-name">
+          <p className="mt-3 px-3 text-caption uppercase tracking-wide text-ink-muted md:mt-6" data-testid="organisation-name">
             {viewer.orgName}
           </p>
         ) : null}
@@ -29,23 +31,25 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
         <div className="mt-2">
           <NavLinks items={items} />
         </div>
-        <div className="mt-auto border-t border-line px-3 pt-4">
-          <p className="text-body font-medium text-ink">{viewer.name}</p>
-          <p className="text-caption text-ink-muted">
-            {viewer.email}
-            {viewer.role ? ` · ${roleLabels[viewer.role]}` : ''}
-          </p>
-          <p className="mt-3">
+        <div className="mt-3 flex flex-wrap items-baseline gap-x-4 gap-y-1 border-t border-line px-3 pt-3 md:mt-auto md:block md:pt-4">
+          <div>
+            <p className="text-body font-medium text-ink">{viewer.name}</p>
+            <p className="text-caption text-ink-muted">
+              {viewer.email}
+              {viewer.role ? ` · ${roleLabels[viewer.role]}` : ''}
+            </p>
+          </div>
+          <p className="md:mt-3">
             <Link href="/api-reference" className="text-caption text-tide-600 hover:underline">
               API reference
             </Link>
           </p>
-          <div className="mt-3">
+          <div className="md:mt-3">
             <SignOutButton />
           </div>
         </div>
       </aside>
-      <main id="main" className="min-w-0 flex-1 px-8 py-8 xl:px-12">
+      <main id="main" className="min-w-0 flex-1 px-4 py-6 md:px-8 md:py-8 xl:px-12">
         {children}
       </main>
     </div>

@@ -64,7 +64,7 @@ export function Tabs({ tabs, initial }: { tabs: Tab[]; initial?: string }) {
   };
   return (
     <div>
-      <div role="tablist" className="flex gap-1 border-b border-line">
+      <div role="tablist" className="flex flex-wrap gap-1 border-b border-line">
         {tabs.map((tab, index) => (
           <a
             key={tab.id}

@@ -60,7 +60,7 @@ afterAll(async () => {
   await db.destroy();
 });
 
-const caseTabs = () => ['cash-flows', 'options', 'results', 'lattice', 'uncertainty', 'review', 'watch'].map((tab) => `${caseUrl}?tab=${tab}`);
+const caseTabs = () => ['cash-flows', 'uncertainty', 'flexibility', 'results', 'lattice', 'documents', 'watch', 'review'].map((tab) => `${caseUrl}?tab=${tab}`);
 
 describe('accessibility (axe-core)', () => {
   it("the analyst's pages, every tab of a case included", async () => {

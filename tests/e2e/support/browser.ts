@@ -41,9 +41,9 @@ export const visitorAddress = () => `198.${18 + randomInt(2)}.${randomInt(256)}.
 export async function newContext(options: BrowserContextOptions = {}): Promise<BrowserContext> {
   const b = await openBrowser();
   return b.newContext({
+    viewport: { width: 1280, height: 800 },
     ...options,
     baseURL: BASE_URL,
-    viewport: { width: 1280, height: 800 },
     // Every context, in every test file, has an address of its own (visitorAddress).
     // The app's own Origin, as a browser sends it: API calls from page.request would otherwise
     // carry none, and the app refuses state-changing requests without it (lib/same-origin.ts).
@@ -58,8 +58,8 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
-export async function signedInPage(email: string): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await newContext();
+export async function signedInPage(email: string, options: BrowserContextOptions = {}): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await newContext(options);
   const page = await context.newPage();
   await signIn(page, email);
   await page.waitForURL('**/portfolio');

@@ -102,7 +102,7 @@ export function CompareView({ canCreate }: { canCreate: boolean }) {
   if (all.data.cases.length < 2) return <TooFewCases only={all.data.cases[0]} canCreate={canCreate} />;
 
   return (
-    <div className="grid gap-8 xl:grid-cols-[18rem_minmax(0,1fr)]">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-8 xl:grid-cols-[18rem_minmax(0,1fr)]">
       <fieldset className="rounded-card border border-line bg-paper-raised p-4 shadow-card">
         <legend className="px-1 text-caption font-medium uppercase tracking-wide text-ink-soft">
           Cases to compare ({selected.length} of up to {MAX})
@@ -154,7 +154,7 @@ export function CompareView({ canCreate }: { canCreate: boolean }) {
                 Download as a workbook
               </DownloadLink>
             </div>
-            <div className="overflow-x-auto rounded-card border border-line bg-paper-raised shadow-card">
+            <div className="relative overflow-x-auto rounded-card border border-line bg-paper-raised shadow-card">
               <table className="w-full border-collapse text-left text-body">
                 <caption className="sr-only">Cases side by side</caption>
                 <thead>

@@ -178,7 +178,7 @@ export function PortfolioTable({ projects }: { projects: ProjectSummaryJson[] })
           {rows.length} of {projects.length} projects
         </p>
       </div>
-      <div className="overflow-x-auto rounded-card border border-line bg-paper-raised shadow-card">
+      <div className="relative overflow-x-auto rounded-card border border-line bg-paper-raised shadow-card">
         <table className="w-full border-collapse text-left text-body">
           <caption className="sr-only">Projects with their latest valuation; column headers sort.</caption>
           <thead>

@@ -56,7 +56,7 @@ export function PortfolioView({ canCreate }: { canCreate: boolean }) {
   return (
     <div className="flex flex-col gap-8">
       {canCreate && (stale || revaluing) ? <RevaluePortfolio onStarted={() => setRevaluing(true)} onFinished={() => void mutate()} /> : null}
-      <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-4">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 sm:grid-cols-2 xl:grid-cols-4">
         <Figure label="Active projects valued" value={`${valued.length} of ${projects.filter((p) => p.status === 'active').length}`} />
         <Figure
           label="Static NPV, total"

@@ -41,7 +41,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           ) : undefined
         }
       />
-      <div className="grid gap-8 xl:grid-cols-[minmax(0,1fr)_20rem]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-8 xl:grid-cols-[minmax(0,1fr)_20rem]">
         <section aria-labelledby="cases-heading">
           <h2 id="cases-heading" className="mb-3">
             Cases

@@ -21,7 +21,7 @@ export function ProjectList({ canCreate }: { canCreate: boolean }) {
       </EmptyState>
     );
   return (
-    <ul className="grid gap-4 lg:grid-cols-2">
+    <ul className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-2">
       {data.projects.map((p) => (
         <li key={p.id}>
           <Link

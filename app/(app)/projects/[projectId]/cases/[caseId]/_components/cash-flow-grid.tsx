@@ -132,7 +132,7 @@ export function CashFlowGrid({ rows, analysis, readOnly, onChange, onInvalidCoun
 
   return (
     <div>
-      <div className="overflow-x-auto rounded-card border border-line bg-paper-raised shadow-card">
+      <div className="relative overflow-x-auto rounded-card border border-line bg-paper-raised shadow-card">
         <table className="figures w-full border-collapse text-right text-body">
           <caption className="sr-only">Cash flows by year; arrow keys move between cells.</caption>
           <thead>

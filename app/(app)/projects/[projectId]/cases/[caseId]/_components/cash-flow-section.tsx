@@ -66,7 +66,7 @@ export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onCha
       />
       {analysis ? (
         <>
-          <dl className="grid gap-4 sm:grid-cols-3">
+          <dl className="grid grid-cols-[minmax(0,1fr)] gap-4 sm:grid-cols-3">
             <Derived label="NPV at the WACC" value={formatMoney(analysis.npvAtWacc, currency)} note="Σ free cash flow × discount factor" />
             <Derived
               label="Underlying value V₀"

@@ -30,7 +30,7 @@ export function CompiledView({ model }: { model: ProjectModel | null }) {
       </ul>
     );
   return (
-    <div className="grid gap-6 xl:grid-cols-2">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 xl:grid-cols-2">
       <Table caption="Operating modes">
         <thead>
           <tr>

@@ -142,7 +142,7 @@ export function LatticeSection({ model, modes, startMode, result, currency }: Pr
         {year(Math.min(view.from + view.steps, model.steps))}). V: the project&rsquo;s value; W: its value in this mode with every right. Nodes are coloured and
         labelled by the decision taken.
       </p>
-      <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_24rem]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 xl:grid-cols-[minmax(0,1fr)_24rem]">
         <section aria-label="Lattice tree">
           {grid ? (
             <LatticeTree grid={grid} mode={activeMode} frame={view} selected={selected} onSelect={setSelected} decisionOrder={order} />

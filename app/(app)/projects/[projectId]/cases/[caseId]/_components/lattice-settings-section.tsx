@@ -44,7 +44,7 @@ export function LatticeSettingsSection({
         title="Volatility of the project's value"
         note="The annualised σ of the value's returns: the input committees question most. Say where it comes from."
       >
-        <div className="grid gap-6 md:grid-cols-[16rem_minmax(0,1fr)]">
+        <div className="grid grid-cols-[minmax(0,1fr)] gap-6 md:grid-cols-[16rem_minmax(0,1fr)]">
           <NumberField
             label="Volatility"
             percent
@@ -88,7 +88,7 @@ export function LatticeSettingsSection({
         </Panel>
       )}
       <Panel title="Rates and lattice">
-        <div className="grid gap-6 sm:grid-cols-3">
+        <div className="grid grid-cols-[minmax(0,1fr)] gap-6 sm:grid-cols-3">
           <NumberField
             label="Risk-free rate"
             percent

@@ -34,7 +34,7 @@ interface Props {
 export function LiveFigures({ result, currency, busy, ignored, notValued, npvAtWacc }: Props) {
   return (
     <>
-      <div className="grid gap-4 sm:grid-cols-3">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 sm:grid-cols-3">
         <Headline label="Static NPV" value={formatMoney(result?.staticNpv, currency)} busy={busy} />
         <Headline label="Option premium" value={formatMoney(result?.optionPremium, currency)} busy={busy} />
         <Headline label="Expanded NPV" value={formatMoney(result?.expandedNpv, currency)} strong busy={busy} />

@@ -223,7 +223,7 @@ export function MonteCarloEstimate({ caseId, unsaved, onApply }: { caseId: strin
       ) : null}
       {result ? (
         <div className="flex flex-col gap-3 rounded-md border border-line bg-paper p-4">
-          <div className="grid gap-4 md:grid-cols-2">
+          <div className="grid grid-cols-[minmax(0,1fr)] gap-4 md:grid-cols-2">
             <div>
               <p className="text-caption uppercase tracking-wide text-ink-muted">Conditional (Brandão, Dyer &amp; Hahn 2005)</p>
               <p className="figures text-title">{formatPercent(result.conditional.volatility)}</p>

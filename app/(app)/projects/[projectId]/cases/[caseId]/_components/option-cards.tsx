@@ -332,7 +332,7 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
                 </Button>
               )}
             </header>
-            <div className="grid gap-5 lg:grid-cols-2">
+            <div className="grid grid-cols-[minmax(0,1fr)] gap-5 lg:grid-cols-2">
               {kind === 'expand' || kind === 'contract' || kind === 'mothball' ? (
                 <Labelled
                   label={kind === 'expand' ? 'Added scale (%)' : kind === 'contract' ? 'Share given up (%)' : 'Scale while mothballed (%)'}

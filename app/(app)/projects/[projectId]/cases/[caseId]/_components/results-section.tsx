@@ -120,7 +120,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
           <TornadoChart sensitivities={result.sensitivities} base={result.expandedNpv} currency={currency} />
         </Panel>
       ) : null}
-      <div className="grid gap-6 xl:grid-cols-2">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 xl:grid-cols-2">
         {convergence ? (
           <Panel
             title="Convergence as steps grow"

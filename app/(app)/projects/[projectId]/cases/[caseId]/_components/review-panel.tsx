@@ -98,7 +98,7 @@ export function ReviewPanel({ caseId, currency, status, rightIds, rights, before
   const reading = figures ? readingOfFigures(figures, currency) : null;
 
   return (
-    <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_26rem]">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 xl:grid-cols-[minmax(0,1fr)_26rem]">
       <div className="flex flex-col gap-6">
         <section className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
           <div className="flex flex-wrap items-center gap-3">

@@ -1,0 +1,85 @@
+/**
+ * On a phone-sized screen (390 × 800 CSS pixels) every page fits its width: the navigation is a
+ * band across the top instead of a 15 rem rail, and what is wider than the screen (a table, the
+ * cash-flow grid) scrolls inside its own frame, never the page. Before, the rail left 150 px for
+ * the figures, the case tabs ran 340 px past the edge, one-column grids grew to their widest
+ * child (a project's case table, the convergence chart), and a screen-reader label inside a
+ * scrolled table widened the page. Measured by the page's own scroll width once its figures
+ * have loaded.
+ */
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { db } from '@/db';
+import { closeBrowser, signedInPage } from './support/browser';
+import { demoCase } from './support/demo';
+
+const phone = { width: 390, height: 800 };
+
+/** The page's width beyond the screen's, in CSS pixels (0 when nothing sticks out). */
+const overflow = (page: Page) => page.evaluate(() => document.scrollingElement!.scrollWidth - document.scrollingElement!.clientWidth);
+
+/** Opens each address and, once its figures have loaded, expects nothing wider than the screen. */
+async function expectFits(page: Page, addresses: string[]) {
+  for (const address of addresses) {
+    await page.goto(address);
+    // Judge the page once its requests have settled and no panel says it is still loading (not
+    // the skeleton before them; generous waits: the machine may be loaded).
+    await page.waitForLoadState('networkidle', { timeout: 30_000 }).catch(() => undefined);
+    await expect.poll(() => page.locator('[aria-busy="true"]').count(), { timeout: 45_000, interval: 1_000 }).toBe(0);
+    await expect.poll(async () => ({ address, wider: await overflow(page) }), { timeout: 15_000, interval: 1_000 }).toEqual({ address, wider: 0 });
+  }
+}
+
+let caseUrl: string;
+let projectUrl: string;
+
+beforeAll(async () => {
+  const plant = await demoCase('Phased bio-resin plant', 'Base case');
+  caseUrl = plant.url;
+  projectUrl = `/projects/${plant.projectId}`;
+});
+
+afterAll(async () => {
+  await closeBrowser();
+  await db.destroy();
+});
+
+const caseTabs = () => ['cash-flows', 'uncertainty', 'flexibility', 'results', 'lattice', 'documents', 'watch', 'review'].map((tab) => `${caseUrl}?tab=${tab}`);
+
+describe('on a phone-sized screen', () => {
+  it("the analyst's pages fit the width, every tab of the approved case included", async () => {
+    const { context, page } = await signedInPage('analyst@kestrelbay.example', { viewport: phone });
+    await expectFits(page, ['/portfolio', '/projects', projectUrl, '/compare', '/alerts', ...caseTabs()]);
+    await context.close();
+  }, 900_000);
+
+  it('the navigation sits across the top, every link on screen, and takes you there', async () => {
+    const { context, page } = await signedInPage('executive@kestrelbay.example', { viewport: phone });
+    await page.goto(`${caseUrl}?tab=results`);
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    await nav.getByRole('link', { name: 'Portfolio' }).waitFor({ timeout: 30_000 });
+    const links = await nav.getByRole('link').all();
+    expect(links.length).toBeGreaterThanOrEqual(3);
+    for (const link of links) {
+      const box = (await link.boundingBox())!;
+      expect(box.x).toBeGreaterThanOrEqual(0);
+      expect(box.x + box.width).toBeLessThanOrEqual(phone.width);
+      expect(box.y + box.height).toBeLessThanOrEqual(phone.height);
+    }
+    // The page itself starts below the band, not beside it, and has the screen's full width.
+    const band = (await nav.boundingBox())!;
+    const main = (await page.getByRole('main').boundingBox())!;
+    expect(main.y).toBeGreaterThan(band.y + band.height);
+    expect(main.width).toBe(phone.width);
+    await nav.getByRole('link', { name: 'Portfolio' }).click();
+    await page.waitForURL(/\/portfolio$/, { timeout: 30_000 });
+    await expectFits(page, ['/portfolio']);
+    await context.close();
+  }, 300_000);
+
+  it("the admin's pages fit the width", async () => {
+    const { context, page } = await signedInPage('admin@kestrelbay.example', { viewport: phone });
+    await expectFits(page, ['/settings', '/settings/members', '/settings/api-keys', '/api-reference']);
+    await context.close();
+  }, 600_000);
+});
