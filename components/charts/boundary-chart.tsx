@@ -6,7 +6,7 @@ import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette, seriesStrong } from '@/lib/palette';
-import { axisTicks } from '@/lib/charts/axis';
+import { axisTicks, SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
 
 const dashes = ['', '6 3', '2 3', '8 3 2 3', '1 2', '10 4'];
 
@@ -69,7 +69,7 @@ export function BoundaryChart({
             </text>
           </g>
         ))}
-        {axisTicks(x, Math.min(10, horizon)).map((t) => (
+        {axisTicks(x, Math.min(10, horizon), { charWidth: SCREEN_LABEL_CHAR }).map((t) => (
           <text key={t.value} x={t.at} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
             {t.label}
           </text>

@@ -4,7 +4,7 @@ import { scaleLinear, scaleLog } from 'd3';
 import type { NodeGrid } from '@/lattice';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
-import { axisTicks, logAxisTicks } from '@/lib/charts/axis';
+import { axisTicks, logAxisTicks, SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
 
 /**
  * The decision map of one mode over the whole lattice: every node placed by time and project
@@ -59,7 +59,7 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
             {t.label}
           </text>
         ))}
-        {axisTicks(x, 8).map((t) => (
+        {axisTicks(x, 8, { charWidth: SCREEN_LABEL_CHAR }).map((t) => (
           <text key={t.value} x={t.at} y={height - margin.bottom + 16} textAnchor="middle" className="figures fill-ink-muted text-caption">
             {t.label}
           </text>

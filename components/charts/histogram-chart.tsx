@@ -4,7 +4,7 @@ import { scaleLinear } from 'd3';
 import { formatPercent } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
-import { axisTicks } from '@/lib/charts/axis';
+import { axisTicks, SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
 
 /** A histogram of simulated returns (bins of z = ln of the year-1 value over today's), in counts of paths. */
 export function HistogramChart({ bins, label }: { bins: { from: number; to: number; count: number }[]; label: string }) {
@@ -24,7 +24,7 @@ export function HistogramChart({ bins, label }: { bins: { from: number; to: numb
         {bins.map((b) => (
           <rect key={b.from} x={x(b.from)} width={Math.max(1, x(b.to) - x(b.from) - 1)} y={y(b.count)} height={y(0) - y(b.count)} fill={palette.tide[500]} />
         ))}
-        {axisTicks(x, 5, (v, digits) => formatPercent(v, Math.max(0, digits - 2))).map((t) => (
+        {axisTicks(x, 5, { label: (v, digits) => formatPercent(v, Math.max(0, digits - 2)), charWidth: SCREEN_LABEL_CHAR }).map((t) => (
           <text key={t.value} x={t.at} y={height - 6} textAnchor="middle" className="figures fill-ink-muted text-caption">
             {t.label}
           </text>

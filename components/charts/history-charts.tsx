@@ -56,7 +56,7 @@ export function HistoryCharts({ series, returns }: { series: Point[]; returns: P
         ))}
       </svg>
       <svg width={width} height={height} role="img" aria-label={`Log returns, between ${formatPercent(-r)} and ${formatPercent(r)}`}>
-        {axisTicks(yr, 4, (v, digits) => formatPercent(v, Math.max(0, digits - 2))).map((t) => (
+        {axisTicks(yr, 4, { label: (v, digits) => formatPercent(v, Math.max(0, digits - 2)) }).map((t) => (
           <g key={t.value}>
             <line x1={margin.left} x2={width - margin.right} y1={t.at} y2={t.at} stroke={t.value === 0 ? palette.ink.muted : palette.paper.sunk} />
             <text x={margin.left - 6} y={t.at} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">

@@ -1,5 +1,6 @@
 'use client';
 
+import { SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
 import { layoutNpvComparison, type NpvPair } from '@/lib/charts/npv-comparison';
 import { wrapLabel } from '@/lib/charts/wrap-label';
 import { formatMoney } from '@/lib/format';
@@ -12,7 +13,7 @@ import { palette } from '@/lib/palette';
  */
 export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[]; currency?: string; title: string }) {
   const { ref, width } = useWidth<HTMLDivElement>();
-  const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(260, width * 0.32) });
+  const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(260, width * 0.32), tickCharWidth: SCREEN_LABEL_CHAR });
   // About 7 px a character at the body size: labels never run off the left edge.
   return (
     <figure ref={ref} className="w-full">

@@ -1,5 +1,6 @@
 'use client';
 
+import { SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
 import { layoutTornado } from '@/lib/charts/tornado';
 import { wrapLabel } from '@/lib/charts/wrap-label';
 import { formatMoney, formatPercent } from '@/lib/format';
@@ -27,7 +28,7 @@ export function TornadoChart({ sensitivities, base, currency }: { sensitivities:
     sensitivities.map((x) => [x.parameter, wrapLabel(`${x.label} (${describeBump(x, 'low')} / ${describeBump(x, 'high')})`, labelWidth - 14, CAPTION_PX, 4)]),
   );
   const lines = Math.max(1, ...[...labels.values()].map((l) => l.length));
-  const layout = layoutTornado(sensitivities, base, width, { labelWidth, rowHeight: Math.max(34, lines * 15 + 8) });
+  const layout = layoutTornado(sensitivities, base, width, { labelWidth, rowHeight: Math.max(34, lines * 15 + 8), tickCharWidth: SCREEN_LABEL_CHAR });
   return (
     <div ref={ref} className="w-full">
       <svg width={layout.width} height={layout.height} role="img" aria-label={`Sensitivity of expanded NPV (${currency}); base ${formatMoney(base)}`}>

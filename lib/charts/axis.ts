@@ -16,10 +16,32 @@ export interface AxisTick {
   label: string;
 }
 
-export function axisTicks(scale: ScaleLinear<number, number>, count: number, label: (value: number, digits: number) => string = formatNumber): AxisTick[] {
-  const values = scale.ticks(count);
-  const digits = tickDigits(values);
-  return values.map((value) => ({ value, at: scale(value), label: label(value, digits) }));
+/** A tick label character's width on screen, px: 12 px Work Sans figures are about 7 px wide. */
+export const SCREEN_LABEL_CHAR = 7;
+
+export interface AxisOptions {
+  label?: (value: number, digits: number) => string;
+  /**
+   * For an axis across the page: the width of one label character in the scale's range units.
+   * Ticks are then thinned (fewer asked of d3) until neighbours are at least the longest label
+   * plus two characters apart, so a narrow chart (a phone) keeps readable labels instead of
+   * printing them over each other. Up the page, labels stack and need no room.
+   */
+  charWidth?: number;
+}
+
+export function axisTicks(scale: ScaleLinear<number, number>, count: number, options: AxisOptions = {}): AxisTick[] {
+  const label = options.label ?? formatNumber;
+  const labelled = (n: number) => {
+    const values = scale.ticks(n);
+    const digits = tickDigits(values);
+    return values.map((value) => ({ value, at: scale(value), label: label(value, digits) }));
+  };
+  let ticks = labelled(count);
+  const crowded = (t: AxisTick[]) => t.length > 2 && Math.abs(t[1]!.at - t[0]!.at) < (options.charWidth ?? 0) * (Math.max(...t.map((x) => x.label.length)) + 2);
+  // d3 may answer fewer than asked; stop at two ticks, which always fit a chart's own width.
+  for (let n = count - 1; n >= 1 && crowded(ticks); n--) ticks = labelled(n);
+  return ticks;
 }
 
 const superscript: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };

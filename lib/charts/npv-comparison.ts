@@ -24,7 +24,11 @@ export interface NpvComparisonLayout {
   rowHeight: number;
 }
 
-export function layoutNpvComparison(items: NpvPair[], width: number, options: { rowHeight?: number; labelWidth?: number } = {}): NpvComparisonLayout {
+export function layoutNpvComparison(
+  items: NpvPair[],
+  width: number,
+  options: { rowHeight?: number; labelWidth?: number; tickCharWidth?: number } = {},
+): NpvComparisonLayout {
   const rowHeight = options.rowHeight ?? 44;
   const margin = { top: 12, right: 130, bottom: 32, left: options.labelWidth ?? 200 };
   const height = margin.top + margin.bottom + rowHeight * Math.max(items.length, 1);
@@ -45,7 +49,7 @@ export function layoutNpvComparison(items: NpvPair[], width: number, options: { 
     height,
     margin,
     x,
-    ticks: axisTicks(x, 6).map((t) => ({ value: t.value, x: t.at, label: t.label })),
+    ticks: axisTicks(x, 6, { charWidth: options.tickCharWidth }).map((t) => ({ value: t.value, x: t.at, label: t.label })),
     zeroX: x(0),
     rowHeight,
     rows: items.map((i) => ({ ...i, y: (y(i.id) ?? 0) + y.bandwidth() / 2, staticX: x(i.staticNpv), expandedX: x(i.expandedNpv) })),

@@ -19,7 +19,7 @@ export function layoutTornado(
   sensitivities: Sensitivity[],
   base: number,
   width: number,
-  options: { labelWidth?: number; rightWidth?: number; rowHeight?: number } = {},
+  options: { labelWidth?: number; rightWidth?: number; rowHeight?: number; tickCharWidth?: number } = {},
 ): TornadoLayout {
   const usable = sensitivities.filter((s) => s.low.expandedNpv !== null || s.high.expandedNpv !== null);
   const swing = (s: Sensitivity) => Math.abs((s.high.expandedNpv ?? base) - (s.low.expandedNpv ?? base));
@@ -41,7 +41,7 @@ export function layoutTornado(
     height,
     margin,
     baseX: x(base),
-    ticks: axisTicks(x, 5).map((t) => ({ value: t.value, x: t.at, label: t.label })),
+    ticks: axisTicks(x, 5, { charWidth: options.tickCharWidth }).map((t) => ({ value: t.value, x: t.at, label: t.label })),
     rows: sorted.map((s) => ({
       sensitivity: s,
       y: y(s.parameter) ?? 0,

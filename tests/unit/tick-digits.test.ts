@@ -1,7 +1,7 @@
 /** Axis labels never repeat: decimals follow the tick spacing (the convergence axis read "20.1" twice). */
 import { scaleLinear, scaleLog } from 'd3';
 import { describe, expect, it } from 'vitest';
-import { axisTicks, logAxisTicks } from '@/lib/charts/axis';
+import { axisTicks, logAxisTicks, SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
 import { tickDigits } from '@/lib/charts/tick-digits';
 import { formatMoney } from '@/lib/format';
 
@@ -33,6 +33,22 @@ describe('tick labels', () => {
     expect(small.map((t) => t.at)).toEqual([0, 25, 50, 75, 100]);
     const wide = axisTicks(scaleLinear().domain([-1500, 1500]).range([0, 300]), 6);
     expect(wide.map((t) => t.label)).toEqual(['−1,500', '−1,000', '−500', '0', '500', '1,000', '1,500']);
+  });
+
+  it('thin an axis across a narrow chart until its labels have room, and leave a wide one as it was', () => {
+    // The portfolio's NPV chart on a 390 px phone has about 90 px for −20 to 30: its six ticks
+    // printed "−20−1001020 30" with no space between them.
+    const phone = scaleLinear().domain([-16, 25]).nice().range([0, 90]);
+    const room = (ticks: { label: string }[]) => SCREEN_LABEL_CHAR * (Math.max(...ticks.map((t) => t.label.length)) + 2);
+    expect(axisTicks(phone, 6).length).toBeGreaterThan(3);
+    const thinned = axisTicks(phone, 6, { charWidth: SCREEN_LABEL_CHAR });
+    expect(thinned.length).toBeGreaterThanOrEqual(1);
+    for (let k = 1; k < thinned.length; k++) expect(thinned[k]!.at - thinned[k - 1]!.at).toBeGreaterThanOrEqual(room(thinned));
+    // Thinned ticks are still d3's round values, in order.
+    expect(thinned.every((t, k) => k === 0 || t.value > thinned[k - 1]!.value)).toBe(true);
+    // On a desktop (600 px) every tick has room: the same ticks as without the option.
+    const desk = scaleLinear().domain([-16, 25]).nice().range([0, 600]);
+    expect(axisTicks(desk, 6, { charWidth: SCREEN_LABEL_CHAR })).toEqual(axisTicks(desk, 6));
   });
 
   it('label a log axis by powers of ten, none alike', () => {
