@@ -16,6 +16,13 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
     // Below md (768 px) the rail becomes a band across the top, so a phone or a narrow window
     // keeps its full width for the figures.
     <div className="flex min-h-screen flex-col md:flex-row">
+      {/* The first stop for the keyboard: past the navigation to the page (shown when focused). */}
+      <a
+        href="#main"
+        className="sr-only rounded-md bg-paper-raised px-4 py-2 text-body text-tide-700 shadow-card focus:not-sr-only focus:fixed focus:left-4 focus:top-4 focus:z-50"
+      >
+        Skip to the page
+      </a>
       <aside className="flex w-full shrink-0 flex-col border-b border-line bg-paper-raised px-4 py-4 md:w-rail md:border-b-0 md:border-r md:py-6">
         <div className="px-3">
           <Wordmark />
@@ -49,7 +56,7 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
           </div>
         </div>
       </aside>
-      <main id="main" className="min-w-0 flex-1 px-4 py-6 md:px-8 md:py-8 xl:px-12">
+      <main id="main" tabIndex={-1} className="min-w-0 focus-visible:outline-none flex-1 px-4 py-6 md:px-8 md:py-8 xl:px-12">
         {children}
       </main>
     </div>

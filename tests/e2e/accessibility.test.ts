@@ -3,7 +3,8 @@
  * practices), run in Chromium on the page once its figures have loaded. The first run found:
  * muted text at 4.42:1 on paper and 3.98:1 on the sunk panels (AA asks 4.5:1), the case page
  * without a level-one heading for those who may edit its name, tab panels whose sections jumped
- * from h1 to h3, and lattice nodes whose names did not contain the words they show.
+ * from h1 to h3, and lattice nodes whose names did not contain the words they show. And a
+ * keyboard user's first Tab offers to skip the navigation (it led through every link first).
  */
 import type { Page } from 'playwright-core';
 import { createRequire } from 'node:module';
@@ -83,4 +84,28 @@ describe('accessibility (axe-core)', () => {
     await expectClean(page, ['/settings', '/settings/members', '/settings/api-keys', '/api-reference']);
     await context.close();
   }, 600_000);
+
+  it('the keyboard’s first stop skips the navigation: Enter, then Tab, lands in the page', async () => {
+    const { context, page } = await signedInPage('analyst@kestrelbay.example');
+    await page.goto(projectUrl);
+    await page.getByRole('button', { name: 'New case', exact: true }).waitFor({ timeout: 30_000 });
+    const focused = () =>
+      page.evaluate(() => {
+        const el = document.activeElement as HTMLElement;
+        const box = el.getBoundingClientRect();
+        return {
+          text: el.textContent?.trim() ?? '',
+          inMain: el.closest('main') !== null,
+          inNav: el.closest('nav[aria-label="Main"]') !== null,
+          shown: box.width > 1 && box.height > 1,
+        };
+      });
+    await page.keyboard.press('Tab');
+    expect(await focused()).toEqual({ text: 'Skip to the page', inMain: false, inNav: false, shown: true });
+    await page.keyboard.press('Enter');
+    await page.keyboard.press('Tab');
+    const next = await focused();
+    expect([next.inMain, next.inNav]).toEqual([true, false]);
+    await context.close();
+  }, 300_000);
 });
