@@ -19,7 +19,7 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
       {/* The first stop for the keyboard: past the navigation to the page (shown when focused). */}
       <a
         href="#main"
-        className="sr-only rounded-md bg-paper-raised px-4 py-2 text-body text-tide-700 shadow-card focus:not-sr-only focus:fixed focus:left-4 focus:top-4 focus:z-50"
+        className="sr-only rounded-md border border-line bg-paper-raised text-body font-medium text-tide-700 shadow-card focus:not-sr-only focus:fixed focus:left-4 focus:top-4 focus:z-50 focus:px-4 focus:py-2"
       >
         Skip to the page
       </a>
