@@ -1,14 +1,15 @@
 import type { HTMLAttributes, ReactNode, TdHTMLAttributes, ThHTMLAttributes } from 'react';
+import { ScrollFrame } from './scroll-frame';
 
 /** Plain semantic table parts with Leeway's styling; numbers align right in tabular figures. */
 export function Table({ caption, children, className = '' }: { caption?: string; children: ReactNode; className?: string }) {
   return (
-    <div className={`relative overflow-x-auto rounded-card border border-line bg-paper-raised shadow-card ${className}`}>
+    <ScrollFrame label={caption ?? 'Table'} className={`relative overflow-x-auto rounded-card border border-line bg-paper-raised shadow-card ${className}`}>
       <table className="w-full border-collapse text-left text-body">
         {caption ? <caption className="sr-only">{caption}</caption> : null}
         {children}
       </table>
-    </div>
+    </ScrollFrame>
   );
 }
 

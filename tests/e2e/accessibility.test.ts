@@ -7,34 +7,11 @@
  * keyboard user's first Tab offers to skip the navigation (it led through every link first).
  */
 import type { Page } from 'playwright-core';
-import { createRequire } from 'node:module';
-import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
+import { axeFindings } from './support/axe';
 import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
-
-const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
-
-interface Finding {
-  rule: string;
-  impact: string | null;
-  where: string[];
-}
-
-/** axe-core's findings on the page as it is now: each rule broken, its impact and the first three elements. */
-async function findings(page: Page): Promise<Finding[]> {
-  if (!(await page.evaluate(() => 'axe' in window))) await page.addScriptTag({ content: axeSource });
-  return page.evaluate(async () => {
-    const axe = (
-      window as unknown as {
-        axe: { run: (context: Document, options: object) => Promise<{ violations: { id: string; impact: string | null; nodes: { target: string[] }[] }[] }> };
-      }
-    ).axe;
-    const result = await axe.run(document, { resultTypes: ['violations'] });
-    return result.violations.map((v) => ({ rule: v.id, impact: v.impact, where: v.nodes.slice(0, 3).map((n) => n.target.join(' ')) }));
-  });
-}
 
 /** Opens each address and waits (generously: the machine may be loaded) until axe finds nothing. */
 async function expectClean(page: Page, addresses: string[]) {
@@ -43,7 +20,7 @@ async function expectClean(page: Page, addresses: string[]) {
     // Pages load their figures after the script: judge the page once its requests have settled,
     // not the skeleton before them (a page that keeps polling is judged after 30 s).
     await page.waitForLoadState('networkidle', { timeout: 30_000 }).catch(() => undefined);
-    await expect.poll(async () => ({ address, found: await findings(page) }), { timeout: 45_000, interval: 1_500 }).toEqual({ address, found: [] });
+    await expect.poll(async () => ({ address, found: await axeFindings(page) }), { timeout: 45_000, interval: 1_500 }).toEqual({ address, found: [] });
   }
 }
 

@@ -5,11 +5,12 @@
  * the figures, the case tabs ran 340 px past the edge, one-column grids grew to their widest
  * child (a project's case table, the convergence chart), and a screen-reader label inside a
  * scrolled table widened the page. Measured by the page's own scroll width once its figures
- * have loaded.
+ * have loaded; axe-core checks each page at this width too.
  */
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
+import { axeFindings } from './support/axe';
 import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
 
@@ -27,6 +28,9 @@ async function expectFits(page: Page, addresses: string[]) {
     await page.waitForLoadState('networkidle', { timeout: 30_000 }).catch(() => undefined);
     await expect.poll(() => page.locator('[aria-busy="true"]').count(), { timeout: 45_000, interval: 1_000 }).toBe(0);
     await expect.poll(async () => ({ address, wider: await overflow(page) }), { timeout: 15_000, interval: 1_000 }).toEqual({ address, wider: 0 });
+    // And axe-core finds nothing at this width either: a table wider than the screen must be
+    // reachable by keyboard to be scrolled (its first run here found the Watch tab's tables not).
+    await expect.poll(async () => ({ address, found: await axeFindings(page) }), { timeout: 30_000, interval: 1_500 }).toEqual({ address, found: [] });
   }
 }
 
