@@ -8,6 +8,7 @@
 import type { ScaleLinear, ScaleLogarithmic } from 'd3';
 import { formatNumber } from '../format';
 import { tickDigits } from './tick-digits';
+import { CHAR_WIDTH_EM } from './wrap-label';
 
 export interface AxisTick {
   value: number;
@@ -16,8 +17,8 @@ export interface AxisTick {
   label: string;
 }
 
-/** A tick label character's width on screen, px: 12 px Work Sans figures are about 7 px wide. */
-export const SCREEN_LABEL_CHAR = 7;
+/** A tick label character's width on screen, px: the charts' 12 px captions, by wrap-label's estimate. */
+export const SCREEN_LABEL_CHAR = 12 * CHAR_WIDTH_EM;
 
 export interface AxisOptions {
   label?: (value: number, digits: number) => string;
@@ -39,7 +40,7 @@ export function axisTicks(scale: ScaleLinear<number, number>, count: number, opt
   };
   let ticks = labelled(count);
   const crowded = (t: AxisTick[]) => t.length > 2 && Math.abs(t[1]!.at - t[0]!.at) < (options.charWidth ?? 0) * (Math.max(...t.map((x) => x.label.length)) + 2);
-  // d3 may answer fewer than asked; stop at two ticks, which always fit a chart's own width.
+  // Two ticks are never thinned further: they mark the axis's ends well enough.
   for (let n = count - 1; n >= 1 && crowded(ticks); n--) ticks = labelled(n);
   return ticks;
 }
