@@ -11,7 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { axeFindings } from './support/axe';
 import { closeBrowser, signedInPage } from './support/browser';
-import { demoCase } from './support/demo';
+import { caseTabUrls, demoCase } from './support/demo';
 
 /** Opens each address and waits (generously: the machine may be loaded) until axe finds nothing. */
 async function expectClean(page: Page, addresses: string[]) {
@@ -38,12 +38,10 @@ afterAll(async () => {
   await db.destroy();
 });
 
-const caseTabs = () => ['cash-flows', 'uncertainty', 'flexibility', 'results', 'lattice', 'documents', 'watch', 'review'].map((tab) => `${caseUrl}?tab=${tab}`);
-
 describe('accessibility (axe-core)', () => {
   it("the analyst's pages, every tab of a case included", async () => {
     const { context, page } = await signedInPage('analyst@kestrelbay.example');
-    await expectClean(page, ['/portfolio', '/projects', projectUrl, '/compare', '/alerts', ...caseTabs()]);
+    await expectClean(page, ['/portfolio', '/projects', projectUrl, '/compare', '/alerts', ...caseTabUrls(caseUrl)]);
     await context.close();
   }, 600_000);
 
@@ -52,7 +50,7 @@ describe('accessibility (axe-core)', () => {
     await expectClean(reviewer.page, ['/review', `${caseUrl}?tab=review`]);
     await reviewer.context.close();
     const executive = await signedInPage('executive@kestrelbay.example');
-    await expectClean(executive.page, ['/portfolio', ...caseTabs()]);
+    await expectClean(executive.page, ['/portfolio', ...caseTabUrls(caseUrl)]);
     await executive.context.close();
   }, 600_000);
 

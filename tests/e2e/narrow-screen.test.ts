@@ -12,7 +12,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { axeFindings } from './support/axe';
 import { closeBrowser, signedInPage } from './support/browser';
-import { demoCase } from './support/demo';
+import { caseTabUrls, demoCase } from './support/demo';
 
 const phone = { width: 390, height: 800 };
 
@@ -48,12 +48,10 @@ afterAll(async () => {
   await db.destroy();
 });
 
-const caseTabs = () => ['cash-flows', 'uncertainty', 'flexibility', 'results', 'lattice', 'documents', 'watch', 'review'].map((tab) => `${caseUrl}?tab=${tab}`);
-
 describe('on a phone-sized screen', () => {
   it("the analyst's pages fit the width, every tab of the approved case included", async () => {
     const { context, page } = await signedInPage('analyst@kestrelbay.example', { viewport: phone });
-    await expectFits(page, ['/portfolio', '/projects', projectUrl, '/compare', '/alerts', ...caseTabs()]);
+    await expectFits(page, ['/portfolio', '/projects', projectUrl, '/compare', '/alerts', ...caseTabUrls(caseUrl)]);
     await context.close();
   }, 900_000);
 

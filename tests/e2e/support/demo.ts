@@ -11,3 +11,7 @@ export async function demoCase(project: string, name: string): Promise<{ caseId:
     .executeTakeFirstOrThrow();
   return { caseId: row.id, projectId: row.project_id, url: `/projects/${row.project_id}/cases/${row.id}` };
 }
+
+/** Every tab of a case page, by its address (the ids of case-editor.tsx's tabs). */
+export const caseTabUrls = (caseUrl: string) =>
+  ['cash-flows', 'uncertainty', 'flexibility', 'results', 'lattice', 'documents', 'watch', 'review'].map((tab) => `${caseUrl}?tab=${tab}`);
