@@ -10,9 +10,13 @@
  * 4. Monte Carlo volatility: paths a second for a ten-year model with three correlated drivers.
  * 5. The cross-check's least-squares Monte Carlo: seconds per 100 000 paths in each pass, on the
  *    demo plant (its own 96 steps) and on the four-option model (500 steps).
+ * Section 1 also times a value-only rollback of the same put written in C
+ * (scripts/bench/american-put.c, gcc -O2), the yardstick of docs/engine.md §9's goal for the
+ * default pass; it is skipped, saying so, where gcc is missing.
  * The script is bundled with esbuild and run by plain node, as the app ships the engine (tsx's
  * on-the-fly loader made the same loops about twice as slow when measured).
  */
+import { execFileSync } from 'node:child_process';
 import { valueProject, type ProjectModel } from '../lattice';
 import fourRights from '../lattice/examples/four-rights.json';
 import { prepareModel } from '../lattice/check-model';
@@ -44,10 +48,30 @@ function time(run: () => unknown, repeats: number): number {
 
 const ms = (x: number) => `${x.toFixed(2).padStart(9)} ms`;
 
+/** The C yardstick, compiled once per run: (steps) => its put value and median time, or null without gcc. */
+function nativeRollback(): ((steps: number) => { value: number; ms: number }) | null {
+  const binary = '.data/bench-american-put';
+  try {
+    execFileSync('gcc', ['-O2', '-o', binary, 'scripts/bench/american-put.c', '-lm'], { stdio: 'pipe' });
+  } catch {
+    return null;
+  }
+  return (steps) => {
+    const [value, median] = execFileSync(binary, [String(steps), '21'], { encoding: 'utf8' })
+      .trim()
+      .split(' ')
+      .map(Number);
+    return { value: value!, ms: median! };
+  };
+}
+const native = nativeRollback();
+
 console.log('American put, S = K = 100, r = 5 %, σ = 30 %, T = 1 (median of runs)');
 console.log('  engine pass = valueProject(extras: false): value, boundaries and exercise probabilities');
 console.log('  engine value = the same lattice, value only (what quantlib.js computes)');
-console.log('  steps   engine pass   engine value   quantlib.js (CRR)   ratio pass   ratio value');
+console.log('  C value = the same lattice, value only, in C (gcc -O2): the yardstick of the default pass');
+console.log('  steps   engine pass   engine value   quantlib.js (CRR)   ratio pass   ratio value        C value   pass ÷ C');
+if (!native) console.log('  (gcc not found: the C yardstick is skipped)');
 for (const steps of [1000, 2000, 5000]) {
   const model: ProjectModel = {
     underlying: { value: 100, volatility: 0.3 },
@@ -63,8 +87,13 @@ for (const steps of [1000, 2000, 5000]) {
     () => quantlibAmerican({ kind: 'put', spot: 100, strike: 100, rate: 0.05, dividendYield: 0, volatility: 0.3, days: 365, steps, tree: 'crr' }),
     steps >= 5000 ? 5 : 11,
   );
+  const c = native?.(steps);
+  // The C put must be the engine's put: an abandon-only project is V0 + the put (docs/engine.md §7).
+  const engineValue = valueProject(model, { extras: false }).value - 100;
+  if (c && Math.abs(c.value - engineValue) > 1e-9 * 100) throw new Error(`bench: the C put is ${c.value}, the engine's ${engineValue}`);
+  const yardstick = c ? `   ${ms(c.ms)}   ${(engine / c.ms).toFixed(1).padStart(6)}×` : '';
   console.log(
-    `  ${String(steps).padStart(5)} ${ms(engine)}   ${ms(valueOnly)}   ${ms(quantlib)}      ${(quantlib / engine).toFixed(1).padStart(6)}×     ${(quantlib / valueOnly).toFixed(1).padStart(6)}×`,
+    `  ${String(steps).padStart(5)} ${ms(engine)}   ${ms(valueOnly)}   ${ms(quantlib)}      ${(quantlib / engine).toFixed(1).padStart(6)}×     ${(quantlib / valueOnly).toFixed(1).padStart(6)}×${yardstick}`,
   );
 }
 
