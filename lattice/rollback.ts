@@ -6,7 +6,8 @@
  *   2. exercise: the best of continuing and of each switch open from the mode at this step,
  *      each switch worth the *continuation* of the mode it leads to minus its cost (so at most
  *      one switch per mode per node, and a switch never chains into another at the same node);
- *      a switch wins only if strictly better, so ties continue;
+ *      a switch wins only if better than continuing by more than rounding (`TIE`), so ties
+ *      continue whatever the order of the arithmetic;
  *   3. record the decision (run-length encoded, see decision-runs.ts) and, where the choice
  *      changes between two nodes, the project value at which it changes, located between them.
  * Values are rolled back as O = W − A (see plan.ts), so step 1 is a plain discounted average of
@@ -51,6 +52,17 @@ export interface RollbackResult {
   grid: Float64Array[][] | null;
   capture: { continuation: Float64Array[]; value: Float64Array[]; next: Float64Array[] | null } | null;
 }
+
+/**
+ * A switch is taken only where it beats continuing by more than TIE times the money in its
+ * terms at that node (|Δscale·V| + |offset| + |continuation it leads to|). Where the two are
+ * equal in exact arithmetic — a right to expand with no payout and r = 0, whose waiting costs
+ * nothing — the backward induction's rounding (about 1e-16 of those terms a step) decided
+ * instead, so the same model could report early exercise and a boundary at one step count and
+ * none at the next, and the trimmed rows could decide otherwise than the full ones. 1e-11 is
+ * far above that noise even after 10,000 steps and far below any figure the engine reports.
+ */
+export const TIE = 1e-11;
 
 const none: RollbackOptions = { decisions: false, gridSteps: -1, captureStep: -1, reference: false };
 
@@ -239,12 +251,14 @@ class Rollback {
     const down = this.pd;
     const step = this.ratio;
     let v = plan.lowest[i]!;
+    const tieV = TIE * Math.abs(ds);
+    const tieOff = TIE * Math.abs(off);
     const decisions = this.decisions;
     if (!decisions) {
       for (let j = 0; j <= i; j++) {
         const hold = up * w[j + 1]! + down * w[j]!;
         const x = ds * v + off;
-        w[j] = x > hold ? x : hold;
+        w[j] = x - hold > tieV * v + tieOff ? x : hold;
         v *= step;
       }
       return;
@@ -256,8 +270,9 @@ class Rollback {
     for (let j = 0; j <= i; j++) {
       const hold = up * w[j + 1]! + down * w[j]!;
       const x = ds * v + off;
-      const choice = x > hold ? k + 1 : 0;
-      w[j] = x > hold ? x : hold;
+      const taken = x - hold > tieV * v + tieOff;
+      const choice = taken ? k + 1 : 0;
+      w[j] = taken ? x : hold;
       if (choice !== previous) {
         decisions.push(j, choice);
         // g = value(new choice) − value(old choice), at node j − 1 and here.
@@ -327,7 +342,10 @@ class Rollback {
     // Continuation of a node whose children are both exercised: ds·G·V + D·offNext.
     const G = (plan.lowest[i + 1]! / base) * (up * step + down);
     const D = up + down;
-    const staysExercised = (j: number) => ds * vAt(j) + off > ds * G * vAt(j) + D * offNext;
+    const tieV = TIE * Math.abs(ds);
+    const tieOff = TIE * Math.abs(off);
+    // The test x − continuation > TIE·(|Δscale|·V + |offset|) is linear in V on such a run.
+    const staysExercised = (j: number) => ds * vAt(j) + off - (ds * G * vAt(j) + D * offNext) > tieV * vAt(j) + tieOff;
 
     if (ds < 0) {
       // Exercised at the bottom, zero at the top.
@@ -348,7 +366,7 @@ class Rollback {
         let hold = up * w[j + 1]! + down * w[j]!;
         if (hold < tiny && hold > -tiny) hold = 0;
         const x = ds * v + off;
-        if (x > hold) {
+        if (x - hold > tieV * v + tieOff) {
           w[j] = x;
           if (streak) edge = j + 1;
           last = j;
@@ -362,7 +380,7 @@ class Rollback {
       // Above the live region the continuation is 0: exercised while x > 0, zero after.
       for (; j <= i; j++) {
         const x = ds * v + off;
-        if (!(x > 0)) break;
+        if (!(x > tieV * v + tieOff)) break;
         w[j] = x;
         if (streak) edge = j + 1;
         last = j;
@@ -385,7 +403,7 @@ class Rollback {
       let v = vAt(start - 1);
       for (let jj = start - 1; jj >= 0; jj--) {
         const x = ds * v + off;
-        if (!(x > 0)) break;
+        if (!(x > tieV * v + tieOff)) break;
         w[jj] = x;
         first = jj;
         v /= step;
@@ -397,7 +415,7 @@ class Rollback {
         let hold = up * w[j + 1]! + down * w[j]!;
         if (hold < tiny && hold > -tiny) hold = 0;
         const x = ds * v + off;
-        if (x > hold) {
+        if (x - hold > tieV * v + tieOff) {
           w[j] = x;
           if (streakStart < 0) streakStart = j;
           if (firstNonZero < 0) firstNonZero = j;
@@ -444,19 +462,26 @@ class Rollback {
     const ds2 = plan.deltaScale[s2]!;
     const off2 = plan.offset[s2 * width + i]!;
     const c2 = cont[plan.to[s2]!]!;
+    const tieV1 = TIE * Math.abs(ds1);
+    const tieOff1 = TIE * Math.abs(off1);
+    const tieV2 = TIE * Math.abs(ds2);
+    const tieOff2 = TIE * Math.abs(off2);
     for (let j = 0; j <= i; j++) {
       const hold = up * w[j + 1]! + down * w[j]!;
       if (keep) c[j] = hold;
       let best = hold;
       const x1 = ds1 * v + off1 + c1[j]!;
-      if (x1 > best) best = x1;
+      if (x1 - hold > tieV1 * v + tieOff1 + TIE * Math.abs(c1[j]!)) best = x1;
       if (n >= 2) {
         const x2 = ds2 * v + off2 + c2[j]!;
-        if (x2 > best) best = x2;
+        if (x2 > best && x2 - hold > tieV2 * v + tieOff2 + TIE * Math.abs(c2[j]!)) best = x2;
         for (let q = 2; q < n; q++) {
           const s = list[openList[q]!]!;
-          const x = plan.deltaScale[s]! * v + plan.offset[s * width + i]! + cont[plan.to[s]!]![j]!;
-          if (x > best) best = x;
+          const dsq = plan.deltaScale[s]!;
+          const offq = plan.offset[s * width + i]!;
+          const cq = cont[plan.to[s]!]![j]!;
+          const x = dsq * v + offq + cq;
+          if (x > best && x - hold > TIE * (Math.abs(dsq) * v + Math.abs(offq) + Math.abs(cq))) best = x;
         }
       }
       w[j] = best;
@@ -502,11 +527,14 @@ class Rollback {
       const ds = plan.deltaScale[s]!;
       const off = plan.offset[s * width + i]!;
       const ct = cont[plan.to[s]!]!;
+      const tieV = TIE * Math.abs(ds);
+      const tieOff = TIE * Math.abs(off);
       for (let j = 0; j <= i; j++) {
         const hold = c[j]!;
         const x = ds * v + off + ct[j]!;
-        const choice = x > hold ? k + 1 : 0;
-        w[j] = x > hold ? x : hold;
+        const taken = x - hold > tieV * v + tieOff + TIE * Math.abs(ct[j]!);
+        const choice = taken ? k + 1 : 0;
+        w[j] = taken ? x : hold;
         if (decisions && choice !== previous) {
           decisions.push(j, choice);
           if (previous >= 0) this.recordEdge(m, i, j, previous, choice, v);
@@ -522,13 +550,17 @@ class Rollback {
       return;
     }
     for (let j = 0; j <= i; j++) {
-      let best = c[j]!;
+      const hold = c[j]!;
+      let best = hold;
       let choice = 0;
       for (let q = 0; q < n; q++) {
         const k = openList[q]!;
         const s = list[k]!;
-        const x = plan.deltaScale[s]! * v + plan.offset[s * width + i]! + cont[plan.to[s]!]![j]!;
-        if (x > best) {
+        const ds = plan.deltaScale[s]!;
+        const off = plan.offset[s * width + i]!;
+        const ct = cont[plan.to[s]!]![j]!;
+        const x = ds * v + off + ct;
+        if (x > best && x - hold > TIE * (Math.abs(ds) * v + Math.abs(off) + Math.abs(ct))) {
           best = x;
           choice = k + 1;
         }

@@ -7,6 +7,9 @@
  * end down; lattice/window.ts), so a step count that splits a window's dates values a little less
  * than before, never a date the window does not allow. 4.2.0: a right's result lists the
  * decisions its first use leads to (`followUps`: a stage right's later payments, a mothball
- * right's restart) with their boundaries; no figure changes.
+ * right's restart) with their boundaries; no figure changes. 4.3.0: a switch is taken only where
+ * it beats continuing by more than rounding (lattice/rollback.ts, TIE), so where waiting costs
+ * nothing (no payout, r = 0) a right is no longer reported as used early; values move by at most
+ * 1e-11 of the money at a node.
  */
-export const ENGINE_VERSION = 'leeway-lattice 4.2.0';
+export const ENGINE_VERSION = 'leeway-lattice 4.3.0';
