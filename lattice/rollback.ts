@@ -17,13 +17,16 @@
  * The reference schedule computes every continuation first and runs the exercise rule after
  * (`exerciseRow`). The fast paths are optimisations of it, never second definitions: when no
  * switch path leads back to a mode (one-shot rights), modes are rolled targets first and each
- * does steps 1–3 in one loop (`onePassRow`, `fusedSingle`); without decisions, a single-switch
- * row also skips its pure-exercise and zero regions (`trimmedSingle`). tests/lattice/one-rule
+ * does steps 1–3 in one loop (`onePassRow`, `fusedSingle`); a row whose one switch leads to a
+ * fixed mode also skips its pure-exercise and zero regions, recording each skipped run as one
+ * decision run (`trimmedSingle`). tests/lattice/one-rule
  * proves them equal to the reference over random models: values, decisions at every node,
  * boundaries and probabilities.
  *
  * The hot loops allocate nothing, call no closure per node and never call Math.pow: V at node
- * (i, j + 1) is V at (i, j) times u/d. The work lives in methods of one class (stable call
+ * (i, j) is lowest[i]·rise[j], one product of two tables, so every path computes the same bits
+ * for the same node (a running product drifts in its last bits with j, and a row that starts
+ * part-way would differ from one that starts at node 0). The work lives in methods of one class (stable call
  * targets for the JIT) that copy what they read into locals first.
  */
 import { DecisionRuns } from './decision-runs';
@@ -99,6 +102,8 @@ class Rollback {
   private readonly live: Int32Array;
   /** Values below this (money) are zero for every purpose; flushing them lets the rows trim. */
   private readonly tiny: number;
+  /** The choice last recorded in the trimmed row being rolled (-1: none yet). */
+  private marked = -1;
 
   constructor(
     private readonly plan: LatticePlan,
@@ -130,8 +135,7 @@ class Rollback {
     this.live = new Int32Array(modeCount);
     for (const m of this.rolled) {
       const list = byMode[m]!;
-      // Trimming skips nodes, so it never runs when decisions are recorded.
-      if (!opts.decisions && this.fused[m] === 1 && list.length === 1 && plan.deltaScale[list[0]!] !== 0) this.trims[m] = 1;
+      if (this.fused[m] === 1 && list.length === 1 && plan.deltaScale[list[0]!] !== 0) this.trims[m] = 1;
       this.resetTrim(m, steps);
     }
     let money = 0;
@@ -249,17 +253,17 @@ class Rollback {
     const off = plan.offset[s * width + i]!;
     const up = this.pu;
     const down = this.pd;
-    const step = this.ratio;
-    let v = plan.lowest[i]!;
+    const base = plan.lowest[i]!;
+    const rise = plan.rise;
     const tieV = TIE * Math.abs(ds);
     const tieOff = TIE * Math.abs(off);
     const decisions = this.decisions;
     if (!decisions) {
       for (let j = 0; j <= i; j++) {
+        const v = base * rise[j]!;
         const hold = up * w[j + 1]! + down * w[j]!;
         const x = ds * v + off;
         w[j] = x - hold > tieV * v + tieOff ? x : hold;
-        v *= step;
       }
       return;
     }
@@ -268,6 +272,7 @@ class Rollback {
     let previous = -1;
     let gapBelow = 0;
     for (let j = 0; j <= i; j++) {
+      const v = base * rise[j]!;
       const hold = up * w[j + 1]! + down * w[j]!;
       const x = ds * v + off;
       const taken = x - hold > tieV * v + tieOff;
@@ -276,12 +281,11 @@ class Rollback {
       if (choice !== previous) {
         decisions.push(j, choice);
         // g = value(new choice) − value(old choice), at node j − 1 and here.
-        if (previous >= 0) this.placeEdge(m, i, previous, choice, v / step, v, choice === 0 ? -gapBelow : gapBelow, choice === 0 ? hold - x : x - hold);
+        if (previous >= 0) this.placeEdge(m, i, previous, choice, j, choice === 0 ? -gapBelow : gapBelow, choice === 0 ? hold - x : x - hold);
         else if (choice !== 0) this.boundaryLow![s * width + i] = -Infinity;
         previous = choice;
       }
       gapBelow = x - hold;
-      v *= step;
     }
     if (previous > 0) this.boundaryHigh![s * width + i] = Infinity;
     decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
@@ -305,11 +309,8 @@ class Rollback {
     const w = this.value[m]!;
     const from = ds < 0 ? 0 : this.edge[m]!;
     const to = ds < 0 ? this.edge[m]! : t + 1;
-    let v = plan.lowest[t]! * plan.rise[from]!;
-    for (let j = from; j < to; j++) {
-      w[j] = ds * v + off;
-      v *= this.ratio;
-    }
+    const base = plan.lowest[t]!;
+    for (let j = from; j < to; j++) w[j] = ds * (base * plan.rise[j]!) + off;
   }
 
   /**
@@ -322,7 +323,10 @@ class Rollback {
    *   0 past the point where x turns negative;
    * - values below `tiny` are flushed to 0, so the zero region grows as the value decays.
    * Only the nodes in between are computed. The numbers equal the full loop's (the tests compare
-   * the trimmed engine with quantlib.js at 1e-9 and with itself untrimmed).
+   * the trimmed engine with quantlib.js at 1e-9 and with itself untrimmed). With decisions, each
+   * skipped run is one decision run, and a change of choice at a run's end is located from the
+   * two nodes beside it exactly as the full loop does (x − continuation at both; the skipped
+   * node's continuation is computed from its children's closed form).
    */
   private trimmedSingle(m: number, i: number) {
     const plan = this.plan;
@@ -346,27 +350,41 @@ class Rollback {
     const tieOff = TIE * Math.abs(off);
     // The test x − continuation > TIE·(|Δscale|·V + |offset|) is linear in V on such a run.
     const staysExercised = (j: number) => ds * vAt(j) + off - (ds * G * vAt(j) + D * offNext) > tieV * vAt(j) + tieOff;
+    const edgeNext = this.edge[m]!;
+    const liveNext = this.live[m]!;
+    // A child's value at step i + 1 before this row overwrites it: implicit in the pure region.
+    const exercisedChild = (c: number) => ds * (plan.lowest[i + 1]! * rise[c]!) + offNext;
+    const decisions = this.decisions;
+    if (decisions) {
+      this.marked = -1;
+      decisions.rowFirst[m * width + i] = decisions.length;
+    }
 
     if (ds < 0) {
       // Exercised at the bottom, zero at the top.
-      const edgeNext = this.edge[m]!;
-      const liveNext = this.live[m]!;
       let pure = Math.max(0, edgeNext - 1);
       if (pure > 0 && !(staysExercised(0) && staysExercised(pure - 1))) pure = 0;
+      let gap = 0; // x − continuation at the node before the one being computed
+      if (decisions && pure > 0) {
+        this.mark(m, i, s, 0, 1, 0, 0);
+        const below = pure - 1;
+        gap = ds * vAt(below) + off - (up * exercisedChild(pure) + down * exercisedChild(below));
+      }
       if (pure === 0 && edgeNext > 0) this.materialize(m, i + 1);
       // The first computed node reads one child inside the pure region: write that child out.
-      else if (edgeNext > 0) w[edgeNext - 1] = ds * plan.lowest[i + 1]! * rise[edgeNext - 1]! + offNext;
+      else if (edgeNext > 0) w[edgeNext - 1] = exercisedChild(edgeNext - 1);
       let edge = pure;
       let streak = true;
       let last = pure - 1;
-      let v = vAt(pure);
       const end = Math.min(i, liveNext);
       let j = pure;
       for (; j <= end; j++) {
+        const v = base * rise[j]!;
         let hold = up * w[j + 1]! + down * w[j]!;
         if (hold < tiny && hold > -tiny) hold = 0;
         const x = ds * v + off;
-        if (x - hold > tieV * v + tieOff) {
+        const taken = x - hold > tieV * v + tieOff;
+        if (taken) {
           w[j] = x;
           if (streak) edge = j + 1;
           last = j;
@@ -375,47 +393,61 @@ class Rollback {
           streak = false;
           if (hold !== 0) last = j;
         }
-        v *= step;
+        if (decisions) {
+          if ((taken ? 1 : 0) !== this.marked) this.mark(m, i, s, j, taken ? 1 : 0, gap, x - hold);
+          gap = x - hold;
+        }
       }
-      // Above the live region the continuation is 0: exercised while x > 0, zero after.
+      // Above the live region the continuation is 0: exercised while x beats 0 (by more than TIE), zero after.
       for (; j <= i; j++) {
+        const v = base * rise[j]!;
         const x = ds * v + off;
-        if (!(x > tieV * v + tieOff)) break;
+        const taken = x > tieV * v + tieOff;
+        if (decisions && (taken ? 1 : 0) !== this.marked) this.mark(m, i, s, j, taken ? 1 : 0, gap, x);
+        if (!taken) break;
         w[j] = x;
         if (streak) edge = j + 1;
         last = j;
-        v *= step;
+        gap = x;
       }
       this.edge[m] = edge;
       this.live[m] = Math.max(last, edge - 1);
     } else {
       // Zero at the bottom, exercised at the top.
-      const edgeNext = this.edge[m]!;
-      const liveNext = this.live[m]!;
-      let pure = edgeNext;
+      // A row rolled in full at step i + 1 has its edge past that row's end (resetTrim).
+      let pure = Math.min(edgeNext, i + 1);
       if (pure <= i && !(staysExercised(pure) && staysExercised(i))) pure = i + 1;
+      // The pure region's first node, read before the children are overwritten (with decisions).
+      const pureGap = decisions && pure <= i ? ds * vAt(pure) + off - (up * exercisedChild(pure + 1) + down * exercisedChild(pure)) : 0;
       if (pure > i && edgeNext <= i + 1) {
         this.materialize(m, i + 1);
-      } else if (edgeNext <= i + 1) w[edgeNext] = ds * plan.lowest[i + 1]! * rise[edgeNext]! + offNext;
+      } else if (edgeNext <= i + 1) w[edgeNext] = exercisedChild(edgeNext);
       const start = Math.max(0, liveNext - 1);
       // Below the live region the continuation is 0: worth max(x, 0), x falling with j.
       let first = start;
-      let v = vAt(start - 1);
       for (let jj = start - 1; jj >= 0; jj--) {
+        const v = base * rise[jj]!;
         const x = ds * v + off;
         if (!(x > tieV * v + tieOff)) break;
         w[jj] = x;
         first = jj;
-        v /= step;
+      }
+      let gap = 0;
+      if (decisions) {
+        // Nodes below `first` continue (worth 0), those from it to `start` are exercised.
+        if (first > 0) this.mark(m, i, s, 0, 0, 0, 0);
+        if (first < start) this.mark(m, i, s, first, 1, ds * vAt(first - 1) + off, ds * vAt(first) + off);
+        gap = ds * vAt(start - 1) + off;
       }
       let firstNonZero = first < start ? first : -1;
       let streakStart = first < start ? first : -1;
-      v = vAt(start);
       for (let j = start; j < pure; j++) {
+        const v = base * rise[j]!;
         let hold = up * w[j + 1]! + down * w[j]!;
         if (hold < tiny && hold > -tiny) hold = 0;
         const x = ds * v + off;
-        if (x - hold > tieV * v + tieOff) {
+        const taken = x - hold > tieV * v + tieOff;
+        if (taken) {
           w[j] = x;
           if (streakStart < 0) streakStart = j;
           if (firstNonZero < 0) firstNonZero = j;
@@ -424,11 +456,33 @@ class Rollback {
           streakStart = -1;
           if (firstNonZero < 0 && hold !== 0) firstNonZero = j;
         }
-        v *= step;
+        if (decisions) {
+          if ((taken ? 1 : 0) !== this.marked) this.mark(m, i, s, j, taken ? 1 : 0, gap, x - hold);
+          gap = x - hold;
+        }
       }
+      if (decisions && pure <= i && this.marked !== 1) this.mark(m, i, s, pure, 1, gap, pureGap);
       this.edge[m] = streakStart >= 0 ? streakStart : pure;
       this.live[m] = firstNonZero >= 0 ? firstNonZero : Math.min(pure, i + 1);
     }
+    if (decisions) {
+      if (this.marked === -1) this.mark(m, i, s, 0, 0, 0, 0);
+      if (this.marked === 1) this.boundaryHigh![s * width + i] = Infinity;
+      const row = m * width + i;
+      decisions.rowCount[row] = decisions.length - decisions.rowFirst[row]!;
+    }
+  }
+
+  /**
+   * Records, in a trimmed row, that the choice becomes `choice` (0: continue, 1: the switch) at
+   * node j, where x − continuation is gapBelow at node j − 1 and gapHere at j; the change is
+   * located between the two nodes as in the full loop.
+   */
+  private mark(m: number, i: number, s: number, j: number, choice: number, gapBelow: number, gapHere: number) {
+    this.decisions!.push(j, choice);
+    if (this.marked >= 0) this.placeEdge(m, i, this.marked, choice, j, choice === 0 ? -gapBelow : gapBelow, choice === 0 ? -gapHere : gapHere);
+    else if (choice !== 0) this.boundaryLow![s * this.width + i] = -Infinity;
+    this.marked = choice;
   }
 
   /** Steps 1–3 in one loop for mode m at step i < N (modes rolled targets first, see `order`). */
@@ -452,40 +506,54 @@ class Rollback {
     const list = plan.byMode[m]!;
     const openList = this.openList;
     const cont = this.cont;
-    let v = plan.lowest[i]!;
-    const step = this.ratio;
+    const base = plan.lowest[i]!;
+    const rise = plan.rise;
     const s1 = list[openList[0]!]!;
     const ds1 = plan.deltaScale[s1]!;
     const off1 = plan.offset[s1 * width + i]!;
     const c1 = cont[plan.to[s1]!]!;
-    const s2 = list[openList[n >= 2 ? 1 : 0]!]!;
+    const s2 = list[openList[n >= 2 ? 1 : 0]!]!; // read only when n ≥ 2
     const ds2 = plan.deltaScale[s2]!;
     const off2 = plan.offset[s2 * width + i]!;
     const c2 = cont[plan.to[s2]!]!;
-    const tieV1 = TIE * Math.abs(ds1);
-    const tieOff1 = TIE * Math.abs(off1);
-    const tieV2 = TIE * Math.abs(ds2);
-    const tieOff2 = TIE * Math.abs(off2);
+    const tie = TIE;
+    const tieV1 = tie * Math.abs(ds1);
+    const tieOff1 = tie * Math.abs(off1);
+    const tieV2 = tie * Math.abs(ds2);
+    const tieOff2 = tie * Math.abs(off2);
+    if (n === 1) {
+      // One switch open (the common case): the same rule without the loop over the others.
+      for (let j = 0; j <= i; j++) {
+        const v = base * rise[j]!;
+        const hold = up * w[j + 1]! + down * w[j]!;
+        if (keep) c[j] = hold;
+        const c1j = c1[j]!;
+        const x1 = ds1 * v + off1 + c1j;
+        w[j] = x1 > hold && x1 - hold > tieV1 * v + tieOff1 + tie * Math.abs(c1j) ? x1 : hold;
+      }
+      return;
+    }
     for (let j = 0; j <= i; j++) {
+      const v = base * rise[j]!;
       const hold = up * w[j + 1]! + down * w[j]!;
       if (keep) c[j] = hold;
       let best = hold;
-      const x1 = ds1 * v + off1 + c1[j]!;
-      if (x1 - hold > tieV1 * v + tieOff1 + TIE * Math.abs(c1[j]!)) best = x1;
-      if (n >= 2) {
-        const x2 = ds2 * v + off2 + c2[j]!;
-        if (x2 > best && x2 - hold > tieV2 * v + tieOff2 + TIE * Math.abs(c2[j]!)) best = x2;
-        for (let q = 2; q < n; q++) {
-          const s = list[openList[q]!]!;
-          const dsq = plan.deltaScale[s]!;
-          const offq = plan.offset[s * width + i]!;
-          const cq = cont[plan.to[s]!]![j]!;
-          const x = dsq * v + offq + cq;
-          if (x > best && x - hold > TIE * (Math.abs(dsq) * v + Math.abs(offq) + Math.abs(cq))) best = x;
-        }
+      const c1j = c1[j]!;
+      const x1 = ds1 * v + off1 + c1j;
+      // The margin is computed only where a switch beats continuing at all (rare in most rows).
+      if (x1 > hold && x1 - hold > tieV1 * v + tieOff1 + tie * Math.abs(c1j)) best = x1;
+      const c2j = c2[j]!;
+      const x2 = ds2 * v + off2 + c2j;
+      if (x2 > best && x2 - hold > tieV2 * v + tieOff2 + tie * Math.abs(c2j)) best = x2;
+      for (let q = 2; q < n; q++) {
+        const s = list[openList[q]!]!;
+        const dsq = plan.deltaScale[s]!;
+        const offq = plan.offset[s * width + i]!;
+        const cq = cont[plan.to[s]!]![j]!;
+        const x = dsq * v + offq + cq;
+        if (x > best && x - hold > tie * (Math.abs(dsq) * v + Math.abs(offq) + Math.abs(cq))) best = x;
       }
       w[j] = best;
-      v *= step;
     }
   }
 
@@ -518,8 +586,7 @@ class Rollback {
     if (decisions) decisions.rowFirst[row] = decisions.length;
     let previous = -1;
     const base = plan.lowest[i]!;
-    let v = base;
-    const step = this.ratio;
+    const rise = plan.rise;
     if (n === 1) {
       // One switch open (the common case): the same rule with its terms read once.
       const k = openList[0]!;
@@ -530,6 +597,7 @@ class Rollback {
       const tieV = TIE * Math.abs(ds);
       const tieOff = TIE * Math.abs(off);
       for (let j = 0; j <= i; j++) {
+        const v = base * rise[j]!;
         const hold = c[j]!;
         const x = ds * v + off + ct[j]!;
         const taken = x - hold > tieV * v + tieOff + TIE * Math.abs(ct[j]!);
@@ -537,11 +605,10 @@ class Rollback {
         w[j] = taken ? x : hold;
         if (decisions && choice !== previous) {
           decisions.push(j, choice);
-          if (previous >= 0) this.recordEdge(m, i, j, previous, choice, v);
+          if (previous >= 0) this.recordEdge(m, i, j, previous, choice);
           else if (choice !== 0) this.boundaryLow![s * width + i] = -Infinity;
           previous = choice;
         }
-        v *= step;
       }
       if (decisions) {
         if (previous > 0) this.boundaryHigh![s * width + i] = Infinity;
@@ -550,6 +617,7 @@ class Rollback {
       return;
     }
     for (let j = 0; j <= i; j++) {
+      const v = base * rise[j]!;
       const hold = c[j]!;
       let best = hold;
       let choice = 0;
@@ -568,11 +636,10 @@ class Rollback {
       w[j] = best;
       if (decisions && choice !== previous) {
         decisions.push(j, choice);
-        if (previous >= 0) this.recordEdge(m, i, j, previous, choice, v);
+        if (previous >= 0) this.recordEdge(m, i, j, previous, choice);
         else if (choice !== 0) this.boundaryLow![list[choice - 1]! * width + i] = -Infinity;
         previous = choice;
       }
-      v *= step;
     }
     if (decisions) {
       if (previous > 0) this.boundaryHigh![list[previous - 1]! * width + i] = Infinity;
@@ -580,21 +647,24 @@ class Rollback {
     }
   }
 
-  /** The choice changes from `before` (up to node j − 1) to `after` (from node j, value v) at step i. */
-  private recordEdge(m: number, i: number, j: number, before: number, after: number, v: number) {
-    const vBelow = v / this.ratio;
+  /** The choice changes from `before` (up to node j − 1) to `after` (from node j) at step i. */
+  private recordEdge(m: number, i: number, j: number, before: number, after: number) {
+    const v = this.plan.lowest[i]! * this.plan.rise[j]!;
+    const vBelow = this.plan.lowest[i]! * this.plan.rise[j - 1]!;
     const gBelow = this.choiceValue(m, i, j - 1, after, vBelow) - this.choiceValue(m, i, j - 1, before, vBelow);
     const gHere = this.choiceValue(m, i, j, after, v) - this.choiceValue(m, i, j, before, v);
-    this.placeEdge(m, i, before, after, vBelow, v, gBelow, gHere);
+    this.placeEdge(m, i, before, after, j, gBelow, gHere);
   }
 
   /**
-   * Locates a change of choice between two adjacent nodes (project values vBelow < v) where
-   * g = value(after) − value(before) is gBelow ≤ 0 and gHere ≥ 0, by linear interpolation of g:
-   * the located value closes `before`'s exercise region from above and opens `after`'s from
-   * below. The lowest opening and the highest closing of each switch's row are kept.
+   * Locates a change of choice between nodes j − 1 and j of step i where g = value(after) −
+   * value(before) is gBelow ≤ 0 and gHere ≥ 0, by linear interpolation of g in V: the located
+   * value closes `before`'s exercise region from above and opens `after`'s from below. The
+   * lowest opening and the highest closing of each switch's row are kept.
    */
-  private placeEdge(m: number, i: number, before: number, after: number, vBelow: number, v: number, gBelow: number, gHere: number) {
+  private placeEdge(m: number, i: number, before: number, after: number, j: number, gBelow: number, gHere: number) {
+    const v = this.plan.lowest[i]! * this.plan.rise[j]!;
+    const vBelow = this.plan.lowest[i]! * this.plan.rise[j - 1]!;
     const share = gHere > gBelow ? -gBelow / (gHere - gBelow) : 0.5;
     const edge = vBelow + Math.min(1, Math.max(0, share)) * (v - vBelow);
     const list = this.plan.byMode[m]!;
