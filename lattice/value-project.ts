@@ -6,6 +6,7 @@
 import type { CompiledModel } from './compiled';
 import { prepareModel } from './check-model';
 import { ModelError } from './errors';
+import { assertFinite } from './finite';
 import { MAX_REQUEST_CELLS, MAX_STEPS, NODE_BUDGET } from './limits';
 import type { Convergence, Sensitivity, ValuationResult } from './result';
 import type { Cost, ExerciseWindow, ProjectModel } from './schema';
@@ -187,41 +188,6 @@ function sensitivitiesOf(model: ProjectModel, compiled: CompiledModel): Sensitiv
     low: { input: bump.low, expandedNpv: expandedNpvOf(bump.apply(model, bump.low)) },
     high: { input: bump.high, expandedNpv: expandedNpvOf(bump.apply(model, bump.high)) },
   }));
-}
-
-/**
- * Refuses to return a result holding NaN or ±Infinity anywhere (errorEstimate may be NaN). The
- * path of a bad number is only spelled out when one is found.
- */
-function assertFinite(root: unknown): void {
-  const values: unknown[] = [root];
-  const parents: number[] = [-1];
-  const keys: string[] = [''];
-  const pathOf = (k: number): string => {
-    const parts: string[] = [];
-    for (let at = k; at > 0; at = parents[at]!) parts.unshift(keys[at]!);
-    return parts.join('').replace(/^\./, '');
-  };
-  for (let k = 0; k < values.length; k++) {
-    const value = values[k];
-    if (typeof value === 'number') {
-      if (Number.isFinite(value) || (keys[k] === '.errorEstimate' && Number.isNaN(value))) continue;
-      throw new ModelError([{ field: 'model', message: `model produces a non-finite ${pathOf(k)}; check the magnitudes of its inputs` }]);
-    }
-    if (Array.isArray(value)) {
-      for (let j = 0; j < value.length; j++) {
-        values.push(value[j]);
-        parents.push(k);
-        keys.push(`[${j}]`);
-      }
-    } else if (value !== null && typeof value === 'object') {
-      for (const key in value) {
-        values.push((value as Record<string, unknown>)[key]);
-        parents.push(k);
-        keys.push(`.${key}`);
-      }
-    }
-  }
 }
 
 /**

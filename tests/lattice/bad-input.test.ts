@@ -7,6 +7,7 @@ import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { ModelError, valueProject } from '@/lattice';
+import { assertFinite, nonFinitePath } from '@/lattice/finite';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
 const ok = {
@@ -238,5 +239,39 @@ describe('the work of a whole valuation is priced before any is done (docs/engin
       ],
     });
     expect(r.sensitivities).not.toBeNull();
+  });
+});
+
+describe('no NaN or Infinity leaves the engine (docs/engine.md §8)', () => {
+  // Inputs are checked first, so a real result never trips this last check; it is checked here on
+  // shapes like a result's, one bad number each.
+  const result = (critical: number, errorEstimate: number) => ({
+    value: 1,
+    convergence: { points: [{ steps: 10, expandedNpv: 2 }], errorEstimate },
+    rights: [
+      { id: 'a', boundary: [] },
+      {
+        id: 'b',
+        boundary: [
+          { t: 0.5, critical: 3, low: null },
+          { t: 1, critical, low: null },
+        ],
+      },
+    ],
+  });
+
+  it('names the path of the first bad number', () => {
+    expect(nonFinitePath(result(4, 0.1), '')).toBeNull();
+    expect(nonFinitePath(result(Infinity, 0.1), '')).toBe('.rights[1].boundary[1].critical');
+    expect(nonFinitePath(result(NaN, 0.1), '')).toBe('.rights[1].boundary[1].critical');
+    expect(() => assertFinite(result(-Infinity, 0.1))).toThrow(
+      'model produces a non-finite rights[1].boundary[1].critical; check the magnitudes of its inputs',
+    );
+    expect(() => assertFinite([1, [2, NaN]])).toThrow('non-finite [1][1];');
+  });
+
+  it('lets only the error estimate be NaN (no estimate), never infinite', () => {
+    expect(nonFinitePath(result(4, NaN), '')).toBeNull();
+    expect(nonFinitePath(result(4, Infinity), '')).toBe('.convergence.errorEstimate');
   });
 });
