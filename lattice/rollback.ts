@@ -26,8 +26,8 @@
  * The hot loops allocate nothing, call no closure per node and never call Math.pow: V at node
  * (i, j) is lowest[i]·rise[j], one product of two tables, so every path computes the same bits
  * for the same node (a running product drifts in its last bits with j, and a row that starts
- * part-way would differ from one that starts at node 0). The work lives in methods of one class (stable call
- * targets for the JIT) that copy what they read into locals first.
+ * part-way would differ from one that starts at node 0). The work lives in methods of one class
+ * (stable call targets for the JIT) that copy what they read into locals first.
  */
 import { DecisionRuns } from './decision-runs';
 import type { LatticePlan } from './plan';
@@ -540,7 +540,7 @@ class Rollback {
       let best = hold;
       const c1j = c1[j]!;
       const x1 = ds1 * v + off1 + c1j;
-      // The margin is computed only where a switch beats continuing at all (rare in most rows).
+      // The margin is computed only where the switch beats continuing at all.
       if (x1 > hold && x1 - hold > tieV1 * v + tieOff1 + tie * Math.abs(c1j)) best = x1;
       const c2j = c2[j]!;
       const x2 = ds2 * v + off2 + c2j;
