@@ -250,6 +250,20 @@ describe('following an approved case', () => {
     expect((await viewer.get(`/api/v1/cases/${draft.caseId}/watch`)).status()).toBe(409);
   }, 120_000);
 
+  it('shows a case never approved as nothing to follow, without asking for its watch (a 409 the console would show)', async () => {
+    const draft = await demoCase('Staged pilot line', 'Base case');
+    const { page } = await signedInPage('analyst@kestrelbay.example');
+    const asked: string[] = [];
+    const errors: string[] = [];
+    page.on('request', (r) => r.url().endsWith('/watch') && asked.push(r.url()));
+    page.on('console', (m) => m.type() === 'error' && errors.push(m.text()));
+    await page.goto(draft.url);
+    await page.getByRole('tab', { name: 'Watch' }).click();
+    await expect.poll(() => page.getByText('Nothing to follow yet').isVisible(), { timeout: 60_000 }).toBe(true);
+    expect(asked).toEqual([]);
+    expect(errors).toEqual([]);
+  }, 120_000);
+
   it('records a value in the browser, typed key by key, and shows the status and the chart', async () => {
     const { page } = await signedInPage('analyst@kestrelbay.example');
     await page.goto(plant.url);

@@ -20,6 +20,7 @@ import { distanceWords, statusWords } from '@/lib/watch/status-words';
 import { WatchAlerts, type CaseAlert } from './watch-alerts';
 import { WatchDecisions, type RecordedDecision } from './watch-decisions';
 import { WatchImport } from './watch-import';
+import type { Snapshot } from './review-history';
 
 interface Watch {
   followed: { caseVersion: number; valuationDate: string; horizon: number; value: number; replaces: { caseVersion: number; approvedOn: string } | null };
@@ -59,13 +60,20 @@ const today = () => dateOf(new Date());
 /** Following the approved version: the project's value as observed, and where each right stands. */
 export function WatchPanel({ caseId, currency, canRecord }: { caseId: string; currency: string; canRecord: boolean }) {
   const toast = useToast();
-  const watch = useSWR<Watch>(`/api/v1/cases/${caseId}/watch`, getJson, { revalidateOnFocus: false });
+  // The review history (the Review tab's own request, shared through SWR's cache) says whether a
+  // version was ever approved; only then is there anything to follow, so a case never approved
+  // shows its empty state without asking for the watch and getting a 409 in the console.
+  const history = useSWR<{ snapshots: Pick<Snapshot, 'status'>[] }>(`/api/v1/cases/${caseId}/snapshots`, getJson);
+  const approved = history.data?.snapshots.some((s) => s.status === 'approved') ?? false;
+  const watch = useSWR<Watch>(approved ? `/api/v1/cases/${caseId}/watch` : null, getJson, { revalidateOnFocus: false });
   const [form, setForm] = useState({ date: today(), value: '', source: '', note: '' });
   const [problems, setProblems] = useState<Record<string, string>>({});
   const [busy, setBusy] = useState(false);
 
-  if (watch.isLoading) return <LoadingBlock label="Loading where the rights stand" lines={5} />;
-  if (watch.error instanceof ApiError && watch.error.status === 409)
+  if (history.isLoading || watch.isLoading) return <LoadingBlock label="Loading where the rights stand" lines={5} />;
+  if (history.error) return <LoadError message={history.error.message} onRetry={() => history.mutate()} />;
+  // The watch answers 409 when it finds no approved version: the same empty state.
+  if (!approved || (watch.error instanceof ApiError && watch.error.status === 409))
     return (
       <EmptyState title="Nothing to follow yet">
         Watching starts when a version is approved: from then on, record the project&rsquo;s value as it becomes known and Leeway says where each right stands.
