@@ -2,7 +2,7 @@
 
 import { SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
 import { layoutNpvComparison, type NpvPair } from '@/lib/charts/npv-comparison';
-import { wrapLabel } from '@/lib/charts/wrap-label';
+import { textWidth, wrapLabel } from '@/lib/charts/wrap-label';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
@@ -12,9 +12,13 @@ import { palette } from '@/lib/palette';
  * the bar between them is the option premium. Shapes and the legend carry the meaning, not colour.
  */
 export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[]; currency?: string; title: string }) {
-  const { ref, width } = useWidth<HTMLDivElement>();
-  const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(260, width * 0.32), tickCharWidth: SCREEN_LABEL_CHAR });
-  // About 7 px a character at the body size: labels never run off the left edge.
+  // Its own width down to 240 px: with labels above the rows it fits a 320 px phone's card.
+  const { ref, width } = useWidth<HTMLDivElement>(720, 240);
+  // Below 480 px (a phone) the labels go above their rows; wider, left of them, and wrapped to
+  // the label column, so labels never run off the left edge.
+  const labelsAbove = width < 480;
+  const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(260, width * 0.32), tickCharWidth: SCREEN_LABEL_CHAR, labelsAbove });
+  const figures = (r: NpvPair) => `${formatMoney(r.staticNpv)} → ${formatMoney(r.expandedNpv)}`;
   return (
     <figure ref={ref} className="w-full">
       <figcaption className="mb-2 flex flex-wrap items-center gap-x-6 gap-y-1 text-caption text-ink-soft">
@@ -56,19 +60,32 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
         />
         {layout.rows.map((r) => (
           <g key={r.id}>
-            <text x={layout.margin.left - 12} y={r.y} textAnchor="end" className="fill-ink text-body">
-              {wrapLabel(r.label, layout.margin.left - 16, 15, 2).map((line, k, lines) => (
-                <tspan key={k} x={layout.margin.left - 12} dy={k === 0 ? `${0.35 - (lines.length - 1) * 0.6}em` : '1.2em'}>
-                  {line}
-                </tspan>
-              ))}
-            </text>
+            {layout.labelsAbove ? (
+              <>
+                <text x={layout.margin.left} y={r.labelY} dy="0.35em" className="fill-ink text-body">
+                  {wrapLabel(r.label, layout.width - layout.margin.left - layout.margin.right - textWidth(figures(r), 12) - 12, 15, 1)[0]}
+                </text>
+                <text x={layout.width - layout.margin.right} y={r.labelY} dy="0.35em" textAnchor="end" className="fill-ink-soft text-caption figures">
+                  {figures(r)}
+                </text>
+              </>
+            ) : (
+              <text x={layout.margin.left - 12} y={r.y} textAnchor="end" className="fill-ink text-body">
+                {wrapLabel(r.label, layout.margin.left - 16, 15, 2).map((line, k, lines) => (
+                  <tspan key={k} x={layout.margin.left - 12} dy={k === 0 ? `${0.35 - (lines.length - 1) * 0.6}em` : '1.2em'}>
+                    {line}
+                  </tspan>
+                ))}
+              </text>
+            )}
             <line x1={r.staticX} x2={r.expandedX} y1={r.y} y2={r.y} stroke={palette.tide[300]} strokeWidth="6" strokeLinecap="round" />
             <circle cx={r.staticX} cy={r.y} r="6" fill="white" stroke={palette.ink.soft} strokeWidth="2" />
             <circle cx={r.expandedX} cy={r.y} r="6.5" fill={palette.tide[500]} />
-            <text x={Math.max(r.staticX, r.expandedX) + 12} y={r.y} dy="0.35em" className="fill-ink-soft text-caption figures">
-              {formatMoney(r.staticNpv)} → {formatMoney(r.expandedNpv)}
-            </text>
+            {layout.labelsAbove ? null : (
+              <text x={Math.max(r.staticX, r.expandedX) + 12} y={r.y} dy="0.35em" className="fill-ink-soft text-caption figures">
+                {figures(r)}
+              </text>
+            )}
           </g>
         ))}
       </svg>

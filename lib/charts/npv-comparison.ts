@@ -2,6 +2,11 @@
  * Geometry of the "NPV with and without flexibility" chart: one row per item, a hollow mark at
  * the static NPV and a filled mark at the expanded NPV joined by a bar (the option premium),
  * and a zero line. Pure (d3-scale only), so the web chart and the PDF chart draw the same thing.
+ *
+ * Labels sit left of their row, with the figures right of the marks; on a narrow screen
+ * (`labelsAbove`) each row's label and figures go on a line above its marks instead, so the
+ * names are not cut to a few letters and the scale gets the whole width (at 375 px a label
+ * column and a figures margin left the marks 115 px).
  */
 import { scaleBand, scaleLinear } from 'd3';
 import { axisTicks } from './axis';
@@ -20,17 +25,21 @@ export interface NpvComparisonLayout {
   x: (value: number) => number;
   ticks: { value: number; x: number; label: string }[];
   zeroX: number;
-  rows: (NpvPair & { y: number; staticX: number; expandedX: number })[];
+  /** Per row: `y` is the marks' line, `labelY` the label's (the same line unless labels sit above). */
+  rows: (NpvPair & { y: number; labelY: number; staticX: number; expandedX: number })[];
   rowHeight: number;
+  labelsAbove: boolean;
 }
 
 export function layoutNpvComparison(
   items: NpvPair[],
   width: number,
-  options: { rowHeight?: number; labelWidth?: number; tickCharWidth?: number } = {},
+  options: { rowHeight?: number; labelWidth?: number; tickCharWidth?: number; labelsAbove?: boolean } = {},
 ): NpvComparisonLayout {
-  const rowHeight = options.rowHeight ?? 44;
-  const margin = { top: 12, right: 130, bottom: 32, left: options.labelWidth ?? 200 };
+  const labelsAbove = options.labelsAbove ?? false;
+  const rowHeight = options.rowHeight ?? (labelsAbove ? 56 : 44);
+  // Above: room for a mark's radius (7 px) and a little on each side.
+  const margin = labelsAbove ? { top: 12, right: 12, bottom: 32, left: 12 } : { top: 12, right: 130, bottom: 32, left: options.labelWidth ?? 200 };
   const height = margin.top + margin.bottom + rowHeight * Math.max(items.length, 1);
   const values = items.flatMap((i) => [i.staticNpv, i.expandedNpv, 0]);
   const lo = Math.min(...values);
@@ -52,6 +61,12 @@ export function layoutNpvComparison(
     ticks: axisTicks(x, 6, { charWidth: options.tickCharWidth }).map((t) => ({ value: t.value, x: t.at, label: t.label })),
     zeroX: x(0),
     rowHeight,
-    rows: items.map((i) => ({ ...i, y: (y(i.id) ?? 0) + y.bandwidth() / 2, staticX: x(i.staticNpv), expandedX: x(i.expandedNpv) })),
+    labelsAbove,
+    rows: items.map((i) => {
+      const middle = (y(i.id) ?? 0) + y.bandwidth() / 2;
+      // Above: the label's line and the marks' line share the row, 24 px apart.
+      const [labelY, marksY] = labelsAbove ? [middle - 12, middle + 12] : [middle, middle];
+      return { ...i, y: marksY, labelY, staticX: x(i.staticNpv), expandedX: x(i.expandedNpv) };
+    }),
   };
 }

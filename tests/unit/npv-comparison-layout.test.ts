@@ -1,0 +1,40 @@
+/**
+ * The NPV comparison chart on a phone: with labels above their rows, the marks get the width a
+ * label column and a figures margin used to take (at 375 px they had 115 px and the demo's names
+ * were cut to "Cold-stor… hub"), and every mark stays inside the drawing. Figures invented.
+ */
+import { describe, expect, it } from 'vitest';
+import { layoutNpvComparison, type NpvPair } from '@/lib/charts/npv-comparison';
+import { SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
+
+const items: NpvPair[] = [
+  { id: 'a', label: 'Cold-storage hub', staticNpv: -6, expandedNpv: 6 },
+  { id: 'b', label: 'Older extrusion line', staticNpv: 15.4, expandedNpv: 18.9 },
+  { id: 'c', label: 'Phased bio-resin plant', staticNpv: -11, expandedNpv: 20.1 },
+];
+
+describe('the NPV comparison layout', () => {
+  it('on a 375 px screen gives the marks all but 24 px of the width, each row its label line above its marks', () => {
+    const layout = layoutNpvComparison(items, 375, { tickCharWidth: SCREEN_LABEL_CHAR, labelsAbove: true });
+    expect([layout.margin.left, layout.margin.right]).toEqual([12, 12]);
+    // The scale runs from margin to margin: the lowest and highest ticks lie inside it.
+    expect(layout.ticks[0]!.x).toBeGreaterThanOrEqual(12);
+    expect(layout.ticks.at(-1)!.x).toBeLessThanOrEqual(375 - 12);
+    for (const r of layout.rows) {
+      for (const x of [r.staticX, r.expandedX]) expect(x >= 12 && x <= 375 - 12).toBe(true);
+      // The label's line is above the marks' line and inside the drawing.
+      expect(r.labelY).toBeLessThan(r.y - 16);
+      expect(r.labelY).toBeGreaterThan(8);
+      expect(r.y).toBeLessThan(layout.height - layout.margin.bottom);
+    }
+    // Rows do not overlap: each label line is below the previous row's marks.
+    for (let k = 1; k < layout.rows.length; k++) expect(layout.rows[k]!.labelY).toBeGreaterThan(layout.rows[k - 1]!.y + 12);
+  });
+
+  it('wider, keeps labels beside their rows on the same line (the board pack and the desktop)', () => {
+    const layout = layoutNpvComparison(items, 900, { labelWidth: 260 });
+    expect(layout.labelsAbove).toBe(false);
+    for (const r of layout.rows) expect(r.labelY).toBe(r.y);
+    expect([layout.margin.left, layout.margin.right]).toEqual([260, 130]);
+  });
+});
