@@ -12,8 +12,7 @@ import { palette } from '@/lib/palette';
  * the bar between them is the option premium. Shapes and the legend carry the meaning, not colour.
  */
 export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[]; currency?: string; title: string }) {
-  // Its own width down to 240 px: with labels above the rows it fits a 320 px phone's card.
-  const { ref, width } = useWidth<HTMLDivElement>(720, 240);
+  const { ref, width } = useWidth<HTMLDivElement>();
   // Below 480 px (a phone) the labels go above their rows; wider, left of them, and wrapped to
   // the label column, so labels never run off the left edge.
   const labelsAbove = width < 480;

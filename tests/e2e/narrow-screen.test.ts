@@ -79,6 +79,26 @@ describe('on a phone-sized screen', () => {
     await context.close();
   }, 300_000);
 
+  it('at 360 px every chart stays inside its card (they were held at 320 px wide and ran 10 px past it)', async () => {
+    const { context, page } = await signedInPage('executive@kestrelbay.example', { viewport: { width: 360, height: 800 } });
+    for (const address of ['/portfolio', `${caseUrl}?tab=results`, `${caseUrl}?tab=watch`]) {
+      await page.goto(address);
+      await expect.poll(() => page.locator('svg[role="img"]:visible').count(), { timeout: 60_000, interval: 1_000 }).toBeGreaterThan(0);
+      await expect.poll(() => page.locator('[aria-busy="true"]').count(), { timeout: 45_000, interval: 1_000 }).toBe(0);
+      const outside = await page.evaluate(() =>
+        [...document.querySelectorAll('svg[role="img"]')]
+          .filter((svg) => svg.getBoundingClientRect().width > 0)
+          .map((svg) => ({
+            chart: svg.getAttribute('aria-label')!.slice(0, 40),
+            past: svg.getBoundingClientRect().right - svg.closest('section')!.getBoundingClientRect().right,
+          }))
+          .filter((c) => c.past > 0),
+      );
+      expect({ address, outside }).toEqual({ address, outside: [] });
+    }
+    await context.close();
+  }, 300_000);
+
   it("the admin's pages fit the width", async () => {
     const { context, page } = await signedInPage('admin@kestrelbay.example', { viewport: phone });
     await expectFits(page, ['/settings', '/settings/members', '/settings/api-keys', '/api-reference']);
