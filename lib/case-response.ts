@@ -30,6 +30,16 @@ export function presentCase(c: Case) {
   };
 }
 
+/** A project's cases, each with its latest run's figures, as `GET /api/v1/projects/{id}/cases` answers. */
+export function presentProjectCases<Latest>(list: { stored: Case; latest: Latest }[]) {
+  return { cases: list.map((c) => ({ ...presentCase(c.stored), latest: c.latest })) };
+}
+
+/** The same as JSON text would carry it (dates as ISO text), for a page that hands it to the case table. */
+export function projectCasesAsJson<Latest>(list: { stored: Case; latest: Latest }[]): { cases: CaseJson[] } {
+  return JSON.parse(JSON.stringify(presentProjectCases(list))) as { cases: CaseJson[] };
+}
+
 /** A case as the API's JSON carries it (dates as ISO text), for a page that hands it to the editor. */
 export function caseAsJson(c: Case): CaseJson {
   return JSON.parse(JSON.stringify(presentCase(c))) as CaseJson;

@@ -17,19 +17,24 @@ afterAll(async () => {
   await db.destroy();
 });
 
-// The buttons in the server's HTML of a project's page (its case table comes with the script).
-const buttons = ['Rename…', 'Archive…', 'Delete…', 'Sign out'];
+// The buttons in the server's HTML of a project's page, its case table's included (the table
+// came only with the script before 2026-12-05).
+const buttons = ['Rename…', 'Archive…', 'Delete…', 'Sign out', 'New case', 'Duplicate Base case', 'Delete Base case'];
 
 const enabled = (page: Page) => Promise.all(buttons.map((name) => page.getByRole('button', { name, exact: true }).isEnabled()));
 
 describe('before the page’s script has run', () => {
-  it('a project’s buttons are disabled, and work once the script has run', async () => {
+  it('a project’s cases are there and its buttons disabled, and they work once the script has run', async () => {
     const { projectId } = await demoCase('Older extrusion line', 'Base case');
     const { context, page } = await signedInPage('analyst@kestrelbay.example');
     const scriptless = await newContext({ javaScriptEnabled: false, storageState: await context.storageState() });
     const before = await scriptless.newPage();
     await before.goto(`/projects/${projectId}`);
     expect(await enabled(before)).toEqual(buttons.map(() => false));
+    // The cases and their figures are in the server's HTML: a person sees them before the script.
+    const table = before.getByRole('table', { name: 'Cases of this project' });
+    expect(await table.getByRole('link', { name: 'Base case', exact: true }).isVisible()).toBe(true);
+    expect(await table.getByRole('cell', { name: /^EUR / }).count()).toBeGreaterThanOrEqual(3);
     await scriptless.close();
 
     await page.goto(`/projects/${projectId}`);

@@ -5,6 +5,8 @@ import { PageHeader } from '@/components/page-header';
 import { ValuationCaution } from '@/components/valuation-caution';
 import { guardPage, orNotFound } from '@/lib/page-guard';
 import { roleAllows } from '@/lib/permissions';
+import { projectCasesAsJson } from '@/lib/case-response';
+import { listProjectCases } from '@/lib/cases/service';
 import { readProject } from '@/lib/projects/service';
 import { readSettings } from '@/lib/settings/service';
 import { ActivityList } from './_components/activity-list';
@@ -17,7 +19,9 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   const member = await guardPage({ project: ['read'] });
   if (member === 'forbidden') return <Forbidden />;
   const { projectId } = await params;
-  const [project, settings] = await Promise.all([orNotFound(readProject(member, projectId)), readSettings(member.orgId)]);
+  const project = await orNotFound(readProject(member, projectId));
+  // The cases come in the page's HTML, so the table is there before the script (and without it).
+  const [cases, settings] = await Promise.all([listProjectCases(member, projectId), readSettings(member.orgId)]);
   return (
     <>
       <nav aria-label="Breadcrumb" className="mb-2 text-caption text-ink-muted">
@@ -49,6 +53,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           <CaseTable
             projectId={project.id}
             currency={project.currency}
+            initial={projectCasesAsJson(cases)}
             canEdit={roleAllows(member.role, { case: ['create', 'delete'] })}
             defaults={{ wacc: settings.wacc, riskFreeRate: settings.risk_free_rate }}
           />

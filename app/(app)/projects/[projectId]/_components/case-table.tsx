@@ -24,11 +24,20 @@ import { starterCase } from '@/lib/starter-case';
 
 type Pending = { kind: 'new' } | { kind: 'duplicate'; source: CaseJson } | { kind: 'delete'; target: CaseJson } | null;
 
-/** A project's cases with their latest figures; analysts add, duplicate and delete cases here. */
-export function CaseTable(props: { projectId: string; currency: string; canEdit: boolean; defaults: { wacc: number; riskFreeRate: number } }) {
+/**
+ * A project's cases with their latest figures; analysts add, duplicate and delete cases here.
+ * `initial` is the list as the page rendered it, shown at once; it is fetched again after a change.
+ */
+export function CaseTable(props: {
+  projectId: string;
+  currency: string;
+  canEdit: boolean;
+  defaults: { wacc: number; riskFreeRate: number };
+  initial: { cases: CaseJson[] };
+}) {
   const { projectId, currency, canEdit } = props;
   const url = `/api/v1/projects/${projectId}/cases`;
-  const { data, error, isLoading, mutate } = useSWR<{ cases: CaseJson[] }>(url, getJson);
+  const { data, error, isLoading, mutate } = useSWR<{ cases: CaseJson[] }>(url, getJson, { fallbackData: props.initial, revalidateOnMount: false });
   const [pending, setPending] = useState<Pending>(null);
   const [name, setName] = useState('');
   const [problem, setProblem] = useState<string | null>(null);

@@ -2,17 +2,17 @@
 import { NextResponse } from 'next/server';
 import { withAuth } from '@/lib/api';
 import { operations } from '@/lib/openapi/operations';
-import { presentCase } from '@/lib/case-response';
+import { presentCase, presentProjectCases } from '@/lib/case-response';
 import { createCase, listProjectCases } from '@/lib/cases/service';
 
 export const dynamic = 'force-dynamic';
 
 type Params = { projectId: string };
 
-export const GET = withAuth<Params>(async ({ member, params }) => {
-  const cases = await listProjectCases(member, params.projectId);
-  return NextResponse.json({ cases: cases.map((c) => ({ ...presentCase(c.stored), latest: c.latest })) });
-}, operations.listProjectCases);
+export const GET = withAuth<Params>(
+  async ({ member, params }) => NextResponse.json(presentProjectCases(await listProjectCases(member, params.projectId))),
+  operations.listProjectCases,
+);
 
 export const POST = withAuth<Params, typeof operations.createCase.body>(
   async ({ member, params, body }) => NextResponse.json({ case: presentCase(await createCase(member, params.projectId, body)) }, { status: 201 }),
