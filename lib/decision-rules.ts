@@ -89,7 +89,35 @@ function ruleFor(boundary: BoundaryPoint[], kind: string, action: string, curren
       ? formatMoney(first.threshold, currency)
       : `${formatMoney(first.threshold, currency)} (year ${years(first.t)}) to ${formatMoney(last.threshold, currency)} (year ${years(last.t)})`;
   const band = side === 'between' ? ', up to a ceiling above which it waits' : '';
-  return { side, points, first, last, text: `${action} ${span(first.t, last.t)} when the project ${comparison} ${level}${band}.` };
+  return {
+    side,
+    points,
+    first,
+    last,
+    text: `${action} ${span(first.t, last.t)} when the project ${comparison} ${level}${band}${inBetween(points, currency)}.`,
+  };
+}
+
+/**
+ * The threshold's lowest or highest value when it lies well outside the range its first and last
+ * values span: a rule read from its ends alone would hide it. The demo plant's sale is worth
+ * taking below 12.8 in year 2.2 and 35.0 in year 7, but below 66.4 just before its salvage falls
+ * from 70 to 35 in year 6, and only below 1.7 just after. "Well outside" is more than 5 % of the
+ * larger end: more than the boundary's own error on a coarse lattice (about 3 % at 100 steps,
+ * docs/engine.md §5), so the wobble of a coarse lattice is not read as a turn of the rule.
+ */
+function inBetween(points: { t: number; threshold: number }[], currency?: string): string {
+  const ends = [points[0]!.threshold, points.at(-1)!.threshold];
+  const margin = 0.05 * Math.max(1, ...ends.map(Math.abs));
+  const lowest = points.reduce((a, b) => (b.threshold < a.threshold ? b : a));
+  const highest = points.reduce((a, b) => (b.threshold > a.threshold ? b : a));
+  const low = lowest.threshold < Math.min(...ends) - margin;
+  const high = highest.threshold > Math.max(...ends) + margin;
+  const at = (p: { t: number; threshold: number }) => `${formatMoney(p.threshold, currency)} (year ${years(p.t)})`;
+  if (low && high) return `; in between, the threshold ranges from ${at(lowest)} to ${at(highest)}`;
+  if (high) return `; in between, the threshold rises to ${at(highest)}`;
+  if (low) return `; in between, the threshold falls to ${at(lowest)}`;
+  return '';
 }
 
 /** The rule and then each decision it leads to: a line each on screen, */

@@ -86,6 +86,25 @@ describe('decision rules', () => {
     );
   });
 
+  it('names a threshold in between that lies well outside the range of the first and last', () => {
+    // A sale whose salvage steps down (95, then 70 from year 4, 35 from year 6): just before each
+    // fall the sale is taken at a far higher value. Read from its ends alone (12.8 to 35.0), the
+    // rule hid the 66.4 of year 5.9 and the 1.7 of year 6.1 (the demo plant's figures).
+    const sale = [below(2.2, 12.84), below(3.917, 58.72), below(4, 6.21), below(5.917, 66.41), below(6.083, 1.72), below(7, 35)];
+    expect(decisionRule({ id: 'Sell', kind: 'abandon', exerciseProbability: 0.8, boundary: sale }).text).toBe(
+      'Abandon (Sell) between years 2.2 and 7 when the project is worth less than 12.8 (year 2.2) to 35.0 (year 7); in between, the threshold ranges from 1.7 (year 6.1) to 66.4 (year 5.9).',
+    );
+    // One side only: a rise is named alone.
+    expect(decisionRule({ id: 'Sell', kind: 'abandon', exerciseProbability: 0.8, boundary: [below(1, 20), below(2, 40), below(3, 25)] }).text).toBe(
+      'Abandon (Sell) between years 1 and 3 when the project is worth less than 20.0 (year 1) to 25.0 (year 3); in between, the threshold rises to 40.0 (year 2).',
+    );
+    // Within 5 % of the larger end it is a coarse lattice's wobble, not a turn of the rule: the
+    // demo plant's expansion (207.7 in year 2, 214.3 in year 2.8, 186.2 in year 4) reads from its ends.
+    expect(
+      decisionRule({ id: 'Phase 2', kind: 'expand', exerciseProbability: 0.2, boundary: [above(2, 207.7), above(2.8, 214.3), above(4, 186.2)] }).text,
+    ).toBe('Expand (Phase 2) between years 2 and 4 when the project is worth more than 207.7 (year 2) to 186.2 (year 4).');
+  });
+
   it('says when a right is never used', () => {
     expect(decisionRule({ id: 'X', kind: 'contract', exerciseProbability: 0, boundary: [] }).text).toBe(
       'X: never exercised on this lattice; it adds no value as specified.',
