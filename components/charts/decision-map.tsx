@@ -64,8 +64,9 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
             {t.label}
           </text>
         ))}
-        <text x={(margin.left + width - margin.right) / 2} y={height - 4} textAnchor="middle" className="fill-ink-muted text-caption">
-          years (vertical: project value, log scale)
+        {/* The long caption is about 280 px wide, centred on the plot: below 340 px it would run off the right edge. */}
+        <text x={width < 340 ? width / 2 : (margin.left + width - margin.right) / 2} y={height - 4} textAnchor="middle" className="fill-ink-muted text-caption">
+          {width < 340 ? 'years (vertical: value, log scale)' : 'years (vertical: project value, log scale)'}
         </text>
       </svg>
       <ul className="mt-2 flex flex-wrap gap-4 text-caption text-ink-soft">
