@@ -36,3 +36,14 @@ export interface ProjectJson {
   createdAt: string;
   updatedAt: string;
 }
+
+/** One entry of a project's audit trail as the API sends it. */
+export interface ActivityJson {
+  id: string;
+  action: string;
+  subjectType: string;
+  subjectId: string | null;
+  detail: Record<string, unknown>;
+  actor: string | null;
+  at: string;
+}

@@ -1,6 +1,7 @@
 /** How projects and cases appear in the API. */
 import type { Case, Project } from '@/db/types';
-import type { CaseJson } from './case-json';
+import type { listProjectActivity } from '@/db/queries/summaries';
+import type { ActivityJson, CaseJson } from './case-json';
 
 export function presentProject(p: Project) {
   return {
@@ -38,6 +39,26 @@ export function presentProjectCases<Latest>(list: { stored: Case; latest: Latest
 /** The same as JSON text would carry it (dates as ISO text), for a page that hands it to the case table. */
 export function projectCasesAsJson<Latest>(list: { stored: Case; latest: Latest }[]): { cases: CaseJson[] } {
   return JSON.parse(JSON.stringify(presentProjectCases(list))) as { cases: CaseJson[] };
+}
+
+/** A project's audit trail, newest first, as `GET /api/v1/projects/{id}/activity` answers. */
+export function presentActivity(entries: Awaited<ReturnType<typeof listProjectActivity>>) {
+  return {
+    activity: entries.map((e) => ({
+      id: e.id,
+      action: e.action,
+      subjectType: e.subject_type,
+      subjectId: e.subject_id,
+      detail: e.detail,
+      actor: e.actorName,
+      at: e.created_at,
+    })),
+  };
+}
+
+/** The same as JSON text would carry it, for the page's activity list. */
+export function activityAsJson(entries: Awaited<ReturnType<typeof listProjectActivity>>): { activity: ActivityJson[] } {
+  return JSON.parse(JSON.stringify(presentActivity(entries))) as { activity: ActivityJson[] };
 }
 
 /** A case as the API's JSON carries it (dates as ISO text), for a page that hands it to the editor. */

@@ -35,6 +35,9 @@ describe('before the page’s script has run', () => {
     const table = before.getByRole('table', { name: 'Cases of this project' });
     expect(await table.getByRole('link', { name: 'Base case', exact: true }).isVisible()).toBe(true);
     expect(await table.getByRole('cell', { name: /^EUR / }).count()).toBeGreaterThanOrEqual(3);
+    // And so is the project's activity (the demo's cases were valued by the analyst).
+    const activity = before.getByRole('region', { name: 'Activity' }).getByRole('listitem');
+    expect(await activity.filter({ hasText: /valued “/ }).count()).toBeGreaterThanOrEqual(1);
     await scriptless.close();
 
     await page.goto(`/projects/${projectId}`);

@@ -5,9 +5,9 @@ import { PageHeader } from '@/components/page-header';
 import { ValuationCaution } from '@/components/valuation-caution';
 import { guardPage, orNotFound } from '@/lib/page-guard';
 import { roleAllows } from '@/lib/permissions';
-import { projectCasesAsJson } from '@/lib/case-response';
+import { activityAsJson, projectCasesAsJson } from '@/lib/case-response';
 import { listProjectCases } from '@/lib/cases/service';
-import { readProject } from '@/lib/projects/service';
+import { readProject, readProjectActivity } from '@/lib/projects/service';
 import { readSettings } from '@/lib/settings/service';
 import { ActivityList } from './_components/activity-list';
 import { CaseTable } from './_components/case-table';
@@ -20,8 +20,12 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   if (member === 'forbidden') return <Forbidden />;
   const { projectId } = await params;
   const project = await orNotFound(readProject(member, projectId));
-  // The cases come in the page's HTML, so the table is there before the script (and without it).
-  const [cases, settings] = await Promise.all([listProjectCases(member, projectId), readSettings(member.orgId)]);
+  // The cases and the activity come in the page's HTML: there before the script (and without it).
+  const [cases, activity, settings] = await Promise.all([
+    listProjectCases(member, projectId),
+    readProjectActivity(member, projectId),
+    readSettings(member.orgId),
+  ]);
   return (
     <>
       <nav aria-label="Breadcrumb" className="mb-2 text-caption text-ink-muted">
@@ -65,7 +69,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           <h2 id="activity-heading" className="mb-3">
             Activity
           </h2>
-          <ActivityList projectId={project.id} currency={project.currency} />
+          <ActivityList projectId={project.id} currency={project.currency} initial={activityAsJson(activity)} />
         </section>
       </div>
     </>

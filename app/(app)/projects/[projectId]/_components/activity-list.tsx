@@ -3,15 +3,10 @@
 import useSWR from 'swr';
 import { LoadError, LoadingBlock } from '@/components/load-state';
 import { getJson } from '@/lib/api-client';
+import type { ActivityJson } from '@/lib/case-json';
 import { formatDateTime, formatMoney } from '@/lib/format';
 
-interface Entry {
-  id: string;
-  action: string;
-  detail: Record<string, unknown>;
-  actor: string | null;
-  at: string;
-}
+type Entry = ActivityJson;
 
 /** One audit entry in words a reader of the project page understands. */
 function describe(e: Entry, currency: string): string {
@@ -63,8 +58,12 @@ function describe(e: Entry, currency: string): string {
   }
 }
 
-export function ActivityList({ projectId, currency }: { projectId: string; currency: string }) {
-  const { data, error, isLoading, mutate } = useSWR<{ activity: Entry[] }>(`/api/v1/projects/${projectId}/activity`, getJson);
+/** The project's audit trail; `initial` is the page's own reading of it, shown before the script. */
+export function ActivityList({ projectId, currency, initial }: { projectId: string; currency: string; initial: { activity: Entry[] } }) {
+  const { data, error, isLoading, mutate } = useSWR<{ activity: Entry[] }>(`/api/v1/projects/${projectId}/activity`, getJson, {
+    fallbackData: initial,
+    revalidateOnMount: false,
+  });
   if (isLoading) return <LoadingBlock label="Loading activity" lines={3} />;
   if (error || !data) return <LoadError message={error?.message ?? 'No answer from the server.'} onRetry={() => mutate()} />;
   if (data.activity.length === 0) return <p className="text-ink-soft">Nothing has happened here yet.</p>;
