@@ -3,22 +3,23 @@
 import { useEffect, useRef, useState } from 'react';
 
 /**
- * The rendered width of a container, kept current as it resizes, so SVG charts fit any screen.
- * Never below `minimum`, under which a chart would squeeze its marks: 240 px, what a card leaves
- * on a 320 px phone. (A minimum of 320 pushed the charts 10 px past their cards at 360 px, the
- * commonest phone width.)
+ * Charts are never drawn narrower than this, under which their marks would be squeezed: what a
+ * card leaves on a 320 px phone. (At 320 the charts ran 10 px past their cards on a 360 px phone.)
  */
-export function useWidth<T extends HTMLElement>(fallback = 720, minimum = 240) {
+const MIN_WIDTH = 240;
+
+/** The rendered width of a container, kept current as it resizes, so SVG charts fit any screen. */
+export function useWidth<T extends HTMLElement>(fallback = 720) {
   const ref = useRef<T>(null);
   const [width, setWidth] = useState(fallback);
   useEffect(() => {
     const el = ref.current;
     if (!el) return;
     const observer = new ResizeObserver(([entry]) => {
-      if (entry) setWidth(Math.max(minimum, Math.floor(entry.contentRect.width)));
+      if (entry) setWidth(Math.max(MIN_WIDTH, Math.floor(entry.contentRect.width)));
     });
     observer.observe(el);
     return () => observer.disconnect();
-  }, [minimum]);
+  }, []);
   return { ref, width };
 }
