@@ -60,10 +60,8 @@ function describe(e: Entry, currency: string): string {
 
 /** The project's audit trail; `initial` is the page's own reading of it, shown before the script. */
 export function ActivityList({ projectId, currency, initial }: { projectId: string; currency: string; initial: { activity: Entry[] } }) {
-  const { data, error, isLoading, mutate } = useSWR<{ activity: Entry[] }>(`/api/v1/projects/${projectId}/activity`, getJson, {
-    fallbackData: initial,
-    revalidateOnMount: false,
-  });
+  // Fetched again on mount, as the case table is: SWR's cache may hold an older list.
+  const { data, error, isLoading, mutate } = useSWR<{ activity: Entry[] }>(`/api/v1/projects/${projectId}/activity`, getJson, { fallbackData: initial });
   if (isLoading) return <LoadingBlock label="Loading activity" lines={3} />;
   if (error || !data) return <LoadError message={error?.message ?? 'No answer from the server.'} onRetry={() => mutate()} />;
   if (data.activity.length === 0) return <p className="text-ink-soft">Nothing has happened here yet.</p>;

@@ -26,7 +26,7 @@ type Pending = { kind: 'new' } | { kind: 'duplicate'; source: CaseJson } | { kin
 
 /**
  * A project's cases with their latest figures; analysts add, duplicate and delete cases here.
- * `initial` is the list as the page rendered it, shown at once; it is fetched again after a change.
+ * `initial` is the list as the page rendered it, shown before the script has run.
  */
 export function CaseTable(props: {
   projectId: string;
@@ -37,7 +37,9 @@ export function CaseTable(props: {
 }) {
   const { projectId, currency, canEdit } = props;
   const url = `/api/v1/projects/${projectId}/cases`;
-  const { data, error, isLoading, mutate } = useSWR<{ cases: CaseJson[] }>(url, getJson, { fallbackData: props.initial, revalidateOnMount: false });
+  // Fetched again on mount all the same: SWR prefers its cache to `initial`, and a list cached on
+  // an earlier visit may be older than the page.
+  const { data, error, isLoading, mutate } = useSWR<{ cases: CaseJson[] }>(url, getJson, { fallbackData: props.initial });
   const [pending, setPending] = useState<Pending>(null);
   const [name, setName] = useState('');
   const [problem, setProblem] = useState<string | null>(null);
