@@ -5,8 +5,8 @@
  *
  * Labels sit left of their row, with the figures right of the marks; on a narrow screen
  * (`labelsAbove`) each row's label and figures go on a line above its marks instead, so the
- * names are not cut to a few letters and the scale gets the whole width (at 375 px a label
- * column and a figures margin left the marks 115 px).
+ * names are not cut to a few letters and the scale gets the whole width (on a 375 px phone the
+ * chart was 320 px wide, and a label column and a figures margin left the marks 88 px of it).
  */
 import { scaleBand, scaleLinear } from 'd3';
 import { axisTicks } from './axis';

@@ -1,7 +1,8 @@
 /**
  * The NPV comparison chart on a phone: with labels above their rows, the marks get the width a
- * label column and a figures margin used to take (at 375 px they had 115 px and the demo's names
- * were cut to "Cold-stor… hub"), and every mark stays inside the drawing. Figures invented.
+ * label column and a figures margin used to take (on a 375 px phone the chart was 320 px wide,
+ * the marks had 88 px of it and the demo's names were cut to "Cold-stor… hub"), and every mark
+ * stays inside the drawing. Figures invented.
  */
 import { describe, expect, it } from 'vitest';
 import { layoutNpvComparison, type NpvPair } from '@/lib/charts/npv-comparison';
@@ -14,7 +15,7 @@ const items: NpvPair[] = [
 ];
 
 describe('the NPV comparison layout', () => {
-  it('on a 375 px screen gives the marks all but 24 px of the width, each row its label line above its marks', () => {
+  it('a 375 px wide chart with labels above gives the marks all but 24 px of the width, each row its label line above its marks', () => {
     const layout = layoutNpvComparison(items, 375, { tickCharWidth: SCREEN_LABEL_CHAR, labelsAbove: true });
     expect([layout.margin.left, layout.margin.right]).toEqual([12, 12]);
     // The scale runs from margin to margin: the lowest and highest ticks lie inside it.
