@@ -62,7 +62,8 @@ function describe(e: Entry, currency: string): string {
 export function ActivityList({ projectId, currency, initial }: { projectId: string; currency: string; initial: { activity: Entry[] } }) {
   // Fetched again on mount, as the case table is: SWR's cache may hold an older list.
   const { data, error, isLoading, mutate } = useSWR<{ activity: Entry[] }>(`/api/v1/projects/${projectId}/activity`, getJson, { fallbackData: initial });
-  if (isLoading) return <LoadingBlock label="Loading activity" lines={3} />;
+  // As in the case table: the page's list is always there, while SWR's isLoading is true as it fetches again.
+  if (!data && isLoading) return <LoadingBlock label="Loading activity" lines={3} />;
   if (error || !data) return <LoadError message={error?.message ?? 'No answer from the server.'} onRetry={() => mutate()} />;
   if (data.activity.length === 0) return <p className="text-ink-soft">Nothing has happened here yet.</p>;
   return (

@@ -93,7 +93,9 @@ export function CaseTable(props: {
     }
   };
 
-  if (isLoading) return <LoadingBlock label="Loading cases" />;
+  // With the page's own list as `fallbackData` there is always data; SWR's isLoading is true
+  // while it fetches again on mount, which would hide that list from the server's HTML.
+  if (!data && isLoading) return <LoadingBlock label="Loading cases" />;
   if (error || !data) return <LoadError message={error?.message ?? 'No answer from the server.'} onRetry={() => mutate()} />;
   const cases = data.cases;
   return (
