@@ -1,7 +1,7 @@
 /** How projects and cases appear in the API. */
 import type { Case, Project } from '@/db/types';
 import type { listProjectActivity } from '@/db/queries/summaries';
-import type { ActivityJson, CaseJson } from './case-json';
+import type { CaseJson } from './case-json';
 
 export function presentProject(p: Project) {
   return {
@@ -36,11 +36,6 @@ export function presentProjectCases<Latest>(list: { stored: Case; latest: Latest
   return { cases: list.map((c) => ({ ...presentCase(c.stored), latest: c.latest })) };
 }
 
-/** The same as JSON text would carry it (dates as ISO text), for a page that hands it to the case table. */
-export function projectCasesAsJson<Latest>(list: { stored: Case; latest: Latest }[]): { cases: CaseJson[] } {
-  return JSON.parse(JSON.stringify(presentProjectCases(list))) as { cases: CaseJson[] };
-}
-
 /** A project's audit trail, newest first, as `GET /api/v1/projects/{id}/activity` answers. */
 export function presentActivity(entries: Awaited<ReturnType<typeof listProjectActivity>>) {
   return {
@@ -56,12 +51,15 @@ export function presentActivity(entries: Awaited<ReturnType<typeof listProjectAc
   };
 }
 
-/** The same as JSON text would carry it, for the page's activity list. */
-export function activityAsJson(entries: Awaited<ReturnType<typeof listProjectActivity>>): { activity: ActivityJson[] } {
-  return JSON.parse(JSON.stringify(presentActivity(entries))) as { activity: ActivityJson[] };
+/**
+ * An answer as the API's JSON carries it (dates as ISO text), for a page that hands it to an
+ * island that fetches the same answer from the API.
+ */
+export function asJson<T>(answer: unknown): T {
+  return JSON.parse(JSON.stringify(answer)) as T;
 }
 
-/** A case as the API's JSON carries it (dates as ISO text), for a page that hands it to the editor. */
+/** A case as the API's JSON carries it, for a page that hands it to the editor. */
 export function caseAsJson(c: Case): CaseJson {
-  return JSON.parse(JSON.stringify(presentCase(c))) as CaseJson;
+  return asJson<CaseJson>(presentCase(c));
 }

@@ -50,8 +50,8 @@ const server = createServer((request, response) => {
   compress(request, response, () => void handle(request, response));
 });
 // An idle connection is kept for 65 s, not Node's 5: a client that sends its next request on a
-// connection just as the server closes it gets ECONNRESET (an e2e request did, 5 s after the one
-// before it). 65 s is beyond a load balancer's usual 60 s idle timeout, so the balancer closes
+// connection just as the server closes it gets ECONNRESET (an e2e request did, its connection idle
+// since the test before). 65 s is beyond a load balancer's usual 60 s idle timeout, so the balancer closes
 // first (common practice, no source); the headers deadline stays above it, as Node asks.
 server.keepAliveTimeout = 65_000;
 server.headersTimeout = 66_000;

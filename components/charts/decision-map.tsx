@@ -15,6 +15,9 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
   const { ref, width } = useWidth<HTMLDivElement>();
   const height = 300;
   const margin = { top: 12, right: 16, bottom: 36, left: 64 };
+  // The long axis caption is about 280 px wide, centred on the plot: below 340 px it would run off
+  // the right edge, so a shorter one is centred on the whole width.
+  const narrow = width < 340;
   const last = grid.steps.at(-1)!;
   const lo = Math.min(...grid.steps.map((s) => s.underlying[0]!));
   const hi = Math.max(...grid.steps.map((s) => s.underlying.at(-1)!));
@@ -64,9 +67,8 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
             {t.label}
           </text>
         ))}
-        {/* The long caption is about 280 px wide, centred on the plot: below 340 px it would run off the right edge. */}
-        <text x={width < 340 ? width / 2 : (margin.left + width - margin.right) / 2} y={height - 4} textAnchor="middle" className="fill-ink-muted text-caption">
-          {width < 340 ? 'years (vertical: value, log scale)' : 'years (vertical: project value, log scale)'}
+        <text x={narrow ? width / 2 : (margin.left + width - margin.right) / 2} y={height - 4} textAnchor="middle" className="fill-ink-muted text-caption">
+          {narrow ? 'years (vertical: value, log scale)' : 'years (vertical: project value, log scale)'}
         </text>
       </svg>
       <ul className="mt-2 flex flex-wrap gap-4 text-caption text-ink-soft">

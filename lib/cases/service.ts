@@ -18,7 +18,7 @@ import {
   startRevision,
   type CaseContent,
 } from '@/db/queries/cases';
-import { latestRunByCase } from '@/db/queries/summaries';
+import { latestRunByCase, listProjectActivity } from '@/db/queries/summaries';
 import type { Case } from '@/db/types';
 import type { Member } from '../dal';
 import { AppError } from '../errors';
@@ -33,7 +33,22 @@ export async function listCases(member: Member) {
 /** A project's cases, each with its latest stored valuation (null before any). */
 export async function listProjectCases(member: Member, projectId: string) {
   await readProject(member, projectId);
+  return casesWithLatestRun({ orgId: member.orgId, projectId });
+}
+
+/**
+ * What a project's page shows: the project, its cases with their latest valuations and its audit
+ * trail, the project read once (it is the check that the member may see the rest).
+ */
+export async function readProjectOverview(member: Member, projectId: string) {
+  const project = await readProject(member, projectId);
   const scope = { orgId: member.orgId, projectId };
+  const [cases, activity] = await Promise.all([casesWithLatestRun(scope), listProjectActivity(db, scope)]);
+  return { project, cases, activity };
+}
+
+/** Only after the caller has read the project, which checks the member may see it. */
+async function casesWithLatestRun(scope: { orgId: string; projectId: string }) {
   const [cases, latest] = await Promise.all([listCasesOfProject(db, scope), latestRunByCase(db, scope)]);
   return cases.map((c) => ({ stored: c, latest: latest.get(c.id) ?? null }));
 }

@@ -5,9 +5,9 @@ import { PageHeader } from '@/components/page-header';
 import { ValuationCaution } from '@/components/valuation-caution';
 import { guardPage, orNotFound } from '@/lib/page-guard';
 import { roleAllows } from '@/lib/permissions';
-import { activityAsJson, projectCasesAsJson } from '@/lib/case-response';
-import { listProjectCases } from '@/lib/cases/service';
-import { readProject, readProjectActivity } from '@/lib/projects/service';
+import type { ActivityJson, CaseJson } from '@/lib/case-json';
+import { asJson, presentActivity, presentProjectCases } from '@/lib/case-response';
+import { readProjectOverview } from '@/lib/cases/service';
 import { readSettings } from '@/lib/settings/service';
 import { ActivityList } from './_components/activity-list';
 import { CaseTable } from './_components/case-table';
@@ -19,13 +19,8 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   const member = await guardPage({ project: ['read'] });
   if (member === 'forbidden') return <Forbidden />;
   const { projectId } = await params;
-  const project = await orNotFound(readProject(member, projectId));
   // The cases and the activity come in the page's HTML: there before the script (and without it).
-  const [cases, activity, settings] = await Promise.all([
-    listProjectCases(member, projectId),
-    readProjectActivity(member, projectId),
-    readSettings(member.orgId),
-  ]);
+  const [{ project, cases, activity }, settings] = await Promise.all([orNotFound(readProjectOverview(member, projectId)), readSettings(member.orgId)]);
   return (
     <>
       <nav aria-label="Breadcrumb" className="mb-2 text-caption text-ink-muted">
@@ -57,7 +52,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           <CaseTable
             projectId={project.id}
             currency={project.currency}
-            initial={projectCasesAsJson(cases)}
+            initial={asJson<{ cases: CaseJson[] }>(presentProjectCases(cases))}
             canEdit={roleAllows(member.role, { case: ['create', 'delete'] })}
             defaults={{ wacc: settings.wacc, riskFreeRate: settings.risk_free_rate }}
           />
@@ -69,7 +64,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           <h2 id="activity-heading" className="mb-3">
             Activity
           </h2>
-          <ActivityList projectId={project.id} currency={project.currency} initial={activityAsJson(activity)} />
+          <ActivityList projectId={project.id} currency={project.currency} initial={asJson<{ activity: ActivityJson[] }>(presentActivity(activity))} />
         </section>
       </div>
     </>
