@@ -2,7 +2,7 @@
 
 import { SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
 import { layoutNpvComparison, type NpvPair } from '@/lib/charts/npv-comparison';
-import { textWidth, wrapLabel } from '@/lib/charts/wrap-label';
+import { fitsWhole, textWidth, wrapLabel } from '@/lib/charts/wrap-label';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
@@ -16,8 +16,12 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
   // Below 480 px (a phone) the labels go above their rows; wider, left of them, and wrapped to
   // the label column, so labels never run off the left edge.
   const labelsAbove = width < 480;
-  const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(260, width * 0.32), tickCharWidth: SCREEN_LABEL_CHAR, labelsAbove });
   const figures = (r: NpvPair) => `${formatMoney(r.staticNpv)} → ${formatMoney(r.expandedNpv)}`;
+  // Above, the line is the chart's width less 24 px of margins; a name that does not fit beside
+  // its figures gets the line to itself and the figures go under it.
+  const line = width - 24;
+  const figuresOwnLine = labelsAbove && items.some((r) => !fitsWhole(r.label, line - textWidth(figures(r), 12) - 12, 15, 1));
+  const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(260, width * 0.32), tickCharWidth: SCREEN_LABEL_CHAR, labelsAbove, figuresOwnLine });
   return (
     <figure ref={ref} className="w-full">
       <figcaption className="mb-2 flex flex-wrap items-center gap-x-6 gap-y-1 text-caption text-ink-soft">
@@ -62,9 +66,15 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
             {layout.labelsAbove ? (
               <>
                 <text x={layout.margin.left} y={r.labelY} dy="0.35em" className="fill-ink text-body">
-                  {wrapLabel(r.label, layout.width - layout.margin.left - layout.margin.right - textWidth(figures(r), 12) - 12, 15, 1)[0]}
+                  {wrapLabel(r.label, figuresOwnLine ? line : line - textWidth(figures(r), 12) - 12, 15, 1)[0]}
                 </text>
-                <text x={layout.width - layout.margin.right} y={r.labelY} dy="0.35em" textAnchor="end" className="fill-ink-soft text-caption figures">
+                <text
+                  x={figuresOwnLine ? layout.margin.left : layout.width - layout.margin.right}
+                  y={r.figuresY}
+                  dy="0.35em"
+                  textAnchor={figuresOwnLine ? 'start' : 'end'}
+                  className="fill-ink-soft text-caption figures"
+                >
                   {figures(r)}
                 </text>
               </>

@@ -22,13 +22,23 @@ const CAPTION_PX = 12;
 /** Expanded NPV when each input moves down (left label) and up (right label); the widest swing is on top. */
 export function TornadoChart({ sensitivities, base, currency }: { sensitivities: Sensitivity[]; base: number; currency: string }) {
   const { ref, width } = useWidth<HTMLDivElement>();
+  // Below 480 px (a phone) each label goes above its bar, across the chart; wider, in a column
+  // left of the bars. Either way wrapped to fit, in full; rows grow to hold the longest.
+  const above = width < 480;
   const labelWidth = Math.min(240, width * 0.35);
-  // Each label wrapped to fit its column, in full; rows grow to hold the longest.
   const labels = new Map(
-    sensitivities.map((x) => [x.parameter, wrapLabel(`${x.label} (${describeBump(x, 'low')} / ${describeBump(x, 'high')})`, labelWidth - 14, CAPTION_PX, 4)]),
+    sensitivities.map((x) => [
+      x.parameter,
+      wrapLabel(`${x.label} (${describeBump(x, 'low')} / ${describeBump(x, 'high')})`, above ? width - 24 : labelWidth - 14, CAPTION_PX, 4),
+    ]),
   );
   const lines = Math.max(1, ...[...labels.values()].map((l) => l.length));
-  const layout = layoutTornado(sensitivities, base, width, { labelWidth, rowHeight: Math.max(34, lines * 15 + 8), tickCharWidth: SCREEN_LABEL_CHAR });
+  const layout = layoutTornado(sensitivities, base, width, {
+    labelWidth,
+    // Above, the right margin only holds the last tick's overhang.
+    ...(above ? { labelSpace: lines * 15, rightWidth: 24 } : { rowHeight: Math.max(34, lines * 15 + 8) }),
+    tickCharWidth: SCREEN_LABEL_CHAR,
+  });
   return (
     <div ref={ref} className="w-full">
       <svg width={layout.width} height={layout.height} role="img" aria-label={`Sensitivity of expanded NPV (${currency}); base ${formatMoney(base)}`}>
@@ -40,8 +50,19 @@ export function TornadoChart({ sensitivities, base, currency }: { sensitivities:
             </text>
           </g>
         ))}
+        {/* The base line runs the chart's height, drawn again over each bar; with labels above
+            the bars (a phone) only across the bars, so it does not strike through the labels. */}
+        {above ? null : (
+          <line
+            x1={layout.baseX}
+            x2={layout.baseX}
+            y1={layout.margin.top - 4}
+            y2={layout.height - layout.margin.bottom}
+            stroke={palette.ink.DEFAULT}
+            strokeWidth="1.5"
+          />
+        )}
         {layout.rows.map((r) => {
-          const mid = r.y + r.bandHeight / 2;
           const bar = (x: number | null, side: 'low' | 'high') =>
             x === null ? null : (
               <g>
@@ -57,27 +78,29 @@ export function TornadoChart({ sensitivities, base, currency }: { sensitivities:
             );
           return (
             <g key={r.sensitivity.parameter}>
-              <text x={layout.margin.left - 10} y={mid} textAnchor="end" className="fill-ink text-caption">
+              <text
+                x={above ? layout.margin.left : layout.margin.left - 10}
+                y={r.labelY}
+                textAnchor={above ? 'start' : 'end'}
+                className="fill-ink text-caption"
+              >
                 {labels.get(r.sensitivity.parameter)!.map((line, k, lines) => (
-                  <tspan key={k} x={layout.margin.left - 10} dy={k === 0 ? `${0.35 - (lines.length - 1) * 0.6}em` : '1.2em'}>
+                  <tspan
+                    key={k}
+                    x={above ? layout.margin.left : layout.margin.left - 10}
+                    dy={k === 0 ? (above ? '0.35em' : `${0.35 - (lines.length - 1) * 0.6}em`) : '1.2em'}
+                  >
                     {line}
                   </tspan>
                 ))}
               </text>
               {bar(r.lowX, 'low')}
               {bar(r.highX, 'high')}
+              <line x1={layout.baseX} x2={layout.baseX} y1={r.y - 4} y2={r.y + r.bandHeight + 4} stroke={palette.ink.DEFAULT} strokeWidth="1.5" />
               <title>{`${r.sensitivity.label}: ${formatMoney(r.sensitivity.low.expandedNpv, currency)} when ${describeBump(r.sensitivity, 'low')}, ${formatMoney(r.sensitivity.high.expandedNpv, currency)} when ${describeBump(r.sensitivity, 'high')}`}</title>
             </g>
           );
         })}
-        <line
-          x1={layout.baseX}
-          x2={layout.baseX}
-          y1={layout.margin.top - 4}
-          y2={layout.height - layout.margin.bottom}
-          stroke={palette.ink.DEFAULT}
-          strokeWidth="1.5"
-        />
       </svg>
       <p className="mt-1 flex flex-wrap gap-4 text-caption text-ink-soft">
         <span className="inline-flex items-center gap-1.5">

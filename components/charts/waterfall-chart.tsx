@@ -1,7 +1,6 @@
 'use client';
 
-import { layoutWaterfall, waterfallSteps } from '@/lib/charts/waterfall';
-import { wrapLabel } from '@/lib/charts/wrap-label';
+import { layoutWaterfall, waterfallLabels, waterfallSteps } from '@/lib/charts/waterfall';
 import { formatChange, formatMoney } from '@/lib/format';
 import type { ValuationResult } from '@/lattice';
 import { useWidth } from './use-width';
@@ -14,8 +13,12 @@ const LABEL_LINES = 4;
 export function WaterfallChart({ result, currency }: { result: ValuationResult; currency: string }) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const steps = waterfallSteps(result);
-  // Room under the bars for four lines of label: an option's name (at most 64 characters) fits whole.
-  const layout = layoutWaterfall(steps, width, 300 + 28, 16 + LABEL_LINES * 14);
+  // Room under the bars for four lines of label: an option's name (at most 64 characters) fits
+  // whole where the bars are wide enough.
+  const spacious = layoutWaterfall(steps, width, 300 + 28, 16 + LABEL_LINES * 14);
+  const labels = waterfallLabels(spacious.bars, 12, LABEL_LINES);
+  // Bars marked with numbers need one line under them, not four.
+  const layout = labels.key ? layoutWaterfall(steps, width, 300 + 28 - (LABEL_LINES - 1) * 14, 16 + 14) : spacious;
   return (
     <div ref={ref} className="w-full">
       <svg
@@ -53,8 +56,8 @@ export function WaterfallChart({ result, currency }: { result: ValuationResult; 
                 {b.kind === 'total' ? formatMoney(b.value) : formatChange(b.value)}
               </text>
               <text x={b.center} y={layout.height - layout.margin.bottom + 16} textAnchor="middle" className="fill-ink-soft text-caption">
-                {wrapLabel(b.label, b.width / 0.7, 12, LABEL_LINES).map((line, k) => (
-                  <tspan key={k} x={b.center} dy={k === 0 ? 0 : 14}>
+                {labels.lines[k]!.map((line, n) => (
+                  <tspan key={n} x={b.center} dy={n === 0 ? 0 : 14}>
                     {line}
                   </tspan>
                 ))}
@@ -63,6 +66,15 @@ export function WaterfallChart({ result, currency }: { result: ValuationResult; 
           );
         })}
       </svg>
+      {labels.key ? (
+        <ol aria-hidden="true" className="mt-1 flex flex-wrap gap-x-4 gap-y-1 text-caption text-ink-soft">
+          {labels.key.map((k) => (
+            <li key={k.mark}>
+              <span className="figures font-semibold text-ink">{k.mark}</span> {k.label}
+            </li>
+          ))}
+        </ol>
+      ) : null}
     </div>
   );
 }

@@ -14,7 +14,7 @@ import { analyseCashFlows } from '../cash-flows';
 import { layoutLatticeTree } from '../charts/lattice-tree';
 import { layoutNpvComparison } from '../charts/npv-comparison';
 import { layoutTornado } from '../charts/tornado';
-import { layoutWaterfall, waterfallSteps } from '../charts/waterfall';
+import { layoutWaterfall, waterfallLabels, waterfallSteps } from '../charts/waterfall';
 import { textWidth, wrapLabel } from '../charts/wrap-label';
 import { decisionRule, ruleInFull } from '../decision-rules';
 import { readingOfFigures } from '../figures-reading';
@@ -129,31 +129,37 @@ function NpvChart({ data, width }: { data: BoardPackData; width: number }) {
 function WaterfallPdf({ data, width }: { data: BoardPackData; width: number }) {
   // Up to five lines of label under each bar: a right's name (at most 64 characters) fits whole.
   const layout = layoutWaterfall(waterfallSteps(data.snapshot.result), width, 240, 12 + WATERFALL_LABEL_LINES * (LABEL_SIZE + 2));
+  const labels = waterfallLabels(layout.bars, LABEL_SIZE, WATERFALL_LABEL_LINES);
   return (
-    <Svg width={layout.width} height={layout.height}>
-      {layout.ticks.map((t) => (
-        <G key={t.value}>
-          <Line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={t.y} y2={t.y} stroke={palette.paper.sunk} strokeWidth={1} />
-          <SvgText x={layout.margin.left - 6} y={t.y + 3} anchor="end" color={muted}>
-            {t.label}
-          </SvgText>
-        </G>
-      ))}
-      <Line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={layout.zeroY} y2={layout.zeroY} stroke={muted} strokeWidth={1} />
-      {layout.bars.map((b) => (
-        <G key={b.key}>
-          <Rect x={b.x} y={b.y} width={b.width} height={b.height} fill={b.kind === 'total' ? ink : b.value >= 0 ? tide : brick} />
-          <SvgText x={b.center} y={b.y - 4} anchor="middle" color={ink} bold>
-            {b.kind === 'total' ? money(b.value) : formatChange(b.value)}
-          </SvgText>
-          {wrapLabel(b.label, b.width / 0.7, LABEL_SIZE, WATERFALL_LABEL_LINES).map((text, k) => (
-            <SvgText key={k} x={b.center} y={layout.height - layout.margin.bottom + 12 + k * (LABEL_SIZE + 2)} anchor="middle">
-              {text}
+    <>
+      <Svg width={layout.width} height={layout.height}>
+        {layout.ticks.map((t) => (
+          <G key={t.value}>
+            <Line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={t.y} y2={t.y} stroke={palette.paper.sunk} strokeWidth={1} />
+            <SvgText x={layout.margin.left - 6} y={t.y + 3} anchor="end" color={muted}>
+              {t.label}
             </SvgText>
-          ))}
-        </G>
-      ))}
-    </Svg>
+          </G>
+        ))}
+        <Line x1={layout.margin.left} x2={layout.width - layout.margin.right} y1={layout.zeroY} y2={layout.zeroY} stroke={muted} strokeWidth={1} />
+        {layout.bars.map((b, n) => (
+          <G key={b.key}>
+            <Rect x={b.x} y={b.y} width={b.width} height={b.height} fill={b.kind === 'total' ? ink : b.value >= 0 ? tide : brick} />
+            <SvgText x={b.center} y={b.y - 4} anchor="middle" color={ink} bold>
+              {b.kind === 'total' ? money(b.value) : formatChange(b.value)}
+            </SvgText>
+            {labels.lines[n]!.map((text, k) => (
+              <SvgText key={k} x={b.center} y={layout.height - layout.margin.bottom + 12 + k * (LABEL_SIZE + 2)} anchor="middle">
+                {text}
+              </SvgText>
+            ))}
+          </G>
+        ))}
+      </Svg>
+      {labels.key ? (
+        <Text style={{ fontSize: LABEL_SIZE, color: soft, lineHeight: 1.4 }}>{labels.key.map((k) => `${k.mark} ${k.label}`).join('   ·   ')}</Text>
+      ) : null}
+    </>
   );
 }
 

@@ -7,6 +7,9 @@
  * (`labelsAbove`) each row's label and figures go on a line above its marks instead, so the
  * names are not cut to a few letters and the scale gets the whole width (on a 375 px phone the
  * chart was 320 px wide, and a label column and a figures margin left the marks 88 px of it).
+ * When a name and its figures do not both fit on that line (`figuresOwnLine`; the demo's
+ * "Phased bio-resin plant" on a 320 or 360 px phone), the figures take a line of their own
+ * under the name, so the name is not cut either.
  */
 import { scaleBand, scaleLinear } from 'd3';
 import { axisTicks } from './axis';
@@ -25,8 +28,11 @@ export interface NpvComparisonLayout {
   x: (value: number) => number;
   ticks: { value: number; x: number; label: string }[];
   zeroX: number;
-  /** Per row: `y` is the marks' line, `labelY` the label's (the same line unless labels sit above). */
-  rows: (NpvPair & { y: number; labelY: number; staticX: number; expandedX: number })[];
+  /**
+   * Per row: `y` is the marks' line, `labelY` the label's and `figuresY` the figures' (all one
+   * line unless labels sit above; the label's line unless the figures have their own).
+   */
+  rows: (NpvPair & { y: number; labelY: number; figuresY: number; staticX: number; expandedX: number })[];
   rowHeight: number;
   labelsAbove: boolean;
 }
@@ -34,10 +40,11 @@ export interface NpvComparisonLayout {
 export function layoutNpvComparison(
   items: NpvPair[],
   width: number,
-  options: { rowHeight?: number; labelWidth?: number; tickCharWidth?: number; labelsAbove?: boolean } = {},
+  options: { rowHeight?: number; labelWidth?: number; tickCharWidth?: number; labelsAbove?: boolean; figuresOwnLine?: boolean } = {},
 ): NpvComparisonLayout {
   const labelsAbove = options.labelsAbove ?? false;
-  const rowHeight = options.rowHeight ?? (labelsAbove ? 56 : 44);
+  const figuresOwnLine = labelsAbove && (options.figuresOwnLine ?? false);
+  const rowHeight = options.rowHeight ?? (figuresOwnLine ? 76 : labelsAbove ? 56 : 44);
   // Above: room for a mark's radius (7 px) and a little on each side.
   const margin = labelsAbove ? { top: 12, right: 12, bottom: 32, left: 12 } : { top: 12, right: 130, bottom: 32, left: options.labelWidth ?? 200 };
   const height = margin.top + margin.bottom + rowHeight * Math.max(items.length, 1);
@@ -64,9 +71,14 @@ export function layoutNpvComparison(
     labelsAbove,
     rows: items.map((i) => {
       const middle = (y(i.id) ?? 0) + y.bandwidth() / 2;
-      // Above: the label's line and the marks' line share the row, 24 px apart.
-      const [labelY, marksY] = labelsAbove ? [middle - 12, middle + 12] : [middle, middle];
-      return { ...i, y: marksY, labelY, staticX: x(i.staticNpv), expandedX: x(i.expandedNpv) };
+      // Above: the label's line and the marks' line share the row, 24 px apart; with the figures
+      // on their own line, label, figures and marks 18 and 20 px apart.
+      const [labelY, figuresY, marksY] = figuresOwnLine
+        ? [middle - 22, middle - 4, middle + 16]
+        : labelsAbove
+          ? [middle - 12, middle - 12, middle + 12]
+          : [middle, middle, middle];
+      return { ...i, y: marksY, labelY, figuresY, staticX: x(i.staticNpv), expandedX: x(i.expandedNpv) };
     }),
   };
 }

@@ -5,6 +5,7 @@
  */
 import { scaleBand, scaleLinear } from 'd3';
 import { axisTicks } from './axis';
+import { fitsWhole, wrapLabel } from './wrap-label';
 import type { ValuationResult } from '@/lattice';
 
 export interface WaterfallStep {
@@ -33,6 +34,9 @@ export function waterfallSteps(result: Pick<ValuationResult, 'staticNpv' | 'expa
   return steps;
 }
 
+/** The share of each bar's band left empty around it. */
+const BAR_PADDING = 0.3;
+
 export interface WaterfallLayout {
   width: number;
   height: number;
@@ -53,7 +57,7 @@ export function layoutWaterfall(steps: WaterfallStep[], width: number, height = 
   const x = scaleBand()
     .domain(steps.map((s) => s.key))
     .range([margin.left, width - margin.right])
-    .padding(0.3);
+    .padding(BAR_PADDING);
   return {
     width,
     height,
@@ -66,4 +70,22 @@ export function layoutWaterfall(steps: WaterfallStep[], width: number, height = 
       return { ...s, x: x(s.key) ?? 0, width: x.bandwidth(), y: top, height: Math.max(1, bottom - top), center: (x(s.key) ?? 0) + x.bandwidth() / 2 };
     }),
   };
+}
+
+/**
+ * The words under each bar. When any label would lose a word (a phone's narrow bars: "Expan…
+ * NPV"), every bar is marked with its number instead and the chart lists the numbers with their
+ * labels beside it (`key`), so no name is cut. A bar's label may use its whole band (the bar
+ * and its padding).
+ */
+export function waterfallLabels(
+  bars: WaterfallLayout['bars'],
+  fontSize: number,
+  maxLines: number,
+): { lines: string[][]; key: { mark: string; label: string }[] | null } {
+  const room = (b: WaterfallLayout['bars'][number]) => b.width / (1 - BAR_PADDING);
+  if (bars.every((b) => fitsWhole(b.label, room(b), fontSize, maxLines)))
+    return { lines: bars.map((b) => wrapLabel(b.label, room(b), fontSize, maxLines)), key: null };
+  const key = bars.map((b, k) => ({ mark: String(k + 1), label: b.label }));
+  return { lines: key.map((k) => [k.mark]), key };
 }

@@ -27,6 +27,11 @@ export function wrapLabel(text: string, maxWidth: number, fontSize: number, maxL
   return kept;
 }
 
+/** Whether `wrapLabel` keeps every word of the label whole, with no "…". */
+export function fitsWhole(text: string, maxWidth: number, fontSize: number, maxLines = 2): boolean {
+  return wrapLabel(text, maxWidth, fontSize, maxLines).join(' ') === text.split(/\s+/).filter(Boolean).join(' ');
+}
+
 /** The estimated width of a single line of text, for margins that must hold it. */
 export function textWidth(text: string, fontSize: number): number {
   return text.length * fontSize * CHAR_WIDTH_EM;

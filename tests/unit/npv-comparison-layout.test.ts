@@ -32,10 +32,24 @@ describe('the NPV comparison layout', () => {
     for (let k = 1; k < layout.rows.length; k++) expect(layout.rows[k]!.labelY).toBeGreaterThan(layout.rows[k - 1]!.y + 12);
   });
 
+  it('with the figures on their own line, puts name, figures and marks in that order, rows apart', () => {
+    // On a 320 px phone the chart is 270 px wide, and "Phased bio-resin plant" beside its
+    // figures was cut to "Phased bio-resi…".
+    const layout = layoutNpvComparison(items, 270, { tickCharWidth: SCREEN_LABEL_CHAR, labelsAbove: true, figuresOwnLine: true });
+    for (const r of layout.rows) {
+      // Lines of 15 px and 12 px text, at least 16 px apart; the label's line inside the drawing.
+      expect(r.figuresY - r.labelY).toBeGreaterThanOrEqual(16);
+      expect(r.y - r.figuresY).toBeGreaterThanOrEqual(16);
+      expect(r.labelY).toBeGreaterThan(8);
+      expect(r.y + 7).toBeLessThan(layout.height - layout.margin.bottom);
+    }
+    for (let k = 1; k < layout.rows.length; k++) expect(layout.rows[k]!.labelY).toBeGreaterThan(layout.rows[k - 1]!.y + 16);
+  });
+
   it('wider, keeps labels beside their rows on the same line (the board pack and the desktop)', () => {
     const layout = layoutNpvComparison(items, 900, { labelWidth: 260 });
     expect(layout.labelsAbove).toBe(false);
-    for (const r of layout.rows) expect(r.labelY).toBe(r.y);
+    for (const r of layout.rows) expect([r.labelY, r.figuresY]).toEqual([r.y, r.y]);
     expect([layout.margin.left, layout.margin.right]).toEqual([260, 130]);
   });
 });
