@@ -22,6 +22,12 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
   const line = width - 24;
   const figuresOwnLine = labelsAbove && items.some((r) => !fitsWhole(r.label, line - textWidth(figures(r), 12) - 12, 15, 1));
   const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(260, width * 0.32), tickCharWidth: SCREEN_LABEL_CHAR, labelsAbove, figuresOwnLine });
+  // The grid and the zero line run the chart's height; with labels above the marks, only across
+  // each row's marks (and from the last row to the axis), so they do not strike through a name.
+  const bottom = layout.height - layout.margin.bottom;
+  const spans: [number, number][] = layout.labelsAbove
+    ? layout.rows.map((r, k) => [r.y - 12, k === layout.rows.length - 1 ? bottom : r.y + 12])
+    : [[layout.margin.top, bottom]];
   return (
     <figure ref={ref} className="w-full">
       <figcaption className="mb-2 flex flex-wrap items-center gap-x-6 gap-y-1 text-caption text-ink-soft">
@@ -47,20 +53,25 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
       >
         {layout.ticks.map((t) => (
           <g key={t.value}>
-            <line x1={t.x} x2={t.x} y1={layout.margin.top} y2={layout.height - layout.margin.bottom} stroke={palette.paper.sunk} />
+            {spans.map(([top, bottom]) => (
+              <line key={top} x1={t.x} x2={t.x} y1={top} y2={bottom} stroke={palette.paper.sunk} />
+            ))}
             <text x={t.x} y={layout.height - layout.margin.bottom + 16} textAnchor="middle" className="fill-ink-muted text-caption figures">
               {t.label}
             </text>
           </g>
         ))}
-        <line
-          x1={layout.zeroX}
-          x2={layout.zeroX}
-          y1={layout.margin.top - 4}
-          y2={layout.height - layout.margin.bottom}
-          stroke={palette.ink.muted}
-          strokeDasharray="3 3"
-        />
+        {spans.map(([top, bottom]) => (
+          <line
+            key={top}
+            x1={layout.zeroX}
+            x2={layout.zeroX}
+            y1={layout.labelsAbove ? top : top - 4}
+            y2={bottom}
+            stroke={palette.ink.muted}
+            strokeDasharray="3 3"
+          />
+        ))}
         {layout.rows.map((r) => (
           <g key={r.id}>
             {layout.labelsAbove ? (
