@@ -16,7 +16,7 @@ export interface TornadoLayout {
   margin: { top: number; right: number; bottom: number; left: number };
   baseX: number;
   ticks: { value: number; x: number; label: string }[];
-  /** Per row: the bar's top `y` and height; `labelY` the label's first line (its middle). */
+  /** Per row: the bar's top `y` and height; `labelY` the middle of the label's first line above the bar, or of the whole label beside it. */
   rows: { sensitivity: Sensitivity; y: number; bandHeight: number; labelY: number; lowX: number | null; highX: number | null; swing: number }[];
 }
 
