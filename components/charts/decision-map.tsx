@@ -5,13 +5,14 @@ import type { NodeGrid } from '@/lattice';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
 import { axisTicks, logAxisTicks, SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
+import { decisionMapLayout } from '@/lib/charts/decision-map';
 
 /**
- * The decision map of one mode over the whole lattice: every node placed by time and project
- * value (log scale), filled by the decision taken there. Reads as regions: where to continue,
- * where each right is used. The legend names each fill.
+ * The decision map of one mode over the whole horizon: the nodes the project is likely to reach
+ * placed by time and project value (log scale), filled by the decision taken there. Reads as
+ * regions: where to continue, where each right is used. The legend names each fill.
  */
-export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode: string; fills: string[]; order: string[] }) {
+export function DecisionMap({ grid, p, mode, fills, order }: { grid: NodeGrid; p: number; mode: string; fills: string[]; order: string[] }) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const height = 300;
   const margin = { top: 12, right: 16, bottom: 36, left: 64 };
@@ -19,19 +20,22 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
   // the right edge, so a shorter one is centred on the whole width.
   const narrow = width < 340;
   const last = grid.steps.at(-1)!;
-  const lo = Math.min(...grid.steps.map((s) => s.underlying[0]!));
-  const hi = Math.max(...grid.steps.map((s) => s.underlying.at(-1)!));
+  const { cells, values } = decisionMapLayout(grid, mode, p);
   const x = scaleLinear()
     .domain([0, last.t || 1])
     .range([margin.left, width - margin.right]);
   const y = scaleLog()
-    .domain([lo, hi])
+    .domain(values)
     .range([height - margin.bottom, margin.top]);
-  const cellWidth = Math.max(1.5, (width - margin.left - margin.right) / grid.steps.length);
-  const cellHeight = Math.max(1.5, (height - margin.top - margin.bottom) / Math.max(1, grid.steps.length));
+  const plot = { y: margin.top, width: width - margin.left - margin.right, height: height - margin.top - margin.bottom };
+  const cellWidth = Math.max(1.5, plot.width / grid.steps.length);
+  // Nodes of one step are u/d apart: a cell as tall as that spacing on the log scale meets its
+  // neighbours, and the next step's cells sit between them.
+  const spread = grid.steps.find((s) => s.underlying.length > 1)?.underlying;
+  const cellHeight = Math.max(1.5, spread ? Math.abs(y(spread[0]!) - y(spread[1]!)) : 0);
   const fillOf = (d: string | null) => (d === null ? palette.paper.DEFAULT : fills[order.indexOf(d) % fills.length]!);
-  const seen = new Set<string>();
-  for (const s of grid.steps) for (const d of s.modes[mode]?.decision ?? []) if (d) seen.add(d);
+  const seen = new Set(cells.flatMap((c) => (c.decision ? [c.decision] : [])));
+  const clip = `decision-map-plot-${mode.replace(/[^A-Za-z0-9_-]/g, '_')}`;
   return (
     <div ref={ref} className="w-full">
       <svg
@@ -40,23 +44,23 @@ export function DecisionMap({ grid, mode, fills, order }: { grid: NodeGrid; mode
         role="img"
         aria-label={`Decision map for mode ${mode}: ${seen.size === 0 ? 'continue everywhere' : [...seen].join(', ')}`}
       >
-        {grid.steps.map((s, i) =>
-          s.underlying.map((v, j) => {
-            const d = s.modes[mode]?.decision[j] ?? null;
-            return (
-              <rect
-                key={`${i}:${j}`}
-                x={x(s.t) - cellWidth / 2}
-                y={y(v) - cellHeight / 2}
-                width={cellWidth}
-                height={cellHeight}
-                fill={fillOf(d)}
-                stroke={d ? 'none' : palette.line.DEFAULT}
-                strokeWidth="0.3"
-              />
-            );
-          }),
-        )}
+        <clipPath id={clip}>
+          <rect x={0} y={plot.y - cellHeight} width={width} height={plot.height + 2 * cellHeight} />
+        </clipPath>
+        <g clipPath={`url(#${clip})`}>
+          {cells.map((c, k) => (
+            <rect
+              key={k}
+              x={x(c.t) - cellWidth / 2}
+              y={y(c.value) - cellHeight / 2}
+              width={cellWidth}
+              height={cellHeight}
+              fill={fillOf(c.decision)}
+              stroke={c.decision ? 'none' : palette.line.DEFAULT}
+              strokeWidth="0.3"
+            />
+          ))}
+        </g>
         {logAxisTicks(y, 4).map((t) => (
           <text key={t.value} x={margin.left - 8} y={t.at} dy="0.35em" textAnchor="end" className="figures fill-ink-muted text-caption">
             {t.label}

@@ -50,15 +50,26 @@ const superscript: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹',
 /**
  * A log axis's ticks at whole powers of ten, labelled so that no two read alike: 1,000, 1, 0.01,
  * 0.001, then 10⁻⁴ and below (a fixed number of decimals turned every small power into 0.00).
+ * An axis that holds fewer than three powers also gets 2 and 5 times each power: fitted to
+ * where a right is used, the cold-storage hub's decision map ran from about 10 to 350 and was
+ * labelled "100" alone.
  */
 export function logAxisTicks(scale: ScaleLogarithmic<number, number>, count: number): AxisTick[] {
-  return scale
+  const [low, high] = scale.domain() as [number, number];
+  const powers = scale
     .ticks(count)
-    .map((value) => ({ value, power: Math.round(Math.log10(value)) }))
-    .filter(({ value, power }) => Math.abs(value / 10 ** power - 1) < 1e-9)
-    .map(({ value, power }) => ({
-      value,
-      at: scale(value),
-      label: power >= -3 ? formatNumber(value, Math.max(0, -power)) : `10${[...String(power)].map((c) => superscript[c]).join('')}`,
-    }));
+    .map((value) => ({ value, power: Math.round(Math.log10(value)), times: 1 }))
+    .filter(({ value, power }) => Math.abs(value / 10 ** power - 1) < 1e-9);
+  const ticks =
+    powers.length >= 3
+      ? powers
+      : Array.from({ length: Math.floor(Math.log10(high)) - Math.floor(Math.log10(low)) + 1 }, (_, k) => Math.floor(Math.log10(low)) + k)
+          .flatMap((power) => [1, 2, 5].map((times) => ({ value: times * 10 ** power, power, times })))
+          .filter(({ value }) => value >= low * (1 - 1e-12) && value <= high * (1 + 1e-12));
+  return ticks.map(({ value, power, times }) => ({
+    value,
+    at: scale(value),
+    label:
+      power >= -3 ? formatNumber(value, Math.max(0, -power)) : `${times === 1 ? '' : `${times}×`}10${[...String(power)].map((c) => superscript[c]).join('')}`,
+  }));
 }

@@ -57,8 +57,12 @@ describe('tick labels', () => {
     // d3 keeps every second power at this count.
     expect(wide.map((t) => t.label)).toEqual(['10⁻⁶', '10⁻⁴', '0.01', '1', '100']);
     expect(logAxisTicks(scaleLog().domain([5e-4, 2]).range([300, 0]), 4).map((t) => t.label)).toEqual(['0.001', '0.01', '0.1', '1']);
+    // Under three powers of ten, 2 and 5 times each power too: the cold-storage hub's decision
+    // map, fitted to its window (about 10 to 350), was labelled "100" alone.
     const narrow = logAxisTicks(scaleLog().domain([20, 3000]).range([300, 0]), 4);
-    expect(narrow.map((t) => t.label)).toEqual(['100', '1,000']);
-    expect(narrow[0]!.at).toBeCloseTo(300 * (1 - Math.log(100 / 20) / Math.log(3000 / 20)), 9);
+    expect(narrow.map((t) => t.label)).toEqual(['20', '50', '100', '200', '500', '1,000', '2,000']);
+    expect(narrow[2]!.at).toBeCloseTo(300 * (1 - Math.log(100 / 20) / Math.log(3000 / 20)), 9);
+    expect(logAxisTicks(scaleLog().domain([10.1, 348]).range([300, 0]), 4).map((t) => t.label)).toEqual(['20', '50', '100', '200']);
+    expect(logAxisTicks(scaleLog().domain([3e-6, 4e-5]).range([300, 0]), 4).map((t) => t.label)).toEqual(['5×10⁻⁶', '10⁻⁵', '2×10⁻⁵']);
   });
 });

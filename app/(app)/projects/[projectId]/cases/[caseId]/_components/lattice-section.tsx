@@ -185,10 +185,13 @@ export function LatticeSection({ model, modes, startMode, result, currency }: Pr
       ) : null}
       <section className="rounded-card border border-line bg-paper-raised p-5 shadow-card">
         <h3 className="text-body font-semibold">Decision map: {activeMode}</h3>
-        {whole && grid ? (
+        {whole && grid && lattice.result ? (
           <>
-            <p className="mb-3 text-caption text-ink-muted">Every node of the lattice by time and project value, filled by the decision taken in this mode.</p>
-            <DecisionMap grid={grid} mode={activeMode} fills={seriesStrong} order={order} />
+            <p className="mb-3 text-caption text-ink-muted">
+              The nodes of the lattice by time and project value, filled by the decision taken in this mode: all but the least likely (together under 1 in
+              5,000, risk-neutral), with the value axis fitted to the years up to the last node where a right is used.
+            </p>
+            <DecisionMap grid={grid} p={lattice.result.tree.p} mode={activeMode} fills={seriesStrong} order={order} />
           </>
         ) : (
           <p className="text-caption text-ink-muted">
