@@ -20,5 +20,17 @@ export const commentSchema = z.object({
 /** The board pack's page size (`?size=`). */
 export const pageSizeSchema = z.enum(['A4', 'LETTER'], { error: 'size must be A4 or LETTER.' });
 
-/** Which decisions the review queue lists (comma-separated in `?status=`); in review by default. */
-export const reviewStatusesSchema = z.array(z.enum(['in_review', 'approved', 'returned'])).min(1);
+const reviewStatuses = ['in_review', 'approved', 'returned'] as const;
+
+/**
+ * Which decisions the review queue lists (`?status=`, comma-separated); in review by default. One
+ * message names the parameter and its values, as `?size=` does (an array's own check answered
+ * `{"0": ["Invalid option: …"]}`, naming neither).
+ */
+export const reviewStatusesSchema = z
+  .string()
+  .refine(
+    (s) => s.split(',').every((x) => (reviewStatuses as readonly string[]).includes(x)),
+    'status must be in_review, approved or returned, or several of them comma-separated.',
+  )
+  .transform((s) => s.split(',') as (typeof reviewStatuses)[number][]);

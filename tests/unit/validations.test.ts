@@ -1,6 +1,7 @@
 /** The shared schemas refuse what the forms and the server must refuse, with readable messages. */
 import { describe, expect, it } from 'vitest';
 import { inviteSchema, resetPasswordSchema, signUpSchema } from '@/lib/validations/auth';
+import { reviewStatusesSchema } from '@/lib/validations/review';
 import { settingsSchema } from '@/lib/validations/settings';
 
 describe('schemas', () => {
@@ -37,5 +38,17 @@ describe('schemas', () => {
     });
     const bad = settingsSchema.safeParse({ currency: 'EURO', riskFreeRate: 3, wacc: -1, fiscalYearStartMonth: 13 });
     expect(Object.keys(bad.error!.flatten().fieldErrors).sort()).toEqual(['currency', 'fiscalYearStartMonth', 'riskFreeRate', 'wacc']);
+  });
+
+  it("the review queue's ?status= takes its three values, comma-separated, and names itself when refused", () => {
+    expect(reviewStatusesSchema.parse('approved,returned')).toEqual(['approved', 'returned']);
+    expect(reviewStatusesSchema.parse('in_review')).toEqual(['in_review']);
+    for (const bad of ['\u0000', 'approved,', 'APPROVED', 'approved,draft']) {
+      const r = reviewStatusesSchema.safeParse(bad);
+      expect(r.success).toBe(false);
+      expect(r.error!.issues.map((i) => [i.path, i.message])).toEqual([
+        [[], 'status must be in_review, approved or returned, or several of them comma-separated.'],
+      ]);
+    }
   });
 });

@@ -8,8 +8,7 @@ import { reviewStatusesSchema } from '@/lib/validations/review';
 export const dynamic = 'force-dynamic';
 
 export const GET = withAuth(async ({ member, request }) => {
-  const asked = request.nextUrl.searchParams.get('status');
-  const statuses = reviewStatusesSchema.parse(asked ? asked.split(',') : ['in_review']);
+  const statuses = reviewStatusesSchema.parse(request.nextUrl.searchParams.get('status') || 'in_review');
   const queue = await readReviewQueue(member, statuses);
   return NextResponse.json({ cases: queue });
 }, operations.listReviews);
