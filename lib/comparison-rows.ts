@@ -10,6 +10,7 @@ import { analyseCashFlows, type CashFlowYear } from './cash-flows';
 import { formatMoney } from './format';
 import { describeOption } from './option-words';
 import type { CaseInput } from './validations/case';
+import { treeLabels } from './tree-words';
 
 /** The groups of rows, in the order they are shown. */
 export const comparisonGroups = ['Valuation', 'Rights', 'Assumptions', 'Cash flows'] as const;
@@ -115,7 +116,7 @@ export function comparisonRows(inputs: CaseInput[], results: (ValuationResult | 
   add(
     'Assumptions',
     'Tree',
-    inputs.map((i) => i.settings.tree ?? 'crr'),
+    inputs.map((i) => treeLabels[i.settings.tree ?? 'crr']),
   );
   add(
     'Assumptions',

@@ -26,6 +26,7 @@ import type { BoardPackData, FollowThrough, RecordEvent } from './data';
 import { pdfText } from './text';
 import { palette, seriesFill } from '@/lib/palette';
 import { assumptionRows, money, PageFooter, pdfColours, SectionPage, styles, Table } from './pdf-parts';
+import { treeLabels } from '../tree-words';
 
 const { ink, soft, muted, tide, brick } = pdfColours;
 
@@ -426,7 +427,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
       <Section data={data} title="The lattice">
         <Text style={{ fontSize: 10, lineHeight: 1.4, color: soft }}>
           {pdfText(
-            `A ${r.tree.kind.toUpperCase()} binomial lattice of ${r.tree.steps} steps over ${snapshot.model.horizon} years (step ${r.tree.dt.toFixed(4)} years; up ${r.tree.u.toFixed(4)}, down ${r.tree.d.toFixed(4)}, risk-neutral probability ${r.tree.p.toFixed(4)}). The excerpt shows its first steps from today: V is the project's value, W its value with every right, and the label the decision taken at the node.`,
+            `A ${treeLabels[r.tree.kind]} binomial lattice of ${r.tree.steps} steps over ${snapshot.model.horizon} years (step ${r.tree.dt.toFixed(4)} years; up ${r.tree.u.toFixed(4)}, down ${r.tree.d.toFixed(4)}, risk-neutral probability ${r.tree.p.toFixed(4)}). The excerpt shows its first steps from today: V is the project's value, W its value with every right, and the label the decision taken at the node.`,
           )}
         </Text>
         <View style={{ marginTop: 10 }}>

@@ -11,6 +11,7 @@ import { analyseCashFlows } from '../cash-flows';
 import { formatMoney, formatPercent } from '../format';
 import type { CaseInput } from '../validations/case';
 import { pdfText } from './text';
+import { treeLabels } from '../tree-words';
 
 let fontsReady = false;
 
@@ -100,7 +101,7 @@ export function assumptionRows(inputs: CaseInput, model: ProjectModel, currency:
     ['Volatility of the project value', formatPercent(inputs.settings.volatility)],
     ['Where the volatility comes from', inputs.settings.volatilitySource?.note || 'Not stated'],
     ['Risk-free rate (continuous)', formatPercent(inputs.settings.riskFreeRate, 2)],
-    ['Lattice', `${inputs.settings.tree ?? 'crr'}, ${inputs.settings.steps} steps`],
+    ['Lattice', `${treeLabels[inputs.settings.tree ?? 'crr']}, ${inputs.settings.steps} steps`],
     ['Horizon', `${model.horizon} years`],
   ];
 }

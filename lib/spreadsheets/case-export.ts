@@ -14,6 +14,7 @@ import { describeRights } from '../option-words';
 import type { CaseInput } from '../validations/case';
 import { addCashFlowSheets } from './cash-flow-workbook';
 import { table } from './sheet-table';
+import { treeLabels } from '../tree-words';
 
 export interface CaseExport {
   projectName: string;
@@ -61,7 +62,7 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
       ['Volatility source', s.volatilitySource ? `${s.volatilitySource.method}: ${s.volatilitySource.note}` : 'not stated'],
       ['Risk-free rate (continuous)', s.riskFreeRate],
       ['Lattice steps', s.steps],
-      ['Tree', s.tree ?? 'crr'],
+      ['Tree', treeLabels[s.tree ?? 'crr']],
       ['Cash-flow timing', c.inputs.cashFlows.timing ?? 'end-of-year'],
     ],
   );

@@ -40,6 +40,12 @@ describe('comparisonRows', () => {
     expect(rows.find((r) => r[0] === 'Where the volatility comes from')?.[2]).toBe('from a price history: Five years of invented monthly values.');
   });
 
+  it('names the tree as the settings do, not by its id ("crr")', () => {
+    const changed = structuredClone(inputs);
+    changed.settings.tree = 'tian';
+    expect(differing(inputs, changed)).toContainEqual(['Tree', 'Cox–Ross–Rubinstein (1979)', 'Tian (1993, third moment)']);
+  });
+
   it('lines up schedules of different lengths, a missing year shown empty', () => {
     const longer = structuredClone(inputs);
     const last = longer.cashFlows.rows.at(-1)!;
