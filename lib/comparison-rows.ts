@@ -11,6 +11,7 @@ import { formatMoney } from './format';
 import { describeOption } from './option-words';
 import type { CaseInput } from './validations/case';
 import { treeLabels } from './tree-words';
+import { volatilitySourceText } from './volatility/method-words';
 
 /** The groups of rows, in the order they are shown. */
 export const comparisonGroups = ['Valuation', 'Rights', 'Assumptions', 'Cash flows'] as const;
@@ -31,8 +32,6 @@ const lines: [keyof Omit<CashFlowYear, 'year'>, string][] = [
   ['workingCapital', 'Working capital increase'],
   ['capex', 'Capex'],
 ];
-
-const volatilityMethods: Record<string, string> = { direct: 'stated directly', history: 'from a price history', 'monte-carlo': 'by Monte Carlo' };
 
 /**
  * Inputs as typed, to every decimal that matters: a difference is always visible in the text.
@@ -85,10 +84,7 @@ export function comparisonRows(inputs: CaseInput[], results: (ValuationResult | 
   add(
     'Assumptions',
     'Where the volatility comes from',
-    inputs.map((i) => {
-      const source = i.settings.volatilitySource;
-      return source ? `${volatilityMethods[source.method] ?? source.method}${source.note ? `: ${source.note}` : ''}` : 'Not stated';
-    }),
+    inputs.map((i) => volatilitySourceText(i.settings.volatilitySource)),
   );
   add(
     'Assumptions',

@@ -12,6 +12,7 @@ import { formatMoney, formatPercent } from '../format';
 import type { CaseInput } from '../validations/case';
 import { pdfText } from './text';
 import { treeLabels } from '../tree-words';
+import { volatilitySourceText } from '../volatility/method-words';
 
 let fontsReady = false;
 
@@ -99,7 +100,7 @@ export function assumptionRows(inputs: CaseInput, model: ProjectModel, currency:
     ['WACC', formatPercent(inputs.cashFlows.wacc)],
     ['Cash-flow timing', inputs.cashFlows.timing === 'mid-year' ? 'mid-year' : 'end of year'],
     ['Volatility of the project value', formatPercent(inputs.settings.volatility)],
-    ['Where the volatility comes from', inputs.settings.volatilitySource?.note || 'Not stated'],
+    ['Where the volatility comes from', volatilitySourceText(inputs.settings.volatilitySource)],
     ['Risk-free rate (continuous)', formatPercent(inputs.settings.riskFreeRate, 2)],
     ['Lattice', `${treeLabels[inputs.settings.tree ?? 'crr']}, ${inputs.settings.steps} steps`],
     ['Horizon', `${model.horizon} years`],

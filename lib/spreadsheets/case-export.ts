@@ -15,6 +15,7 @@ import type { CaseInput } from '../validations/case';
 import { addCashFlowSheets } from './cash-flow-workbook';
 import { table } from './sheet-table';
 import { treeLabels } from '../tree-words';
+import { volatilitySourceText } from '../volatility/method-words';
 
 export interface CaseExport {
   projectName: string;
@@ -59,7 +60,7 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
     ['Setting', 'Value'],
     [
       ['Volatility', s.volatility],
-      ['Volatility source', s.volatilitySource ? `${s.volatilitySource.method}: ${s.volatilitySource.note}` : 'not stated'],
+      ['Volatility source', volatilitySourceText(s.volatilitySource)],
       ['Risk-free rate (continuous)', s.riskFreeRate],
       ['Lattice steps', s.steps],
       ['Tree', treeLabels[s.tree ?? 'crr']],

@@ -37,7 +37,7 @@ describe('comparisonRows', () => {
     changed.settings.volatilitySource = { method: 'history', note: 'Five years of invented monthly values.' };
     const rows = differing(inputs, changed);
     expect(rows).toContainEqual(['WACC', '8.5 %', '8.51 %']);
-    expect(rows.find((r) => r[0] === 'Where the volatility comes from')?.[2]).toBe('from a price history: Five years of invented monthly values.');
+    expect(rows.find((r) => r[0] === 'Where the volatility comes from')?.[2]).toBe('Estimated from history: Five years of invented monthly values.');
   });
 
   it('names the tree as the settings do, not by its id ("crr")', () => {
