@@ -12,6 +12,7 @@ import { describeOption } from './option-words';
 import type { CaseInput } from './validations/case';
 import { treeLabels } from './tree-words';
 import { volatilitySourceText } from './volatility/method-words';
+import { timingLabels } from './timing-words';
 
 /** The groups of rows, in the order they are shown. */
 export const comparisonGroups = ['Valuation', 'Rights', 'Assumptions', 'Cash flows'] as const;
@@ -101,7 +102,7 @@ export function comparisonRows(inputs: CaseInput[], results: (ValuationResult | 
   add(
     'Assumptions',
     'Cash-flow timing',
-    inputs.map((i) => (i.cashFlows.timing === 'mid-year' ? 'mid-year' : 'end of year')),
+    inputs.map((i) => timingLabels[i.cashFlows.timing ?? 'end-of-year']),
   );
   add(
     'Assumptions',

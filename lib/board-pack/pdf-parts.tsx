@@ -13,6 +13,7 @@ import type { CaseInput } from '../validations/case';
 import { pdfText } from './text';
 import { treeLabels } from '../tree-words';
 import { volatilitySourceText } from '../volatility/method-words';
+import { timingLabels } from '../timing-words';
 
 let fontsReady = false;
 
@@ -98,7 +99,7 @@ export function assumptionRows(inputs: CaseInput, model: ProjectModel, currency:
     ['Underlying value V0 (PV of operating cash flows)', money(analysis.underlyingValue, currency)],
     ['NPV at the WACC', money(analysis.npvAtWacc, currency)],
     ['WACC', formatPercent(inputs.cashFlows.wacc)],
-    ['Cash-flow timing', inputs.cashFlows.timing === 'mid-year' ? 'mid-year' : 'end of year'],
+    ['Cash-flow timing', timingLabels[inputs.cashFlows.timing ?? 'end-of-year']],
     ['Volatility of the project value', formatPercent(inputs.settings.volatility)],
     ['Where the volatility comes from', volatilitySourceText(inputs.settings.volatilitySource)],
     ['Risk-free rate (continuous)', formatPercent(inputs.settings.riskFreeRate, 2)],

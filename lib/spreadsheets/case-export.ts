@@ -9,20 +9,23 @@ import { VALUATION_CAUTION } from '@/lib/caution';
 import type { ValuationResult } from '@/lattice';
 import { decisionRule, ruleInFull } from '../decision-rules';
 import { formatDateTime } from '../format';
-import { optionKindLabels } from '../option-form';
+import { optionKindLabels, type OptionKind } from '../option-form';
 import { describeRights } from '../option-words';
 import type { CaseInput } from '../validations/case';
 import { addCashFlowSheets } from './cash-flow-workbook';
 import { table } from './sheet-table';
 import { treeLabels } from '../tree-words';
 import { volatilitySourceText } from '../volatility/method-words';
+import type { CaseStatus } from '@/db/types';
+import { statusLabels } from '../review/transitions';
+import { timingLabels } from '../timing-words';
 
 export interface CaseExport {
   projectName: string;
   currency: string;
   caseName: string;
   version: number;
-  status: string;
+  status: CaseStatus;
   inputs: CaseInput;
   result: ValuationResult;
   valuedAt: string;
@@ -39,7 +42,7 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
       ['Project', c.projectName],
       ['Case', c.caseName],
       ['Version', c.version],
-      ['Status', c.status],
+      ['Status', statusLabels[c.status]],
       ['Currency', c.currency],
       ['Valued', formatDateTime(c.valuedAt)],
       ['Engine', c.result.engineVersion],
@@ -64,7 +67,7 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
       ['Risk-free rate (continuous)', s.riskFreeRate],
       ['Lattice steps', s.steps],
       ['Tree', treeLabels[s.tree ?? 'crr']],
-      ['Cash-flow timing', c.inputs.cashFlows.timing ?? 'end-of-year'],
+      ['Cash-flow timing', timingLabels[c.inputs.cashFlows.timing ?? 'end-of-year']],
     ],
   );
 
@@ -80,7 +83,14 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
   table(
     results,
     ['Right', 'Kind', 'Stand-alone value', 'Incremental value', 'Probability ever exercised', 'Decision rule'],
-    c.result.rights.map((r) => [r.id, r.kind, r.standalone, r.incremental, r.exerciseProbability, ruleInFull(decisionRule(r, c.currency))]),
+    c.result.rights.map((r) => [
+      r.id,
+      optionKindLabels[r.kind as OptionKind] ?? r.kind,
+      r.standalone,
+      r.incremental,
+      r.exerciseProbability,
+      ruleInFull(decisionRule(r, c.currency)),
+    ]),
   );
   results.getColumn(6).width = 100;
 

@@ -5,6 +5,7 @@ import { Select } from '@/components/ui/select';
 import { waccSchema, type CashFlowAnalysis, type CashFlowSchedule } from '@/lib/cash-flows';
 import { formatMoney, formatPercent } from '@/lib/format';
 import { CashFlowGrid } from './cash-flow-grid';
+import { timingLabels, type CashFlowTiming } from '@/lib/timing-words';
 
 interface Props {
   cashFlows: CashFlowSchedule;
@@ -45,11 +46,8 @@ export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onCha
           label="Cash-flow timing"
           value={cashFlows.timing ?? 'end-of-year'}
           disabled={readOnly}
-          onChange={(e) => onChange({ ...cashFlows, timing: e.target.value as 'end-of-year' | 'mid-year' })}
-          options={[
-            { value: 'end-of-year', label: 'End of year' },
-            { value: 'mid-year', label: 'Mid-year' },
-          ]}
+          onChange={(e) => onChange({ ...cashFlows, timing: e.target.value as CashFlowTiming })}
+          options={Object.entries(timingLabels).map(([value, label]) => ({ value, label }))}
           className="w-44"
         />
         <p className="max-w-md pb-1 text-caption text-ink-muted">

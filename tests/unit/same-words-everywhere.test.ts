@@ -1,0 +1,64 @@
+/**
+ * A case's settings read the same in the board pack, the workbook and the comparison as in the
+ * editor: the tree by its name, the cash-flow timing, where the volatility comes from, the case's
+ * status and the kind of each right. The pack printed "crr, 96 steps" a page after "A CRR
+ * binomial lattice", and the workbook "crr", "end-of-year", "direct: …", "in_review" and
+ * "expand". The demo plant (invented figures).
+ */
+import ExcelJS from 'exceljs';
+import { describe, expect, it } from 'vitest';
+import { demoBoardPackData, demoPlant } from '@/demo/board-pack-data';
+import { renderBoardPack } from '@/lib/board-pack/render';
+import { comparisonRows } from '@/lib/comparison-rows';
+import { caseWorkbook } from '@/lib/spreadsheets/case-export';
+import { pdfText } from './support/demo-pack';
+
+const { inputs, model } = demoPlant();
+// Mid-year and Tian, so that no default hides a raw id.
+const changed = {
+  ...inputs,
+  cashFlows: { ...inputs.cashFlows, timing: 'mid-year' as const },
+  settings: { ...inputs.settings, tree: 'tian' as const, volatilitySource: { method: 'history' as const, note: 'Five years of invented monthly values.' } },
+};
+const words = {
+  tree: 'Tian (1993, third moment)',
+  timing: 'Mid-year',
+  source: 'Estimated from history: Five years of invented monthly values.',
+};
+
+describe('the words for a case’s settings', () => {
+  it('are the same in the workbook, the board pack and the comparison', async () => {
+    const data = demoBoardPackData('A4', { inputs: changed });
+    const book = new ExcelJS.Workbook();
+    await book.xlsx.load(
+      (await caseWorkbook({
+        projectName: 'Plant',
+        currency: 'EUR',
+        caseName: changed.name,
+        version: 1,
+        status: 'in_review',
+        inputs: changed,
+        result: data.snapshot.result,
+        valuedAt: new Date(0).toISOString(),
+      })) as never,
+    );
+    const cells = (sheet: string) =>
+      book
+        .getWorksheet(sheet)!
+        .getSheetValues()
+        .flatMap((row) => (Array.isArray(row) ? row.map(String) : []));
+    expect(cells('Settings')).toEqual(expect.arrayContaining([words.tree, words.timing, words.source]));
+    expect(cells('Summary')).toContain('In review');
+    expect(cells('Results')).toEqual(expect.arrayContaining(['Expand', 'Abandon']));
+
+    // pdftotext breaks lines where the page does: compare with spaces made single.
+    const pack = pdfText(await renderBoardPack(data)).replace(/\s+/g, ' ');
+    expect(pack).toContain(`${words.tree}, ${model.steps} steps`);
+    expect(pack).toContain(`A ${words.tree} binomial lattice`);
+    expect(pack).toContain(`Cash-flow timing ${words.timing}`);
+    expect(pack).toContain(words.source);
+
+    const compared = Object.fromEntries(comparisonRows([inputs, changed], [null, null], ['EUR', 'EUR']).map((r) => [r.label, r.values[1]]));
+    expect([compared['Tree'], compared['Cash-flow timing'], compared['Where the volatility comes from']]).toEqual([words.tree, words.timing, words.source]);
+  });
+});
