@@ -13,6 +13,7 @@ import { premiumSplitText } from '@/lib/premium-split';
 import { optionKindLabels, type OptionKind } from '@/lib/option-form';
 import { palette } from '@/lib/palette';
 import { describeSnaps } from '@/lib/snap-words';
+import { treeLabels } from '@/lib/tree-words';
 
 /**
  * Probability of first exercise per year (summed over the steps of each year), as small bars;
@@ -133,7 +134,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
             <ConvergenceChart convergence={convergence} currency={currency} />
           </Panel>
         ) : null}
-        <Panel title="The lattice" note={`${result.tree.kind.toUpperCase()} tree, engine ${result.engineVersion}.`}>
+        <Panel title="The lattice" note={`${treeLabels[result.tree.kind]} tree, engine ${result.engineVersion}.`}>
           <dl className="figures grid grid-cols-3 gap-3 text-body">
             {[
               ['Steps', String(result.tree.steps)],
