@@ -78,7 +78,13 @@ export function BoundaryChart({
           years
         </text>
         <line x1={margin.left} x2={width - margin.right} y1={y(v0)} y2={y(v0)} stroke={palette.ink.muted} strokeDasharray="3 3" />
-        <text x={margin.left + 4} y={y(v0) - 4} className="fill-ink-muted text-caption">
+        {/* Observations start at the left, from the approval: their line struck through the label there. */}
+        <text
+          x={observed ? width - margin.right - 4 : margin.left + 4}
+          y={y(v0) - 4}
+          textAnchor={observed ? 'end' : 'start'}
+          className="fill-ink-muted text-caption"
+        >
           {v0Label} {formatMoney(v0)}
         </text>
         {observed
