@@ -151,7 +151,21 @@ export const demoPortfolio: DemoProject[] = [
     name: 'Phased bio-resin plant',
     description:
       'Phase 1 of a bio-resin plant now, with the right to add phase 2 in years 2–4 and to sell the plant for a salvage value that falls after year 4. Invented demo figures, EUR millions.',
-    cases: [plantBase, { ...plantBase, name: 'Volatile demand', settings: { ...plantBase.settings, volatility: 0.42 } }],
+    cases: [
+      plantBase,
+      {
+        ...plantBase,
+        name: 'Volatile demand',
+        settings: {
+          ...plantBase.settings,
+          volatility: 0.42,
+          volatilitySource: {
+            method: 'direct',
+            note: 'Invented for the demo: a stress case, the base case’s 30 % raised to 42 % for a demand that swings more.',
+          },
+        },
+      },
+    ],
     reviews: [
       {
         caseIndex: 0,
@@ -181,7 +195,18 @@ export const demoPortfolio: DemoProject[] = [
     name: 'Cold-storage hub',
     description:
       'A regional cold-storage hub that may be built now or at any time in the next three years, at a build cost rising 4 % a year. Invented demo figures, EUR millions.',
-    cases: [hubBase, { ...hubBase, name: 'Calmer market', settings: { ...hubBase.settings, volatility: 0.2 } }],
+    cases: [
+      hubBase,
+      {
+        ...hubBase,
+        name: 'Calmer market',
+        settings: {
+          ...hubBase.settings,
+          volatility: 0.2,
+          volatilitySource: { method: 'direct', note: 'Invented for the demo: the base case’s 28 % lowered to 20 % for long fixed-rent contracts.' },
+        },
+      },
+    ],
     reviews: [
       {
         caseIndex: 0,
