@@ -22,8 +22,9 @@ const CAPTION_PX = 12;
 /** Expanded NPV when each input moves down (left label) and up (right label); the widest swing is on top. */
 export function TornadoChart({ sensitivities, base, currency }: { sensitivities: Sensitivity[]; base: number; currency: string }) {
   const { ref, width } = useWidth<HTMLDivElement>();
-  // Below 480 px (a phone) each label goes above its bar, across the chart; wider, in a column
-  // left of the bars. Either way wrapped to fit, in full; rows grow to hold the longest.
+  // Below 480 px (a phone) each label goes above its bar, across the chart, each row as tall as
+  // its own label; wider, in a column left of the bars, every row as tall as the longest label.
+  // Either way wrapped to fit, in full.
   const above = width < 480;
   const labelWidth = Math.min(240, width * 0.35);
   const labels = new Map(
@@ -36,7 +37,7 @@ export function TornadoChart({ sensitivities, base, currency }: { sensitivities:
   const layout = layoutTornado(sensitivities, base, width, {
     labelWidth,
     // Above, the right margin only holds the last tick's overhang.
-    ...(above ? { labelSpace: lines * 15, rightWidth: 24 } : { rowHeight: Math.max(34, lines * 15 + 8) }),
+    ...(above ? { labelSpace: (s: Sensitivity) => (labels.get(s.parameter)?.length ?? 1) * 15, rightWidth: 24 } : { rowHeight: Math.max(34, lines * 15 + 8) }),
     tickCharWidth: SCREEN_LABEL_CHAR,
   });
   return (

@@ -31,6 +31,20 @@ describe('the sensitivity chart layout', () => {
     expect(layout.rows.at(-1)!.y + layout.rows.at(-1)!.bandHeight).toBeLessThanOrEqual(layout.height - layout.margin.bottom);
   });
 
+  it('with labels above, gives each row its own label’s height: no blank line over a short label', () => {
+    // Two lines for the sale's salvage, one for the others (as wrapped at 320 px).
+    const lines = (s: Sensitivity) => (s.parameter.startsWith('option:') ? 2 : 1);
+    const layout = layoutTornado(rows, 30, 270, { labelSpace: (s) => lines(s) * 15, rightWidth: 24 });
+    for (const [k, r] of layout.rows.entries()) {
+      // The label's lines (15 px each, the first centred on labelY) end where its bar begins, however many.
+      expect(r.y - (r.labelY - 6 + lines(r.sensitivity) * 15)).toBe(0);
+      if (k > 0) expect(r.labelY - 6).toBeGreaterThanOrEqual(layout.rows[k - 1]!.y + layout.rows[k - 1]!.bandHeight);
+    }
+    const uniform = layoutTornado(rows, 30, 270, { labelSpace: 30, rightWidth: 24 });
+    // One row of two lines and two of one: two lines' height (30 px) less than every row at two.
+    expect(uniform.height - layout.height).toBe(30);
+  });
+
   it('beside (the desktop and the board pack), keeps the label column and centres each label on its bar', () => {
     const layout = layoutTornado(rows, 30, 800, { labelWidth: 240 });
     expect(layout.margin.left).toBe(240);
