@@ -1,8 +1,8 @@
 'use client';
 
 import { SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
-import { layoutNpvComparison, type NpvPair } from '@/lib/charts/npv-comparison';
-import { fitsWhole, textWidth, wrapLabel } from '@/lib/charts/wrap-label';
+import { layoutNpvComparison, npvFigures, npvLabelPlacement, type NpvPair } from '@/lib/charts/npv-comparison';
+import { textWidth, wrapLabel } from '@/lib/charts/wrap-label';
 import { formatMoney } from '@/lib/format';
 import { useWidth } from './use-width';
 import { palette } from '@/lib/palette';
@@ -13,15 +13,8 @@ import { palette } from '@/lib/palette';
  */
 export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[]; currency?: string; title: string }) {
   const { ref, width } = useWidth<HTMLDivElement>();
-  // Below 480 px (a phone) the labels go above their rows; wider, left of them, and wrapped to
-  // the label column, so labels never run off the left edge.
-  const labelsAbove = width < 480;
-  const figures = (r: NpvPair) => `${formatMoney(r.staticNpv)} → ${formatMoney(r.expandedNpv)}`;
-  // Above, the line is the chart's width less 24 px of margins; a name that does not fit beside
-  // its figures gets the line to itself and the figures go under it.
-  const line = width - 24;
-  const figuresOwnLine = labelsAbove && items.some((r) => !fitsWhole(r.label, line - textWidth(figures(r), 12) - 12, 15, 1));
-  const layout = layoutNpvComparison(items, width, { labelWidth: Math.min(260, width * 0.32), tickCharWidth: SCREEN_LABEL_CHAR, labelsAbove, figuresOwnLine });
+  const { labelWidth, labelsAbove, figuresOwnLine, line } = npvLabelPlacement(items, width);
+  const layout = layoutNpvComparison(items, width, { labelWidth, tickCharWidth: SCREEN_LABEL_CHAR, labelsAbove, figuresOwnLine });
   // The grid and the zero line run the chart's height; with labels above the marks, only across
   // each row's marks (and from the last row to the axis), so they do not strike through a name.
   const bottom = layout.height - layout.margin.bottom;
@@ -77,7 +70,7 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
             {layout.labelsAbove ? (
               <>
                 <text x={layout.margin.left} y={r.labelY} dy="0.35em" className="fill-ink text-body">
-                  {wrapLabel(r.label, figuresOwnLine ? line : line - textWidth(figures(r), 12) - 12, 15, 1)[0]}
+                  {wrapLabel(r.label, figuresOwnLine ? line : line - textWidth(npvFigures(r), 12) - 12, 15, 1)[0]}
                 </text>
                 <text
                   x={figuresOwnLine ? layout.margin.left : layout.width - layout.margin.right}
@@ -86,7 +79,7 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
                   textAnchor={figuresOwnLine ? 'start' : 'end'}
                   className="fill-ink-soft text-caption figures"
                 >
-                  {figures(r)}
+                  {npvFigures(r)}
                 </text>
               </>
             ) : (
@@ -103,7 +96,7 @@ export function NpvComparisonChart({ items, currency, title }: { items: NpvPair[
             <circle cx={r.expandedX} cy={r.y} r="6.5" fill={palette.tide[500]} />
             {layout.labelsAbove ? null : (
               <text x={Math.max(r.staticX, r.expandedX) + 12} y={r.y} dy="0.35em" className="fill-ink-soft text-caption figures">
-                {figures(r)}
+                {npvFigures(r)}
               </text>
             )}
           </g>

@@ -12,7 +12,9 @@
  * under the name, so the name is not cut either.
  */
 import { scaleBand, scaleLinear } from 'd3';
+import { formatMoney } from '../format';
 import { axisTicks } from './axis';
+import { fitsWhole, textWidth } from './wrap-label';
 
 export interface NpvPair {
   id: string;
@@ -81,4 +83,22 @@ export function layoutNpvComparison(
       return { ...i, y: marksY, labelY, figuresY, staticX: x(i.staticNpv), expandedX: x(i.expandedNpv) };
     }),
   };
+}
+
+/** A row's figures as the chart prints them: static → expanded. */
+export const npvFigures = (r: NpvPair) => `${formatMoney(r.staticNpv)} → ${formatMoney(r.expandedNpv)}`;
+
+/**
+ * Where a screen chart of `width` px puts its names (15 px text; figures 12 px): left of the rows
+ * in a column, wrapped to two lines; below 480 px (a phone), or when a name would not fit those
+ * two lines whole, above the rows across the chart (comparing two cases beside the case list, a
+ * 625 px chart read "Volatile demand (Phased bio-resin…"). Above, a name that does not fit beside
+ * its figures on the line (the chart's width less 24 px of margins) gets the line to itself.
+ */
+export function npvLabelPlacement(items: NpvPair[], width: number): { labelWidth: number; labelsAbove: boolean; figuresOwnLine: boolean; line: number } {
+  const labelWidth = Math.min(260, width * 0.32);
+  const labelsAbove = width < 480 || items.some((r) => !fitsWhole(r.label, labelWidth - 16, 15, 2));
+  const line = width - 24;
+  const figuresOwnLine = labelsAbove && items.some((r) => !fitsWhole(r.label, line - textWidth(npvFigures(r), 12) - 12, 15, 1));
+  return { labelWidth, labelsAbove, figuresOwnLine, line };
 }

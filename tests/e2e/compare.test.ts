@@ -47,6 +47,10 @@ describe('comparing cases', () => {
         .getByText('differs')
         .isVisible(),
     ).toBe(true);
+    // The chart keeps each name whole at 1280 px: beside the case list it read "Volatile demand (Phased bio-resin…".
+    const chart = page.getByRole('img', { name: /^Per case:/ });
+    await expect.poll(() => chart.isVisible(), { timeout: 20_000 }).toBe(true);
+    expect((await chart.locator('text').allTextContents()).filter((t) => t.includes('…'))).toEqual([]);
     const expanded = api.rows.find((r: { label: string }) => r.label === 'Expanded NPV');
     for (const v of expanded.values) expect(await page.getByRole('cell', { name: v }).first().isVisible()).toBe(true);
 

@@ -5,7 +5,8 @@
  * stays inside the drawing. Figures invented.
  */
 import { describe, expect, it } from 'vitest';
-import { layoutNpvComparison, type NpvPair } from '@/lib/charts/npv-comparison';
+import { layoutNpvComparison, npvFigures, npvLabelPlacement, type NpvPair } from '@/lib/charts/npv-comparison';
+import { textWidth, wrapLabel } from '@/lib/charts/wrap-label';
 import { SCREEN_LABEL_CHAR } from '@/lib/charts/axis';
 
 const items: NpvPair[] = [
@@ -51,5 +52,23 @@ describe('the NPV comparison layout', () => {
     expect(layout.labelsAbove).toBe(false);
     for (const r of layout.rows) expect([r.labelY, r.figuresY]).toEqual([r.y, r.y]);
     expect([layout.margin.left, layout.margin.right]).toEqual([260, 130]);
+  });
+
+  it('puts the names above their rows, whole, when one would not fit two lines of the column', () => {
+    // Two cases compared beside the case list at 1280 px: a 625 px chart (its 665 px panel less
+    // padding), a 200 px label column, and "Volatile demand (Phased bio-resin…" in it.
+    const cases: NpvPair[] = [
+      { id: 'a', label: 'Base case (Phased bio-resin plant)', staticNpv: -11, expandedNpv: 20.1 },
+      { id: 'b', label: 'Volatile demand (Phased bio-resin plant)', staticNpv: -11, expandedNpv: 32.6 },
+    ];
+    const placed = npvLabelPlacement(cases, 625);
+    expect(wrapLabel(cases[1]!.label, placed.labelWidth - 16, 15, 2).join(' ')).toContain('…');
+    expect(placed).toMatchObject({ labelsAbove: true, figuresOwnLine: false });
+    // Above, each name fits whole on its line beside its figures, as the chart draws it.
+    for (const r of cases) expect(wrapLabel(r.label, placed.line - textWidth(npvFigures(r), 12) - 12, 15, 1)).toEqual([r.label]);
+    // The portfolio's project names fit the column at the same width: they stay beside their rows.
+    expect(npvLabelPlacement(items, 625).labelsAbove).toBe(false);
+    // A phone puts them above whatever their length.
+    expect(npvLabelPlacement(items, 400).labelsAbove).toBe(true);
   });
 });
