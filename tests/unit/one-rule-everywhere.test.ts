@@ -5,7 +5,6 @@
  * payments, a mothball right's restart). Before, the workbook showed the grid's first exercise
  * (year 0.8) and the pack a rule from "year 0.0". The demo's cases (invented figures).
  */
-import ExcelJS from 'exceljs';
 import { describe, expect, it } from 'vitest';
 import { demoBoardPackData } from '@/demo/board-pack-data';
 import { demoPortfolio } from '@/demo/portfolio';
@@ -13,27 +12,15 @@ import { valueProject, type ValuationResult } from '@/lattice';
 import { caseToModel } from '@/lib/case-model';
 import { decisionRule, ruleInFull, ruleLines } from '@/lib/decision-rules';
 import { renderBoardPack } from '@/lib/board-pack/render';
-import { caseWorkbook } from '@/lib/spreadsheets/case-export';
 import type { CaseInput } from '@/lib/validations/case';
+import { readCaseWorkbook } from './support/case-workbook';
 import { pdfText } from './support/demo-pack';
 
 /** The rules of a stored run, and the same rules as the workbook and the board pack print them. */
 async function rulesEverywhere(inputs: CaseInput) {
   const stored = JSON.parse(JSON.stringify(valueProject(caseToModel(inputs).model, { grid: { steps: 4 } }))) as ValuationResult;
   const rules = stored.rights.map((s) => decisionRule(s, 'EUR'));
-  const book = new ExcelJS.Workbook();
-  await book.xlsx.load(
-    (await caseWorkbook({
-      projectName: 'Plant',
-      currency: 'EUR',
-      caseName: inputs.name,
-      version: 1,
-      status: 'approved',
-      inputs,
-      result: stored,
-      valuedAt: new Date(0).toISOString(),
-    })) as never,
-  );
+  const book = await readCaseWorkbook(inputs, stored, 'approved');
   const sheet = book.getWorksheet('Results')!;
   const fromWorkbook = stored.rights.map((_, k) => String(sheet.getRow(k + 2).getCell(6).value));
   const pack = pdfText(await renderBoardPack(demoBoardPackData('A4', { inputs, result: stored })));

@@ -5,12 +5,11 @@
  * binomial lattice", and the workbook "crr", "end-of-year", "direct: …", "in_review" and
  * "expand". The demo plant (invented figures).
  */
-import ExcelJS from 'exceljs';
 import { describe, expect, it } from 'vitest';
 import { demoBoardPackData, demoPlant } from '@/demo/board-pack-data';
 import { renderBoardPack } from '@/lib/board-pack/render';
 import { comparisonRows } from '@/lib/comparison-rows';
-import { caseWorkbook } from '@/lib/spreadsheets/case-export';
+import { readCaseWorkbook } from './support/case-workbook';
 import { pdfText } from './support/demo-pack';
 
 const { inputs, model } = demoPlant();
@@ -29,19 +28,7 @@ const words = {
 describe('the words for a case’s settings', () => {
   it('are the same in the workbook, the board pack and the comparison', async () => {
     const data = demoBoardPackData('A4', { inputs: changed });
-    const book = new ExcelJS.Workbook();
-    await book.xlsx.load(
-      (await caseWorkbook({
-        projectName: 'Plant',
-        currency: 'EUR',
-        caseName: changed.name,
-        version: 1,
-        status: 'in_review',
-        inputs: changed,
-        result: data.snapshot.result,
-        valuedAt: new Date(0).toISOString(),
-      })) as never,
-    );
+    const book = await readCaseWorkbook(changed, data.snapshot.result, 'in_review');
     const cells = (sheet: string) =>
       book
         .getWorksheet(sheet)!
