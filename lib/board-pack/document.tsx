@@ -27,6 +27,7 @@ import { pdfText } from './text';
 import { palette, seriesFill } from '@/lib/palette';
 import { assumptionRows, money, PageFooter, pdfColours, SectionPage, styles, Table } from './pdf-parts';
 import { treeLabels } from '../tree-words';
+import { warningSentence } from '../warning-words';
 
 const { ink, soft, muted, tide, brick } = pdfColours;
 
@@ -439,6 +440,17 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
               `Convergence: expanded NPV ${r.convergence.points.map((p) => `${money(convergedNpv(p, r), currency, 2)} at ${p.steps} steps`).join(', ')}${r.convergence.band ? `; lattice error band ${money(r.convergence.band.low, currency, 2)} to ${money(r.convergence.band.high, currency, 2)}` : ''}.`,
             )}
           </Text>
+        ) : null}
+        {/* Results shows these beside the figures; a committee reading the pack sees them too. */}
+        {r.warnings.length > 0 ? (
+          <View style={{ marginTop: 10 }}>
+            <Text style={styles.h3}>The engine&apos;s warnings</Text>
+            {r.warnings.map((w, k) => (
+              <Text key={k} style={{ fontSize: 10, lineHeight: 1.4, color: soft }}>
+                {pdfText(`• ${warningSentence(w)}`)}
+              </Text>
+            ))}
+          </View>
         ) : null}
       </Section>
 

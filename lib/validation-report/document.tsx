@@ -16,6 +16,7 @@ import { premiumSplitText } from '../premium-split';
 import { volatilityMethodLabels } from '../volatility/method-words';
 import { treeLabels } from '../tree-words';
 import type { ValidationReportData } from './data';
+import { warningSentence } from '../warning-words';
 
 function Footer({ data }: { data: ValidationReportData }) {
   const about = `${data.project.name} · ${data.caseName} · version ${data.caseVersion} · ${formatDateTime(data.generatedAt)}${data.isDemo ? ' · invented demo figures' : ''}`;
@@ -148,7 +149,7 @@ export function ValidationReportDocument({ data }: { data: ValidationReportData 
           <>
             <Text style={styles.h3}>The engine&apos;s warnings</Text>
             {result.warnings.map((w, k) => (
-              <Para key={k}>{`• ${w}`}</Para>
+              <Para key={k}>{`• ${warningSentence(w)}`}</Para>
             ))}
           </>
         ) : null}

@@ -3,7 +3,7 @@
  * editor: the tree by its name, the cash-flow timing, where the volatility comes from, the case's
  * status and the kind of each right. The pack printed "crr, 96 steps" a page after "A CRR
  * binomial lattice", and the workbook "crr", "end-of-year", "direct: …", "in_review" and
- * "expand". The demo plant (invented figures).
+ * "expand". The engine's warnings read in the pack as in Results. The demo plant (invented figures).
  */
 import { describe, expect, it } from 'vitest';
 import { demoBoardPackData, demoPlant } from '@/demo/board-pack-data';
@@ -11,6 +11,7 @@ import { renderBoardPack } from '@/lib/board-pack/render';
 import { comparisonRows } from '@/lib/comparison-rows';
 import { readCaseWorkbook } from './support/case-workbook';
 import { pdfText } from './support/demo-pack';
+import { warningSentence } from '@/lib/warning-words';
 
 const { inputs, model } = demoPlant();
 // Mid-year and Tian, so that no default hides a raw id.
@@ -47,5 +48,15 @@ describe('the words for a case’s settings', () => {
 
     const compared = Object.fromEntries(comparisonRows([inputs, changed], [null, null], ['EUR', 'EUR']).map((r) => [r.label, r.values[1]]));
     expect([compared['Tree'], compared['Cash-flow timing'], compared['Where the volatility comes from']]).toEqual([words.tree, words.timing, words.source]);
+  });
+
+  it('the engine’s warnings read in the board pack as Results shows them', async () => {
+    // The pack was silent where Results warned: the demo plant's lattice error band (± 1.88 on
+    // an expanded NPV of 20.1 at 96 steps) is over 1 % of it.
+    const data = demoBoardPackData('A4');
+    const warnings = data.snapshot.result.warnings;
+    expect(warnings.some((w) => w.includes('lattice error band'))).toBe(true);
+    const pack = pdfText(await renderBoardPack(data)).replace(/\s+/g, ' ');
+    for (const w of warnings) expect(pack).toContain(warningSentence(w).replace(/\s+/g, ' '));
   });
 });

@@ -14,6 +14,7 @@ import { optionKindLabels, type OptionKind } from '@/lib/option-form';
 import { palette } from '@/lib/palette';
 import { describeSnaps } from '@/lib/snap-words';
 import { treeLabels } from '@/lib/tree-words';
+import { warningSentence } from '@/lib/warning-words';
 
 /**
  * Probability of first exercise per year (summed over the steps of each year), as small bars;
@@ -163,7 +164,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
       {result.warnings.length > 0 ? (
         <ul className="rounded-md border border-ember-500 bg-ember-100 px-4 py-2 text-caption text-ember-700">
           {result.warnings.map((w) => (
-            <li key={w}>{w.charAt(0).toUpperCase() + w.slice(1)}.</li>
+            <li key={w}>{warningSentence(w)}</li>
           ))}
         </ul>
       ) : null}
