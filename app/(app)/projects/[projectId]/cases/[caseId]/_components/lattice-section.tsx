@@ -189,7 +189,8 @@ export function LatticeSection({ model, modes, startMode, result, currency }: Pr
           <>
             <p className="mb-3 text-caption text-ink-muted">
               The nodes of the lattice by time and project value, filled by the decision taken in this mode: all but the least likely (together under 1 in
-              5,000, risk-neutral), with the value axis fitted to the years up to the last node where a right is used.
+              5,000, risk-neutral), with the value axis fitted to the years up to the last node where a right is used (the whole horizon if none is used after
+              today).
             </p>
             <DecisionMap grid={grid} p={lattice.result.tree.p} mode={activeMode} fills={seriesStrong} order={order} />
           </>
