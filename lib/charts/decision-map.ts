@@ -29,9 +29,9 @@ export interface DecisionMapLayout {
 /**
  * Lays out one mode's decision map. At step i a node with j up-moves is reached with the
  * binomial probability C(i, j)·p^j·(1 − p)^(i − j) (payouts move nodes, not p: docs/engine.md
- * §3), so the nodes left out at each end carry at most `tail` of probability between them.
- * The value axis fits the steps where this mode's rights can be used; later nodes that fall
- * below it (as the last year's payout drains the project) leave the chart at its foot.
+ * §3), and the nodes left out at each end carry at most `tail` of it. The value axis fits the
+ * steps up to the last one where this mode uses a right; later nodes outside it (the spread
+ * grows, and the last year's payout drains the project) are clipped at the chart's edges.
  */
 export function decisionMapLayout(grid: NodeGrid, mode: string, p: number, tail = MAP_TAIL): DecisionMapLayout {
   const cells: MapCell[] = [];
