@@ -301,6 +301,17 @@ describe('accounts', () => {
     });
     expect(common.status()).toBe(400);
     expect((await common.json()).message).toMatch(/most common/);
+    // The sign-up form says so under the password, typed as a person would.
+    const form = await context.newPage();
+    await form.goto('/sign-up');
+    await form.getByLabel('Your name').pressSequentially('Pat Common', { delay: 5 });
+    await form.getByLabel('E-mail').pressSequentially(`common.form.${Date.now()}@example.com`, { delay: 5 });
+    await form.getByLabel('Password').pressSequentially('password12', { delay: 5 });
+    await form.getByRole('button', { name: 'Create account' }).click();
+    const password = form.getByLabel('Password');
+    await expect.poll(() => password.getAttribute('aria-invalid'), { timeout: 30_000 }).toBe('true');
+    expect(await form.getByText('This password is one of the most common ones').isVisible()).toBe(true);
+    await form.close();
     const signIn = await context.request.post('/api/auth/sign-in/email', { data: { email: 'analyst@kestrelbay.example', password: 'leeway-demo-2026' } });
     expect(signIn.status()).toBe(200);
     const body = await signIn.json();
