@@ -52,6 +52,11 @@ export const optionKindLabels: Record<OptionKind, string> = {
   mothball: 'Mothball & restart',
 };
 
+/** A right's kind as a result names it, in the cards' words (a kind no card has, as the engine wrote it). */
+export function rightKindLabel(kind: string): string {
+  return optionKindLabels[kind as OptionKind] ?? kind;
+}
+
 const num = (value: number) => String(Number(value.toPrecision(12)));
 const pct = (fraction: number) => num(fraction * 100);
 

@@ -9,7 +9,7 @@ import { VALUATION_CAUTION } from '@/lib/caution';
 import type { ValuationResult } from '@/lattice';
 import { decisionRule, ruleInFull } from '../decision-rules';
 import { formatDateTime } from '../format';
-import { optionKindLabels, type OptionKind } from '../option-form';
+import { optionKindLabels, rightKindLabel } from '../option-form';
 import { describeRights } from '../option-words';
 import type { CaseInput } from '../validations/case';
 import { addCashFlowSheets } from './cash-flow-workbook';
@@ -83,14 +83,7 @@ export async function caseWorkbook(c: CaseExport): Promise<Buffer> {
   table(
     results,
     ['Right', 'Kind', 'Stand-alone value', 'Incremental value', 'Probability ever exercised', 'Decision rule'],
-    c.result.rights.map((r) => [
-      r.id,
-      optionKindLabels[r.kind as OptionKind] ?? r.kind,
-      r.standalone,
-      r.incremental,
-      r.exerciseProbability,
-      ruleInFull(decisionRule(r, c.currency)),
-    ]),
+    c.result.rights.map((r) => [r.id, rightKindLabel(r.kind), r.standalone, r.incremental, r.exerciseProbability, ruleInFull(decisionRule(r, c.currency))]),
   );
   results.getColumn(6).width = 100;
 

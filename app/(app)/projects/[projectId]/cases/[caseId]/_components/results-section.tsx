@@ -10,7 +10,7 @@ import type { RightResult, ValuationResult } from '@/lattice';
 import { decisionRule, ruleLines } from '@/lib/decision-rules';
 import { formatMoney, formatPercent } from '@/lib/format';
 import { premiumSplitText } from '@/lib/premium-split';
-import { optionKindLabels, type OptionKind } from '@/lib/option-form';
+import { rightKindLabel } from '@/lib/option-form';
 import { palette } from '@/lib/palette';
 import { describeSnaps } from '@/lib/snap-words';
 import { treeLabels } from '@/lib/tree-words';
@@ -95,7 +95,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
                 <Tr key={s.id}>
                   <Td>
                     <span className="font-medium">{s.id}</span>
-                    <span className="ml-2 text-caption text-ink-muted">{optionKindLabels[s.kind as OptionKind] ?? s.kind}</span>
+                    <span className="ml-2 text-caption text-ink-muted">{rightKindLabel(s.kind)}</span>
                     {ruleLines(decisionRule(s, currency)).map((text) => (
                       <p key={text} className="mt-0.5 max-w-xl text-caption text-ink-soft">
                         {text}
