@@ -85,6 +85,19 @@ describe('on a phone-sized screen', () => {
       // The charts were held at 320 px wide and ran 10 px past their cards at 360 px; the decision
       // map's caption ran past its chart's right edge at 320; the bridge cut its names at both.
       const { context, page } = await signedInPage('executive@kestrelbay.example', { viewport: { width, height: 800 } });
+      // Every time the page changes, note any chart drawn wider than the screen, however briefly:
+      // a chart once showed at its 720 px fallback until its width was measured after the paint,
+      // and a check of the settled page caught that only when the machine was slow.
+      await page.addInitScript(() => {
+        const seen: string[] = [];
+        Object.assign(window, { wideCharts: seen });
+        new MutationObserver(() => {
+          for (const svg of document.querySelectorAll('svg[role="img"]')) {
+            const drawn = Number(svg.getAttribute('width'));
+            if (drawn > window.innerWidth) seen.push(`${svg.getAttribute('aria-label')!.slice(0, 40)}: ${drawn} px`);
+          }
+        }).observe(document, { subtree: true, childList: true, attributes: true, attributeFilter: ['width'] });
+      });
       for (const address of ['/portfolio', `${caseUrl}?tab=results`, `${caseUrl}?tab=lattice`, `${caseUrl}?tab=watch`]) {
         await page.goto(address);
         await expect.poll(() => page.locator('svg[role="img"]:visible').count(), { timeout: 60_000, interval: 1_000 }).toBeGreaterThan(0);
@@ -105,7 +118,8 @@ describe('on a phone-sized screen', () => {
               return [...(box.right > card.right ? [{ chart, text: 'the chart itself' }] : []), ...words, ...cut];
             }),
         );
-        expect({ address, outside }).toEqual({ address, outside: [] });
+        const wide = await page.evaluate(() => [...new Set((window as unknown as { wideCharts: string[] }).wideCharts)]);
+        expect({ address, outside, wide }).toEqual({ address, outside: [], wide: [] });
       }
       await context.close();
     },
