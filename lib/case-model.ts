@@ -12,6 +12,10 @@ import { caseInputSchema, type CaseInput } from './validations/case';
 export function caseToModel(input: CaseInput): { model: ProjectModel; warnings: string[] } {
   const parsed = caseInputSchema.parse(input);
   const analysis = analyseCashFlows(parsed.cashFlows);
+  if (analysis.blank)
+    throw new AppError('unprocessable', 'The cash flows are all zero; enter the project’s yearly figures on the Cash flows tab.', {
+      cashFlows: ['Every figure is zero.'],
+    });
   if (!(analysis.underlyingValue > 0))
     throw new AppError('unprocessable', 'The operating cash flows are worth nothing or less (V0 ≤ 0), so there is no project value to put on a lattice.', {
       cashFlows: ['V0 must be positive.'],

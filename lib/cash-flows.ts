@@ -61,7 +61,33 @@ export interface CashFlowAnalysis {
   outlays: { year: number; amount: number; discountFactor: number }[];
   /** Per year t ≥ 1, the share of the value still to come that the year (t − 1, t] pays out. */
   payouts: { at: number; fraction: number }[];
+  /** True while every figure of every year is zero: a new case, nothing entered yet. */
+  blank: boolean;
   warnings: string[];
+}
+
+/** Why a year pays nothing out, as one sentence for a run of years ("Year 3" or "Years 1–5"). */
+const noPayoutReasons = {
+  'nothing-left': (years: string) => `${years}: the value of the cash flows still to come is not positive, so no payout is derived.`,
+  'negative-year': (years: string, several: boolean) =>
+    several
+      ? `${years}: the operating cash flow is negative each year; the lattice takes no payout in them.`
+      : `${years}: the operating cash flow is negative; the lattice takes no payout that year.`,
+};
+type NoPayoutReason = keyof typeof noPayoutReasons;
+
+/**
+ * One warning per run of consecutive years with the same reason: a new schedule with nothing
+ * entered listed the same sentence once for every year.
+ */
+function noPayoutWarnings(years: { year: number; reason: NoPayoutReason }[]): string[] {
+  const runs: { from: number; to: number; reason: NoPayoutReason }[] = [];
+  for (const { year, reason } of years) {
+    const last = runs.at(-1);
+    if (last && last.reason === reason && last.to === year - 1) last.to = year;
+    else runs.push({ from: year, to: year, reason });
+  }
+  return runs.map((r) => noPayoutReasons[r.reason](r.from === r.to ? `Year ${r.from}` : `Years ${r.from}–${r.to}`, r.from !== r.to));
 }
 
 export function analyseCashFlows(input: CashFlowSchedule): CashFlowAnalysis {
@@ -79,6 +105,7 @@ export function analyseCashFlows(input: CashFlowSchedule): CashFlowAnalysis {
   const npvAtWacc = analysed.reduce((sum, r) => sum + r.presentValue, 0);
 
   const payouts: CashFlowAnalysis['payouts'] = [];
+  const noPayout: { year: number; reason: NoPayoutReason }[] = [];
   // Year t's operating cash is the share f_t of the value still to come that the year pays
   // out; the lattice spreads it over the year (t − 1, t] as a yield (docs/engine.md §4). The
   // last year pays out (almost) everything left: the schedule carries no value beyond it.
@@ -87,17 +114,17 @@ export function analyseCashFlows(input: CashFlowSchedule): CashFlowAnalysis {
     if (r.year === 0) continue;
     // Value at year t of the operating cash from t on, in year-t money.
     const remaining = analysed.slice(k).reduce((sum, s) => sum + s.operatingCashFlow * s.discountFactor, 0) / r.discountFactor;
-    if (!(remaining > 0)) {
-      warnings.push(`Year ${r.year}: the value of the cash flows still to come is not positive, so no payout is derived from it.`);
-      continue;
-    }
-    if (r.operatingCashFlow < 0) {
-      warnings.push(`Year ${r.year}: the operating cash flow is negative; the lattice takes no payout that year.`);
-      continue;
-    }
-    payouts.push({ at: r.year, fraction: Math.min(r.operatingCashFlow / remaining, 0.999999) });
+    if (!(remaining > 0)) noPayout.push({ year: r.year, reason: 'nothing-left' });
+    else if (r.operatingCashFlow < 0) noPayout.push({ year: r.year, reason: 'negative-year' });
+    else payouts.push({ at: r.year, fraction: Math.min(r.operatingCashFlow / remaining, 0.999999) });
   }
-  if (underlyingValue <= 0) warnings.push('The operating cash flows are worth nothing or less (V0 ≤ 0): the lattice needs a positive project value.');
+  // A schedule with nothing entered yet is not wrong: it says so once (the editor shows a
+  // prompt), instead of a warning for every year.
+  const blank = rows.every((r) => r.revenue === 0 && r.operatingCost === 0 && r.capex === 0 && r.tax === 0 && r.workingCapital === 0);
+  if (!blank) {
+    warnings.push(...noPayoutWarnings(noPayout));
+    if (underlyingValue <= 0) warnings.push('The operating cash flows are worth nothing or less (V0 ≤ 0): the lattice needs a positive project value.');
+  }
 
   const sum = (key: keyof CashFlowYear) => rows.reduce((s, r) => s + r[key], 0);
   return {
@@ -115,6 +142,7 @@ export function analyseCashFlows(input: CashFlowSchedule): CashFlowAnalysis {
     npvAtWacc,
     outlays: analysed.filter((r) => r.capex !== 0).map((r) => ({ year: r.year, amount: r.capex, discountFactor: r.discountFactor })),
     payouts,
+    blank,
     warnings,
   };
 }

@@ -73,4 +73,22 @@ describe('cash-flow arithmetic', () => {
     expect(a.warnings[0]).toContain('Year 1: the operating cash flow is negative');
     expect(() => analyseCashFlows({ wacc: 0.1, rows: [year(1, 1, 0, 0), year(3, 1, 0, 0)] })).toThrow('Years must follow one another: expected 2, got 3.');
   });
+
+  it('says once for a run of years what it would otherwise repeat for each', () => {
+    // Years 1 and 2 lose money, 3 and 4 earn: two negative years, one sentence.
+    const early = analyseCashFlows({ wacc: 0.1, rows: [year(0, 0, 0, 0, 20), year(1, 5, 30, 0), year(2, 5, 30, 0), year(3, 80, 30, 0), year(4, 80, 30, 0)] });
+    expect(early.warnings).toEqual(['Years 1–2: the operating cash flow is negative each year; the lattice takes no payout in them.']);
+    // A schedule whose later years are worth nothing: years 1–3 in one sentence, then V0 ≤ 0.
+    const worthless = analyseCashFlows({ wacc: 0.1, rows: [year(0, 0, 0, 0, 20), year(1, 0, 1, 0), year(2, 0, 1, 0), year(3, 0, 1, 0)] });
+    expect(worthless.warnings).toEqual([
+      'Years 1–3: the value of the cash flows still to come is not positive, so no payout is derived.',
+      'The operating cash flows are worth nothing or less (V0 ≤ 0): the lattice needs a positive project value.',
+    ]);
+    expect(worthless.blank).toBe(false);
+  });
+
+  it('treats a schedule with nothing entered as blank, not as six warnings', () => {
+    const blank = analyseCashFlows({ wacc: 0.085, rows: [0, 1, 2, 3, 4, 5].map((t) => year(t, 0, 0, 0)) });
+    expect(blank).toMatchObject({ blank: true, warnings: [], payouts: [] });
+  });
 });

@@ -81,7 +81,12 @@ export function CashFlowSection({ cashFlows, analysis, currency, readOnly, onCha
               Each year the project pays out its operating cash flow, a share of the value still to come. The lattice spreads that share over the year, so a
               decision on any date sees the value net of the cash already earned.
             </p>
-            {analysis.payouts.length === 0 ? (
+            {analysis.blank ? (
+              <p className="text-ink-soft">
+                No figures yet: type or paste each year&rsquo;s revenue, costs and capex above, or import a workbook. The payouts, and the valuation, follow
+                from them.
+              </p>
+            ) : analysis.payouts.length === 0 ? (
               <p className="text-ink-soft">No payouts: no year after year 0 has a positive operating cash flow.</p>
             ) : (
               <ul className="figures flex flex-wrap gap-2">
