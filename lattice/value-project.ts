@@ -8,6 +8,7 @@ import { prepareModel } from './check-model';
 import { ModelError } from './errors';
 import { assertFinite } from './finite';
 import { MAX_REQUEST_CELLS, MAX_STEPS, NODE_BUDGET } from './limits';
+import { isPlanLike, PLAN_LIKE } from './plan-like';
 import type { Convergence, Sensitivity, ValuationResult } from './result';
 import type { Cost, ExerciseWindow, ProjectModel } from './schema';
 import type { Years } from './units';
@@ -139,9 +140,6 @@ function deterministicPremium(model: ProjectModel, staticNpv: number): number | 
   }
 }
 
-/** Above this risk-neutral probability of use, a right reads as part of the plan. */
-const PLAN_LIKE = 0.95;
-
 function convergenceOf(model: ProjectModel, expandedNpv: number, warnings: string[]): Convergence | null {
   const n = model.steps;
   const base = gridBase(model);
@@ -267,9 +265,7 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
   }
   for (const sw of pass.rights) {
     if (sw.exerciseProbability === 0) warnings.push(`${sw.id} is never exercised on this lattice, so it adds no value as specified`);
-    // A right first used today is a decision of the plan by definition; only later use is flagged.
-    const usedToday = sw.exerciseTiming[0]?.t === 0 ? sw.exerciseTiming[0].probability : 0;
-    if (sw.exerciseProbability > PLAN_LIKE && usedToday < PLAN_LIKE)
+    if (isPlanLike(sw))
       warnings.push(
         `${sw.id} is used with probability ${(sw.exerciseProbability * 100).toFixed(1)} % (over ${PLAN_LIKE * 100} %): it works as part of the plan more than as an option; consider putting it in the cash flows`,
       );
