@@ -123,34 +123,65 @@ export interface CardBasis {
    * risk-free rate (how the engine discounts a stage payment) equals its value at the WACC.
    */
   stagePayments: { at: number; amount: number }[];
+  /**
+   * The last date a fresh card that sells or shrinks the project stays open: a year before the
+   * horizon. At the horizon the project has paid out everything and is worth nothing, so any
+   * salvage or savings then would be a certain gain, a plan rather than an option.
+   */
+  lastSale: number;
+  /** What the project is expected to be worth at `lastSale`, after that year's cash (at the WACC, in that year's money). */
+  valueAtLastSale: number;
 }
 
 /** The basis for fresh cards from a case's cash-flow analysis and risk-free rate. */
 export function cardBasis(analysis: CashFlowAnalysis | null, horizon: number, riskFreeRate: number): CardBasis {
   const v0 = analysis && analysis.underlyingValue > 0 ? analysis.underlyingValue : 100;
   const outlays = (analysis?.outlays ?? []).filter((o) => o.amount > 0 && o.year <= horizon);
+  // A one-year schedule has no whole year before its horizon: half-way through it, half the value.
+  const lastSale = horizon >= 2 ? horizon - 1 : horizon / 2;
+  const at = analysis?.rows.find((r) => r.year === lastSale);
+  const after = (analysis?.rows ?? []).filter((r) => r.year > lastSale).reduce((sum, r) => sum + r.operatingCashFlow * r.discountFactor, 0);
+  const valueAtLastSale = at && after > 0 ? after / at.discountFactor : v0 / 2;
   return {
     horizon,
     v0,
     investment: analysis?.investment ?? 0,
     stagePayments: outlays.map((o) => ({ at: o.year, amount: Math.round(o.amount * o.discountFactor * Math.exp(riskFreeRate * o.year) * 100) / 100 })),
+    lastSale,
+    valueAtLastSale,
   };
 }
 
 /**
+ * A fresh sale pays, and a fresh contraction saves for the share it gives up, this share of what
+ * the project is expected to be worth at the card's last date: both are used when the project
+ * is worth less than planned, neither for certain. Sized on V0 instead, both were used with
+ * probability 100 % on every demo schedule (selling for half of V0 near the end of a schedule
+ * whose value runs down to nothing); at 70 % of the late value, 17–79 % (tests/unit/option-form).
+ */
+const LATE_VALUE_SHARE = 0.7;
+
+/**
  * A fresh card of a kind, sized against the project. A right that carries the outlay (defer,
  * stage) starts from the static plan's own outlay, so adding it never moves the NPV without
- * flexibility (docs/engine.md §5); the others start from shares of V0.
+ * flexibility (docs/engine.md §5); a sale and a contraction from the value expected at their
+ * last date (above); the others from shares of V0.
  */
 export function newOptionForm(kind: OptionKind, basis: CardBasis): OptionForm {
-  const { horizon, v0 } = basis;
+  const { horizon, v0, lastSale, valueAtLastSale } = basis;
   const round = (x: number) => Math.max(1, Math.round(x));
   const outlay = Math.round(Math.max(0, basis.investment) * 100) / 100;
   const payments = basis.stagePayments.length > 0 ? basis.stagePayments : [{ at: 0, amount: outlay }];
   const templates: Record<OptionKind, OptionTemplate> = {
     expand: { kind: 'expand', id: 'Expand', factor: 0.3, cost: round(v0 * 0.25), window: { kind: 'american', from: 1, to: horizon } },
-    contract: { kind: 'contract', id: 'Contract', fraction: 0.3, savings: round(v0 * 0.2), window: { kind: 'american', from: 1, to: horizon } },
-    abandon: { kind: 'abandon', id: 'Abandon', salvage: round(v0 * 0.5), window: { kind: 'american', from: 0, to: horizon } },
+    contract: {
+      kind: 'contract',
+      id: 'Contract',
+      fraction: 0.3,
+      savings: round(0.3 * LATE_VALUE_SHARE * valueAtLastSale),
+      window: { kind: 'american', from: Math.min(1, lastSale), to: lastSale },
+    },
+    abandon: { kind: 'abandon', id: 'Abandon', salvage: round(LATE_VALUE_SHARE * valueAtLastSale), window: { kind: 'american', from: 0, to: lastSale } },
     defer: { kind: 'defer', id: 'Defer', cost: outlay, window: { kind: 'american', from: 0, to: Math.min(2, horizon) } },
     stage: { kind: 'stage', id: 'Stages', payments },
     mothball: {

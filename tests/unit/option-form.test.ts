@@ -4,12 +4,19 @@
  */
 import { describe, expect, it } from 'vitest';
 import { demoPortfolio } from '@/demo/portfolio';
-import { valueProject } from '@/lattice';
+import { isPlanLike, valueProject } from '@/lattice';
 import { caseToModel } from '@/lib/case-model';
 import { analyseCashFlows } from '@/lib/cash-flows';
 import { cardBasis, newOptionForm, templateToForm, toTemplates, type CardBasis, type OptionKind } from '@/lib/option-form';
 
-const basis = (v0: number, horizon = 5): CardBasis => ({ horizon, v0, investment: 0.8 * v0, stagePayments: [{ at: 0, amount: 0.8 * v0 }] });
+const basis = (v0: number, horizon = 5): CardBasis => ({
+  horizon,
+  v0,
+  investment: 0.8 * v0,
+  stagePayments: [{ at: 0, amount: 0.8 * v0 }],
+  lastSale: horizon - 1,
+  valueAtLastSale: 0.3 * v0,
+});
 
 describe('option cards', () => {
   it('turn every demo option into a form and back into the same template', () => {
@@ -83,6 +90,28 @@ describe('option cards', () => {
       'options.2.share': 'Must be 0 or more.',
       'options.3.payments.0.amount': 'Must be 0 or more.',
     });
+  });
+
+  it('start a sale or a contraction as a real choice: neither used for certain nor never', () => {
+    // Sized on V0 and open to the horizon, both were used with probability 100 % on every demo
+    // schedule: near the end the project is worth little and at the horizon nothing, so selling
+    // for half of V0 was a certain gain. Each demo project's base case (invented figures), alone
+    // and beside a fresh expansion.
+    for (const project of demoPortfolio) {
+      const input = { ...project.cases[0]!, options: [] };
+      const horizon = input.cashFlows.rows.at(-1)!.year;
+      const b = cardBasis(analyseCashFlows(input.cashFlows), horizon, input.settings.riskFreeRate);
+      for (const kinds of [['abandon'], ['contract'], ['expand', 'abandon']] as OptionKind[][]) {
+        const { templates, problems } = toTemplates(
+          kinds.map((kind) => newOptionForm(kind, b)),
+          horizon,
+        );
+        expect(problems).toEqual({});
+        const rights = valueProject(caseToModel({ ...input, options: templates }).model, { extras: false }).rights;
+        const read = rights.map((r) => ({ right: r.id, planLike: isPlanLike(r), used: r.exerciseProbability > 0 }));
+        expect({ project: project.name, read }).toEqual({ project: project.name, read: rights.map((r) => ({ right: r.id, planLike: false, used: true })) });
+      }
+    }
   });
 
   it('start a Defer or a Stage card from the static plan, so adding one leaves the NPV without flexibility where it was', () => {
