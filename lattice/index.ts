@@ -11,7 +11,7 @@ export { projectModelSchema, optionTemplateSchema, costSchema, windowSchema, tre
 export type { ProjectModel, OptionTemplate, Cost, ExerciseWindow, TreeKind, ModeInput, SwitchInput } from './schema';
 export type * from './result';
 export { ENGINE_VERSION } from './version';
-export { isPlanLike, PLAN_LIKE } from './plan-like';
+export { isNeverUsed, isPlanLike, PLAN_LIKE } from './right-usage';
 export { openSteps, type Snap } from './window';
 export { readStoredResult } from './stored-result';
 export { readStoredModel, readStoredTemplates } from './stored-model';

@@ -8,7 +8,7 @@ import { prepareModel } from './check-model';
 import { ModelError } from './errors';
 import { assertFinite } from './finite';
 import { MAX_REQUEST_CELLS, MAX_STEPS, NODE_BUDGET } from './limits';
-import { isPlanLike, PLAN_LIKE } from './plan-like';
+import { isNeverUsed, isPlanLike, PLAN_LIKE } from './right-usage';
 import type { Convergence, Sensitivity, ValuationResult } from './result';
 import type { Cost, ExerciseWindow, ProjectModel } from './schema';
 import type { Years } from './units';
@@ -264,7 +264,7 @@ export function valueProject(input: unknown, options: ValueOptions = {}): Valuat
     });
   }
   for (const sw of pass.rights) {
-    if (sw.exerciseProbability === 0) warnings.push(`${sw.id} is never exercised on this lattice, so it adds no value as specified`);
+    if (isNeverUsed(sw)) warnings.push(`${sw.id} is never exercised on this lattice, so it adds no value as specified`);
     if (isPlanLike(sw))
       warnings.push(
         `${sw.id} is used with probability ${(sw.exerciseProbability * 100).toFixed(1)} % (over ${PLAN_LIKE * 100} %): it works as part of the plan more than as an option; consider putting it in the cash flows`,

@@ -12,7 +12,7 @@ import type { CaseJson } from '@/lib/case-json';
 import { useValuation } from '@/lib/engine/use-engine';
 import { issueInWords } from '@/lib/issue-words';
 import { cardBasis } from '@/lib/option-form';
-import { planLikeNotes } from '@/lib/plan-like-notes';
+import { usageNotes } from '@/lib/usage-notes';
 import { AttachmentsPanel } from './attachments-panel';
 import { CashFlowImport } from './cash-flow-import';
 import { CashFlowSection } from './cash-flow-section';
@@ -202,7 +202,7 @@ function LoadedEditor({
                     horizon={horizon}
                     basis={cardBasis(analysis, horizon, draft.settings.riskFreeRate)}
                     engineProblems={'cards' in built ? built.cards : undefined}
-                    planLike={result && !valuation.computing ? planLikeNotes(options, result.rights) : undefined}
+                    usage={result && !valuation.computing ? usageNotes(options, result.rights) : undefined}
                     readOnly={readOnly}
                     onChange={(options, problems) => {
                       setOptionProblems(problems);

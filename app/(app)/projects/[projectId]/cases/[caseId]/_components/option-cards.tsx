@@ -236,8 +236,8 @@ interface Props {
   basis: CardBasis;
   /** The engine's refusal of a card, by its position, in words. */
   engineProblems?: Record<number, string>;
-  /** Cards whose right the live valuation finds used almost surely, by position (lib/plan-like-notes.ts). */
-  planLike?: Record<number, string>;
+  /** Cards whose right the live valuation finds used almost surely or never, by position (lib/usage-notes.ts). */
+  usage?: Record<number, string>;
   readOnly: boolean;
   /** Called with the templates whenever every card reads; `problems` counts the fields that do not. */
   onChange: (templates: OptionTemplate[] | null, problems: number) => void;
@@ -249,7 +249,7 @@ interface Props {
  * while a field does not read, its message shows beside it and the valuation keeps the last
  * good set of options.
  */
-export function OptionCards({ options, horizon, basis, readOnly, onChange, engineProblems, planLike }: Props) {
+export function OptionCards({ options, horizon, basis, readOnly, onChange, engineProblems, usage }: Props) {
   const horizonRef = useRef(horizon);
   const resolver: Resolver<Fields> = async (values, _context, resolverOptions) => {
     const { problems } = toTemplates(values.options, horizonRef.current);
@@ -314,8 +314,8 @@ export function OptionCards({ options, horizon, basis, readOnly, onChange, engin
               <p role="alert" className="mb-3 rounded-md bg-brick-100 px-3 py-2 text-caption text-brick-700">
                 The engine cannot use this right: {engineProblems[k]}
               </p>
-            ) : planLike?.[k] ? (
-              <p className="mb-3 rounded-md border border-ember-500 bg-ember-100 px-3 py-2 text-caption text-ember-700">{planLike[k]}</p>
+            ) : usage?.[k] ? (
+              <p className="mb-3 rounded-md border border-ember-500 bg-ember-100 px-3 py-2 text-caption text-ember-700">{usage[k]}</p>
             ) : null}
             <header className="mb-4 flex flex-wrap items-start gap-3">
               <span className="rounded bg-tide-50 px-2 py-1 text-caption font-semibold uppercase tracking-wide text-tide-700">{optionKindLabels[kind]}</span>

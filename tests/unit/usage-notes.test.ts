@@ -1,13 +1,13 @@
 /**
- * The option cards' note on a right used almost surely (lib/plan-like-notes.ts) says what the
- * engine's warning says, on the card it is about, and on no other. The schedule is the one an
+ * The option cards' notes on a right used almost surely or never (lib/usage-notes.ts) say what
+ * the engine's warnings say, on the card they are about, and on no other. The schedule is the one an
  * analyst typed into a new case in a browser session (invented figures): capex 120 today,
  * revenue 45 to 65 over five years against costs of 18.5.
  */
 import { describe, expect, it } from 'vitest';
 import { valueProject, type OptionTemplate } from '@/lattice';
 import { caseToModel } from '@/lib/case-model';
-import { planLikeNotes } from '@/lib/plan-like-notes';
+import { usageNotes } from '@/lib/usage-notes';
 import type { CaseInput } from '@/lib/validations/case';
 
 const rows = [0, 1, 2, 3, 4, 5].map((year) => ({
@@ -38,7 +38,7 @@ describe('the note on a card whose right is used almost surely', () => {
   it('is on the sale that is a certain gain, with the engine’s own probability, and not on the real option', () => {
     const options = [realExpansion, sureSale];
     const result = valued(options);
-    const notes = planLikeNotes(options, result.rights);
+    const notes = usageNotes(options, result.rights);
     // The engine warns of the unnamed sale (abandon-1) and not of the expansion; the cards agree.
     const sale = warned(result.warnings, 'abandon-1');
     expect(sale).toBeDefined();
@@ -49,12 +49,29 @@ describe('the note on a card whose right is used almost surely', () => {
     expect(notes[1]).toContain(`used in ${probability} % of outcomes`);
   });
 
+  it('is on a pause that saves nothing: never used, as the engine warns', () => {
+    // Mothballing stops the cash and pays 2 to pause and 4 to restart, earning nothing meanwhile.
+    const pause: OptionTemplate = {
+      kind: 'mothball',
+      id: 'Pause',
+      toScale: 0,
+      cost: 2,
+      backCost: 4,
+      flowPerYear: 0,
+      window: { kind: 'american', from: 0, to: 4 },
+    };
+    const options = [realExpansion, pause];
+    const result = valued(options);
+    expect(result.warnings.some((w) => w.startsWith('Pause is never exercised'))).toBe(true);
+    expect(usageNotes(options, result.rights)).toEqual({ 1: expect.stringMatching(/^At these terms it is never used on this lattice/) });
+  });
+
   it('is on no card when the result is of another set of cards', () => {
     // The sale's result read against cards where that place holds an expansion: nothing noted.
     const result = valued([realExpansion, sureSale]);
-    expect(planLikeNotes([realExpansion, { ...realExpansion, id: 'Phase 3' }], result.rights)).toEqual({});
+    expect(usageNotes([realExpansion, { ...realExpansion, id: 'Phase 3' }], result.rights)).toEqual({});
     // And a right's note follows it to its new place once valued there.
     const moved = [sureSale, realExpansion];
-    expect(Object.keys(planLikeNotes(moved, valued(moved).rights))).toEqual(['0']);
+    expect(Object.keys(usageNotes(moved, valued(moved).rights))).toEqual(['0']);
   });
 });
