@@ -202,7 +202,9 @@ function LoadedEditor({
                     horizon={horizon}
                     basis={cardBasis(analysis, horizon, draft.settings.riskFreeRate)}
                     engineProblems={'cards' in built ? built.cards : undefined}
-                    usage={result && !valuation.computing ? usageNotes(options, result.rights) : undefined}
+                    // From the last answer while the next is computed, so the cards do not jump
+                    // on every keystroke; matched by id and kind, a note never lands on another card.
+                    usage={result ? usageNotes(options, result.rights) : undefined}
                     readOnly={readOnly}
                     onChange={(options, problems) => {
                       setOptionProblems(problems);
