@@ -16,6 +16,7 @@ const basis = (v0: number, horizon = 5): CardBasis => ({
   stagePayments: [{ at: 0, amount: 0.8 * v0 }],
   lastSale: horizon - 1,
   valueAtLastSale: 0.3 * v0,
+  firstEarning: 1,
 });
 
 describe('option cards', () => {
@@ -92,7 +93,7 @@ describe('option cards', () => {
     });
   });
 
-  it('start a sale or a contraction as a real choice: neither used for certain nor never', () => {
+  it('start a sale, a contraction or a pause as a real choice: neither used for certain nor never', () => {
     // Sized on V0 and open to the horizon, both were used with probability 100 % on every demo
     // schedule: near the end the project is worth little and at the horizon nothing, so selling
     // for half of V0 was a certain gain. Each demo project's base case (invented figures), alone
@@ -101,7 +102,9 @@ describe('option cards', () => {
       const input = { ...project.cases[0]!, options: [] };
       const horizon = input.cashFlows.rows.at(-1)!.year;
       const b = cardBasis(analyseCashFlows(input.cashFlows), horizon, input.settings.riskFreeRate);
-      for (const kinds of [['abandon'], ['contract'], ['expand', 'abandon']] as OptionKind[][]) {
+      // A pause that saved nothing a year was never used; one open before the pilot line earns
+      // was a certain gain.
+      for (const kinds of [['abandon'], ['contract'], ['mothball'], ['expand', 'abandon'], ['abandon', 'mothball']] as OptionKind[][]) {
         const { templates, problems } = toTemplates(
           kinds.map((kind) => newOptionForm(kind, b)),
           horizon,
