@@ -12,6 +12,7 @@ import type { CaseJson } from '@/lib/case-json';
 import { useValuation } from '@/lib/engine/use-engine';
 import { issueInWords } from '@/lib/issue-words';
 import { cardBasis } from '@/lib/option-form';
+import { submissionGaps } from '@/lib/submission-gaps';
 import { usageNotes } from '@/lib/usage-notes';
 import { AttachmentsPanel } from './attachments-panel';
 import { CashFlowImport } from './cash-flow-import';
@@ -275,6 +276,7 @@ function LoadedEditor({
                   currency={currency}
                   status={status}
                   rightIds={rightIds(options)}
+                  gaps={submissionGaps(draft)}
                   rights={rights}
                   beforeSubmit={() => record.readyToSubmit(blocked)}
                   onStatus={record.setStatus}

@@ -40,6 +40,8 @@ interface Props {
   onStatus: (status: CaseStatus) => void;
   /** The figures on screen, for Leeway's reading offered when writing the recommendation; null while there are none. */
   figures: { staticNpv: number; expandedNpv: number; optionPremium: number } | null;
+  /** What the committee would read as missing in the case on screen, shown when submitting. */
+  gaps: string[];
 }
 
 /**
@@ -47,7 +49,7 @@ interface Props {
  * and the actions the signed-in role may take (submit; approve or return with a reason), plus
  * the board pack of the latest approved snapshot.
  */
-export function ReviewPanel({ caseId, currency, status, rightIds, rights, beforeSubmit, onStatus, figures }: Props) {
+export function ReviewPanel({ caseId, currency, status, rightIds, rights, beforeSubmit, onStatus, figures, gaps }: Props) {
   const toast = useToast();
   const history = useSWR<{ status: CaseStatus; snapshots: Snapshot[]; changes: VersionChangesJson | null }>(`/api/v1/cases/${caseId}/snapshots`, getJson);
   const [busy, setBusy] = useState<null | ReviewAction>(null);
@@ -177,6 +179,7 @@ export function ReviewPanel({ caseId, currency, status, rightIds, rights, before
         text={recommendation}
         onText={setRecommendation}
         suggestion={reading ? `${reading.headline} ${reading.body}` : null}
+        gaps={gaps}
         busy={busy === 'submit'}
         problem={submitting ? problem : null}
         onSubmit={() => void act('submit')}

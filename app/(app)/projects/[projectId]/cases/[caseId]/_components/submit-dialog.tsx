@@ -10,6 +10,8 @@ interface Props {
   onText: (text: string) => void;
   /** Leeway's reading of the figures on screen, offered as a start; null while there are none. */
   suggestion: string | null;
+  /** What the committee would read as missing (lib/submission-gaps.ts); it does not block. */
+  gaps: string[];
   busy: boolean;
   problem: string | null;
   onSubmit: () => void;
@@ -21,7 +23,7 @@ interface Props {
  * board pack prints it. Leeway's reading of the figures can be copied in as a start, and is
  * printed beside it in the pack as generated text.
  */
-export function SubmitDialog({ open, text, onText, suggestion, busy, problem, onSubmit, onClose }: Props) {
+export function SubmitDialog({ open, text, onText, suggestion, gaps, busy, problem, onSubmit, onClose }: Props) {
   return (
     <Dialog open={open} title="Submit for review" onClose={onClose}>
       <form
@@ -52,6 +54,16 @@ export function SubmitDialog({ open, text, onText, suggestion, busy, problem, on
             <Button variant="quiet" className="mt-1 px-0" onClick={() => onText(text.trim() ? `${text.trim()}\n\n${suggestion}` : suggestion)}>
               Copy it into my recommendation
             </Button>
+          </div>
+        ) : null}
+        {gaps.length > 0 ? (
+          <div className="rounded-md border border-ember-500 bg-ember-100 px-3 py-2 text-caption text-ember-700">
+            <p className="font-semibold">Before the committee reads it</p>
+            <ul className="mt-1 list-disc pl-4">
+              {gaps.map((gap) => (
+                <li key={gap}>{gap}</li>
+              ))}
+            </ul>
           </div>
         ) : null}
         <FormProblem message={problem} />

@@ -1,0 +1,33 @@
+/**
+ * The submit dialog names what a committee would read as missing (lib/submission-gaps.ts): a
+ * volatility with no stated source, which the board pack prints as "Not stated", or entered
+ * directly with no justification. The demo cases (invented figures) each state theirs.
+ */
+import { describe, expect, it } from 'vitest';
+import { demoPortfolio } from '@/demo/portfolio';
+import { starterCase } from '@/lib/starter-case';
+import { submissionGaps } from '@/lib/submission-gaps';
+import { volatilitySourceText } from '@/lib/volatility/method-words';
+
+describe('what a submission would leave the committee without', () => {
+  it('is the volatility’s source on a new case, in the words the board pack would print', () => {
+    const fresh = starterCase('New', { wacc: 0.085, riskFreeRate: 0.03 });
+    const gaps = submissionGaps(fresh);
+    expect(gaps).toHaveLength(1);
+    expect(gaps[0]).toContain('The volatility (30.0 %)');
+    expect(gaps[0]).toContain(`“${volatilitySourceText(fresh.settings.volatilitySource)}”`);
+  });
+
+  it('is a justification left empty, and nothing once one is written', () => {
+    const fresh = starterCase('New', { wacc: 0.085, riskFreeRate: 0.03 });
+    const bare = { settings: { ...fresh.settings, volatilitySource: { method: 'direct' as const, note: '  ' } } };
+    expect(submissionGaps(bare)[0]).toContain(`“${volatilitySourceText({ method: 'direct', note: '' })}”`);
+    expect(submissionGaps({ settings: { ...bare.settings, volatilitySource: { method: 'direct', note: 'Peers’ unlevered value, five years.' } } })).toEqual([]);
+  });
+
+  it('is nothing for any demo case', () => {
+    for (const project of demoPortfolio)
+      for (const c of project.cases)
+        expect({ case: `${project.name} / ${c.name}`, gaps: submissionGaps(c) }).toEqual({ case: `${project.name} / ${c.name}`, gaps: [] });
+  });
+});
