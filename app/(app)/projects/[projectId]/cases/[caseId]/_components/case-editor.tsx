@@ -276,7 +276,7 @@ function LoadedEditor({
                   currency={currency}
                   status={status}
                   rightIds={rightIds(options)}
-                  gaps={submissionGaps(draft)}
+                  gaps={submissionGaps(draft, result?.warnings)}
                   rights={rights}
                   beforeSubmit={() => record.readyToSubmit(blocked)}
                   onStatus={record.setStatus}
