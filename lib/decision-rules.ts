@@ -55,9 +55,15 @@ function located(point: BoundaryPoint, kind: string): { side: Side | 'anywhere';
   return { side, critical: side === 'above' ? point.low : point.high };
 }
 
+/**
+ * The action: the verb, then the right's name in brackets when it says more than the verb. A card
+ * left with its kind's name read "Expand (Expand) between years 1 and 4 …".
+ */
+const action = (verb: string, name: string) => (name.trim().toLowerCase() === verb.toLowerCase() ? verb : `${verb} (${name})`);
+
 export function decisionRule(s: Pick<RightResult, 'id' | 'kind' | 'boundary' | 'exerciseProbability' | 'followUps'>, currency?: string): DecisionRule {
   const verb = verbs[s.kind as OptionTemplate['kind']] ?? 'Exercise';
-  const rule = ruleFor(s.boundary, s.kind, `${verb} (${s.id})`, currency);
+  const rule = ruleFor(s.boundary, s.kind, action(verb, s.id), currency);
   if (s.exerciseProbability === 0 || s.boundary.length === 0)
     return { right: s.id, kind: s.kind, ...rule, followUps: [], text: `${s.id}: never exercised on this lattice; it adds no value as specified.` };
   return { right: s.id, kind: s.kind, ...rule, followUps: followUpRules(s, currency) };
@@ -67,7 +73,7 @@ export function decisionRule(s: Pick<RightResult, 'id' | 'kind' | 'boundary' | '
 function followUpRules(s: Pick<RightResult, 'id' | 'kind' | 'followUps'>, currency?: string): RuleReading[] {
   return (s.followUps ?? []).map((f, k) => {
     const name = s.kind === 'stage' ? `${s.id}, payment ${k + 2}` : s.id;
-    const rule = ruleFor(f.boundary, s.kind, `${followUpVerbs[s.kind as OptionTemplate['kind']] ?? 'Then'} (${name})`, currency);
+    const rule = ruleFor(f.boundary, s.kind, action(followUpVerbs[s.kind as OptionTemplate['kind']] ?? 'Then', name), currency);
     if (f.boundary.length === 0) return { ...rule, text: `${name}: ${s.kind === 'stage' ? 'never paid' : 'never used'} on this lattice.` };
     return rule;
   });

@@ -58,6 +58,15 @@ describe('decision rules', () => {
     expect(rule({ switches: [{ ...right, kind: 'switch' }] })).toBe(expected);
   });
 
+  it('names the right in brackets only when its name says more than the verb', () => {
+    // A fresh card keeps its kind's name: "Expand (Expand) …" said it twice.
+    const right = { kind: 'expand', exerciseProbability: 0.5, boundary: [above(1, 129.1), above(4, 116.7)] };
+    expect(decisionRule({ ...right, id: 'Expand' }).text).toBe(
+      'Expand between years 1 and 4 when the project is worth more than 129.1 (year 1) to 116.7 (year 4).',
+    );
+    expect(decisionRule({ ...right, id: 'Expand the hall' }).text).toMatch(/^Expand \(Expand the hall\) between years 1 and 4/);
+  });
+
   it('adds a sentence for each decision the first use leads to: later stage payments, a restart', () => {
     const stage = decisionRule({
       id: 'Pilot',
