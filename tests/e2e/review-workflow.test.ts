@@ -8,8 +8,11 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
+import { valueProject } from '@/lattice';
+import { caseToModel } from '@/lib/case-model';
 import { decisionRule } from '@/lib/decision-rules';
 import { formatMoney } from '@/lib/format';
+import { warningSentence } from '@/lib/warning-words';
 import { closeBrowser, signedInPage } from './support/browser';
 import { demoCase } from './support/demo';
 import { pdfText } from '../support/pdf-text';
@@ -42,10 +45,36 @@ async function submitWithRecommendation(page: Page, text: string) {
   await page.getByRole('dialog').getByRole('button', { name: 'Submit for review' }).click();
 }
 
+/**
+ * Opens the submit dialog on a case with no unsaved edits and expects it to list the engine's
+ * warnings on the saved case, valued here apart from the page, as the board pack will print
+ * them; then closes it. Returns how many there were.
+ */
+async function expectWarningsInSubmitDialog(page: Page): Promise<number> {
+  const saved = (await (await page.request.get(`/api/v1/cases/${caseId}`)).json()).case;
+  const { warnings } = valueProject(caseToModel(saved).model);
+  await page.getByRole('button', { name: 'Submit for review…' }).click();
+  for (const warning of warnings)
+    await expect
+      .poll(
+        () =>
+          page
+            .getByRole('dialog')
+            .getByText(`The board pack prints the engine’s warning: ${warningSentence(warning)}`)
+            .isVisible(),
+        { timeout: 30_000 },
+      )
+      .toBe(true);
+  await page.getByRole('dialog').getByRole('button', { name: 'Cancel' }).click();
+  return warnings.length;
+}
+
 describe('review workflow', () => {
   it('goes from submission through a return and a resubmission to approval and the board pack', async () => {
     const analyst = await signedInPage('analyst@kestrelbay.example');
     await openReviewTab(analyst.page);
+    // The demo's "Volatile demand" at its 96 steps warns of its error band: the dialog has one to show.
+    expect(await expectWarningsInSubmitDialog(analyst.page)).toBeGreaterThan(0);
     await submitWithRecommendation(analyst.page, 'Proceed with phase 1; keep the sale option open.');
     await expect
       .poll(() => analyst.page.getByText('Submitted for review; the reviewers have been told by e-mail.').isVisible(), { timeout: 20_000 })
