@@ -57,6 +57,12 @@ export function rightKindLabel(kind: string): string {
   return optionKindLabels[kind as OptionKind] ?? kind;
 }
 
+/** The kind to print beside a right's name, or null when the name is the kind's own ("Expand (Expand)" said it twice). */
+export function kindBesideName(id: string, kind: string): string | null {
+  const label = rightKindLabel(kind);
+  return id.trim().toLowerCase() === label.toLowerCase() ? null : label;
+}
+
 const num = (value: number) => String(Number(value.toPrecision(12)));
 const pct = (fraction: number) => num(fraction * 100);
 

@@ -19,7 +19,7 @@ import { textWidth, wrapLabel } from '../charts/wrap-label';
 import { decisionRule, ruleInFull } from '../decision-rules';
 import { readingOfFigures } from '../figures-reading';
 import { formatChange, formatDateTime, formatPercent } from '../format';
-import { rightKindLabel } from '../option-form';
+import { kindBesideName } from '../option-form';
 import { premiumSplitText } from '../premium-split';
 import { describeRights } from '../option-words';
 import type { BoardPackData, FollowThrough, RecordEvent } from './data';
@@ -401,7 +401,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
           widths={[46, 18, 18, 18]}
           rows={[
             ...r.rights.map((s) => [
-              `${s.id} (${rightKindLabel(s.kind)})`,
+              kindBesideName(s.id, s.kind) ? `${s.id} (${kindBesideName(s.id, s.kind)})` : s.id,
               money(s.standalone, currency),
               money(s.incremental, currency),
               formatPercent(s.exerciseProbability),

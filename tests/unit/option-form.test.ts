@@ -7,7 +7,7 @@ import { demoPortfolio } from '@/demo/portfolio';
 import { isPlanLike, valueProject } from '@/lattice';
 import { caseToModel } from '@/lib/case-model';
 import { analyseCashFlows } from '@/lib/cash-flows';
-import { cardBasis, newOptionForm, templateToForm, toTemplates, type CardBasis, type OptionKind } from '@/lib/option-form';
+import { cardBasis, kindBesideName, newOptionForm, templateToForm, toTemplates, type CardBasis, type OptionKind } from '@/lib/option-form';
 
 const basis = (v0: number, horizon = 5): CardBasis => ({
   horizon,
@@ -115,6 +115,15 @@ describe('option cards', () => {
         expect({ project: project.name, read }).toEqual({ project: project.name, read: rights.map((r) => ({ right: r.id, planLike: false, used: true })) });
       }
     }
+  });
+
+  it('print a right’s kind beside its name only when the name is not the kind’s own', () => {
+    // A fresh card keeps its kind's name: Results and the board pack read "Expand (Expand)".
+    expect(kindBesideName('Expand', 'expand')).toBeNull();
+    expect(kindBesideName(' contract ', 'contract')).toBeNull();
+    expect(kindBesideName('Mothball', 'mothball')).toBe('Mothball & restart');
+    expect(kindBesideName('Phase 2', 'expand')).toBe('Expand');
+    expect(kindBesideName('abandon-1', 'abandon')).toBe('Abandon');
   });
 
   it('start a Defer or a Stage card from the static plan, so adding one leaves the NPV without flexibility where it was', () => {

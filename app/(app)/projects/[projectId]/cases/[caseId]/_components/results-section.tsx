@@ -10,7 +10,7 @@ import type { RightResult, ValuationResult } from '@/lattice';
 import { decisionRule, ruleLines } from '@/lib/decision-rules';
 import { formatMoney, formatPercent } from '@/lib/format';
 import { premiumSplitText } from '@/lib/premium-split';
-import { rightKindLabel } from '@/lib/option-form';
+import { kindBesideName } from '@/lib/option-form';
 import { palette } from '@/lib/palette';
 import { describeSnaps } from '@/lib/snap-words';
 import { treeLabels } from '@/lib/tree-words';
@@ -95,7 +95,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
                 <Tr key={s.id}>
                   <Td>
                     <span className="font-medium">{s.id}</span>
-                    <span className="ml-2 text-caption text-ink-muted">{rightKindLabel(s.kind)}</span>
+                    {kindBesideName(s.id, s.kind) ? <span className="ml-2 text-caption text-ink-muted">{kindBesideName(s.id, s.kind)}</span> : null}
                     {ruleLines(decisionRule(s, currency)).map((text) => (
                       <p key={text} className="mt-0.5 max-w-xl text-caption text-ink-soft">
                         {text}
