@@ -63,6 +63,12 @@ export function kindBesideName(id: string, kind: string): string | null {
   return id.trim().toLowerCase() === label.toLowerCase() ? null : label;
 }
 
+/** A right's name with its kind in brackets, when the kind says more (the board pack's table). */
+export function nameWithKind(id: string, kind: string): string {
+  const beside = kindBesideName(id, kind);
+  return beside ? `${id} (${beside})` : id;
+}
+
 const num = (value: number) => String(Number(value.toPrecision(12)));
 const pct = (fraction: number) => num(fraction * 100);
 

@@ -19,7 +19,7 @@ import { textWidth, wrapLabel } from '../charts/wrap-label';
 import { decisionRule, ruleInFull } from '../decision-rules';
 import { readingOfFigures } from '../figures-reading';
 import { formatChange, formatDateTime, formatPercent } from '../format';
-import { kindBesideName } from '../option-form';
+import { nameWithKind } from '../option-form';
 import { premiumSplitText } from '../premium-split';
 import { describeRights } from '../option-words';
 import type { BoardPackData, FollowThrough, RecordEvent } from './data';
@@ -401,7 +401,7 @@ export function BoardPackDocument({ data }: { data: BoardPackData }) {
           widths={[46, 18, 18, 18]}
           rows={[
             ...r.rights.map((s) => [
-              kindBesideName(s.id, s.kind) ? `${s.id} (${kindBesideName(s.id, s.kind)})` : s.id,
+              nameWithKind(s.id, s.kind),
               money(s.standalone, currency),
               money(s.incremental, currency),
               formatPercent(s.exerciseProbability),

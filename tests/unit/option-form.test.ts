@@ -7,7 +7,7 @@ import { demoPortfolio } from '@/demo/portfolio';
 import { isPlanLike, valueProject } from '@/lattice';
 import { caseToModel } from '@/lib/case-model';
 import { analyseCashFlows } from '@/lib/cash-flows';
-import { cardBasis, kindBesideName, newOptionForm, templateToForm, toTemplates, type CardBasis, type OptionKind } from '@/lib/option-form';
+import { cardBasis, kindBesideName, nameWithKind, newOptionForm, templateToForm, toTemplates, type CardBasis, type OptionKind } from '@/lib/option-form';
 
 const basis = (v0: number, horizon = 5): CardBasis => ({
   horizon,
@@ -124,6 +124,7 @@ describe('option cards', () => {
     expect(kindBesideName('Mothball', 'mothball')).toBe('Mothball & restart');
     expect(kindBesideName('Phase 2', 'expand')).toBe('Expand');
     expect(kindBesideName('abandon-1', 'abandon')).toBe('Abandon');
+    expect([nameWithKind('Expand', 'expand'), nameWithKind('Phase 2', 'expand')]).toEqual(['Expand', 'Phase 2 (Expand)']);
   });
 
   it('start a Defer or a Stage card from the static plan, so adding one leaves the NPV without flexibility where it was', () => {

@@ -95,7 +95,7 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
                 <Tr key={s.id}>
                   <Td>
                     <span className="font-medium">{s.id}</span>
-                    {kindBesideName(s.id, s.kind) ? <span className="ml-2 text-caption text-ink-muted">{kindBesideName(s.id, s.kind)}</span> : null}
+                    <KindBeside id={s.id} kind={s.kind} />
                     {ruleLines(decisionRule(s, currency)).map((text) => (
                       <p key={text} className="mt-0.5 max-w-xl text-caption text-ink-soft">
                         {text}
@@ -171,4 +171,10 @@ export function ResultsSection({ result, currency }: { result: ValuationResult; 
       <ValuationCaution />
     </div>
   );
+}
+
+/** The right's kind beside its name, unless the name is the kind's own. */
+function KindBeside({ id, kind }: { id: string; kind: string }) {
+  const beside = kindBesideName(id, kind);
+  return beside ? <span className="ml-2 text-caption text-ink-muted">{beside}</span> : null;
 }
