@@ -20,6 +20,7 @@ import { DEMO_PASSWORD } from '@/demo/organisations';
 import { findFirstMembership, INVITATION_LIFETIME_MS } from '@/db/queries/members';
 import { CLIENT_ADDRESS_HEADER } from './client-address';
 import { COMMON_PASSWORD_MESSAGE, isCommonPassword } from './common-passwords';
+import { COMMON_PASSWORD, PUBLISHED_PASSWORD } from './password-refusals';
 import { authSecret, env } from './env';
 import { queueInvitationMail } from './invitation-mail';
 import { listensOnLoopbackOnly } from './listen-host';
@@ -85,15 +86,15 @@ export const auth = betterAuth({
       const field = passwordFields[ctx.path];
       const password = field ? (ctx.body as Record<string, unknown> | undefined)?.[field] : undefined;
       if (typeof password === 'string' && isCommonPassword(password))
-        throw new APIError('BAD_REQUEST', { message: COMMON_PASSWORD_MESSAGE, code: 'COMMON_PASSWORD' });
+        throw new APIError('BAD_REQUEST', { message: COMMON_PASSWORD_MESSAGE, code: COMMON_PASSWORD });
       if (password === DEMO_PASSWORD)
-        throw new APIError('BAD_REQUEST', { message: 'This is the demo’s published password; choose your own.', code: 'PUBLISHED_PASSWORD' });
+        throw new APIError('BAD_REQUEST', { message: 'This is the demo’s published password; choose your own.', code: PUBLISHED_PASSWORD });
       // The demo accounts' password is in the README: it opens them only while no other machine can
       // reach this server. Listening wider (HOST=0.0.0.0) with the demo seeded let anyone in as its admin.
       if (ctx.path === '/sign-in/email' && ctx.body?.password === DEMO_PASSWORD && !listensOnLoopbackOnly())
         throw new APIError('FORBIDDEN', {
           message: 'The demo’s published password works only while Leeway listens on this machine alone. Reset this account’s password to sign in.',
-          code: 'PUBLISHED_PASSWORD',
+          code: PUBLISHED_PASSWORD,
         });
       if (ctx.path === '/sign-in/email' && typeof ctx.body?.email === 'string') {
         const wait = await secondsUntilAllowed(db, ctx.body.email);

@@ -11,6 +11,7 @@ import { Button } from '@/components/ui/button';
 import { Input } from '@/components/ui/input';
 import { authClient, noAnswer } from '@/lib/auth-client';
 import { resetPasswordSchema } from '@/lib/validations/auth';
+import { isPasswordRefusal } from '@/lib/password-refusals';
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const router = useRouter();
@@ -26,7 +27,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
     if (noAnswer(error)) return setProblem(error.message);
     // The server refuses a common or the demo's published password before it reads the link:
     // those are the password's problem, not the link's (every refusal read "link expired").
-    if (error?.code === 'COMMON_PASSWORD' || error?.code === 'PUBLISHED_PASSWORD') return form.setError('password', { message: error.message });
+    if (error && isPasswordRefusal(error.code)) return form.setError('password', { message: error.message });
     if (error?.status === 429) return setProblem('Too many attempts. Please wait a minute and try again.');
     if (error) {
       setLinkFailed(true);

@@ -9,6 +9,7 @@ import { Button } from '@/components/ui/button';
 import { Input } from '@/components/ui/input';
 import { authClient, noAnswer } from '@/lib/auth-client';
 import { signInSchema, type SignIn } from '@/lib/validations/auth';
+import { PUBLISHED_PASSWORD } from '@/lib/password-refusals';
 
 export function SignInForm({ next }: { next: string }) {
   const router = useRouter();
@@ -26,7 +27,7 @@ export function SignInForm({ next }: { next: string }) {
     }
     // The server's own words where they say more than the status: how long this account must
     // wait (up to 15 minutes, not "a minute"), and why the demo's password is refused here.
-    if ((error.code === 'ACCOUNT_BACKOFF' || error.code === 'PUBLISHED_PASSWORD' || noAnswer(error)) && error.message) setProblem(error.message);
+    if ((error.code === 'ACCOUNT_BACKOFF' || error.code === PUBLISHED_PASSWORD || noAnswer(error)) && error.message) setProblem(error.message);
     else if (error.status === 403) setProblem('Please confirm your e-mail address first: use the link we sent you.');
     else if (error.status === 429) setProblem('Too many attempts from this address. Please wait a minute and try again.');
     else if (error.status === 401) setProblem('That e-mail and password do not match an account. Check them and try again.');

@@ -9,6 +9,7 @@ import { Button } from '@/components/ui/button';
 import { Input } from '@/components/ui/input';
 import { authClient } from '@/lib/auth-client';
 import { signUpSchema, type SignUp } from '@/lib/validations/auth';
+import { isPasswordRefusal } from '@/lib/password-refusals';
 
 export function SignUpForm({ email, invitation }: { email: string; invitation?: string }) {
   const router = useRouter();
@@ -26,7 +27,7 @@ export function SignUpForm({ email, invitation }: { email: string; invitation?: 
       return;
     }
     // A common or the demo's published password is the password's problem: said under it, as the reset form does.
-    if ((error.code === 'COMMON_PASSWORD' || error.code === 'PUBLISHED_PASSWORD') && error.message) form.setError('password', { message: error.message });
+    if (isPasswordRefusal(error.code) && error.message) form.setError('password', { message: error.message });
     else if (error.status === 422 && /exist/i.test(error.message ?? '')) setProblem('An account with this e-mail already exists. Sign in instead.');
     else if (error.status === 429) setProblem('Too many attempts. Please wait a minute and try again.');
     else setProblem(error.message ?? 'Creating the account did not work. Please try again.');
